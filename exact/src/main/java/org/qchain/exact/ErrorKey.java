@@ -1,0 +1,92 @@
+package org.qchain.exact;
+
+/**
+ * Message keys of every error qchain reports. Each key carries an English pattern with {@code {0}}, {@code {1}}, ...
+ * placeholders; tests assert the key, not the text.
+ */
+public enum ErrorKey {
+    // --- model files -------------------------------------------------------------------------------------------
+    /** A lexical or grammatical error in a model file. {0}: what was expected or found. */
+    SYNTAX("{0}"),
+    /** {0}: number text. */
+    MALFORMED_NUMBER("malformed number ''{0}''"),
+    /** {0}: state name. */
+    UNKNOWN_STATE("unknown state ''{0}''"),
+    /** {0}: state name. */
+    DUPLICATE_STATE("state ''{0}'' is declared twice"),
+    /** {0}: from, {1}: to, {2}: line of the first definition. */
+    DUPLICATE_TRANSITION("duplicate transition {0} -> {1} (first given on line {2})"),
+    /** {0}: parameter name. */
+    UNKNOWN_PARAMETER("unknown parameter ''{0}'' (declare it with: param {0})"),
+    /** {0}: parameter name. */
+    DUPLICATE_PARAMETER("parameter ''{0}'' is declared twice"),
+    /** {0}: parameter name, {1}: value, {2}: domain. */
+    VALUE_OUTSIDE_DOMAIN("value {1} of parameter ''{0}'' is outside its domain {2}"),
+    /** {0}: state, {1}: exact sum. */
+    ROW_SUM("row {0} sums to {1}, not 1"),
+    /** {0}: state, {1}: the negative remainder. */
+    NEGATIVE_REMAINDER("row {0}: the listed transitions sum to more than 1; the remainder {0} -> {0} would be {1}"),
+    /** {0}: from, {1}: to, {2}: value. */
+    PROBABILITY_RANGE("probability {0} -> {1} is {2}, outside [0, 1]"),
+    /** {0}: from, {1}: to, {2}: value. */
+    NEGATIVE_RATE("rate {0} -> {1} is {2}, must not be negative"),
+    /** No states or no data. */
+    EMPTY_CHAIN("the chain has no states"),
+    /** {0}: detail. */
+    DIVISION_BY_ZERO("division by zero{0}"),
+    /** {0}: parameter names. */
+    FREE_PARAMETERS("parameters without a value: {0} (give values with --at, or use a symbolic command)"),
+    /** {0}: chain kind found, {1}: what the command needs. */
+    WRONG_KIND("this is a {0} chain; {1}"),
+    /** {0}: row number, {1}: columns found, {2}: columns expected. */
+    CSV_SHAPE("row {0} has {1} entries, expected {2}"),
+
+    // --- sizes and limits --------------------------------------------------------------------------------------
+    /** {0}: estimated digits, {1}: limit, {2}: option that raises it. */
+    RESULT_TOO_LARGE("the result would have about {0} digits in total, more than the limit {1}; raise it with {2}"),
+    /** {0}: what, {1}: value, {2}: reason. */
+    BAD_ARGUMENT("invalid {0} ''{1}'': {2}"),
+
+    // --- internal ----------------------------------------------------------------------------------------------
+    /** {0}: detail. */
+    INTERNAL("internal error: {0}"),
+    /** The user interrupted the computation. */
+    INTERRUPTED("interrupted");
+
+    private final String pattern;
+
+    ErrorKey(String pattern) {
+        this.pattern = pattern;
+    }
+
+    /** The English pattern with {@code {i}} placeholders; {@code ''} stands for one quote. */
+    public String pattern() {
+        return pattern;
+    }
+
+    /**
+     * Fills the pattern with the arguments.
+     *
+     * @param args values for {@code {0}}, {@code {1}}, ...
+     * @return the message text
+     */
+    public String format(Object... args) {
+        StringBuilder sb = new StringBuilder();
+        String p = pattern;
+        for (int i = 0; i < p.length(); i++) {
+            char c = p.charAt(i);
+            if (c == '\'' && i + 1 < p.length() && p.charAt(i + 1) == '\'') {
+                sb.append('\'');
+                i++;
+            } else if (c == '{') {
+                int close = p.indexOf('}', i);
+                int idx = Integer.parseInt(p.substring(i + 1, close));
+                sb.append(idx < args.length ? String.valueOf(args[idx]) : "{" + idx + "}");
+                i = close;
+            } else {
+                sb.append(c);
+            }
+        }
+        return sb.toString();
+    }
+}

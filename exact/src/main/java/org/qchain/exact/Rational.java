@@ -1,0 +1,302 @@
+package org.qchain.exact;
+
+import java.math.BigDecimal;
+import java.math.BigInteger;
+
+/**
+ * An exact rational number {@code p/q} with {@code q > 0} and {@code gcd(p, q) = 1}; zero is {@code 0/1}.
+ *
+ * <p>Immutable. Normalisation happens in exactly one place (the private constructor path {@link #of(BigInteger,
+ * BigInteger)}), so {@link #equals(Object)} and {@link #hashCode()} compare the canonical pair.
+ * {@link #toString()} is always {@code p/q}, or {@code p} when {@code q = 1}.
+ */
+public final class Rational implements Comparable<Rational> {
+    /** 0. */
+    public static final Rational ZERO = new Rational(BigInteger.ZERO, BigInteger.ONE);
+    /** 1. */
+    public static final Rational ONE = new Rational(BigInteger.ONE, BigInteger.ONE);
+
+    private final BigInteger num;
+    private final BigInteger den;
+
+    private Rational(BigInteger num, BigInteger den) {
+        this.num = num;
+        this.den = den;
+    }
+
+    /**
+     * The integer {@code k}.
+     *
+     * @param k the value
+     * @return {@code k/1}
+     */
+    public static Rational of(long k) {
+        if (k == 0) {
+            return ZERO;
+        }
+        if (k == 1) {
+            return ONE;
+        }
+        return new Rational(BigInteger.valueOf(k), BigInteger.ONE);
+    }
+
+    /**
+     * The integer {@code k}.
+     *
+     * @param k the value
+     * @return {@code k/1}
+     */
+    public static Rational of(BigInteger k) {
+        return new Rational(k, BigInteger.ONE);
+    }
+
+    /**
+     * The reduced fraction {@code p/q}.
+     *
+     * @param p numerator
+     * @param q denominator
+     * @return the reduced fraction
+     * @throws ArithmeticException if {@code q == 0}
+     */
+    public static Rational of(long p, long q) {
+        return of(BigInteger.valueOf(p), BigInteger.valueOf(q));
+    }
+
+    /**
+     * The reduced fraction {@code p/q}.
+     *
+     * @param p numerator
+     * @param q denominator
+     * @return the reduced fraction
+     * @throws ArithmeticException if {@code q == 0}
+     */
+    public static Rational of(BigInteger p, BigInteger q) {
+        int s = q.signum();
+        if (s == 0) {
+            throw new ArithmeticException("division by zero");
+        }
+        if (p.signum() == 0) {
+            return ZERO;
+        }
+        if (s < 0) {
+            p = p.negate();
+            q = q.negate();
+        }
+        if (q.equals(BigInteger.ONE)) {
+            return new Rational(p, q);
+        }
+        BigInteger g = p.gcd(q);
+        if (!g.equals(BigInteger.ONE)) {
+            p = p.divide(g);
+            q = q.divide(g);
+        }
+        return new Rational(p, q);
+    }
+
+    /**
+     * Parses {@code p}, {@code p/q}, or an exact decimal such as {@code 0.25}, {@code -1.5e-3} or {@code .5}.
+     * Decimals are read exactly ({@code 0.1} is {@code 1/10}); surrounding spaces are allowed.
+     *
+     * @param text the text
+     * @return the value
+     * @throws NumberFormatException if the text is not such a number
+     * @throws ArithmeticException   if the denominator is zero
+     */
+    public static Rational parse(String text) {
+        String t = text.strip();
+        int slash = t.indexOf('/');
+        if (slash >= 0) {
+            Rational p = parseDecimal(t.substring(0, slash).strip(), text);
+            Rational q = parseDecimal(t.substring(slash + 1).strip(), text);
+            return p.divide(q);
+        }
+        return parseDecimal(t, text);
+    }
+
+    private static Rational parseDecimal(String t, String whole) {
+        if (t.isEmpty() || !t.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
+            throw new NumberFormatException("malformed number '" + whole.strip() + "'");
+        }
+        BigDecimal d = new BigDecimal(t);
+        return of(d);
+    }
+
+    /**
+     * The exact value of a {@link BigDecimal}.
+     *
+     * @param d the decimal
+     * @return its exact value
+     */
+    public static Rational of(BigDecimal d) {
+        BigInteger unscaled = d.unscaledValue();
+        int scale = d.scale();
+        if (scale <= 0) {
+            return of(unscaled.multiply(BigInteger.TEN.pow(-scale)));
+        }
+        return of(unscaled, BigInteger.TEN.pow(scale));
+    }
+
+    /** The numerator (sign of the number). */
+    public BigInteger numerator() {
+        return num;
+    }
+
+    /** The denominator, always positive. */
+    public BigInteger denominator() {
+        return den;
+    }
+
+    /** Whether the denominator is 1. */
+    public boolean isInteger() {
+        return den.equals(BigInteger.ONE);
+    }
+
+    /** -1, 0 or 1. */
+    public int signum() {
+        return num.signum();
+    }
+
+    /** Whether this is 0. */
+    public boolean isZero() {
+        return num.signum() == 0;
+    }
+
+    /** Whether this is 1. */
+    public boolean isOne() {
+        return num.equals(BigInteger.ONE) && den.equals(BigInteger.ONE);
+    }
+
+    /** {@code this + o}. */
+    public Rational add(Rational o) {
+        if (isZero()) {
+            return o;
+        }
+        if (o.isZero()) {
+            return this;
+        }
+        if (den.equals(o.den)) {
+            return of(num.add(o.num), den);
+        }
+        return of(num.multiply(o.den).add(o.num.multiply(den)), den.multiply(o.den));
+    }
+
+    /** {@code this - o}. */
+    public Rational subtract(Rational o) {
+        return add(o.negate());
+    }
+
+    /** {@code this * o}. */
+    public Rational multiply(Rational o) {
+        if (isZero() || o.isZero()) {
+            return ZERO;
+        }
+        if (isOne()) {
+            return o;
+        }
+        if (o.isOne()) {
+            return this;
+        }
+        // cross-reduce first so the products stay small: gcd(p1, q2) and gcd(p2, q1)
+        BigInteger g1 = num.gcd(o.den);
+        BigInteger g2 = o.num.gcd(den);
+        BigInteger p = num.divide(g1).multiply(o.num.divide(g2));
+        BigInteger q = den.divide(g2).multiply(o.den.divide(g1));
+        return new Rational(p, q);
+    }
+
+    /**
+     * {@code this / o}.
+     *
+     * @throws ArithmeticException if {@code o} is zero
+     */
+    public Rational divide(Rational o) {
+        return multiply(o.reciprocal());
+    }
+
+    /** {@code -this}. */
+    public Rational negate() {
+        return isZero() ? this : new Rational(num.negate(), den);
+    }
+
+    /** {@code |this|}. */
+    public Rational abs() {
+        return num.signum() < 0 ? negate() : this;
+    }
+
+    /**
+     * {@code 1 / this}.
+     *
+     * @throws ArithmeticException if this is zero
+     */
+    public Rational reciprocal() {
+        if (isZero()) {
+            throw new ArithmeticException("division by zero");
+        }
+        return num.signum() < 0 ? new Rational(den.negate(), num.negate()) : new Rational(den, num);
+    }
+
+    /**
+     * {@code this^e} for any integer {@code e}.
+     *
+     * @throws ArithmeticException if this is zero and {@code e < 0}
+     */
+    public Rational pow(int e) {
+        if (e < 0) {
+            return reciprocal().pow(-e);
+        }
+        if (e == 0) {
+            return ONE;
+        }
+        return new Rational(num.pow(e), den.pow(e));
+    }
+
+    /** The smaller of the two. */
+    public Rational min(Rational o) {
+        return compareTo(o) <= 0 ? this : o;
+    }
+
+    /** The larger of the two. */
+    public Rational max(Rational o) {
+        return compareTo(o) >= 0 ? this : o;
+    }
+
+    @Override
+    public int compareTo(Rational o) {
+        if (den.equals(o.den)) {
+            return num.compareTo(o.num);
+        }
+        return num.multiply(o.den).compareTo(o.num.multiply(den));
+    }
+
+    /**
+     * A nearby {@code double}; not exact. Safe for huge numerators and denominators (no overflow to NaN).
+     */
+    public double doubleValue() {
+        int shift = Math.max(num.bitLength(), den.bitLength()) - 60;
+        if (shift <= 0) {
+            return num.doubleValue() / den.doubleValue();
+        }
+        // scale both into double range keeping 60 significant bits of each
+        int nb = num.bitLength() - 60;
+        int db = den.bitLength() - 60;
+        double n = nb > 0 ? num.shiftRight(nb).doubleValue() : num.doubleValue();
+        double d = db > 0 ? den.shiftRight(db).doubleValue() : den.doubleValue();
+        return Math.scalb(n / d, Math.max(nb, 0) - Math.max(db, 0));
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Rational r && num.equals(r.num) && den.equals(r.den);
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * num.hashCode() + den.hashCode();
+    }
+
+    /** {@code p/q}, or {@code p} for an integer. */
+    @Override
+    public String toString() {
+        return isInteger() ? num.toString() : num + "/" + den;
+    }
+}

@@ -1,0 +1,144 @@
+package org.qchain.exact.model;
+
+import java.util.LinkedHashSet;
+import java.util.Set;
+import java.util.function.Function;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.Rational;
+import org.qchain.exact.SourcePos;
+
+/**
+ * A small expression tree as written in a model file: rational constants, parameter names, {@code + - * /},
+ * unary minus, and integer powers. Every node keeps the position of its text, so errors found later (division by
+ * zero, a value out of range) can point at it.
+ *
+ * <p>The tree belongs to {@code exact} so that the exact engine can evaluate it with rational values and the symbolic
+ * module can map it into its own ring; neither needs the other's types.
+ */
+public sealed interface Expr {
+
+    /** Where the text of this node starts; may be {@code null} for nodes built in code. */
+    SourcePos pos();
+
+    /** A rational constant. */
+    record Num(Rational value, SourcePos pos) implements Expr {
+    }
+
+    /** A parameter name. */
+    record Var(String name, SourcePos pos) implements Expr {
+    }
+
+    /** Unary minus. */
+    record Neg(Expr operand, SourcePos pos) implements Expr {
+    }
+
+    /** The binary operators. */
+    enum Op {
+        /** Addition. */ ADD("+"),
+        /** Subtraction. */ SUB("-"),
+        /** Multiplication. */ MUL("*"),
+        /** Division. */ DIV("/");
+
+        private final String symbol;
+
+        Op(String symbol) {
+            this.symbol = symbol;
+        }
+
+        /** The operator as written. */
+        public String symbol() {
+            return symbol;
+        }
+    }
+
+    /** A binary operation; {@code pos} is the operator's position. */
+    record Bin(Op op, Expr left, Expr right, SourcePos pos) implements Expr {
+    }
+
+    /** {@code base ^ exponent} with an integer exponent (possibly negative). */
+    record Pow(Expr base, int exponent, SourcePos pos) implements Expr {
+    }
+
+    /** A constant node without position. */
+    static Expr num(Rational r) {
+        return new Num(r, null);
+    }
+
+    /** {@code a - b} without position. */
+    static Expr sub(Expr a, Expr b) {
+        return new Bin(Op.SUB, a, b, null);
+    }
+
+    /** {@code a + b} without position. */
+    static Expr add(Expr a, Expr b) {
+        return new Bin(Op.ADD, a, b, null);
+    }
+
+    /**
+     * Evaluates with rational values for the parameters.
+     *
+     * @param values the value of each parameter name; it may throw for a name it does not know
+     * @return the exact value
+     * @throws QchainException with {@link ErrorKey#DIVISION_BY_ZERO} at the division's position
+     */
+    default Rational evaluate(Function<String, Rational> values) {
+        if (this instanceof Num n) {
+            return n.value();
+        }
+        if (this instanceof Var v) {
+            return values.apply(v.name());
+        }
+        if (this instanceof Neg g) {
+            return g.operand().evaluate(values).negate();
+        }
+        if (this instanceof Bin b) {
+            Rational l = b.left().evaluate(values);
+            Rational r = b.right().evaluate(values);
+            switch (b.op()) {
+                case ADD:
+                    return l.add(r);
+                case SUB:
+                    return l.subtract(r);
+                case MUL:
+                    return l.multiply(r);
+                default:
+                    if (r.isZero()) {
+                        throw new QchainException(b.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(b) + "'");
+                    }
+                    return l.divide(r);
+            }
+        }
+        Pow p = (Pow) this;
+        Rational base = p.base().evaluate(values);
+        if (base.isZero() && p.exponent() < 0) {
+            throw new QchainException(p.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(p) + "'");
+        }
+        return base.pow(p.exponent());
+    }
+
+    /** The parameter names used, in order of first appearance. */
+    default Set<String> variables() {
+        Set<String> out = new LinkedHashSet<>();
+        collect(this, out);
+        return out;
+    }
+
+    private static void collect(Expr e, Set<String> out) {
+        if (e instanceof Var v) {
+            out.add(v.name());
+        } else if (e instanceof Neg g) {
+            collect(g.operand(), out);
+        } else if (e instanceof Bin b) {
+            collect(b.left(), out);
+            collect(b.right(), out);
+        } else if (e instanceof Pow p) {
+            collect(p.base(), out);
+        }
+    }
+
+    /** Plain syntax that the model parser reads back to an equal value, with minimal parentheses. */
+    static String toPlain(Expr e) {
+        return ExprPrinter.print(e);
+    }
+}

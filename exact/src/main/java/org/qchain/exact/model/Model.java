@@ -1,0 +1,159 @@
+package org.qchain.exact.model;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalInt;
+import org.qchain.exact.Rational;
+
+/**
+ * A parsed chain: its kind, parameters, states (their order fixes rows and columns) and the transitions as listed.
+ * Immutable; built by {@link ModelParser} or {@link #of}.
+ */
+public final class Model {
+    private final String source;
+    private final ChainKind kind;
+    private final List<ParamDecl> params;
+    private final List<String> states;
+    private final List<Transition> transitions;
+    private final Transition[][] grid;
+
+    private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
+                  List<Transition> transitions) {
+        this.source = source;
+        this.kind = kind;
+        this.params = List.copyOf(params);
+        this.states = List.copyOf(states);
+        this.transitions = List.copyOf(transitions);
+        int n = states.size();
+        this.grid = new Transition[n][n];
+        for (Transition t : transitions) {
+            if (grid[t.from()][t.to()] != null) {
+                throw new IllegalArgumentException("duplicate transition " + states.get(t.from()) + " -> " + states.get(t.to()));
+            }
+            grid[t.from()][t.to()] = t;
+        }
+    }
+
+    /**
+     * A model from its parts. The parser has already checked names; this factory only checks that no transition
+     * is given twice.
+     *
+     * @param source      the file name as given, for messages
+     * @param kind        discrete or continuous
+     * @param params      the parameter declarations, in file order
+     * @param states      the state names, in file order
+     * @param transitions the listed transitions
+     * @return the model
+     * @throws IllegalArgumentException if a transition is given twice or an index is out of range
+     */
+    public static Model of(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
+                           List<Transition> transitions) {
+        return new Model(source, kind, params, states, transitions);
+    }
+
+    /** The file name as given, for messages. */
+    public String source() {
+        return source;
+    }
+
+    /** Discrete or continuous. */
+    public ChainKind kind() {
+        return kind;
+    }
+
+    /** The parameter declarations, in file order. */
+    public List<ParamDecl> params() {
+        return params;
+    }
+
+    /** The declaration of a parameter. */
+    public Optional<ParamDecl> param(String name) {
+        return params.stream().filter(p -> p.name().equals(name)).findFirst();
+    }
+
+    /** Names of the parameters that have no nominal value. */
+    public List<String> freeParameters() {
+        List<String> out = new ArrayList<>();
+        for (ParamDecl p : params) {
+            if (p.nominal().isEmpty()) {
+                out.add(p.name());
+            }
+        }
+        return out;
+    }
+
+    /** The nominal values of the parameters that have one, in file order. */
+    public Map<String, Rational> nominalValues() {
+        Map<String, Rational> out = new LinkedHashMap<>();
+        for (ParamDecl p : params) {
+            p.nominal().ifPresent(v -> out.put(p.name(), v));
+        }
+        return out;
+    }
+
+    /** The state names, in file order. */
+    public List<String> states() {
+        return states;
+    }
+
+    /** Number of states. */
+    public int size() {
+        return states.size();
+    }
+
+    /** The index of a state name. */
+    public OptionalInt indexOf(String state) {
+        int i = states.indexOf(state);
+        return i < 0 ? OptionalInt.empty() : OptionalInt.of(i);
+    }
+
+    /** The transitions as listed, in file order. */
+    public List<Transition> transitions() {
+        return transitions;
+    }
+
+    /** The listed transition from {@code i} to {@code j}, if any. */
+    public Optional<Transition> listed(int i, int j) {
+        return Optional.ofNullable(grid[i][j]);
+    }
+
+    /** The listed transitions out of state {@code i}, in file order. */
+    public List<Transition> outgoing(int i) {
+        List<Transition> out = new ArrayList<>();
+        for (Transition t : transitions) {
+            if (t.from() == i) {
+                out.add(t);
+            }
+        }
+        return out;
+    }
+
+    /**
+     * The matrix entry {@code (i, j)} as an expression. Discrete: the listed probability; for an unlisted
+     * self-transition, the remainder {@code 1 - (sum of the row's listed transitions)}; otherwise 0. Continuous: the
+     * listed rate; the diagonal is minus the sum of the row's off-diagonal rates (the generator).
+     *
+     * @param i row (from)
+     * @param j column (to)
+     * @return the entry's expression
+     */
+    public Expr entry(int i, int j) {
+        Transition t = grid[i][j];
+        if (i != j || (t != null && kind == ChainKind.DISCRETE)) {
+            return t == null ? Expr.num(Rational.ZERO) : t.expr();
+        }
+        Expr sum = null;
+        for (Transition o : outgoing(i)) {
+            if (o.to() != i) {
+                sum = sum == null ? o.expr() : Expr.add(sum, o.expr());
+            }
+        }
+        if (kind == ChainKind.DISCRETE) {
+            return sum == null ? Expr.num(Rational.ONE) : Expr.sub(Expr.num(Rational.ONE), sum);
+        }
+        return sum == null ? Expr.num(Rational.ZERO) : new Expr.Neg(sum, null);
+    }
+}
