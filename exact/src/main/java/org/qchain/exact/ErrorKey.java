@@ -51,7 +51,13 @@ public enum ErrorKey {
     /** {0}: detail. */
     INTERNAL("internal error: {0}"),
     /** The user interrupted the computation. */
-    INTERRUPTED("interrupted");
+    INTERRUPTED("interrupted"),
+
+    // --- closed forms in n (appended) --------------------------------------------------------------------------
+    /** {0}: what the closed-form engine cannot do, and what is still available. */
+    CLOSED_FORM_UNSUPPORTED("no closed form in n: {0}"),
+    /** {0}: the condition that fails, {1}: the parameter values. */
+    CLOSED_FORM_CONDITION("the closed form needs {0}, which fails at {1}; compute it with these values given (--at) instead");
 
     private final String pattern;
 

@@ -1,0 +1,304 @@
+package org.qchain.symbolic.closed;
+
+import edu.jas.arith.BigRational;
+import edu.jas.poly.ExpVector;
+import edu.jas.poly.GenPolynomial;
+import edu.jas.poly.GenPolynomialRing;
+import edu.jas.ufd.FactorAbstract;
+import edu.jas.ufd.FactorFactory;
+import edu.jas.ufd.Quotient;
+import edu.jas.ufd.QuotientRing;
+import java.math.BigInteger;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Map;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.Rational;
+import org.qchain.exact.model.Expr;
+
+/**
+ * The field Q(parameters) of one computation, made once: JAS polynomials over {@code BigRational} in the free
+ * parameters, their quotient field, and the univariate ring over it in which characteristic polynomials live.
+ * Conversions from model expressions and to printed formulas are here too, so JAS types stay inside this package.
+ */
+final class ParamField {
+    final List<String> names;
+    final GenPolynomialRing<BigRational> poly;
+    final QuotientRing<BigRational> field;
+    final GenPolynomialRing<Quotient<BigRational>> univariate;
+
+    ParamField(List<String> names, String variable) {
+        this.names = List.copyOf(names);
+        this.poly = new GenPolynomialRing<>(BigRational.ZERO, names.toArray(new String[0]));
+        this.field = new QuotientRing<>(poly);
+        this.univariate = new GenPolynomialRing<>(field, new String[] {variable});
+    }
+
+    Quotient<BigRational> zero() {
+        return field.getZERO();
+    }
+
+    Quotient<BigRational> one() {
+        return field.getONE();
+    }
+
+    Quotient<BigRational> of(Rational r) {
+        return new Quotient<>(field, poly.getONE().multiply(big(r)));
+    }
+
+    Quotient<BigRational> of(long k) {
+        return of(Rational.of(k));
+    }
+
+    static BigRational big(Rational r) {
+        return BigRational.RNRED(r.numerator(), r.denominator());
+    }
+
+    static Rational rational(BigRational b) {
+        return Rational.of(b.numerator(), b.denominator());
+    }
+
+    /**
+     * Maps a model expression into the field; names in {@code at} are replaced by their values.
+     *
+     * @throws QchainException with {@link ErrorKey#DIVISION_BY_ZERO} at the division's position
+     */
+    Quotient<BigRational> of(Expr e, Map<String, Rational> at) {
+        if (e instanceof Expr.Num n) {
+            return of(n.value());
+        }
+        if (e instanceof Expr.Var v) {
+            Rational r = at.get(v.name());
+            if (r != null) {
+                return of(r);
+            }
+            return new Quotient<>(field, poly.univariate(v.name()));
+        }
+        if (e instanceof Expr.Neg g) {
+            return of(g.operand(), at).negate();
+        }
+        if (e instanceof Expr.Bin b) {
+            Quotient<BigRational> l = of(b.left(), at);
+            Quotient<BigRational> r = of(b.right(), at);
+            switch (b.op()) {
+                case ADD:
+                    return l.sum(r);
+                case SUB:
+                    return l.subtract(r);
+                case MUL:
+                    return l.multiply(r);
+                default:
+                    if (r.isZERO()) {
+                        throw new QchainException(b.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(b) + "'");
+                    }
+                    return l.divide(r);
+            }
+        }
+        Expr.Pow p = (Expr.Pow) e;
+        Quotient<BigRational> base = of(p.base(), at);
+        if (p.exponent() < 0) {
+            if (base.isZERO()) {
+                throw new QchainException(p.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(p) + "'");
+            }
+            return power(base.inverse(), -(long) p.exponent());
+        }
+        return power(base, p.exponent());
+    }
+
+    static <C extends edu.jas.structure.RingElem<C>> C power(C base, long e) {
+        C r = null;
+        C b = base;
+        long k = e;
+        if (k == 0) {
+            @SuppressWarnings("unchecked")
+            edu.jas.structure.RingFactory<C> fac = (edu.jas.structure.RingFactory<C>) base.factory();
+            return fac.getONE();
+        }
+        while (k > 0) {
+            if ((k & 1) == 1) {
+                r = r == null ? b : r.multiply(b);
+            }
+            k >>= 1;
+            if (k > 0) {
+                b = b.multiply(b);
+            }
+        }
+        return r;
+    }
+
+    /** Exponent of parameter {@code i} (in {@link #names} order) in a monomial; JAS counts from the end. */
+    private int exp(ExpVector e, int i) {
+        return (int) e.getVal(names.size() - 1 - i);
+    }
+
+    /**
+     * The value of a polynomial at a point.
+     *
+     * @throws IllegalArgumentException if a parameter used has no value
+     */
+    BigRational evaluate(GenPolynomial<BigRational> p, Map<String, Rational> at) {
+        BigRational[] v = new BigRational[names.size()];
+        for (int i = 0; i < v.length; i++) {
+            Rational r = at.get(names.get(i));
+            v[i] = r == null ? null : big(r);
+        }
+        BigRational s = BigRational.ZERO;
+        for (Map.Entry<ExpVector, BigRational> t : p.getMap().entrySet()) {
+            BigRational m = t.getValue();
+            for (int i = 0; i < v.length; i++) {
+                int k = exp(t.getKey(), i);
+                if (k > 0) {
+                    if (v[i] == null) {
+                        throw new IllegalArgumentException("no value for parameter " + names.get(i));
+                    }
+                    m = m.multiply(power(v[i], k));
+                }
+            }
+            s = s.sum(m);
+        }
+        return s;
+    }
+
+    /** Whether the element does not depend on any parameter. */
+    static boolean isConstant(Quotient<BigRational> q) {
+        return q.num.isConstant() && q.den.isConstant();
+    }
+
+    /** The rational value of a constant element. */
+    static BigRational constantValue(Quotient<BigRational> q) {
+        return q.num.leadingBaseCoefficient().divide(q.den.leadingBaseCoefficient());
+    }
+
+    /** Irreducible factors over Q of a polynomial in the parameters, each primitive with integer coefficients. */
+    List<GenPolynomial<BigRational>> irreducibleFactors(GenPolynomial<BigRational> p) {
+        List<GenPolynomial<BigRational>> out = new ArrayList<>();
+        if (p.isConstant()) {
+            return out;
+        }
+        FactorAbstract<BigRational> f = FactorFactory.getImplementation(BigRational.ZERO);
+        for (GenPolynomial<BigRational> g : f.factors(p).keySet()) {
+            if (!g.isConstant()) {
+                out.add(integral(g));
+            }
+        }
+        return out;
+    }
+
+    // --- printing ----------------------------------------------------------------------------------------------
+
+    /** {@code p} scaled to coprime integer coefficients with a positive first term in print order. */
+    GenPolynomial<BigRational> integral(GenPolynomial<BigRational> p) {
+        if (p.isZERO()) {
+            return p;
+        }
+        BigInteger lcm = BigInteger.ONE;
+        BigInteger gcd = BigInteger.ZERO;
+        for (BigRational c : p.getMap().values()) {
+            BigInteger d = c.denominator();
+            lcm = lcm.divide(lcm.gcd(d)).multiply(d);
+        }
+        for (BigRational c : p.getMap().values()) {
+            gcd = gcd.gcd(c.numerator().multiply(lcm).divide(c.denominator()));
+        }
+        BigRational scale = BigRational.RNRED(lcm, gcd);
+        if (firstCoefficient(p).signum() < 0) {
+            scale = scale.negate();
+        }
+        return p.multiply(scale);
+    }
+
+    private BigRational firstCoefficient(GenPolynomial<BigRational> p) {
+        return monomials(p).get(0).getValue();
+    }
+
+    /** Monomials in print order: ascending total degree, then by exponents in parameter order, higher first. */
+    private List<Map.Entry<ExpVector, BigRational>> monomials(GenPolynomial<BigRational> p) {
+        List<Map.Entry<ExpVector, BigRational>> terms = new ArrayList<>(p.getMap().entrySet());
+        Comparator<Map.Entry<ExpVector, BigRational>> byDegree = Comparator.comparingLong(t -> t.getKey().totalDeg());
+        terms.sort(byDegree.thenComparing((x, y) -> {
+            for (int i = 0; i < names.size(); i++) {
+                int c = Integer.compare(exp(y.getKey(), i), exp(x.getKey(), i));
+                if (c != 0) {
+                    return c;
+                }
+            }
+            return 0;
+        }));
+        return terms;
+    }
+
+    static Fml rational(BigInteger num, BigInteger den) {
+        Fml n = Fml.integer(num.abs());
+        Fml r = den.equals(BigInteger.ONE) ? n : Fml.div(n, Fml.integer(den));
+        return num.signum() < 0 ? Fml.neg(r) : r;
+    }
+
+    /** A polynomial in the parameters as a formula. */
+    Fml formula(GenPolynomial<BigRational> p) {
+        if (p.isZERO()) {
+            return Fml.ZERO;
+        }
+        List<Fml> terms = new ArrayList<>();
+        for (Map.Entry<ExpVector, BigRational> t : monomials(p)) {
+            List<Fml> factors = new ArrayList<>();
+            BigRational c = t.getValue();
+            factors.add(rational(c.numerator().abs(), c.denominator()));
+            for (int i = 0; i < names.size(); i++) {
+                int k = exp(t.getKey(), i);
+                if (k > 0) {
+                    factors.add(Fml.pow(Fml.name(names.get(i)), Fml.integer(k)));
+                }
+            }
+            Fml m = Fml.prod(factors);
+            terms.add(c.signum() < 0 ? Fml.neg(m) : m);
+        }
+        return Fml.sum(terms);
+    }
+
+    /** A rational function as {@code num/den} with coprime integer coefficients and a positive denominator. */
+    Fml formula(Quotient<BigRational> q) {
+        if (q.isZERO()) {
+            return Fml.ZERO;
+        }
+        GenPolynomial<BigRational> den = integral(q.den);
+        BigRational scale = q.den.isZERO() ? BigRational.ONE : den.leadingBaseCoefficient().divide(q.den.leadingBaseCoefficient());
+        GenPolynomial<BigRational> num = q.num.multiply(scale);
+        if (den.isConstant()) {
+            return formula(num.divide(den.leadingBaseCoefficient()));
+        }
+        // integer numerator: move the numerator's content denominator into the denominator
+        GenPolynomial<BigRational> numInt = integral(num);
+        BigRational ratio = num.leadingBaseCoefficient().divide(numInt.leadingBaseCoefficient());
+        // num = ratio * numInt; den stays integral; ratio = r/s gives (r * numInt) / (s * den)
+        GenPolynomial<BigRational> top = numInt.multiply(new BigRational(ratio.numerator()));
+        GenPolynomial<BigRational> bottom = den.multiply(new BigRational(ratio.denominator()));
+        Fml t = formula(top);
+        boolean negative = false;
+        if (t instanceof Fml.Neg g) {
+            negative = true;
+            t = g.operand();
+        }
+        Fml r = Fml.div(t, formula(bottom));
+        return negative ? Fml.neg(r) : r;
+    }
+
+    /** A univariate polynomial over the field, highest power first, e.g. {@code x^2 - (2 - a - b)*x + 1 - a - b}. */
+    Fml formula(GenPolynomial<Quotient<BigRational>> p, String variable) {
+        List<Fml> terms = new ArrayList<>();
+        for (Map.Entry<ExpVector, Quotient<BigRational>> t : p.getMap().entrySet()) {
+            long k = t.getKey().getVal(0);
+            Fml c = formula(t.getValue());
+            Fml power = k == 0 ? Fml.ONE : Fml.pow(Fml.name(variable), Fml.integer(k));
+            if (k == 0) {
+                terms.add(c);
+            } else if (c instanceof Fml.Sum) {
+                terms.add(Fml.prod(c, power));
+            } else {
+                terms.add(Fml.prod(c, power));
+            }
+        }
+        return Fml.sum(terms);
+    }
+}

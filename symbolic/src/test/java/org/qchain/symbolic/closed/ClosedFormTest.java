@@ -1,0 +1,192 @@
+package org.qchain.symbolic.closed;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import edu.jas.arith.BigRational;
+import edu.jas.ufd.Quotient;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.Rational;
+import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.model.Model;
+
+class ClosedFormTest {
+
+    private static final Model TWO_STATE = Chains.model(List.of("a", "b"),
+        new String[][] {{"1-a", "a"}, {"b", "1-b"}});
+
+    @Test
+    void twoStateChainHasTheStandardClosedForm() {
+        ClosedForm cf = ClosedForms.of(TWO_STATE);
+        // Grinstead and Snell, Introduction to Probability, ch. 11 (two-state chain, from memory):
+        // P^n = 1/(a+b) [[b, a], [b, a]] + (1-a-b)^n/(a+b) [[a, -a], [-b, b]]
+        assertEquals("b/(a + b) + a/(a + b)*(1 - a - b)^n", cf.formula(0, 0));
+        assertEquals("a/(a + b) - a/(a + b)*(1 - a - b)^n", cf.formula(0, 1));
+        assertEquals("b/(a + b) - b/(a + b)*(1 - a - b)^n", cf.formula(1, 0));
+        assertEquals("a/(a + b) + b/(a + b)*(1 - a - b)^n", cf.formula(1, 1));
+        assertEquals(List.of("a + b != 0"), cf.conditions());
+        assertEquals(0, cf.validFrom());
+        // the same formula built independently as rational functions, n = 0 .. 6
+        ParamField f = cf.field();
+        Quotient<BigRational> a = new Quotient<>(f.field, f.poly.univariate("a"));
+        Quotient<BigRational> b = new Quotient<>(f.field, f.poly.univariate("b"));
+        Quotient<BigRational> lambda = f.one().subtract(a).subtract(b);
+        for (int n = 0; n <= 6; n++) {
+            Quotient<BigRational> ln = ParamField.power(lambda, n == 0 ? 0 : n);
+            if (n == 0) {
+                ln = f.one();
+            }
+            Quotient<BigRational> p00 = b.sum(a.multiply(ln)).divide(a.sum(b));
+            Quotient<BigRational> p01 = a.subtract(a.multiply(ln)).divide(a.sum(b));
+            Quotient<BigRational>[][] got = cf.evaluateSymbolic(n);
+            assertEquals(p00, got[0][0], "n=" + n);
+            assertEquals(p01, got[0][1], "n=" + n);
+        }
+        Chains.assertMatchesPowers(cf, TWO_STATE,
+            List.of(Chains.at("a", "1/3", "b", "1/4"), Chains.at("a", "9/10", "b", "7/10")), 10);
+    }
+
+    @Test
+    void twoStateLongRunIsTheStationaryLawWithRateOneMinusAMinusB() {
+        LongRun lr = ClosedForms.of(TWO_STATE).longRun();
+        // Grinstead and Snell, ch. 11 (from memory): the limit has rows (b, a)/(a + b)
+        assertTrue(lr.converges());
+        assertEquals(List.of(List.of(List.of("b/(a + b)", "a/(a + b)"), List.of("b/(a + b)", "a/(a + b)"))), lr.limits());
+        assertEquals("abs(1 - a - b)", lr.rate());
+    }
+
+    @Test
+    void jordanBlockGivesBinomialTerms() {
+        Model m = Chains.model(List.of(), new String[][] {{"1/2", "1/2", "0"}, {"0", "1/2", "1/2"}, {"0", "0", "1"}});
+        ClosedForm cf = ClosedForms.of(m);
+        // issue 4 of this project: P^n_11 = (1/2)^n, P^n_12 = n (1/2)^n; third column derived by hand:
+        // the rows sum to 1, so P^n_13 = 1 - (1/2)^n - n (1/2)^n and P^n_23 = 1 - (1/2)^n; P^n_33 = 1
+        assertEquals("(1/2)^n", cf.formula(0, 0));
+        assertEquals("n*(1/2)^n", cf.formula(0, 1));
+        assertEquals("1 - (1/2)^n - n*(1/2)^n", cf.formula(0, 2));
+        assertEquals("1 - (1/2)^n", cf.formula(1, 2));
+        assertEquals("1", cf.formula(2, 2));
+        Eigenvalue half = cf.eigenvalues().get(1);
+        assertEquals("1/2", half.values().get(0));
+        assertEquals(2, half.multiplicity());
+        assertEquals(2, half.jordanIndex());
+        RationalMatrix at = null;
+        for (int n = 0; n <= 12; n++) {
+            Rational h = Rational.of(1, 2).pow(n);
+            Rational nh = h.multiply(Rational.of(n));
+            at = cf.evaluate(n, Map.of());
+            assertEquals(h, at.get(0, 0));
+            assertEquals(nh, at.get(0, 1));
+            assertEquals(Rational.ONE.subtract(h).subtract(nh), at.get(0, 2));
+            assertEquals(h, at.get(1, 1));
+            assertEquals(Rational.ONE.subtract(h), at.get(1, 2));
+            assertEquals(Rational.ONE, at.get(2, 2));
+        }
+        Chains.assertMatchesPowers(cf, m, List.of(Map.of()), 0);
+    }
+
+    @Test
+    void birthDeathChainHasARealRadicalPair() {
+        // rows 1-a, a, 0 / b, 1-a-b, a / 0, b, 1-b: chi = (x - 1) (x^2 - (2 - 2a - 2b + ...) x + ...), the
+        // quadratic irreducible over Q(a, b); common practice, no source; agreement checked against exact powers
+        Model m = Chains.model(List.of("a", "b"),
+            new String[][] {{"1-a", "a", "0"}, {"b", "1-a-b", "a"}, {"0", "b", "1-b"}});
+        ClosedForm cf = ClosedForms.of(m);
+        assertEquals("quadratic", cf.eigenvalues().get(1).kind());
+        assertTrue(cf.formula(0, 0).contains("sqrt("), cf.formula(0, 0));
+        Chains.assertMatchesPowers(cf, m, List.of(Chains.at("a", "1/3", "b", "1/5"), Chains.at("a", "1/7", "b", "2/3")), 8);
+    }
+
+    @Test
+    void cyclicChainWithComplexPairStaysReal() {
+        // rows 1-a, a, 0 / 0, 1-a, a / a, 0, 1-a: eigenvalues 1 - a + a w with w a cube root of unity,
+        // so the quadratic factor has a negative discriminant -3a^2 (derived by hand)
+        Model m = Chains.model(List.of("a"),
+            new String[][] {{"1-a", "a", "0"}, {"0", "1-a", "a"}, {"a", "0", "1-a"}});
+        ClosedForm cf = ClosedForms.of(m);
+        Eigenvalue pair = cf.eigenvalues().get(1);
+        assertEquals("quadratic", pair.kind());
+        Chains.assertMatchesPowers(cf, m, List.of(Chains.at("a", "1/3"), Chains.at("a", "3/4")), 8);
+    }
+
+    @Test
+    void periodTwoChainHasTwoSubsequenceLimits() {
+        // a walk on three states that alternates between {S2} and {S1, S3}: period 2 (common practice, no source)
+        Model m = Chains.model(List.of("a"), new String[][] {{"0", "1", "0"}, {"a", "0", "1-a"}, {"0", "1", "0"}});
+        ClosedForm cf = ClosedForms.of(m);
+        LongRun lr = cf.longRun();
+        assertEquals(2, lr.period());
+        assertFalse(lr.converges());
+        // derived by hand: P^(2m) -> rows (a, 0, 1-a) / (0, 1, 0) / (a, 0, 1-a); P^(2m+1) -> the other pattern
+        assertEquals(List.of(List.of("a", "0", "1 - a"), List.of("0", "1", "0"), List.of("a", "0", "1 - a")), lr.limits().get(0));
+        assertEquals(List.of(List.of("0", "1", "0"), List.of("a", "0", "1 - a"), List.of("0", "1", "0")), lr.limits().get(1));
+        Chains.assertMatchesPowers(cf, m, List.of(Chains.at("a", "1/3")), 0);
+    }
+
+    @Test
+    void periodThreeChainHasThreeSubsequenceLimits() {
+        // a deterministic cycle S1 -> S2 -> S3 -> S1: P^(3m+r) = P^r (common practice, no source)
+        Model m = Chains.model(List.of(), new String[][] {{"0", "1", "0"}, {"0", "0", "1"}, {"1", "0", "0"}});
+        ClosedForm cf = ClosedForms.of(m);
+        LongRun lr = cf.longRun();
+        assertEquals(3, lr.period());
+        assertEquals(List.of(List.of("1", "0", "0"), List.of("0", "1", "0"), List.of("0", "0", "1")), lr.limits().get(0));
+        assertEquals(List.of(List.of("0", "1", "0"), List.of("0", "0", "1"), List.of("1", "0", "0")), lr.limits().get(1));
+        assertEquals(List.of(List.of("0", "0", "1"), List.of("1", "0", "0"), List.of("0", "1", "0")), lr.limits().get(2));
+        assertEquals("0", lr.rate());
+        Chains.assertMatchesPowers(cf, m, List.of(Map.of()), 0);
+    }
+
+    @Test
+    void zeroEigenvalueSetsValidFrom() {
+        // S1 -> S2 -> S3 (absorbing): P^n = [[0,0,1],[0,0,1],[0,0,1]] for n >= 2 (derived by hand)
+        Model m = Chains.model(List.of(), new String[][] {{"0", "1", "0"}, {"0", "0", "1"}, {"0", "0", "1"}});
+        ClosedForm cf = ClosedForms.of(m);
+        assertEquals(2, cf.validFrom());
+        assertEquals(2, cf.validFrom(0, 1));
+        assertEquals(0, cf.validFrom(2, 2));
+        assertEquals("1", cf.formula(0, 2));
+        assertEquals("0", cf.formula(0, 1));
+        Chains.assertMatchesPowers(cf, m, List.of(Map.of()), 0);
+    }
+
+    @Test
+    void irreducibleCubicGivesARootSum() {
+        // a 4-state cycle with holding: chi = (x - 1)(x^3 - x^2/12 + 7x/24 + 1/4), the cubic irreducible over Q
+        // (no rational root by the rational root test, derived by hand); agreement with exact powers is the test
+        Model m = Chains.model(List.of(), new String[][] {
+            {"1/2", "1/2", "0", "0"}, {"0", "1/3", "2/3", "0"}, {"0", "0", "1/4", "3/4"}, {"1", "0", "0", "0"}});
+        ClosedForm cf = ClosedForms.of(m);
+        assertEquals("roots", cf.eigenvalues().get(1).kind(), cf.eigenvalues().toString());
+        assertTrue(cf.formula(0, 0).contains("rootsum(n, f1)"), cf.formula(0, 0));
+        Chains.assertMatchesPowers(cf, m, List.of(Map.of()), 10);
+    }
+
+    @Test
+    void zeroEigenvalueNextToAComplexPair() {
+        // a 4-cycle with holding probability 1/2: chi = x (x - 1)(x^2 - x + 1/2) (derived by hand:
+        // eigenvalues (1 + w)/2 for w^4 = 1, i.e. 1, (1 +- i)/2 and 0)
+        Model m = Chains.model(List.of(), new String[][] {
+            {"1/2", "1/2", "0", "0"}, {"0", "1/2", "1/2", "0"}, {"0", "0", "1/2", "1/2"}, {"1/2", "0", "0", "1/2"}});
+        ClosedForm cf = ClosedForms.of(m);
+        assertEquals(1, cf.validFrom());
+        assertTrue(cf.longRun().converges());
+        assertEquals("sqrt(1/2)", cf.longRun().rate());
+        assertEquals(List.of("1/2 + 1/2*sqrt(-1)", "1/2 - 1/2*sqrt(-1)"), cf.eigenvalues().get(2).values());
+        Chains.assertMatchesPowers(cf, m, List.of(Map.of()), 10);
+    }
+
+    @Test
+    void evaluatingWhereAConditionFailsIsRefused() {
+        ClosedForm cf = ClosedForms.of(TWO_STATE);
+        QchainException e = assertThrows(QchainException.class,
+            () -> cf.evaluate(3, Chains.at("a", "1/2", "b", "-1/2")));
+        assertEquals(ErrorKey.CLOSED_FORM_CONDITION, e.key());
+    }
+}
