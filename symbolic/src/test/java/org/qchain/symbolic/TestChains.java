@@ -14,12 +14,12 @@ import org.qchain.exact.model.ParamDecl;
 import org.qchain.exact.model.Transition;
 
 /** Builds models in tests without the model parser: a tiny reader for expressions and a chain builder. */
-final class TestChains {
+public final class TestChains {
     private TestChains() {
     }
 
     /** Reads {@code + - * / ^ ( )}, rationals and names; enough for test input. */
-    static Expr expr(String s) {
+    public static Expr expr(String s) {
         return new Reader(s).parse();
     }
 
@@ -137,7 +137,7 @@ final class TestChains {
      * A discrete chain from a full matrix of expression strings ("" or "0" for no transition); the diagonal is
      * listed explicitly unless it is "*", which means the remainder.
      */
-    static Model discrete(List<String> params, String[][] rows) {
+    public static Model discrete(List<String> params, String[][] rows) {
         List<ParamDecl> ps = new ArrayList<>();
         for (String p : params) {
             ps.add(new ParamDecl(p, Domain.probability(), Optional.empty(), new SourcePos("<test>", 1, 1)));
@@ -145,7 +145,7 @@ final class TestChains {
         return discrete(ps, rows, true);
     }
 
-    static Model discrete(List<ParamDecl> ps, String[][] rows, boolean unused) {
+    public static Model discrete(List<ParamDecl> ps, String[][] rows, boolean unused) {
         List<String> states = new ArrayList<>();
         for (int i = 0; i < rows.length; i++) {
             states.add("S" + i);
@@ -163,12 +163,12 @@ final class TestChains {
         return Model.of("<test>", ChainKind.DISCRETE, ps, states, ts);
     }
 
-    static ParamDecl param(String name, Domain d, Rational nominal) {
+    public static ParamDecl param(String name, Domain d, Rational nominal) {
         return new ParamDecl(name, d, Optional.ofNullable(nominal), new SourcePos("<test>", 1, 7));
     }
 
     /** {@code p^n} by {@code n - 1} plain multiplications in the exact module. */
-    static RationalMatrix exactPower(RationalMatrix p, int n) {
+    public static RationalMatrix exactPower(RationalMatrix p, int n) {
         RationalMatrix r = RationalMatrix.identity(p.rows());
         for (int k = 0; k < n; k++) {
             r = r.multiply(p);
@@ -177,7 +177,7 @@ final class TestChains {
     }
 
     /** The model's one-step matrix at a point, evaluated by the exact module's expression evaluator. */
-    static RationalMatrix exactMatrix(Model m, java.util.Map<String, Rational> point) {
+    public static RationalMatrix exactMatrix(Model m, java.util.Map<String, Rational> point) {
         int n = m.size();
         Rational[][] e = new Rational[n][n];
         for (int i = 0; i < n; i++) {
