@@ -53,6 +53,17 @@ public enum ErrorKey {
     /** The user interrupted the computation. */
     INTERRUPTED("interrupted"),
 
+    // --- symbolic parameters -----------------------------------------------------------------------------------
+    /** {0}: n, {1}: estimated terms, {2}: degree bound, {3}: limit, {4}: option that raises it. */
+    SYMBOLIC_TOO_LARGE("the symbolic P^{0} would have up to about {1} polynomial terms in total (entries of degree up to {2}),"
+        + " more than the limit {3}; raise it with {4}"),
+    /** {0}: entry label such as {@code Worn->Worn}, {1}: formula, {2}: what its rows sum to. */
+    SYMBOLIC_ROW_SUM("row {0} sums to {1}, not identically 1"),
+    /** {0}: entry label, {1}: formula, {2}: condition, {3}: where it fails. */
+    SYMBOLIC_RANGE("{0} is {1}: needs {2}; {3}"),
+    /** {0}: what, {1}: detail. */
+    SWEEP("invalid sweep ''{0}'': {1}"),
+
     // --- closed forms in n (appended) --------------------------------------------------------------------------
     /** {0}: what the closed-form engine cannot do, and what is still available. */
     CLOSED_FORM_UNSUPPORTED("no closed form in n: {0}"),

@@ -1,0 +1,13 @@
+package org.qchain.symbolic;
+
+/**
+ * An upper estimate of the size of {@code P^n} for a matrix of rational functions, computed from the one-step matrix
+ * before any multiplication (see {@link RatFunMatrix#estimatePower(long)}).
+ *
+ * @param n              the power
+ * @param degree         bound on the total degree of each numerator of {@code A^n} where {@code P = A/d}
+ * @param termsPerEntry  bound on the number of terms of one such numerator
+ * @param totalTerms     {@code termsPerEntry} times the number of entries (saturating at {@code Long.MAX_VALUE})
+ */
+public record PowerEstimate(long n, long degree, long termsPerEntry, long totalTerms) {
+}

@@ -1,0 +1,47 @@
+package org.qchain.symbolic;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.model.Model;
+
+/** The size estimate bounds the real result, and large powers are refused before any work. */
+class SizeGuardTest {
+    private final Model birthDeath = TestChains.discrete(List.of("a", "b"), new String[][] {
+        {"*", "a", "0"}, {"b", "*", "a"}, {"0", "b", "*"}});
+    private final RatFunMatrix p = RatFunMatrix.fromModel(birthDeath);
+
+    @Test
+    void estimateIsAnUpperBoundOfTheTermCount() {
+        // common practice, no source: a polynomial of total degree D in k variables has at most C(D + k, k) terms
+        for (int n : new int[] {1, 2, 5, 10, 20}) {
+            RatFunMatrix pn = p.power(n);
+            long terms = 0;
+            for (int i = 0; i < 3; i++) {
+                for (int j = 0; j < 3; j++) {
+                    terms += pn.get(i, j).numerator().termCount();
+                }
+            }
+            PowerEstimate e = p.estimatePower(n);
+            assertTrue(terms <= e.totalTerms(), n + ": " + terms + " > " + e);
+            assertEquals(n, e.degree());
+        }
+        assertEquals(9L * 231, p.estimatePower(20).totalTerms()); // C(22, 2) = 231 per entry
+    }
+
+    @Test
+    void powersPastTheLimitAreRefusedWithTheEstimate() {
+        QchainException e = assertThrows(QchainException.class,
+            () -> p.power(20, new SymbolicLimits(1000), x -> { }));
+        assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE, e.key());
+        assertEquals("the symbolic P^20 would have up to about 2079 polynomial terms in total (entries of degree up to 20),"
+            + " more than the limit 1000; raise it with --max-terms", e.getMessage());
+        assertThrows(QchainException.class, () -> p.power(100_000_000L));
+        assertEquals(ErrorKey.BAD_ARGUMENT, assertThrows(QchainException.class, () -> p.power(-1)).key());
+    }
+}

@@ -1,0 +1,117 @@
+package org.qchain.symbolic.check;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.junit.jupiter.api.Test;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.Rational;
+import org.qchain.exact.model.Domain;
+import org.qchain.exact.model.Model;
+import org.qchain.exact.model.ParamDecl;
+import org.qchain.symbolic.TestChains;
+
+/**
+ * Row sums as identities and the range of entries over parameter boxes. Source: common practice, no source (a
+ * multilinear polynomial attains its extremes over a box at the corners; interval arithmetic encloses ranges).
+ */
+class ParameterCheckTest {
+    private static Model pump(Rational p, Rational r) {
+        List<ParamDecl> ps = List.of(TestChains.param("p", Domain.probability(), p),
+            TestChains.param("r", Domain.probability(), r));
+        // Up Worn Down: Worn goes to Down with p and back to Up with r; Worn->Worn is the remainder 1 - p - r
+        return TestChains.discrete(ps, new String[][] {{"*", "p", "0"}, {"r", "*", "p"}, {"1/2", "0", "*"}}, true);
+    }
+
+    @Test
+    void remainderThatCanGoNegativeIsAWarningWhenTheNominalValuesSatisfyTheCondition() {
+        CheckReport rep = ParameterCheck.check(pump(Rational.of(1, 20), Rational.of(1, 4)));
+        assertEquals(List.of(), rep.errors());
+        assertEquals(1, rep.warnings().size());
+        Finding f = rep.warnings().get(0);
+        assertEquals(ErrorKey.SYMBOLIC_RANGE, f.key());
+        assertEquals("S1->S1 is 1 - p - r: needs p + r <= 1; fails near p=1, r=1 (a corner of the domain);"
+            + " holds at the nominal values p=1/20, r=1/4", f.message());
+        assertEquals("p + r <= 1", f.condition());
+        assertTrue(f.decided());
+        assertEquals(Optional.of(Map.of("p", Rational.ONE, "r", Rational.ONE)), f.witness());
+    }
+
+    @Test
+    void nominalValuesThatBreakTheConditionAreAnError() {
+        CheckReport rep = ParameterCheck.check(pump(Rational.of(1, 2), Rational.of(3, 4)));
+        assertEquals(1, rep.errors().size());
+        assertTrue(rep.errors().get(0).message().endsWith("the nominal values p=1/2, r=3/4 break it (S1->S1 = -1/4)"),
+            rep.errors().get(0).message());
+        QchainException e = assertThrows(QchainException.class, rep::throwIfErrors);
+        assertEquals(ErrorKey.SYMBOLIC_RANGE, e.key());
+    }
+
+    @Test
+    void freeParametersGiveAWarningWithTheCondition() {
+        Model m = TestChains.discrete(List.of("p", "r"), new String[][] {{"*", "p", "0"}, {"r", "*", "p"}, {"1/2", "0", "*"}});
+        CheckReport rep = ParameterCheck.check(m);
+        assertEquals(1, rep.warnings().size());
+        assertTrue(rep.warnings().get(0).message().endsWith("; results hold only where it does"));
+    }
+
+    @Test
+    void entriesThatStayInsideTheBoxGiveNoFinding() {
+        // 4 p (1 - p) <= 1 on [0, 1] with equality at 1/2, and >= 0 with equality at the ends: proven by monotonicity
+        Model m = TestChains.discrete(List.of("p", "q"), new String[][] {{"*", "4*p*(1 - p)"}, {"q/(1 + q)", "*"}});
+        CheckReport rep = ParameterCheck.check(m);
+        assertEquals(List.of(), rep.findings(), () -> rep.findings().toString());
+    }
+
+    @Test
+    void nonLinearEntryThatLeavesTheRangeIsFoundWithAnInteriorWitness() {
+        // 2 p (1 - p) + p: at p = 3/4 it is 3/8 + 3/4 = 9/8 > 1 (by hand)
+        Model m = TestChains.discrete(List.of("p"), new String[][] {{"*", "2*p*(1 - p) + p"}, {"1/2", "*"}});
+        CheckReport rep = ParameterCheck.check(m);
+        assertEquals(2, rep.warnings().size(), () -> rep.findings().toString()); // S0->S1 > 1 and S0->S0 < 0
+        Finding f = rep.warnings().get(0);
+        assertTrue(f.decided());
+        Rational at = f.witness().orElseThrow().get("p");
+        Rational value = Rational.of(3).multiply(at).subtract(Rational.of(2).multiply(at).multiply(at));
+        assertTrue(value.compareTo(Rational.ONE) > 0, "witness " + at + " gives " + value);
+    }
+
+    @Test
+    void unboundedDomainIsReportedAsUndecided() {
+        Domain positive = Domain.positive();
+        List<ParamDecl> ps = List.of(TestChains.param("k", positive, Rational.of(1, 10)));
+        Model m = TestChains.discrete(ps, new String[][] {{"*", "k/(1 + k)"}, {"1/2", "*"}}, true);
+        CheckReport rep = ParameterCheck.check(m);
+        assertTrue(rep.findings().stream().allMatch(f -> !f.decided()), rep.findings().toString());
+        assertTrue(rep.findings().get(0).message().contains("could not decide"), rep.findings().toString());
+    }
+
+    @Test
+    void aRowThatDoesNotSumToOneIdenticallyIsAnError() {
+        // all entries listed, the diagonal too: (1 - p) + p/2 + 0 is not 1
+        Model m = TestChains.discrete(List.of("p"), new String[][] {{"1 - p", "p/2"}, {"1/2", "1/2"}});
+        CheckReport rep = ParameterCheck.check(m);
+        assertEquals(1, rep.errors().size());
+        assertEquals(ErrorKey.SYMBOLIC_ROW_SUM, rep.errors().get(0).key());
+        assertEquals("row S0 sums to 1 - 1/2*p, not identically 1", rep.errors().get(0).message());
+    }
+
+    @Test
+    void pointsAreCheckedAgainstTheDomains() {
+        Model m = pump(Rational.of(1, 20), Rational.of(1, 4));
+        assertEquals(Map.of("p", Rational.of(1, 10), "r", Rational.of(1, 4)),
+            ParamPoints.resolve(m, Map.of("p", Rational.of(1, 10))));
+        QchainException out = assertThrows(QchainException.class,
+            () -> ParamPoints.resolve(m, Map.of("p", Rational.of(3, 2))));
+        assertEquals(ErrorKey.VALUE_OUTSIDE_DOMAIN, out.key());
+        assertEquals("value 3/2 of parameter 'p' is outside its domain (0, 1)", out.getMessage());
+        QchainException unknown = assertThrows(QchainException.class,
+            () -> ParamPoints.resolve(m, Map.of("z", Rational.of(1, 2))));
+        assertEquals(ErrorKey.UNKNOWN_PARAMETER, unknown.key());
+    }
+}
