@@ -84,6 +84,9 @@ final class CsvReader {
             }
             for (int j = 0; j < n; j++) {
                 Field f = r.fields().get(j + (labels ? 1 : 0));
+                if (f.text().isEmpty()) {
+                    throw new QchainException(f.pos(), ErrorKey.SYNTAX, "empty entry (write 0 for no transition)");
+                }
                 Rational v = Lexer.constant(f.text(), f.pos());
                 if (!v.isZero() || i == j) {
                     transitions.add(new Transition(i, j, new Expr.Num(v, f.pos()), f.pos(), f.pos()));

@@ -5,6 +5,7 @@ import java.util.List;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
+import org.qchain.exact.SourcePos;
 import org.qchain.exact.model.Lexer.Kind;
 import org.qchain.exact.model.Lexer.Token;
 
@@ -20,8 +21,8 @@ import org.qchain.exact.model.Lexer.Token;
  * atom     := NUMBER | NAME | '(' expr ')'
  * </pre>
  *
- * As in mathematics, {@code -p^2} is {@code -(p^2)}; {@code a^2^3} is refused (write {@code (a^2)^3}). A quotient of
- * two integer literals such as {@code 1/20} becomes one constant node.
+ * As in mathematics, {@code -p^2} is {@code -(p^2)}; {@code a^2^3} is refused (write {@code (a^2)^3}). A constant
+ * such as {@code 1/20} or {@code -3/4} at the start of a term becomes one constant node.
  */
 final class ExprParser {
     /** Largest exponent magnitude accepted in {@code x^k}. */
@@ -74,7 +75,9 @@ final class ExprParser {
             return;
         }
         String hint = "";
-        if (t.kind() == Kind.NAME || t.kind() == Kind.NUMBER || t.is("(")) {
+        if (!after.equals("the expression")) {
+            hint = "";
+        } else if (t.kind() == Kind.NAME || t.kind() == Kind.NUMBER || t.is("(")) {
             hint = " (write '*' for a product)";
         } else if (t.is(")")) {
             hint = " (no '(' to match it)";
@@ -93,7 +96,7 @@ final class ExprParser {
     }
 
     private Expr term() {
-        Expr left = foldedQuotient();
+        Expr left = foldedConstant();
         if (left == null) {
             left = unary();
         }
@@ -105,18 +108,35 @@ final class ExprParser {
         return left;
     }
 
-    /** {@code INT / INT} (not followed by {@code ^}, divisor not zero) as one constant, else {@code null}. */
-    private Expr foldedQuotient() {
-        if (i + 3 >= toks.size()) {
+    /**
+     * A constant written at the start of a term, as one node: {@code INT / INT} or {@code - INT / INT} (divisor not
+     * zero, not followed by {@code ^}), or {@code - NUMBER} (not followed by {@code ^}); else {@code null}. Folding
+     * only at a term's start keeps the value: {@code 2 / 1/2} is still {@code (2 / 1) / 2}.
+     */
+    private Expr foldedConstant() {
+        int k = i;
+        boolean minus = toks.get(k).is("-");
+        if (minus) {
+            k++;
+        }
+        Token a = toks.get(k);
+        if (a.kind() != Kind.NUMBER) {
             return null;
         }
-        Token a = toks.get(i);
-        Token slash = toks.get(i + 1);
-        Token b = toks.get(i + 2);
-        Token after = toks.get(i + 3);
-        if (a.isIntegerLiteral() && slash.is("/") && b.isIntegerLiteral() && !b.value().isZero() && !after.is("^")) {
-            i += 3;
-            return new Expr.Num(a.value().divide(b.value()), a.pos());
+        Token slash = toks.get(Math.min(k + 1, toks.size() - 1));
+        if (a.isIntegerLiteral() && slash.is("/") && k + 3 < toks.size()) {
+            Token b = toks.get(k + 2);
+            if (b.isIntegerLiteral() && !b.value().isZero() && !toks.get(k + 3).is("^")) {
+                Rational v = a.value().divide(b.value());
+                SourcePos at = toks.get(i).pos();
+                i = k + 3;
+                return new Expr.Num(minus ? v.negate() : v, at);
+            }
+        }
+        if (minus && !slash.is("^") && !a.value().isZero()) {
+            SourcePos at = toks.get(i).pos();
+            i = k + 1;
+            return new Expr.Num(a.value().negate(), at);
         }
         return null;
     }
@@ -196,8 +216,10 @@ final class ExprParser {
             }
             return inner;
         }
+        boolean doubleStar = t.is("*") && i >= 2 && toks.get(i - 2).is("*");
         throw new QchainException(t.pos(), ErrorKey.SYNTAX,
-            "expected a number, a parameter name or '(', found " + t.describe());
+            "expected a number, a parameter name or '(', found " + t.describe()
+                + (doubleStar ? " (write ^ for a power)" : ""));
     }
 
     /**

@@ -496,7 +496,7 @@ public final class ModelParser {
                 if (w.size() >= 3) {
                     throw new QchainException(p, ErrorKey.UNKNOWN_STATE, first.text());
                 }
-                throw new QchainException(p, ErrorKey.UNKNOWN_KEYWORD, first.text(), ", and it is not a declared state");
+                throw new QchainException(p, ErrorKey.UNKNOWN_KEYWORD, first.text(), "; it is not a declared state either");
             }
             transition(ln, line, w);
         }
