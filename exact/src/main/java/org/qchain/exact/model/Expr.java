@@ -78,16 +78,22 @@ public sealed interface Expr {
     /**
      * Evaluates with rational values for the parameters.
      *
-     * @param values the value of each parameter name; it may throw for a name it does not know
+     * @param values the value of each parameter name; it may throw, or return {@code null}, for a name it does not
+     *               know
      * @return the exact value
-     * @throws QchainException with {@link ErrorKey#DIVISION_BY_ZERO} at the division's position
+     * @throws QchainException with {@link ErrorKey#DIVISION_BY_ZERO} at the division's position, or
+     *                         {@link ErrorKey#FREE_PARAMETERS} at a name whose value is {@code null}
      */
     default Rational evaluate(Function<String, Rational> values) {
         if (this instanceof Num n) {
             return n.value();
         }
         if (this instanceof Var v) {
-            return values.apply(v.name());
+            Rational r = values.apply(v.name());
+            if (r == null) {
+                throw new QchainException(v.pos(), ErrorKey.FREE_PARAMETERS, v.name());
+            }
+            return r;
         }
         if (this instanceof Neg g) {
             return g.operand().evaluate(values).negate();

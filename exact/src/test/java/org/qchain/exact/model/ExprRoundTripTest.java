@@ -61,6 +61,11 @@ class ExprRoundTripTest {
         assertEquals(ErrorKey.FUNCTION_NOT_SUPPORTED, e.key());
         assertEquals("x:1:5: functions are not supported: log (expressions use numbers, parameters, + - * / ^ and parentheses)",
             e.getMessage());
+        Expr pq = ModelParser.parseExpression("x", "p + q");
+        e = assertThrows(QchainException.class, () -> pq.evaluate(Map.of("p", Rational.ONE)::get));
+        assertEquals(ErrorKey.FREE_PARAMETERS, e.key());
+        assertEquals("x:1:5: parameters without a value: q (give values with --at, or use a symbolic command)",
+            e.getMessage());
         e = assertThrows(QchainException.class, () -> ModelParser.parseExpression("x", "p^1000001"));
         assertEquals(ErrorKey.SYNTAX, e.key());
         e = assertThrows(QchainException.class, () -> ModelParser.parseExpression("x", "1e99999"));
