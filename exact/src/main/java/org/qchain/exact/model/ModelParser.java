@@ -11,6 +11,7 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -416,7 +417,7 @@ public final class ModelParser {
             boolean lowerClosed = open.is("[");
             boolean upperClosed = close.is("]");
             if (upper.isEmpty() && upperClosed) {
-                throw badDomain(open, line, close.pos(), "an infinite end is open: write ')' after inf");
+                throw new QchainException(close.pos(), ErrorKey.BAD_DOMAIN, text, "an infinite end is open: write ')' after inf");
             }
             if (upper.isPresent()) {
                 int c = lower.compareTo(upper.get());
@@ -509,7 +510,7 @@ public final class ModelParser {
                 int hash = raw.indexOf('#');
                 List<Word> w = words(hash >= 0 ? raw.substring(0, hash) : raw);
                 if (!w.isEmpty() && w.get(0).text().equals("states")) {
-                    Set<String> out = new java.util.HashSet<>();
+                    Set<String> out = new HashSet<>();
                     w.subList(1, w.size()).forEach(x -> out.add(x.text()));
                     return out;
                 }

@@ -147,4 +147,21 @@ class ModelParserTest {
         assertEquals(4, cr.transitions().get(0).pos().line());
         assertEquals(5, cr.transitions().get(0).exprPos().column());
     }
+
+    @Test
+    void theFoundationIssuesExampleReadsAsWritten() {
+        // the example of the model format in the project's foundation issue, verbatim with its comments
+        String text = """
+            chain discrete                  # or: chain continuous (rates; a later issue)
+            param p = 1/20                  # optional nominal value; optional domain: param p in (0, 1) = 1/20
+            states Up Worn Down             # order fixes rows and columns
+            Up   Worn  p                    # FROM TO EXPRESSION: one-step probability
+            Worn Down  3/100
+            Worn Up    0.25                 # decimals are read exactly: 0.25 = 1/4
+            Down Up    1/2
+            """;
+        Model m = ModelParser.parse("issue.chain", text);
+        assertEquals(matrix("19/20 1/20 0", "1/4 18/25 3/100", "1/2 0 1/2"),
+            Chains.transitionMatrix(m, m.nominalValues()));
+    }
 }
