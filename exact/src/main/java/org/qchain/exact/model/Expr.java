@@ -123,6 +123,53 @@ public sealed interface Expr {
         return base.pow(p.exponent());
     }
 
+    /**
+     * A bottom-up fold over a tree: each method receives the already folded operands. The symbolic module and the
+     * formatters map trees into their own values with it, without instanceof chains of their own.
+     *
+     * @param <T> the result type
+     */
+    interface Folder<T> {
+        /** A constant. */
+        T num(Rational value);
+
+        /** A parameter name. */
+        T var(String name);
+
+        /** Unary minus of the folded operand. */
+        T neg(T operand);
+
+        /** A binary operation on the folded operands. */
+        T bin(Op op, T left, T right);
+
+        /** The folded base to an integer power (possibly negative). */
+        T pow(T base, int exponent);
+    }
+
+    /**
+     * Folds this tree bottom-up.
+     *
+     * @param f   what each kind of node becomes
+     * @param <T> the result type
+     * @return the folded value of the root
+     */
+    default <T> T fold(Folder<T> f) {
+        if (this instanceof Num n) {
+            return f.num(n.value());
+        }
+        if (this instanceof Var v) {
+            return f.var(v.name());
+        }
+        if (this instanceof Neg g) {
+            return f.neg(g.operand().fold(f));
+        }
+        if (this instanceof Bin b) {
+            return f.bin(b.op(), b.left().fold(f), b.right().fold(f));
+        }
+        Pow p = (Pow) this;
+        return f.pow(p.base().fold(f), p.exponent());
+    }
+
     /** The parameter names used, in order of first appearance. */
     default Set<String> variables() {
         Set<String> out = new LinkedHashSet<>();
