@@ -18,6 +18,12 @@ import org.qchain.exact.SourcePos;
  */
 public sealed interface Expr {
 
+    /** Largest numerator or denominator, in bits, that evaluating one power may produce (about 10 million digits). */
+    long MAX_POWER_BITS = 1L << 25;
+
+    /** log10(2), to turn bits into decimal digits. */
+    double LOG10_2 = 0.30102999566398120;
+
     /** Where the text of this node starts; may be {@code null} for nodes built in code. */
     SourcePos pos();
 
@@ -119,6 +125,13 @@ public sealed interface Expr {
         Rational base = p.base().evaluate(values);
         if (base.isZero() && p.exponent() < 0) {
             throw new QchainException(p.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(p) + "'");
+        }
+        // the numerator and denominator of b^k have about k times the bits of b's: refuse before computing
+        long bits = (long) Math.max(base.numerator().bitLength(), base.denominator().bitLength())
+            * Math.abs((long) p.exponent());
+        if (bits > MAX_POWER_BITS) {
+            throw new QchainException(p.pos(), ErrorKey.POWER_TOO_LARGE, Expr.toPlain(p),
+                (long) (bits * LOG10_2), (long) (MAX_POWER_BITS * LOG10_2));
         }
         return base.pow(p.exponent());
     }

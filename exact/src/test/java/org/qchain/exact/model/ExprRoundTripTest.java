@@ -66,6 +66,11 @@ class ExprRoundTripTest {
         assertEquals(ErrorKey.FREE_PARAMETERS, e.key());
         assertEquals("x:1:5: parameters without a value: q (give values with --at, or use a symbolic command)",
             e.getMessage());
+        Expr huge = ModelParser.parseExpression("x", "(3^1000)^1000000");
+        e = assertThrows(QchainException.class, () -> huge.evaluate(n -> null));
+        assertEquals(ErrorKey.POWER_TOO_LARGE, e.key());
+        assertEquals(1, e.pos().orElseThrow().line());
+        assertEquals(9, e.pos().orElseThrow().column());
         e = assertThrows(QchainException.class, () -> ModelParser.parseExpression("x", "p^1000001"));
         assertEquals(ErrorKey.SYNTAX, e.key());
         e = assertThrows(QchainException.class, () -> ModelParser.parseExpression("x", "1e99999"));
