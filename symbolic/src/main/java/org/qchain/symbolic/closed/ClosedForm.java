@@ -15,6 +15,9 @@ import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
+import org.qchain.symbolic.ParamRing;
+import org.qchain.symbolic.RatFun;
+import org.qchain.symbolic.RatFunMatrix;
 
 /**
  * P^n of a discrete-time chain as formulas in a symbolic n and the chain's free parameters, with what goes with
@@ -31,7 +34,9 @@ public final class ClosedForm {
     public static final String N_SYMBOL = "n";
 
     private final ParamField field;
+    private final ParamRing ring;
     private final Spectral spectral;
+    private final SeriesForm seriesForm;
     private final List<String> states;
     private final int size;
     private final Spectral.Group zero;
@@ -41,12 +46,12 @@ public final class ClosedForm {
     private final List<GenPolynomial<BigRational>> conditionPolys;
     private final List<String> conditions;
     private final List<Eigenvalue> eigenvalues;
-    /** Reduced generating functions, made on first use (idempotent, so an unsynchronised race is harmless). */
-    private final List<GenPolynomial<Quotient<BigRational>>>[][] gfCache;
 
-    ClosedForm(ParamField field, Spectral spectral, List<String> states) {
-        this.field = field;
-        this.spectral = spectral;
+    ClosedForm(Series series, List<String> states) {
+        this.field = series.field;
+        this.ring = series.ring;
+        this.spectral = Spectral.of(series);
+        this.seriesForm = new SeriesForm(series, states);
         this.states = List.copyOf(states);
         this.size = spectral.size;
         Spectral.Group z = null;
@@ -80,9 +85,6 @@ public final class ClosedForm {
         }
         this.conditions = List.copyOf(c);
         this.eigenvalues = describeEigenvalues();
-        @SuppressWarnings("unchecked")
-        List<GenPolynomial<Quotient<BigRational>>>[][] cache = (List<GenPolynomial<Quotient<BigRational>>>[][]) new List[size][size];
-        this.gfCache = cache;
     }
 
     // --- the formulas ------------------------------------------------------------------------------------------
@@ -393,6 +395,28 @@ public final class ClosedForm {
         return field.evaluate(q.num, at).divide(d);
     }
 
+    /**
+     * P^n from the closed form with the parameters kept symbolic, as exact rational functions in the ring of the
+     * input matrix (for n below {@link #validFrom()} from the initial terms).
+     *
+     * @param n the step count, at least 0
+     * @return the matrix
+     * @throws IllegalArgumentException if n is negative
+     */
+    public RatFunMatrix evaluate(long n) {
+        if (n < 0) {
+            throw new IllegalArgumentException("n must not be negative: " + n);
+        }
+        Quotient<BigRational>[][] q = n < validFrom ? spectral.powers.get((int) n) : evaluateSymbolic(n);
+        RatFun[][] out = new RatFun[size][size];
+        for (int i = 0; i < size; i++) {
+            for (int j = 0; j < size; j++) {
+                out[i][j] = Bridge.toRatFun(field, ring, q[i][j]);
+            }
+        }
+        return RatFunMatrix.of(ring, out);
+    }
+
     /** The formula part of P^n with the parameters kept symbolic (for n >= validFrom), exactly. */
     Quotient<BigRational>[][] evaluateSymbolic(long n) {
         Evaluator<Quotient<BigRational>> ev = new Evaluator<>(field.field, q -> q);
@@ -421,153 +445,27 @@ public final class ClosedForm {
 
     // --- generating function and recurrence ---------------------------------------------------------------------
 
-    /** Numerator and denominator in z of entry (i, j) of (I - zP)^-1, reduced, denominator(0) = 1. */
-    List<GenPolynomial<Quotient<BigRational>>> gfParts(int i, int j) {
-        // adj(I - zP) = sum_k B_k z^k with B_k = sum_{m<=k} c_m P^(k-m); det(I - zP) = sum_k c_k z^k
-        List<GenPolynomial<Quotient<BigRational>>> cached = gfCache[i][j];
-        if (cached != null) {
-            return cached;
-        }
-        GenPolynomial<Quotient<BigRational>> num = field.univariate.getZERO();
-        GenPolynomial<Quotient<BigRational>> den = field.univariate.getZERO();
-        List<Quotient<BigRational>> c = spectral.charCoeffs;
-        for (int k = 0; k <= size; k++) {
-            den = den.sum(c.get(k), ExpVector.create(1, 0, k));
-            if (k < size) {
-                num = num.sum(spectral.adjugate.get(k)[i][j], ExpVector.create(1, 0, k));
-            }
-        }
-        List<GenPolynomial<Quotient<BigRational>>> out;
-        if (num.isZERO()) {
-            out = List.of(num, field.univariate.getONE());
-        } else {
-            // det(I - zP) = prod over factors f^m of chi of rev(f)^m, rev(f)(z) = z^deg f * f(1/z): divide out
-            // every common factor by trial division (no gcd over Q(parameters), whose coefficients swell)
-            for (Spectral.Group g : spectral.groups) {
-                GenPolynomial<Quotient<BigRational>> r = reversed(g.factor);
-                if (r.degree(0) == 0) {
-                    continue;
-                }
-                for (int k = 0; k < g.multiplicity; k++) {
-                    GenPolynomial<Quotient<BigRational>>[] qn = num.quotientRemainder(r);
-                    if (!qn[1].isZERO()) {
-                        break;
-                    }
-                    num = qn[0];
-                    den = den.divide(r);
-                }
-            }
-            Quotient<BigRational> d0 = den.trailingBaseCoefficient();
-            out = List.of(num.divide(d0), den.divide(d0));
-        }
-        gfCache[i][j] = out;
-        return out;
-    }
-
-    private GenPolynomial<Quotient<BigRational>> reversed(GenPolynomial<Quotient<BigRational>> f) {
-        long e = f.degree(0);
-        GenPolynomial<Quotient<BigRational>> r = field.univariate.getZERO();
-        for (Map.Entry<ExpVector, Quotient<BigRational>> t : f.getMap().entrySet()) {
-            r = r.sum(t.getValue(), ExpVector.create(1, 0, e - t.getKey().getVal(0)));
-        }
-        return r;
+    /** The generating functions and recurrences of the entries (they need no eigenvalues). */
+    public SeriesForm series() {
+        return seriesForm;
     }
 
     /**
-     * The generating function of entry (i, j).
+     * The generating function of entry (i, j); the same as {@code series().generatingFunction(i, j)}.
      *
      * @throws IndexOutOfBoundsException if i or j is out of range
      */
     public GeneratingFunction generatingFunction(int i, int j) {
-        List<GenPolynomial<Quotient<BigRational>>> parts = gfParts(i, j);
-        // clear the parameters' denominators: multiply both by the lcm of all coefficient denominators
-        GenPolynomial<BigRational> l = field.poly.getONE();
-        for (GenPolynomial<Quotient<BigRational>> p : parts) {
-            for (Quotient<BigRational> q : p.getMap().values()) {
-                l = lcm(l, q.den);
-            }
-        }
-        Fml num = zPolynomial(parts.get(0), l);
-        Fml den = zPolynomial(parts.get(1), l);
-        Fml whole = Fml.isOne(den) ? num : Fml.div(num, den);
-        return new GeneratingFunction("z", Fml.plain(num), Fml.plain(den), Fml.plain(whole), Fml.latex(whole));
-    }
-
-    private GenPolynomial<BigRational> lcm(GenPolynomial<BigRational> a, GenPolynomial<BigRational> b) {
-        if (b.isConstant()) {
-            return a;
-        }
-        GenPolynomial<BigRational> g = a.gcd(b);
-        return a.multiply(b).divide(g);
-    }
-
-    /** sum_k coeff_k z^k with each coefficient times l (a polynomial then), ascending in z. */
-    private Fml zPolynomial(GenPolynomial<Quotient<BigRational>> p, GenPolynomial<BigRational> l) {
-        List<Fml> terms = new ArrayList<>();
-        Quotient<BigRational> lq = new Quotient<>(field.field, l);
-        TreeMap<Long, Quotient<BigRational>> byPower = new TreeMap<>();
-        for (Map.Entry<ExpVector, Quotient<BigRational>> t : p.getMap().entrySet()) {
-            byPower.put(t.getKey().getVal(0), t.getValue().multiply(lq));
-        }
-        for (Map.Entry<Long, Quotient<BigRational>> t : byPower.entrySet()) {
-            Fml c = field.formula(t.getValue());
-            long k = t.getKey();
-            Fml zk = k == 0 ? Fml.ONE : Fml.pow(Fml.name("z"), Fml.integer(k));
-            terms.add(Fml.prod(c, zk));
-        }
-        return Fml.sum(terms);
-    }
-
-    /** r_1 .. r_d and the first n from which u(n) = sum r_k u(n - k) holds, for entry (i, j). */
-    List<Quotient<BigRational>> recurrenceCoefficients(int i, int j) {
-        List<GenPolynomial<Quotient<BigRational>>> parts = gfParts(i, j);
-        GenPolynomial<Quotient<BigRational>> den = parts.get(1);
-        int d = (int) den.degree(0);
-        Quotient<BigRational>[] a = Spectral.coefficients(field, den, d);
-        List<Quotient<BigRational>> r = new ArrayList<>();
-        for (int k = 1; k <= d; k++) {
-            r.add(a[k].negate());
-        }
-        return r;
-    }
-
-    int recurrenceStart(int i, int j) {
-        List<GenPolynomial<Quotient<BigRational>>> parts = gfParts(i, j);
-        long dn = parts.get(0).isZERO() ? -1 : parts.get(0).degree(0);
-        return (int) Math.max(parts.get(1).degree(0), dn + 1);
+        return seriesForm.generatingFunction(i, j);
     }
 
     /**
-     * The linear recurrence of entry (i, j) with its initial values.
+     * The linear recurrence of entry (i, j); the same as {@code series().recurrence(i, j)}.
      *
      * @throws IndexOutOfBoundsException if i or j is out of range
      */
     public Recurrence recurrence(int i, int j) {
-        List<Quotient<BigRational>> r = recurrenceCoefficients(i, j);
-        int start = recurrenceStart(i, j);
-        List<String> coeffs = new ArrayList<>();
-        List<Fml> rhs = new ArrayList<>();
-        for (int k = 0; k < r.size(); k++) {
-            Fml c = field.formula(r.get(k));
-            coeffs.add(Fml.plain(c));
-            Fml arg = Fml.sum(N, Fml.neg(Fml.integer(k + 1)));
-            rhs.add(Fml.prod(c, Fml.call("u", arg)));
-        }
-        List<String> init = new ArrayList<>();
-        List<String> initLatex = new ArrayList<>();
-        for (int k = 0; k < start; k++) {
-            Fml v = field.formula(spectral.powers.get(k)[i][j]);
-            init.add(Fml.plain(v));
-            initLatex.add("u(" + k + ") = " + Fml.latex(v));
-        }
-        Fml right = Fml.sum(rhs);
-        StringBuilder plain = new StringBuilder("u(n) = " + Fml.plain(right) + " for n >= " + start);
-        for (int k = 0; k < init.size(); k++) {
-            plain.append("; u(").append(k).append(") = ").append(init.get(k));
-        }
-        String latex = "u(n) = " + Fml.latex(right) + " \\quad (n \\ge " + start + ")"
-            + (initLatex.isEmpty() ? "" : ",\\; " + String.join(",\\; ", initLatex));
-        return new Recurrence(r.size(), coeffs, start, init, plain.toString(), latex);
+        return seriesForm.recurrence(i, j);
     }
 
     // --- long run ----------------------------------------------------------------------------------------------

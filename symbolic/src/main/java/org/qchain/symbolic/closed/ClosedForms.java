@@ -1,18 +1,13 @@
 package org.qchain.symbolic.closed;
 
-import edu.jas.arith.BigRational;
-import edu.jas.ufd.Quotient;
-import java.util.ArrayList;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.model.ChainKind;
 import org.qchain.exact.model.Model;
-import org.qchain.exact.model.ParamDecl;
+import org.qchain.symbolic.RatFunMatrix;
 
 /**
  * Closed forms of P^n in a symbolic n: the entry point of this package.
@@ -51,27 +46,45 @@ public final class ClosedForms {
                 throw new QchainException(ErrorKey.UNKNOWN_PARAMETER, name);
             }
         }
-        int s = model.size();
-        Set<String> used = new LinkedHashSet<>();
-        for (int i = 0; i < s; i++) {
-            for (int j = 0; j < s; j++) {
-                used.addAll(model.entry(i, j).variables());
-            }
+        RatFunMatrix p = RatFunMatrix.fromModel(model);
+        return of(at.isEmpty() ? p : p.substitute(at), model.states());
+    }
+
+    /**
+     * The closed form of the n-th power of a square matrix of rational functions (normally a stochastic matrix).
+     * The formulas use the ring's variables that occur in the matrix.
+     *
+     * @param p      the one-step matrix
+     * @param states a name per row
+     * @return the closed form
+     * @throws IllegalArgumentException if the number of names differs from the size
+     * @throws QchainException          with {@link ErrorKey#CLOSED_FORM_UNSUPPORTED} for a repeated irreducible
+     *                                  factor of degree at least 2 with a Jordan block
+     */
+    public static ClosedForm of(RatFunMatrix p, List<String> states) {
+        int s = p.size();
+        if (states.size() != s) {
+            throw new IllegalArgumentException(states.size() + " state names for a " + s + "x" + s + " matrix");
         }
-        List<String> names = new ArrayList<>();
-        for (ParamDecl p : model.params()) {
-            if (used.contains(p.name()) && !at.containsKey(p.name())) {
-                names.add(p.name());
-            }
+        return new ClosedForm(Series.of(p), states);
+    }
+
+    /**
+     * The generating functions and recurrences of P^n, which need no factorisation and so exist for every chain
+     * (also where {@link #of(Model, Map)} reports {@link ErrorKey#CLOSED_FORM_UNSUPPORTED}).
+     *
+     * @param model a discrete-time model
+     * @param at    values for some parameters (may be empty)
+     * @return the series forms
+     * @throws QchainException as {@link #of(Model, Map)}, except for the unsupported case
+     */
+    public static SeriesForm series(Model model, Map<String, Rational> at) {
+        if (model.kind() != ChainKind.DISCRETE) {
+            throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(),
+                "closed forms in n are for discrete-time chains");
         }
-        ParamField f = new ParamField(names, "x");
-        Quotient<BigRational>[][] p = Mat.create(s);
-        for (int i = 0; i < s; i++) {
-            for (int j = 0; j < s; j++) {
-                p[i][j] = f.of(model.entry(i, j), at);
-            }
-        }
-        return new ClosedForm(f, Spectral.of(f, p), model.states());
+        RatFunMatrix p = RatFunMatrix.fromModel(model);
+        return new SeriesForm(Series.of(at.isEmpty() ? p : p.substitute(at)), model.states());
     }
 
     /**

@@ -3,14 +3,11 @@ package org.qchain.symbolic.closed;
 import edu.jas.arith.BigRational;
 import edu.jas.poly.ExpVector;
 import edu.jas.poly.GenPolynomial;
-import edu.jas.ufd.FactorAbstract;
-import edu.jas.ufd.FactorFactory;
 import edu.jas.ufd.Quotient;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
-import java.util.SortedMap;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 
@@ -111,38 +108,9 @@ final class Spectral {
         this.groups = groups;
     }
 
-    static Spectral of(ParamField f, Quotient<BigRational>[][] p) {
-        int s = p.length;
-        List<Quotient<BigRational>[][]> powers = new ArrayList<>();
-        powers.add(Mat.identity(f, s));
-        for (int k = 1; k <= s; k++) {
-            powers.add(Mat.multiply(f, powers.get(k - 1), p));
-        }
-        // Newton's identities: k c_k = -(c_{k-1} p_1 + ... + c_0 p_k), p_j = trace(P^j)
-        List<Quotient<BigRational>> c = new ArrayList<>();
-        c.add(f.one());
-        for (int k = 1; k <= s; k++) {
-            Quotient<BigRational> acc = f.zero();
-            for (int j = 1; j <= k; j++) {
-                acc = acc.sum(c.get(k - j).multiply(Mat.trace(powers.get(j))));
-            }
-            c.add(acc.negate().divide(f.of(k)));
-        }
-        GenPolynomial<Quotient<BigRational>> chi = f.univariate.getZERO();
-        for (int k = 0; k <= s; k++) {
-            chi = chi.sum(c.get(k), ExpVector.create(1, 0, s - k));
-        }
-        // Faddeev-LeVerrier in closed form: B_k = sum_{m<=k} c_m P^(k-m)
-        List<Quotient<BigRational>[][]> adj = new ArrayList<>();
-        for (int k = 0; k < s; k++) {
-            Quotient<BigRational>[][] b = Mat.zero(f, s);
-            for (int m = 0; m <= k; m++) {
-                b = Mat.addScaled(b, c.get(m), powers.get(k - m));
-            }
-            adj.add(b);
-        }
-        List<Group> groups = decompose(f, p, powers, chi, adj);
-        return new Spectral(f, p, List.copyOf(powers), List.copyOf(c), chi, List.copyOf(adj), groups);
+    static Spectral of(Series sr) {
+        List<Group> groups = decompose(sr.field, sr.matrix, sr.powers, sr.chi, sr.adjugate, sr.factors, sr.multiplicities);
+        return new Spectral(sr.field, sr.matrix, sr.powers, sr.charCoeffs, sr.chi, sr.adjugate, groups);
     }
 
     static Quotient<BigRational>[] coefficients(ParamField f, GenPolynomial<Quotient<BigRational>> p, int degree) {
@@ -168,24 +136,8 @@ final class Spectral {
 
     private static List<Group> decompose(ParamField f, Quotient<BigRational>[][] p,
                                          List<Quotient<BigRational>[][]> powers, GenPolynomial<Quotient<BigRational>> chi,
-                                         List<Quotient<BigRational>[][]> adj) {
-        FactorAbstract<Quotient<BigRational>> factorizer = FactorFactory.getImplementation(f.field);
-        SortedMap<GenPolynomial<Quotient<BigRational>>, Long> factors = factorizer.factors(chi);
-        List<GenPolynomial<Quotient<BigRational>>> fs = new ArrayList<>();
-        List<Integer> ms = new ArrayList<>();
-        GenPolynomial<Quotient<BigRational>> product = f.univariate.getONE();
-        for (Map.Entry<GenPolynomial<Quotient<BigRational>>, Long> e : factors.entrySet()) {
-            if (e.getKey().degree(0) == 0) {
-                continue; // the constant JAS reports separately; chi is monic, so it is checked below
-            }
-            GenPolynomial<Quotient<BigRational>> g = e.getKey().monic();
-            fs.add(g);
-            ms.add(e.getValue().intValue());
-            product = product.multiply(ParamField.power(g, e.getValue()));
-        }
-        if (!product.subtract(chi).isZERO()) {
-            throw new QchainException(ErrorKey.INTERNAL, "factors of the characteristic polynomial do not multiply back");
-        }
+                                         List<Quotient<BigRational>[][]> adj,
+                                         List<GenPolynomial<Quotient<BigRational>>> fs, List<Integer> ms) {
         int s = p.length;
         List<Group> groups = new ArrayList<>();
         Quotient<BigRational>[][] total = Mat.zero(f, s);

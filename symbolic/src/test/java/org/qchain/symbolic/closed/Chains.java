@@ -1,10 +1,7 @@
 package org.qchain.symbolic.closed;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import edu.jas.arith.BigRational;
-import edu.jas.ufd.Quotient;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -14,12 +11,13 @@ import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.model.ChainKind;
 import org.qchain.exact.model.Domain;
-import org.qchain.exact.model.Expr;
 import org.qchain.exact.model.Model;
+import org.qchain.exact.model.ModelParser;
 import org.qchain.exact.model.ParamDecl;
 import org.qchain.exact.model.Transition;
+import org.qchain.symbolic.RatFunMatrix;
 
-/** Test helpers: chains from matrices of expression text, and the check every closed form must pass. */
+/** Test helpers: chains from matrices of expression text (read by the model parser), and the check every closed form must pass. */
 final class Chains {
     private Chains() {
     }
@@ -38,7 +36,7 @@ final class Chains {
         for (int i = 0; i < rows.length; i++) {
             for (int j = 0; j < rows.length; j++) {
                 if (i == j || !rows[i][j].strip().equals("0")) {
-                    ts.add(new Transition(i, j, new MiniParser(rows[i][j]).parse(), null));
+                    ts.add(new Transition(i, j, ModelParser.parseExpression("test", rows[i][j]), null));
                 }
             }
         }
@@ -76,20 +74,20 @@ final class Chains {
     static void assertMatchesPowers(ClosedForm cf, Model m, List<Map<String, Rational>> points, int upTo) {
         int s = m.size();
         int last = Math.max(2 * s, upTo);
-        ParamField f = cf.field();
-        Quotient<BigRational>[][] p = cf.spectral().matrix;
-        Quotient<BigRational>[][] pn = Mat.identity(f, s);
+        // reference: the symbolic module's own P^n (repeated squaring over a common denominator), an independent path
+        RatFunMatrix p = RatFunMatrix.fromModel(m);
         for (int n = 0; n <= last; n++) {
-            if (n >= cf.validFrom()) {
-                Quotient<BigRational>[][] got = cf.evaluateSymbolic(n);
-                assertTrue(Mat.equal(got, pn), "symbolic P^" + n + " differs");
-            }
-            pn = Mat.multiply(f, pn, p);
+            assertEquals(p.power(n), cf.evaluate(n), "symbolic P^" + n);
         }
         for (Map<String, Rational> at : points) {
             List<RationalMatrix> exact = powers(matrix(m, at), last);
             for (int n = 0; n <= last; n++) {
                 assertEquals(exact.get(n), cf.evaluate(n, at), "P^" + n + " at " + at);
+            }
+            // the chain with the values given first has a closed form of its own: it must agree as well
+            ClosedForm substituted = ClosedForms.of(m, at);
+            for (int n = 0; n <= last; n++) {
+                assertEquals(exact.get(n), substituted.evaluate(n, Map.of()), "substituted P^" + n + " at " + at);
             }
         }
     }
@@ -100,81 +98,5 @@ final class Chains {
             m.put((String) kv[i], Rational.parse((String) kv[i + 1]));
         }
         return m;
-    }
-
-    /** A tiny reader for entry text: numbers, names, + - * / ^ (integer exponents) and brackets. */
-    static final class MiniParser {
-        private final String s;
-        private int i;
-
-        MiniParser(String s) {
-            this.s = s.replace(" ", "");
-        }
-
-        Expr parse() {
-            Expr e = sum();
-            if (i != s.length()) {
-                throw new IllegalArgumentException("junk at " + i + " in " + s);
-            }
-            return e;
-        }
-
-        private Expr sum() {
-            Expr e = product();
-            while (i < s.length() && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
-                char op = s.charAt(i++);
-                Expr r = product();
-                e = new Expr.Bin(op == '+' ? Expr.Op.ADD : Expr.Op.SUB, e, r, null);
-            }
-            return e;
-        }
-
-        private Expr product() {
-            Expr e = unary();
-            while (i < s.length() && (s.charAt(i) == '*' || s.charAt(i) == '/')) {
-                char op = s.charAt(i++);
-                Expr r = unary();
-                e = new Expr.Bin(op == '*' ? Expr.Op.MUL : Expr.Op.DIV, e, r, null);
-            }
-            return e;
-        }
-
-        private Expr unary() {
-            if (s.charAt(i) == '-') {
-                i++;
-                return new Expr.Neg(unary(), null);
-            }
-            Expr a = atom();
-            if (i < s.length() && s.charAt(i) == '^') {
-                i++;
-                int st = i;
-                while (i < s.length() && Character.isDigit(s.charAt(i))) {
-                    i++;
-                }
-                a = new Expr.Pow(a, Integer.parseInt(s.substring(st, i)), null);
-            }
-            return a;
-        }
-
-        private Expr atom() {
-            char c = s.charAt(i);
-            if (c == '(') {
-                i++;
-                Expr e = sum();
-                i++;
-                return e;
-            }
-            int st = i;
-            if (Character.isDigit(c) || c == '.') {
-                while (i < s.length() && (Character.isDigit(s.charAt(i)) || s.charAt(i) == '.')) {
-                    i++;
-                }
-                return Expr.num(Rational.parse(s.substring(st, i)));
-            }
-            while (i < s.length() && Character.isLetterOrDigit(s.charAt(i))) {
-                i++;
-            }
-            return new Expr.Var(s.substring(st, i), null);
-        }
     }
 }

@@ -53,14 +53,14 @@ class GeneratingFunctionTest {
     }
 
     private static void check(Model m, int extra) {
-        ClosedForm cf = ClosedForms.of(m);
-        ParamField f = cf.field();
+        SeriesForm cf = ClosedForms.series(m, Map.of());
+        ParamField f = cf.raw().field;
         int s = m.size();
         int last = 2 * s + extra;
         List<Quotient<BigRational>[][]> pn = new ArrayList<>();
         pn.add(Mat.identity(f, s));
         for (int n = 1; n <= last; n++) {
-            pn.add(Mat.multiply(f, pn.get(n - 1), cf.spectral().matrix));
+            pn.add(Mat.multiply(f, pn.get(n - 1), cf.raw().matrix));
         }
         for (int i = 0; i < s; i++) {
             for (int j = 0; j < s; j++) {
@@ -97,10 +97,23 @@ class GeneratingFunctionTest {
         check(SIX_PARAM, 2);
     }
 
+    /** Two stages with parameters, then absorption: eigenvalues 1 - p (twice, one Jordan block), 1/2 (twice), 1 - q, 1. */
+    private static final Model SIX_STAGES = Chains.model(List.of("p", "q"), new String[][] {
+        {"1-p", "p", "0", "0", "0", "0"},
+        {"0", "1-p", "p/2", "p/2", "0", "0"},
+        {"0", "0", "1/2", "1/2", "0", "0"},
+        {"0", "0", "0", "1-q", "q", "0"},
+        {"0", "0", "0", "0", "1/2", "1/2"},
+        {"0", "0", "0", "0", "0", "1"}});
+
     @Test
     void sixStateClosedFormsMatchExactPowers() {
         Chains.assertMatchesPowers(ClosedForms.of(SIX), SIX, List.of(Map.of()), 14);
-        Chains.assertMatchesPowers(ClosedForms.of(SIX_PARAM), SIX_PARAM, List.of(Chains.at("p", "1/3")), 0);
+        ClosedForm stages = ClosedForms.of(SIX_STAGES);
+        Chains.assertMatchesPowers(stages, SIX_STAGES, List.of(Chains.at("p", "1/3", "q", "1/5")), 0);
+        check(SIX_STAGES, 0);
+        // the closed form's recurrence entries agree with the series form's
+        assertEquals(stages.recurrence(0, 5), ClosedForms.series(SIX_STAGES, Map.of()).recurrence(0, 5));
     }
 
     @Test

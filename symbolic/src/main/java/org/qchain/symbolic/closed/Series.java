@@ -1,0 +1,111 @@
+package org.qchain.symbolic.closed;
+
+import edu.jas.arith.BigRational;
+import edu.jas.poly.ExpVector;
+import edu.jas.poly.GenPolynomial;
+import edu.jas.ufd.FactorAbstract;
+import edu.jas.ufd.FactorFactory;
+import edu.jas.ufd.Quotient;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.SortedMap;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+import org.qchain.symbolic.ParamRing;
+import org.qchain.symbolic.RatFunMatrix;
+
+/**
+ * What every chain has, before any eigenvalue is named: the powers P^0 .. P^s, the characteristic polynomial
+ * {@code chi(x) = det(xI - P) = sum_k c_k x^(s-k)} (from the traces of the powers by Newton's identities, so no
+ * division by a polynomial), its factorisation over Q(parameters), and the coefficients {@code B_k} of
+ * {@code adj(xI - P) = sum_k B_k x^(s-1-k)} (Faddeev-LeVerrier, {@code B_k = sum_{m<=k} c_m P^(k-m)}). From these,
+ * {@code det(I - zP) = sum_k c_k z^k} and {@code adj(I - zP) = sum_k B_k z^k}: the generating function.
+ */
+final class Series {
+    final ParamField field;
+    /** The ring of the input matrix, for results handed back as {@code RatFun}. */
+    final ParamRing ring;
+    final int size;
+    final Quotient<BigRational>[][] matrix;
+    final List<Quotient<BigRational>[][]> powers;
+    final List<Quotient<BigRational>> charCoeffs;
+    final GenPolynomial<Quotient<BigRational>> chi;
+    final List<Quotient<BigRational>[][]> adjugate;
+    /** Monic irreducible factors of chi and their multiplicities. */
+    final List<GenPolynomial<Quotient<BigRational>>> factors;
+    final List<Integer> multiplicities;
+
+    private Series(ParamField field, ParamRing ring, Quotient<BigRational>[][] matrix) {
+        this.field = field;
+        this.ring = ring;
+        this.matrix = matrix;
+        ParamField f = field;
+        int s = matrix.length;
+        this.size = s;
+        List<Quotient<BigRational>[][]> pw = new ArrayList<>();
+        pw.add(Mat.identity(f, s));
+        for (int k = 1; k <= s; k++) {
+            pw.add(Mat.multiply(f, pw.get(k - 1), matrix));
+        }
+        this.powers = List.copyOf(pw);
+        // Newton's identities: k c_k = -(c_{k-1} p_1 + ... + c_0 p_k), p_j = trace(P^j)
+        List<Quotient<BigRational>> c = new ArrayList<>();
+        c.add(f.one());
+        for (int k = 1; k <= s; k++) {
+            Quotient<BigRational> acc = f.zero();
+            for (int j = 1; j <= k; j++) {
+                acc = acc.sum(c.get(k - j).multiply(Mat.trace(pw.get(j))));
+            }
+            c.add(acc.negate().divide(f.of(k)));
+        }
+        this.charCoeffs = List.copyOf(c);
+        GenPolynomial<Quotient<BigRational>> x = f.univariate.getZERO();
+        for (int k = 0; k <= s; k++) {
+            x = x.sum(c.get(k), ExpVector.create(1, 0, s - k));
+        }
+        this.chi = x;
+        List<Quotient<BigRational>[][]> adj = new ArrayList<>();
+        for (int k = 0; k < s; k++) {
+            Quotient<BigRational>[][] b = Mat.zero(f, s);
+            for (int m = 0; m <= k; m++) {
+                b = Mat.addScaled(b, c.get(m), pw.get(k - m));
+            }
+            adj.add(b);
+        }
+        this.adjugate = List.copyOf(adj);
+        FactorAbstract<Quotient<BigRational>> factorizer = FactorFactory.getImplementation(f.field);
+        SortedMap<GenPolynomial<Quotient<BigRational>>, Long> fm = factorizer.factors(chi);
+        List<GenPolynomial<Quotient<BigRational>>> fs = new ArrayList<>();
+        List<Integer> ms = new ArrayList<>();
+        GenPolynomial<Quotient<BigRational>> product = f.univariate.getONE();
+        for (Map.Entry<GenPolynomial<Quotient<BigRational>>, Long> e : fm.entrySet()) {
+            if (e.getKey().degree(0) == 0) {
+                continue; // the constant JAS reports as a factor of its own; chi is monic, checked below
+            }
+            GenPolynomial<Quotient<BigRational>> g = e.getKey().monic();
+            fs.add(g);
+            ms.add(e.getValue().intValue());
+            product = product.multiply(ParamField.power(g, e.getValue()));
+        }
+        if (!product.subtract(chi).isZERO()) {
+            throw new QchainException(ErrorKey.INTERNAL, "factors of the characteristic polynomial do not multiply back");
+        }
+        this.factors = List.copyOf(fs);
+        this.multiplicities = List.copyOf(ms);
+    }
+
+    /** From a matrix of the symbolic module, in the variables that occur in it. */
+    static Series of(RatFunMatrix p) {
+        List<String> names = p.occurringVariables();
+        ParamField f = new ParamField(names, "x");
+        int s = p.size();
+        Quotient<BigRational>[][] q = Mat.create(s);
+        for (int i = 0; i < s; i++) {
+            for (int j = 0; j < s; j++) {
+                q[i][j] = Bridge.toField(f, p.get(i, j));
+            }
+        }
+        return new Series(f, p.ring(), q);
+    }
+}
