@@ -520,6 +520,68 @@ public final class ClosedForm {
         return Fml.call("maxabsroot", Fml.name(g.name));
     }
 
+    /**
+     * The factors of degree 3 or more that formulas name, with their roots numerically at a point.
+     *
+     * @param at     a value for every parameter in {@link #parameters()} (empty if there are none)
+     * @param digits significant digits, at least 1
+     * @return the named factors in name order
+     * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
+     */
+    public List<RootPolynomial> rootPolynomials(Map<String, Rational> at, int digits) {
+        List<RootPolynomial> out = new ArrayList<>();
+        for (Spectral.Group g : spectral.groups) {
+            if (g.kind == Spectral.Kind.ROOTS) {
+                Fml f = field.formula(g.factor, "x");
+                List<String> roots = new ArrayList<>();
+                for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
+                    roots.add(NumericRoots.format(z, digits));
+                }
+                out.add(new RootPolynomial(g.name, Fml.plain(f), Fml.latex(f), roots));
+            }
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The second-largest eigenvalue modulus at a point (the largest modulus among eigenvalues that are not roots of
+     * unity and not 0), numerically: P^n approaches its limit (or its periodic pattern) like this number to the
+     * power n.
+     *
+     * @param at     a value for every parameter in {@link #parameters()}
+     * @param digits significant digits, at least 1
+     * @return the modulus in plain decimal notation, {@code 0} if there is no such eigenvalue
+     * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
+     */
+    public String rate(Map<String, Rational> at, int digits) {
+        org.apfloat.Apfloat best = new org.apfloat.Apfloat(0);
+        for (Spectral.Group g : spectral.groups) {
+            if (g.unitOrder > 0 || g == zero) {
+                continue;
+            }
+            for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
+                org.apfloat.Apfloat m = org.apfloat.ApcomplexMath.abs(z);
+                if (m.compareTo(best) > 0) {
+                    best = m;
+                }
+            }
+        }
+        return NumericRoots.format(best, digits);
+    }
+
+    private BigRational[] substituted(Spectral.Group g, Map<String, Rational> at) {
+        for (String p : field.names) {
+            if (!at.containsKey(p)) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "parameter values", at.keySet(), "no value for " + p);
+            }
+        }
+        BigRational[] a = new BigRational[g.coeffs.length];
+        for (int k = 0; k < a.length; k++) {
+            a[k] = substitute(g.coeffs[k], at);
+        }
+        return a;
+    }
+
     private static int lcm(int a, int b) {
         return a / BigInteger.valueOf(a).gcd(BigInteger.valueOf(b)).intValue() * b;
     }

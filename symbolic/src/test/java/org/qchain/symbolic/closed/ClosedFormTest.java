@@ -189,4 +189,30 @@ class ClosedFormTest {
             () -> cf.evaluate(3, Chains.at("a", "1/2", "b", "-1/2")));
         assertEquals(ErrorKey.CLOSED_FORM_CONDITION, e.key());
     }
+
+    @Test
+    void namedCubicHasItsRootsNumerically() {
+        Model m = Chains.model(List.of(), new String[][] {
+            {"1/2", "1/2", "0", "0"}, {"0", "1/3", "2/3", "0"}, {"0", "0", "1/4", "3/4"}, {"1", "0", "0", "0"}});
+        ClosedForm cf = ClosedForms.of(m);
+        List<RootPolynomial> rp = cf.rootPolynomials(Map.of(), 20);
+        assertEquals(1, rp.size());
+        assertEquals("x^3 - 1/12*x^2 + 7/24*x + 1/4", rp.get(0).polynomial());
+        assertEquals(3, rp.get(0).roots().size());
+        // the roots sum to 1/12 and multiply to -1/4 (Vieta, common practice): check through the real root r and
+        // the modulus of the pair, |w|^2 = (-1/4)/r ... here only numerically, to 15 digits
+        java.math.BigDecimal r = new java.math.BigDecimal(rp.get(0).roots().get(0));
+        java.math.BigDecimal f = r.pow(3).subtract(r.pow(2).divide(java.math.BigDecimal.valueOf(12), java.math.MathContext.DECIMAL128))
+            .add(r.multiply(java.math.BigDecimal.valueOf(7)).divide(java.math.BigDecimal.valueOf(24), java.math.MathContext.DECIMAL128))
+            .add(new java.math.BigDecimal("0.25"));
+        assertTrue(f.abs().compareTo(new java.math.BigDecimal("1e-15")) < 0, f.toString());
+        // rate: the largest modulus of the cubic's roots; cross-checked against Hipparchus' Laguerre solver (a
+        // general-purpose reference library shipped with Symja)
+        double best = 0;
+        for (org.hipparchus.complex.Complex z : new org.hipparchus.analysis.solvers.LaguerreSolver()
+                .solveAllComplex(new double[] {0.25, 7.0 / 24, -1.0 / 12, 1}, 0)) {
+            best = Math.max(best, z.norm());
+        }
+        assertEquals(best, Double.parseDouble(cf.rate(Map.of(), 15)), 1e-12);
+    }
 }
