@@ -7,6 +7,7 @@ import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.model.ChainKind;
 import org.qchain.exact.model.Model;
+import org.qchain.symbolic.ParamRing;
 import org.qchain.symbolic.RatFunMatrix;
 
 /**
@@ -21,6 +22,11 @@ import org.qchain.symbolic.RatFunMatrix;
  * }</pre>
  */
 public final class ClosedForms {
+    static {
+        // the symbolic module's ring sets JAS up (no thread pool, quiet logging) before any JAS class is used
+        ParamRing.of(List.of());
+    }
+
     private ClosedForms() {
     }
 

@@ -215,4 +215,46 @@ class ClosedFormTest {
         }
         assertEquals(best, Double.parseDouble(cf.rate(Map.of(), 15)), 1e-12);
     }
+
+    @Test
+    void twoIdenticalClassesGiveARepeatedQuadraticWithoutJordanBlock() {
+        // two closed copies of the cyclic chain above: chi = ((x - 1) q(x))^2, q the quadratic (derived by hand);
+        // the eigenvalue 1 is double (two closed classes), q is double but diagonalisable
+        String[][] rows = new String[6][6];
+        String[][] c = {{"1-a", "a", "0"}, {"0", "1-a", "a"}, {"a", "0", "1-a"}};
+        for (int i = 0; i < 6; i++) {
+            for (int j = 0; j < 6; j++) {
+                rows[i][j] = (i / 3 == j / 3) ? c[i % 3][j % 3] : "0";
+            }
+        }
+        Model m = Chains.model(List.of("a"), rows);
+        ClosedForm cf = ClosedForms.of(m);
+        assertEquals(2, cf.eigenvalues().get(0).multiplicity());
+        assertEquals(2, cf.eigenvalues().get(1).multiplicity());
+        assertEquals("quadratic", cf.eigenvalues().get(1).kind());
+        // the limit: uniform on the starting class (derived by hand: each block is doubly stochastic)
+        assertEquals(List.of("1/3", "1/3", "1/3", "0", "0", "0"), cf.longRun().limits().get(0).get(0));
+        Chains.assertMatchesPowers(cf, m, List.of(Chains.at("a", "1/4")), 0);
+    }
+
+    @Test
+    void jordanBlockOnAQuadraticFactorIsRefusedButSeriesRemain() {
+        // [[B, I], [0, B]] with B = [[0, -1], [1, 0]]: chi = (x^2 + 1)^2 with one Jordan block (derived by hand)
+        String[][] rows = {{"0", "-1", "1", "0"}, {"1", "0", "0", "1"}, {"0", "0", "0", "-1"}, {"0", "0", "1", "0"}};
+        Model m = Chains.model(List.of(), rows);
+        QchainException e = assertThrows(QchainException.class, () -> ClosedForms.of(m));
+        assertEquals(ErrorKey.CLOSED_FORM_UNSUPPORTED, e.key());
+        SeriesForm sf = ClosedForms.series(m, Map.of());
+        assertEquals("x^4 + 2*x^2 + 1", sf.characteristicPolynomial());
+        // [(I - zB)^-1]_11 = 1/(1 + z^2) for the rotation block (derived by hand)
+        assertEquals("1/(1 + z^2)", sf.generatingFunction(0, 0).plain());
+    }
+
+    @Test
+    void continuousChainsAndUnknownValuesAreRefused() {
+        Model ctmc = org.qchain.exact.model.ModelParser.parse("t.chain", "chain continuous\nstates A B\nA B 2\nB A 3\n");
+        assertEquals(ErrorKey.WRONG_KIND, assertThrows(QchainException.class, () -> ClosedForms.of(ctmc)).key());
+        assertEquals(ErrorKey.UNKNOWN_PARAMETER,
+            assertThrows(QchainException.class, () -> ClosedForms.of(TWO_STATE, Chains.at("c", "1/2"))).key());
+    }
 }

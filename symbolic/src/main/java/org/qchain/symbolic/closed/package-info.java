@@ -1,0 +1,54 @@
+/**
+ * Closed forms of P^n in a symbolic n: the n-step transition probabilities of a discrete-time chain as formulas in
+ * n and the chain's free parameters, valid for every n from a stated {@code validFrom} on, under stated parameter
+ * conditions.
+ *
+ * <h2>Method</h2>
+ * <ol>
+ *   <li>{@link org.qchain.symbolic.closed.SeriesForm} (every chain): the powers P^0 .. P^s, the characteristic
+ *       polynomial {@code chi(x) = det(xI - P)} from the traces of the powers (Newton's identities: exact, with no
+ *       division by a polynomial), and the adjugate {@code adj(xI - P) = sum_k B_k x^(s-1-k)} with
+ *       {@code B_k = sum_{m<=k} c_m P^(k-m)} (Faddeev-LeVerrier). Then {@code (I - zP)^-1 = adj(I - zP)/det(I - zP)}
+ *       with {@code adj(I - zP) = sum_k B_k z^k} and {@code det(I - zP) = sum_k c_k z^k}: each entry's generating
+ *       function, reduced by trial division with the known factors of the denominator (no gcd over
+ *       Q(parameters), whose coefficients swell), and the linear recurrence its reduced denominator gives, with
+ *       the initial values it needs.</li>
+ *   <li>JAS factors {@code chi} over Q(parameters) into monic irreducible factors f of multiplicity m (JAS
+ *       reports the rational constant as a factor of its own; the product is checked against chi).</li>
+ *   <li>A factor of multiplicity 1: for each root r, the projector is {@code adj(rI - P)/chi'(r)}; reduced modulo
+ *       f this is {@code sum_t C_t r^t} with matrices C_t over Q(parameters), so the factor contributes
+ *       {@code sum_t C_t p_(n+t)} with {@code p_k} the k-th power sum of its roots. A factor of multiplicity
+ *       m &gt; 1: the Chinese remainder theorem gives the projector {@code E = e(P)}; for {@code f = x - lambda}
+ *       the terms {@code binomial(n, k) lambda^(n-k) (P - lambda I)^k E} up to the Jordan index; for a factor of
+ *       degree at least 2 without a Jordan block the same power-sum form with {@code E_r = E q_r(P)/f'(r)},
+ *       {@code q_r(y) = f(y)/(y - r)}; with a Jordan block, {@link org.qchain.exact.ErrorKey#CLOSED_FORM_UNSUPPORTED}
+ *       (the series forms still exist).</li>
+ *   <li>Printing: a linear factor gives {@code lambda^n}; a quadratic one, roots {@code u/2 +- (s/2) sqrt(D)} with
+ *       square factors pulled out of D, gives {@code X*(l1^n + l2^n) + Y*(l1^n - l2^n)/sqrt(D)}, which is
+ *       unchanged when sqrt(D) changes sign and so real for real parameters even where D &lt; 0; a factor of degree
+ *       3 or more is named ({@code f1}, ...) and appears as {@code rootsum(n + t, f1)}, its roots given numerically
+ *       by {@link org.qchain.symbolic.closed.ClosedForm#rootPolynomials}.</li>
+ *   <li>Eigenvalue 0 contributes only for n below its Jordan index: that index is {@code validFrom}. The
+ *       conditions are the irreducible factors of every denominator in the formulas, and the radicand under a
+ *       square root in a denominator, each as {@code "POLY != 0"}.</li>
+ *   <li>Long run: eigenvalues that are roots of unity (parameter-free factors dividing {@code x^k - 1}) give the
+ *       period d and the limits of the d subsequences; the others give the convergence rate, the largest modulus
+ *       among them, as a formula and numerically at a point.</li>
+ * </ol>
+ * Every result is checked in the tests against exact P^n (the symbolic module's powers with parameters free, the
+ * exact module's products with them substituted), and {@code evaluate} uses exact arithmetic throughout: square-root
+ * pairs in {@code x + y sqrt(D)} form over Q(parameters) or Q, root sums by Newton's identities.
+ *
+ * <h2>Example</h2>
+ * <pre>{@code
+ * Model m = ModelParser.parse("pump.chain", "chain discrete\nparam a\nparam b\nstates Up Down\nUp Down a\nDown Up b\n");
+ * ClosedForm cf = ClosedForms.of(m, Map.of());
+ * cf.formula(0, 0);     // b/(a + b) + a/(a + b)*(1 - a - b)^n
+ * cf.conditions();      // [a + b != 0]
+ * cf.longRun().rate();  // abs(1 - a - b)
+ * }</pre>
+ *
+ * <p>JAS types stay inside this package; the public API speaks {@code String} formulas, {@code Rational},
+ * {@code RationalMatrix} and the symbolic module's {@code RatFunMatrix}.
+ */
+package org.qchain.symbolic.closed;
