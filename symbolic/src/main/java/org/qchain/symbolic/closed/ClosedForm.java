@@ -1,7 +1,6 @@
 package org.qchain.symbolic.closed;
 
 import edu.jas.arith.BigRational;
-import edu.jas.poly.ExpVector;
 import edu.jas.poly.GenPolynomial;
 import edu.jas.ufd.Quotient;
 import java.math.BigInteger;
@@ -53,7 +52,7 @@ public final class ClosedForm {
         this.spectral = Spectral.of(series);
         this.seriesForm = new SeriesForm(series, states);
         this.states = List.copyOf(states);
-        this.size = spectral.size;
+        this.size = spectral.series.size;
         Spectral.Group z = null;
         for (Spectral.Group g : spectral.groups) {
             if (g.isZeroEigenvalue()) {
@@ -116,8 +115,7 @@ public final class ClosedForm {
                     // needs no condition lambda != 0
                     boolean constant = ParamField.isConstant(g.lambda);
                     Fml exponent = k == 0 || constant ? N : Fml.sum(N, Fml.neg(Fml.integer(k)));
-                    Quotient<BigRational> coef = constant ? c.divide(ParamField.power(g.lambda, k == 0 ? 1 : k))
-                        .multiply(k == 0 ? g.lambda : field.one()) : c;
+                    Quotient<BigRational> coef = constant && k > 0 ? c.divide(ParamField.power(g.lambda, k)) : c;
                     Fml power = g.lambda.isONE() ? Fml.ONE : Fml.pow(field.formula(g.lambda), exponent);
                     terms.add(Fml.prod(List.of(field.formula(coef), binom, power)));
                 }
@@ -323,7 +321,7 @@ public final class ClosedForm {
         if (n < 0 || n > size) {
             throw new IllegalArgumentException("n = " + n + " outside 0.." + size);
         }
-        return plainMatrix(spectral.powers.get(n));
+        return plainMatrix(spectral.series.powers.get(n));
     }
 
     private List<List<String>> plainMatrix(Quotient<BigRational>[][] m) {
@@ -367,7 +365,7 @@ public final class ClosedForm {
         if (n < validFrom) {
             for (int i = 0; i < size; i++) {
                 for (int j = 0; j < size; j++) {
-                    out[i][j] = ParamField.rational(substitute(spectral.powers.get((int) n)[i][j], at));
+                    out[i][j] = ParamField.rational(substitute(spectral.series.powers.get((int) n)[i][j], at));
                 }
             }
             return RationalMatrix.of(out);
@@ -407,7 +405,7 @@ public final class ClosedForm {
         if (n < 0) {
             throw new IllegalArgumentException("n must not be negative: " + n);
         }
-        Quotient<BigRational>[][] q = n < validFrom ? spectral.powers.get((int) n) : evaluateSymbolic(n);
+        Quotient<BigRational>[][] q = n < validFrom ? spectral.series.powers.get((int) n) : evaluateSymbolic(n);
         RatFun[][] out = new RatFun[size][size];
         for (int i = 0; i < size; i++) {
             for (int j = 0; j < size; j++) {

@@ -13,15 +13,12 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
-import org.qchain.exact.ErrorKey;
-import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
-import org.qchain.exact.model.Expr;
 
 /**
  * The field Q(parameters) of one computation, made once: JAS polynomials over {@code BigRational} in the free
  * parameters, their quotient field, and the univariate ring over it in which characteristic polynomials live.
- * Conversions from model expressions and to printed formulas are here too, so JAS types stay inside this package.
+ * Evaluation at a point and conversion to printed formulas are here too, so JAS types stay inside this package.
  */
 final class ParamField {
     final List<String> names;
@@ -58,53 +55,6 @@ final class ParamField {
 
     static Rational rational(BigRational b) {
         return Rational.of(b.numerator(), b.denominator());
-    }
-
-    /**
-     * Maps a model expression into the field; names in {@code at} are replaced by their values.
-     *
-     * @throws QchainException with {@link ErrorKey#DIVISION_BY_ZERO} at the division's position
-     */
-    Quotient<BigRational> of(Expr e, Map<String, Rational> at) {
-        if (e instanceof Expr.Num n) {
-            return of(n.value());
-        }
-        if (e instanceof Expr.Var v) {
-            Rational r = at.get(v.name());
-            if (r != null) {
-                return of(r);
-            }
-            return new Quotient<>(field, poly.univariate(v.name()));
-        }
-        if (e instanceof Expr.Neg g) {
-            return of(g.operand(), at).negate();
-        }
-        if (e instanceof Expr.Bin b) {
-            Quotient<BigRational> l = of(b.left(), at);
-            Quotient<BigRational> r = of(b.right(), at);
-            switch (b.op()) {
-                case ADD:
-                    return l.sum(r);
-                case SUB:
-                    return l.subtract(r);
-                case MUL:
-                    return l.multiply(r);
-                default:
-                    if (r.isZERO()) {
-                        throw new QchainException(b.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(b) + "'");
-                    }
-                    return l.divide(r);
-            }
-        }
-        Expr.Pow p = (Expr.Pow) e;
-        Quotient<BigRational> base = of(p.base(), at);
-        if (p.exponent() < 0) {
-            if (base.isZERO()) {
-                throw new QchainException(p.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(p) + "'");
-            }
-            return power(base.inverse(), -(long) p.exponent());
-        }
-        return power(base, p.exponent());
     }
 
     static <C extends edu.jas.structure.RingElem<C>> C power(C base, long e) {
@@ -272,15 +222,15 @@ final class ParamField {
         GenPolynomial<BigRational> numInt = integral(num);
         BigRational ratio = num.leadingBaseCoefficient().divide(numInt.leadingBaseCoefficient());
         // num = ratio * numInt; den stays integral; ratio = r/s gives (r * numInt) / (s * den)
-        GenPolynomial<BigRational> top = numInt.multiply(new BigRational(ratio.numerator()));
-        GenPolynomial<BigRational> bottom = den.multiply(new BigRational(ratio.denominator()));
-        Fml t = formula(top);
+        // integer factors stay outside the brackets: 3*(a + b)/(2*(a^2 + b^2))
+        Fml t = Fml.prod(Fml.integer(ratio.numerator()), formula(numInt));
+        Fml bottom = Fml.prod(Fml.integer(ratio.denominator()), formula(den));
         boolean negative = false;
         if (t instanceof Fml.Neg g) {
             negative = true;
             t = g.operand();
         }
-        Fml r = Fml.div(t, formula(bottom));
+        Fml r = Fml.div(t, bottom);
         return negative ? Fml.neg(r) : r;
     }
 

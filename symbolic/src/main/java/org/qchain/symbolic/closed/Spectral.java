@@ -83,34 +83,18 @@ final class Spectral {
         }
     }
 
-    final ParamField field;
-    final int size;
-    final Quotient<BigRational>[][] matrix;
-    /** P^0 .. P^s. */
-    final List<Quotient<BigRational>[][]> powers;
-    /** Coefficients c_0 = 1, c_1 .. c_s of chi(x) = sum c_k x^(s-k); also det(I - zP) = sum c_k z^k. */
-    final List<Quotient<BigRational>> charCoeffs;
-    final GenPolynomial<Quotient<BigRational>> chi;
-    /** B_0 .. B_(s-1): adj(xI - P) = sum_k B_k x^(s-1-k), and adj(I - zP) = sum_k B_k z^k. */
-    final List<Quotient<BigRational>[][]> adjugate;
+    /** The powers, characteristic polynomial and adjugate this decomposition starts from. */
+    final Series series;
     final List<Group> groups;
 
-    private Spectral(ParamField field, Quotient<BigRational>[][] matrix, List<Quotient<BigRational>[][]> powers,
-                     List<Quotient<BigRational>> charCoeffs, GenPolynomial<Quotient<BigRational>> chi,
-                     List<Quotient<BigRational>[][]> adjugate, List<Group> groups) {
-        this.field = field;
-        this.size = matrix.length;
-        this.matrix = matrix;
-        this.powers = powers;
-        this.charCoeffs = charCoeffs;
-        this.chi = chi;
-        this.adjugate = adjugate;
+    private Spectral(Series series, List<Group> groups) {
+        this.series = series;
         this.groups = groups;
     }
 
     static Spectral of(Series sr) {
         List<Group> groups = decompose(sr.field, sr.matrix, sr.powers, sr.chi, sr.adjugate, sr.factors, sr.multiplicities);
-        return new Spectral(sr.field, sr.matrix, sr.powers, sr.charCoeffs, sr.chi, sr.adjugate, groups);
+        return new Spectral(sr, groups);
     }
 
     static Quotient<BigRational>[] coefficients(ParamField f, GenPolynomial<Quotient<BigRational>> p, int degree) {
