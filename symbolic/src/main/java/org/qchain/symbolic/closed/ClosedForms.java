@@ -8,7 +8,11 @@ import org.qchain.exact.Rational;
 import org.qchain.exact.model.ChainKind;
 import org.qchain.exact.model.Model;
 import org.qchain.symbolic.ParamRing;
+import org.qchain.symbolic.PowerEstimate;
+import org.qchain.symbolic.PowerEstimate;
 import org.qchain.symbolic.RatFunMatrix;
+import org.qchain.symbolic.SymbolicLimits;
+import org.qchain.symbolic.SymbolicLimits;
 
 /**
  * Closed forms of P^n in a symbolic n: the entry point of this package.
@@ -32,17 +36,80 @@ public final class ClosedForms {
 
     /**
      * The closed form of P^n for a discrete-time model, with the given parameter values substituted and every
-     * other parameter that the matrix uses kept symbolic.
+     * other parameter that the matrix uses kept symbolic; default size limit.
      *
      * @param model a discrete-time model
      * @param at    values for some parameters (may be empty)
      * @return the closed form
      * @throws QchainException with {@link ErrorKey#WRONG_KIND} for a continuous-time model,
      *                         {@link ErrorKey#UNKNOWN_PARAMETER} for a value of an undeclared parameter,
+     *                         {@link ErrorKey#SYMBOLIC_TOO_LARGE} if P^s is estimated past the limit,
      *                         {@link ErrorKey#CLOSED_FORM_UNSUPPORTED} for a repeated irreducible factor of degree
      *                         at least 2 with a Jordan block
      */
     public static ClosedForm of(Model model, Map<String, Rational> at) {
+        return of(model, at, SymbolicLimits.DEFAULT);
+    }
+
+    /**
+     * As {@link #of(Model, Map)} with a size limit.
+     *
+     * @param model  a discrete-time model
+     * @param at     values for some parameters (may be empty)
+     * @param limits the size limit for the powers P^1 .. P^s the method multiplies out
+     * @return the closed form
+     * @throws QchainException as {@link #of(Model, Map)}
+     */
+    public static ClosedForm of(Model model, Map<String, Rational> at, SymbolicLimits limits) {
+        return of(matrix(model, at), model.states(), limits);
+    }
+
+    /**
+     * The closed form with every parameter symbolic.
+     *
+     * @see #of(Model, Map)
+     */
+    public static ClosedForm of(Model model) {
+        return of(model, Map.of());
+    }
+
+    /**
+     * The closed form of the n-th power of a square matrix of rational functions (normally a stochastic matrix).
+     * The formulas use the ring's variables that occur in the matrix.
+     *
+     * @param p      the one-step matrix
+     * @param states a name per row
+     * @param limits the size limit for the powers P^1 .. P^s the method multiplies out
+     * @return the closed form
+     * @throws IllegalArgumentException if the number of names differs from the size
+     * @throws QchainException          with {@link ErrorKey#SYMBOLIC_TOO_LARGE} if P^s is estimated past the
+     *                                  limit, {@link ErrorKey#CLOSED_FORM_UNSUPPORTED} for a repeated irreducible
+     *                                  factor of degree at least 2 with a Jordan block
+     */
+    public static ClosedForm of(RatFunMatrix p, List<String> states, SymbolicLimits limits) {
+        return new ClosedForm(Series.of(guarded(p, states, limits)), states);
+    }
+
+    /**
+     * The generating functions and recurrences of P^n, which need no factorisation into eigenvalues and so exist
+     * for every chain (also where {@link #of(Model, Map)} reports {@link ErrorKey#CLOSED_FORM_UNSUPPORTED}).
+     *
+     * @param model  a discrete-time model
+     * @param at     values for some parameters (may be empty)
+     * @param limits the size limit
+     * @return the series forms
+     * @throws QchainException as {@link #of(Model, Map)}, except for the unsupported case
+     */
+    public static SeriesForm series(Model model, Map<String, Rational> at, SymbolicLimits limits) {
+        return new SeriesForm(Series.of(guarded(matrix(model, at), model.states(), limits)), model.states());
+    }
+
+    /** As {@link #series(Model, Map, SymbolicLimits)} with the default limit. */
+    public static SeriesForm series(Model model, Map<String, Rational> at) {
+        return series(model, at, SymbolicLimits.DEFAULT);
+    }
+
+    private static RatFunMatrix matrix(Model model, Map<String, Rational> at) {
         if (model.kind() != ChainKind.DISCRETE) {
             throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(),
                 "closed forms in n are for discrete-time chains");
@@ -53,52 +120,23 @@ public final class ClosedForms {
             }
         }
         RatFunMatrix p = RatFunMatrix.fromModel(model);
-        return of(at.isEmpty() ? p : p.substitute(at), model.states());
+        return at.isEmpty() ? p : p.substitute(at);
     }
 
     /**
-     * The closed form of the n-th power of a square matrix of rational functions (normally a stochastic matrix).
-     * The formulas use the ring's variables that occur in the matrix.
-     *
-     * @param p      the one-step matrix
-     * @param states a name per row
-     * @return the closed form
-     * @throws IllegalArgumentException if the number of names differs from the size
-     * @throws QchainException          with {@link ErrorKey#CLOSED_FORM_UNSUPPORTED} for a repeated irreducible
-     *                                  factor of degree at least 2 with a Jordan block
+     * Refuses a matrix whose powers up to P^s (all that the method multiplies out) are estimated past the limit,
+     * before any work.
      */
-    public static ClosedForm of(RatFunMatrix p, List<String> states) {
+    private static RatFunMatrix guarded(RatFunMatrix p, List<String> states, SymbolicLimits limits) {
         int s = p.size();
         if (states.size() != s) {
             throw new IllegalArgumentException(states.size() + " state names for a " + s + "x" + s + " matrix");
         }
-        return new ClosedForm(Series.of(p), states);
-    }
-
-    /**
-     * The generating functions and recurrences of P^n, which need no factorisation and so exist for every chain
-     * (also where {@link #of(Model, Map)} reports {@link ErrorKey#CLOSED_FORM_UNSUPPORTED}).
-     *
-     * @param model a discrete-time model
-     * @param at    values for some parameters (may be empty)
-     * @return the series forms
-     * @throws QchainException as {@link #of(Model, Map)}, except for the unsupported case
-     */
-    public static SeriesForm series(Model model, Map<String, Rational> at) {
-        if (model.kind() != ChainKind.DISCRETE) {
-            throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(),
-                "closed forms in n are for discrete-time chains");
+        PowerEstimate e = p.estimatePower(s);
+        if (e.totalTerms() > limits.maxTerms()) {
+            throw new QchainException(ErrorKey.SYMBOLIC_TOO_LARGE, s, e.totalTerms(), e.degree(),
+                limits.maxTerms(), SymbolicLimits.OPTION);
         }
-        RatFunMatrix p = RatFunMatrix.fromModel(model);
-        return new SeriesForm(Series.of(at.isEmpty() ? p : p.substitute(at)), model.states());
-    }
-
-    /**
-     * The closed form with every parameter symbolic.
-     *
-     * @see #of(Model, Map)
-     */
-    public static ClosedForm of(Model model) {
-        return of(model, Map.of());
+        return p;
     }
 }

@@ -293,8 +293,8 @@ sealed interface Fml {
                     case "rootsum":
                         return "\\sum_{" + args.get(1) + "(r) = 0} r^{" + args.get(0) + "}";
                     default:
-                        s = "\\operatorname{" + c.name() + "}\\left(" + String.join(", ", args) + "\\right)";
-                        return s;
+                        String name = c.name().length() == 1 ? c.name() : "\\operatorname{" + c.name() + "}";
+                        return name + "\\left(" + String.join(", ", args) + "\\right)";
                 }
             }
             return prec(f) < ctx ? "\\left(" + s + "\\right)" : s;

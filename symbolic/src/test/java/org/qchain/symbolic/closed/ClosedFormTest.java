@@ -257,4 +257,11 @@ class ClosedFormTest {
         assertEquals(ErrorKey.UNKNOWN_PARAMETER,
             assertThrows(QchainException.class, () -> ClosedForms.of(TWO_STATE, Chains.at("c", "1/2"))).key());
     }
+
+    @Test
+    void sizeGuardRefusesBeforeWork() {
+        QchainException e = assertThrows(QchainException.class,
+            () -> ClosedForms.of(TWO_STATE, Map.of(), new org.qchain.symbolic.SymbolicLimits(3)));
+        assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE, e.key());
+    }
 }
