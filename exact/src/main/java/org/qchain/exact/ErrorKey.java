@@ -51,7 +51,31 @@ public enum ErrorKey {
     /** {0}: detail. */
     INTERNAL("internal error: {0}"),
     /** The user interrupted the computation. */
-    INTERRUPTED("interrupted");
+    INTERRUPTED("interrupted"),
+
+    // --- model files and CSV (appended) -------------------------------------------------------------------------
+    /** {0}: the file name as given, {1}: the reason. */
+    CANNOT_READ("cannot read {0}: {1}"),
+    /** {0}: what comes without a states line before it ("this transition", "the end of the file"). */
+    MISSING_STATES("no ''states'' line before {0}; declare the states first, e.g. ''states Up Down''"),
+    /** {0}: the word, {1}: a hint (may be empty). */
+    UNKNOWN_KEYWORD("unknown keyword ''{0}'': a line is ''chain'', ''param'', ''states'' or a transition FROM TO EXPRESSION{1}"),
+    /** {0}: the unexpected text, {1}: after what, with an optional hint. */
+    UNEXPECTED_TEXT("unexpected ''{0}'' after {1}"),
+    /** {0}: the function name. */
+    FUNCTION_NOT_SUPPORTED("functions are not supported: {0} (expressions use numbers, parameters, + - * / ^ and parentheses)"),
+    /** {0}: the state. */
+    SELF_RATE("a continuous chain takes no rate from {0} to itself: the diagonal is minus the total rate out of {0}; remove this line"),
+    /** {0}: the word, {1}: what it would name (state, parameter). */
+    RESERVED_NAME("''{0}'' is a reserved word and cannot name a {1}"),
+    /** {0}: what (state, parameter), {1}: the name, {2}: the rule. */
+    INVALID_NAME("invalid {0} name ''{1}'': {2}"),
+    /** {0}: the keyword, {1}: line of the first such line. */
+    DUPLICATE_LINE("a second ''{0}'' line (the first is on line {1})"),
+    /** {0}: the domain as written, {1}: why it is invalid. */
+    BAD_DOMAIN("invalid domain {0}: {1}"),
+    /** {0}: rows, {1}: columns. */
+    CSV_NOT_SQUARE("the matrix has {0} rows and {1} columns; a transition matrix must be square");
 
     private final String pattern;
 
