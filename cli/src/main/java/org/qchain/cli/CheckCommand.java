@@ -33,7 +33,7 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        LoadedChain chain = LoadedChain.load(model);
+        LoadedChain chain = LoadedChain.load(model, spec.name());
         RationalMatrix p = chain.p();
         verifyStochastic(chain, p);
         StepResult.Matrix m = (StepResult.Matrix) Stepper.compute(chain,

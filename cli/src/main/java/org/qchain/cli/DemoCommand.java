@@ -48,7 +48,7 @@ final class DemoCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("qchain: wrote the example model to " + saveModel);
             return ExitCodes.OK;
         }
-        LoadedChain chain = LoadedChain.fromText(EXAMPLE, text);
+        LoadedChain chain = LoadedChain.fromText(EXAMPLE, text, spec.name());
         List<String> states = chain.states();
         String from = states.get(0);
         String to = states.get(states.size() - 1);

@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
-import java.util.stream.Collectors;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.RationalMatrix;
@@ -26,14 +25,15 @@ record LoadedChain(Model model, Optional<Path> file, RationalMatrix p) {
      * Reads, validates and evaluates the model that {@code options} name.
      *
      * @param options the model file and {@code --at}
+     * @param command the command's name, for messages
      * @return the chain
      * @throws QchainException for a missing or unreadable file, a bad model (with file:line:col), a continuous chain,
      *                         or parameters without values
      */
-    static LoadedChain load(ModelOptions options) {
+    static LoadedChain load(ModelOptions options, String command) {
         Path file = options.model;
         // a name ending in .csv is read as a plain CSV matrix, anything else as the model format
-        return evaluate(ModelParser.parseFile(file), Optional.of(file), options.at());
+        return evaluate(ModelParser.parseFile(file), Optional.of(file), options.at(), command);
     }
 
     /**
@@ -41,16 +41,17 @@ record LoadedChain(Model model, Optional<Path> file, RationalMatrix p) {
      *
      * @param name the name for messages
      * @param text the model text
+     * @param command the command's name, for messages
      * @return the chain
      */
-    static LoadedChain fromText(String name, String text) {
-        return evaluate(ModelParser.parse(name, text), Optional.empty(), Optional.empty());
+    static LoadedChain fromText(String name, String text, String command) {
+        return evaluate(ModelParser.parse(name, text), Optional.empty(), Optional.empty(), command);
     }
 
-    private static LoadedChain evaluate(Model model, Optional<Path> file, Optional<String> at) {
+    private static LoadedChain evaluate(Model model, Optional<Path> file, Optional<String> at, String command) {
         if (model.kind() != ChainKind.DISCRETE) {
             throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(),
-                "this command needs a discrete chain (continuous chains are not supported yet)");
+                "qchain " + command + " needs a discrete chain (continuous chains are not supported yet)");
         }
         EvaluationRoute.Route route = EvaluationRoute.decide(model, at);
         EvaluationRoute.Numeric numeric = (EvaluationRoute.Numeric) route;
@@ -78,11 +79,6 @@ record LoadedChain(Model model, Optional<Path> file, RationalMatrix p) {
     /** The state names. */
     List<String> states() {
         return model.states();
-    }
-
-    /** The state names joined for messages. */
-    String stateList() {
-        return model.states().stream().collect(Collectors.joining(", "));
     }
 
     /** A checked read of a classpath resource as UTF-8 text. */

@@ -62,7 +62,7 @@ final class StepCommand implements Callable<Integer> {
         if (paths != null && (from == null || to == null)) {
             throw new ParameterException(spec.commandLine(), "--paths needs both --from and --to");
         }
-        LoadedChain chain = LoadedChain.load(model);
+        LoadedChain chain = LoadedChain.load(model, spec.name());
         Emitter.checkTarget(output.output(), chain.file());
         Stepper.Query q = new Stepper.Query(n, Optional.ofNullable(from), Optional.ofNullable(to),
             paths == null ? OptionalInt.empty() : OptionalInt.of(paths), output.digits, maxDigits);
