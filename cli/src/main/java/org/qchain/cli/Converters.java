@@ -8,23 +8,31 @@ final class Converters {
     private Converters() {
     }
 
-    private static long parseLong(String value, String what) {
+    /**
+     * A whole number in {@code [min, max]}.
+     *
+     * @param value the option's text
+     * @param what  what it counts, for the message ({@code "steps"})
+     * @param range the message for a value out of range
+     */
+    private static long whole(String value, String what, long min, long max, String range) {
+        long x;
         try {
-            return Long.parseLong(value.strip().replace("_", ""));
+            x = Long.parseLong(value.strip().replace("_", ""));
         } catch (NumberFormatException e) {
-            throw new TypeConversionException("'" + value + "' is not " + what);
+            throw new TypeConversionException("'" + value + "' is not a whole number of " + what);
         }
+        if (x < min || x > max) {
+            throw new TypeConversionException("'" + value + "' " + range);
+        }
+        return x;
     }
 
     /** A number of steps: an integer {@code >= 0}. */
     static final class Steps implements ITypeConverter<Long> {
         @Override
         public Long convert(String value) {
-            long n = parseLong(value, "a whole number of steps");
-            if (n < 0) {
-                throw new TypeConversionException("'" + value + "' is negative; the number of steps must be 0 or more");
-            }
-            return n;
+            return whole(value, "steps", 0, Long.MAX_VALUE, "is negative; the number of steps must be 0 or more");
         }
     }
 
@@ -32,11 +40,7 @@ final class Converters {
     static final class DigitLimit implements ITypeConverter<Long> {
         @Override
         public Long convert(String value) {
-            long n = parseLong(value, "a whole number of digits");
-            if (n < 1) {
-                throw new TypeConversionException("'" + value + "' must be at least 1");
-            }
-            return n;
+            return whole(value, "digits", 1, Long.MAX_VALUE, "must be at least 1");
         }
     }
 
@@ -46,11 +50,7 @@ final class Converters {
 
         @Override
         public Integer convert(String value) {
-            long d = parseLong(value, "a whole number of digits");
-            if (d < 1 || d > MAX) {
-                throw new TypeConversionException("'" + value + "' must be from 1 to " + MAX);
-            }
-            return (int) d;
+            return (int) whole(value, "digits", 1, MAX, "must be from 1 to " + MAX);
         }
     }
 
@@ -60,11 +60,7 @@ final class Converters {
 
         @Override
         public Integer convert(String value) {
-            long k = parseLong(value, "a whole number of paths");
-            if (k < 1 || k > MAX) {
-                throw new TypeConversionException("'" + value + "' must be from 1 to " + MAX);
-            }
-            return (int) k;
+            return (int) whole(value, "paths", 1, MAX, "must be from 1 to " + MAX);
         }
     }
 }

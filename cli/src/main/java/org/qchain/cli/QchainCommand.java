@@ -34,6 +34,9 @@ public final class QchainCommand implements Callable<Integer> {
 
     private final boolean progressAllowed;
 
+    /** The progress line in use, so that the Ctrl-C hook can clear it before its message. */
+    private volatile TerminalProgress current;
+
     @Spec
     CommandSpec spec;
 
@@ -52,7 +55,17 @@ public final class QchainCommand implements Callable<Integer> {
 
     /** A progress reporter for a subcommand; it prints only if progress is allowed. */
     TerminalProgress progress(PrintWriter err) {
-        return new TerminalProgress(err, progressAllowed);
+        TerminalProgress p = new TerminalProgress(err, progressAllowed);
+        current = p;
+        return p;
+    }
+
+    /** Clears the progress line, if one is shown. */
+    void clearProgress() {
+        TerminalProgress p = current;
+        if (p != null) {
+            p.clear();
+        }
     }
 
     /**
@@ -101,9 +114,12 @@ public final class QchainCommand implements Callable<Integer> {
         Errors errors = new Errors();
         CountDownLatch done = new CountDownLatch(1);
         Thread worker = Thread.currentThread();
+        CommandLine cl = newCommandLine(stderrIsTerminal(), errors);
+        QchainCommand root = cl.getCommand();
         Runtime.getRuntime().addShutdownHook(new Thread(() -> {
             if (done.getCount() > 0) {
                 // the JVM is shutting down before the work ended: a signal such as Ctrl-C
+                root.clearProgress();
                 errors.reportInterrupt(err);
                 worker.interrupt();
                 try {
@@ -114,7 +130,6 @@ public final class QchainCommand implements Callable<Integer> {
             }
         }, "qchain-interrupt"));
         try {
-            CommandLine cl = newCommandLine(stderrIsTerminal(), errors);
             cl.setOut(out);
             cl.setErr(err);
             return cl.execute(args);

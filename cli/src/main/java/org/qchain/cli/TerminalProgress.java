@@ -36,7 +36,7 @@ final class TerminalProgress implements Progress {
     }
 
     @Override
-    public void update(String phase, long done, long total) {
+    public synchronized void update(String phase, long done, long total) {
         if (!show) {
             return;
         }
@@ -52,7 +52,7 @@ final class TerminalProgress implements Progress {
     }
 
     /** Clears the progress line if one is shown. */
-    void clear() {
+    synchronized void clear() {
         if (shownWidth > 0) {
             err.print("\r" + " ".repeat(shownWidth) + "\r");
             err.flush();
