@@ -75,7 +75,9 @@ public enum ErrorKey {
     /** {0}: the domain as written, {1}: why it is invalid. */
     BAD_DOMAIN("invalid domain {0}: {1}"),
     /** {0}: rows, {1}: columns. */
-    CSV_NOT_SQUARE("the matrix has {0} rows and {1} columns; a transition matrix must be square");
+    CSV_NOT_SQUARE("the matrix has {0} rows and {1} columns; a transition matrix must be square"),
+    /** {0}: the power as written, {1}: estimated digits, {2}: the limit in digits. */
+    POWER_TOO_LARGE("''{0}'' would have about {1} digits, more than the {2} digits a power in a model may have");
 
     private final String pattern;
 

@@ -36,7 +36,9 @@ final class CsvReader {
             throw new QchainException(new SourcePos(file, 1, 1), ErrorKey.EMPTY_CHAIN);
         }
         Row first = rows.get(0);
-        boolean header = first.fields().stream().anyMatch(f -> f.quoted() || !Lexer.isConstant(f.text()));
+        // a header has a quoted field or no number at all; a row mixing numbers and words is data with a typo in it
+        boolean header = first.fields().stream().anyMatch(Field::quoted)
+            || first.fields().stream().noneMatch(f -> Lexer.isConstant(f.text()));
         boolean labels = header && first.fields().get(0).text().isEmpty();
         List<String> names = new ArrayList<>();
         if (header) {

@@ -11,6 +11,7 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -99,7 +100,7 @@ public final class ModelParser {
 
     /**
      * Parses a plain CSV matrix (RFC 4180 quoting; CRLF or LF line endings; a UTF-8 byte order mark is skipped).
-     * The first row is a header of state names if any of its fields is quoted or is not a number; without a header
+     * The first row is a header of state names if any of its fields is quoted or none is a number; without a header
      * the states are {@code S1 ... Sn}. A header whose first field is empty announces a label column: every row then
      * starts with its state's name. Entries are integers, fractions {@code p/q} or decimals, read exactly. The chain
      * is discrete and is validated (square, rows sum to exactly 1, entries in [0, 1]).
@@ -366,7 +367,9 @@ public final class ModelParser {
                 }
                 Rational v = ExprParser.constant(p.parseExpr(), "a nominal value");
                 if (!domain.contains(v)) {
-                    throw new QchainException(first.pos(), ErrorKey.VALUE_OUTSIDE_DOMAIN, name, v, domain);
+                    // name the value as written (0.6 rather than 3/5)
+                    String written = line.substring(first.pos().column() - 1, p.peek().pos().column() - 1).strip();
+                    throw new QchainException(first.pos(), ErrorKey.VALUE_OUTSIDE_DOMAIN, name, written, domain);
                 }
                 nominal = Optional.of(v);
                 p.expectEnd("the nominal value");
@@ -414,7 +417,7 @@ public final class ModelParser {
             boolean lowerClosed = open.is("[");
             boolean upperClosed = close.is("]");
             if (upper.isEmpty() && upperClosed) {
-                throw badDomain(open, line, close.pos(), "an infinite end is open: write ')' after inf");
+                throw new QchainException(close.pos(), ErrorKey.BAD_DOMAIN, text, "an infinite end is open: write ')' after inf");
             }
             if (upper.isPresent()) {
                 int c = lower.compareTo(upper.get());
@@ -507,7 +510,7 @@ public final class ModelParser {
                 int hash = raw.indexOf('#');
                 List<Word> w = words(hash >= 0 ? raw.substring(0, hash) : raw);
                 if (!w.isEmpty() && w.get(0).text().equals("states")) {
-                    Set<String> out = new java.util.HashSet<>();
+                    Set<String> out = new HashSet<>();
                     w.subList(1, w.size()).forEach(x -> out.add(x.text()));
                     return out;
                 }

@@ -66,6 +66,13 @@ class CsvTest {
     }
 
     @Test
+    void firstRowMixingNumbersAndWordsIsDataWithATypo() {
+        // the project's rule: such a row is not a header, so the typo is reported where it is
+        expect(ErrorKey.MALFORMED_NUMBER, 1, 5, () -> csv("0.5,0.4x,0.1\n0,1,0\n0,0,1\n"));
+        expect(ErrorKey.MALFORMED_NUMBER, 1, 1, () -> csv("Up,2\n1,0\n0,1\n"));
+    }
+
+    @Test
     void byteOrderMarkIsSkipped(@TempDir Path dir) throws Exception {
         Path f = dir.resolve("M.CSV");
         Files.write(f, ("\uFEFFUp,Down\n0.9,0.1\n1/2,1/2\n").getBytes(StandardCharsets.UTF_8));

@@ -61,6 +61,16 @@ class ExprRoundTripTest {
         assertEquals(ErrorKey.FUNCTION_NOT_SUPPORTED, e.key());
         assertEquals("x:1:5: functions are not supported: log (expressions use numbers, parameters, + - * / ^ and parentheses)",
             e.getMessage());
+        Expr pq = ModelParser.parseExpression("x", "p + q");
+        e = assertThrows(QchainException.class, () -> pq.evaluate(Map.of("p", Rational.ONE)::get));
+        assertEquals(ErrorKey.FREE_PARAMETERS, e.key());
+        assertEquals("x:1:5: parameters without a value: q (give values with --at, or use a symbolic command)",
+            e.getMessage());
+        Expr huge = ModelParser.parseExpression("x", "(3^1000)^1000000");
+        e = assertThrows(QchainException.class, () -> huge.evaluate(n -> null));
+        assertEquals(ErrorKey.POWER_TOO_LARGE, e.key());
+        assertEquals(1, e.pos().orElseThrow().line());
+        assertEquals(9, e.pos().orElseThrow().column());
         e = assertThrows(QchainException.class, () -> ModelParser.parseExpression("x", "p^1000001"));
         assertEquals(ErrorKey.SYNTAX, e.key());
         e = assertThrows(QchainException.class, () -> ModelParser.parseExpression("x", "1e99999"));
@@ -95,6 +105,53 @@ class ExprRoundTripTest {
             for (int t = 0; t < 3; t++) {
                 assertSameValue(e, back, randomPoint(rnd), text + "  =>  " + Expr.toPlain(e));
             }
+        }
+    }
+
+    @Test
+    void foldAgreesWithEvaluateAndVariables() {
+        // property (fixed seed): a fold that evaluates gives evaluate's value; a fold that counts names finds them
+        Random rnd = new Random(99L);
+        for (int k = 0; k < 500; k++) {
+            Expr e = randomTree(rnd, 5);
+            Map<String, Rational> at = randomPoint(rnd);
+            Rational direct;
+            try {
+                direct = e.evaluate(at::get);
+            } catch (QchainException ex) {
+                continue; // division by zero at this point
+            }
+            Rational folded = e.fold(new Expr.Folder<Rational>() {
+                public Rational num(Rational v) {
+                    return v;
+                }
+
+                public Rational var(String name) {
+                    return at.get(name);
+                }
+
+                public Rational neg(Rational x) {
+                    return x.negate();
+                }
+
+                public Rational bin(Expr.Op op, Rational l, Rational r) {
+                    switch (op) {
+                        case ADD:
+                            return l.add(r);
+                        case SUB:
+                            return l.subtract(r);
+                        case MUL:
+                            return l.multiply(r);
+                        default:
+                            return l.divide(r);
+                    }
+                }
+
+                public Rational pow(Rational b, int x) {
+                    return b.pow(x);
+                }
+            });
+            assertEquals(direct, folded, Expr.toPlain(e));
         }
     }
 

@@ -216,6 +216,8 @@ class ModelErrorsTest {
     void nominalValueMustLieInTheDomain() {
         assertMessage("m.chain:1:21: value 3/2 of parameter 'p' is outside its domain (0, 1)",
             parseError(ErrorKey.VALUE_OUTSIDE_DOMAIN, 1, 21, "param p in (0, 1) = 3/2\nstates A\n"));
+        assertMessage("m.chain:1:23: value 0.6 of parameter 'p' is outside its domain (0, 1/2]",
+            parseError(ErrorKey.VALUE_OUTSIDE_DOMAIN, 1, 23, "param p in (0, 1/2] = 0.6  # as written\nstates A\n"));
         // default domain of a discrete chain is (0, 1): 0 is outside
         parseError(ErrorKey.VALUE_OUTSIDE_DOMAIN, 1, 11, "param p = 0\nstates A\n");
         // default domain of a continuous chain is (0, inf): 5 is inside, -1 outside

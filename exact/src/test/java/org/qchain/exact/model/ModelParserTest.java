@@ -112,4 +112,56 @@ class ModelParserTest {
             assertTrue(p.isSquare());
         }
     }
+
+    @Test
+    void namesFollowTheDocumentedRules() {
+        // the project's own naming rules (docs/model-format.md), common practice, no source
+        Model m = ModelParser.parse("n.chain",
+            "chain continuous\nparam \u03bb = 2\nparam mu_2 = 1/3\nstates 0 S-1 v1.2 _x\n"
+                + "0 S-1 \u03bb\nS-1 v1.2 mu_2 * \u03bb\n\tv1.2\t_x\t1   # tabs separate words too\n");
+        assertEquals(List.of("0", "S-1", "v1.2", "_x"), m.states());
+        assertEquals(List.of("\u03bb", "mu_2"), m.usedParameters());
+        RationalMatrix q = Chains.transitionMatrix(m);
+        assertEquals(q("2/3"), q.get(1, 2));
+        assertEquals(q("-1"), q.get(2, 2));
+    }
+
+    @Test
+    void packageExampleWorksAsDocumented() {
+        // the example in package-info.java and docs/model-format.md
+        Model m = ModelParser.parse("pump.chain", "param p in (0, 1) = 1/20\nstates Up Down\nUp   Down p\nDown Up   1/2\n");
+        assertEquals(matrix("19/20 1/20", "1/2 1/2"), Chains.transitionMatrix(m));
+        assertEquals(matrix("9/10 1/10", "1/2 1/2"), Chains.transitionMatrix(m, Chains.parseAssignments(m, "p=0.1")));
+        Model pp = ModelParser.parseFile(EXAMPLES.resolve("pump-station-params.chain"));
+        assertEquals("1 - (p + r)", Expr.toPlain(pp.entry(1, 1)));
+    }
+
+    @Test
+    void commentsBlankLinesAndLineEndingsAreIgnored() {
+        // common practice, no source: LF, CRLF and CR end lines; '#' comments run to the end of the line
+        Model lf = ModelParser.parse("a", "# c\nstates A B\n\nA B 1/2 # half\n");
+        Model crlf = ModelParser.parse("a", "# c\r\nstates A B\r\n\r\nA B 1/2 # half\r\n");
+        Model cr = ModelParser.parse("a", "\uFEFF# c\rstates A B\r\rA B 1/2 # half");
+        assertEquals(Chains.transitionMatrix(lf), Chains.transitionMatrix(crlf));
+        assertEquals(Chains.transitionMatrix(lf), Chains.transitionMatrix(cr));
+        assertEquals(4, cr.transitions().get(0).pos().line());
+        assertEquals(5, cr.transitions().get(0).exprPos().column());
+    }
+
+    @Test
+    void theFoundationIssuesExampleReadsAsWritten() {
+        // the example of the model format in the project's foundation issue, verbatim with its comments
+        String text = """
+            chain discrete                  # or: chain continuous (rates; a later issue)
+            param p = 1/20                  # optional nominal value; optional domain: param p in (0, 1) = 1/20
+            states Up Worn Down             # order fixes rows and columns
+            Up   Worn  p                    # FROM TO EXPRESSION: one-step probability
+            Worn Down  3/100
+            Worn Up    0.25                 # decimals are read exactly: 0.25 = 1/4
+            Down Up    1/2
+            """;
+        Model m = ModelParser.parse("issue.chain", text);
+        assertEquals(matrix("19/20 1/20 0", "1/4 18/25 3/100", "1/2 0 1/2"),
+            Chains.transitionMatrix(m, m.nominalValues()));
+    }
 }
