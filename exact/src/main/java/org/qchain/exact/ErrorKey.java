@@ -53,11 +53,37 @@ public enum ErrorKey {
     /** The user interrupted the computation. */
     INTERRUPTED("interrupted"),
 
+    // --- model files and CSV (appended) -------------------------------------------------------------------------
+    /** {0}: the file name as given, {1}: the reason. */
+    CANNOT_READ("cannot read {0}: {1}"),
+    /** {0}: what comes without a states line before it ("this transition", "the end of the file"). */
+    MISSING_STATES("no ''states'' line before {0}; declare the states first, e.g. ''states Up Down''"),
+    /** {0}: the word, {1}: a hint (may be empty). */
+    UNKNOWN_KEYWORD("unknown keyword ''{0}'': a line is ''chain'', ''param'', ''states'' or a transition FROM TO EXPRESSION{1}"),
+    /** {0}: the unexpected text, {1}: after what, with an optional hint. */
+    UNEXPECTED_TEXT("unexpected ''{0}'' after {1}"),
+    /** {0}: the function name. */
+    FUNCTION_NOT_SUPPORTED("functions are not supported: {0} (expressions use numbers, parameters, + - * / ^ and parentheses)"),
+    /** {0}: the state. */
+    SELF_RATE("a continuous chain takes no rate from {0} to itself: the diagonal is minus the total rate out of {0}; remove this line"),
+    /** {0}: the word, {1}: what it would name (state, parameter). */
+    RESERVED_NAME("''{0}'' is a reserved word and cannot name a {1}"),
+    /** {0}: what (state, parameter), {1}: the name, {2}: the rule. */
+    INVALID_NAME("invalid {0} name ''{1}'': {2}"),
+    /** {0}: the keyword, {1}: line of the first such line. */
+    DUPLICATE_LINE("a second ''{0}'' line (the first is on line {1})"),
+    /** {0}: the domain as written, {1}: why it is invalid. */
+    BAD_DOMAIN("invalid domain {0}: {1}"),
+    /** {0}: rows, {1}: columns. */
+    CSV_NOT_SQUARE("the matrix has {0} rows and {1} columns; a transition matrix must be square"),
+    /** {0}: the power as written, {1}: estimated digits, {2}: the limit in digits. */
+    POWER_TOO_LARGE("''{0}'' would have about {1} digits, more than the {2} digits a power in a model may have"),
+
     // --- symbolic parameters -----------------------------------------------------------------------------------
     /** {0}: n, {1}: estimated terms, {2}: degree bound, {3}: limit, {4}: option that raises it. */
     SYMBOLIC_TOO_LARGE("the symbolic P^{0} would have up to about {1} polynomial terms in total (entries of degree up to {2}),"
         + " more than the limit {3}; raise it with {4}"),
-    /** {0}: entry label such as {@code Worn->Worn}, {1}: formula, {2}: what its rows sum to. */
+    /** {0}: entry label such as {@code Worn->Worn}, {1}: formula, {0}: the state, {1}: what the row sums to. */
     SYMBOLIC_ROW_SUM("row {0} sums to {1}, not identically 1"),
     /** {0}: entry label, {1}: formula, {2}: condition, {3}: where it fails. */
     SYMBOLIC_RANGE("{0} is {1}: needs {2}; {3}"),

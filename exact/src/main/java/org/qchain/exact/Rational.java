@@ -94,6 +94,21 @@ public final class Rational implements Comparable<Rational> {
     }
 
     /**
+     * A fraction the caller has already reduced: {@code q > 0} and {@code gcd(p, q) = 1}. Skips the gcd, which costs
+     * quadratic time on numbers with millions of digits; for this package's engines only, which reduce by known
+     * prime factors of the denominator instead.
+     */
+    static Rational ofReduced(BigInteger p, BigInteger q) {
+        if (p.signum() == 0) {
+            return ZERO;
+        }
+        if (q.equals(BigInteger.ONE) && p.equals(BigInteger.ONE)) {
+            return ONE;
+        }
+        return new Rational(p, q);
+    }
+
+    /**
      * Parses {@code p}, {@code p/q}, or an exact decimal such as {@code 0.25}, {@code -1.5e-3} or {@code .5}.
      * Decimals are read exactly ({@code 0.1} is {@code 1/10}); surrounding spaces are allowed.
      *

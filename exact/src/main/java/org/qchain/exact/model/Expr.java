@@ -18,6 +18,12 @@ import org.qchain.exact.SourcePos;
  */
 public sealed interface Expr {
 
+    /** Largest numerator or denominator, in bits, that evaluating one power may produce (about 10 million digits). */
+    long MAX_POWER_BITS = 1L << 25;
+
+    /** log10(2), to turn bits into decimal digits. */
+    double LOG10_2 = 0.30102999566398120;
+
     /** Where the text of this node starts; may be {@code null} for nodes built in code. */
     SourcePos pos();
 
@@ -78,16 +84,22 @@ public sealed interface Expr {
     /**
      * Evaluates with rational values for the parameters.
      *
-     * @param values the value of each parameter name; it may throw for a name it does not know
+     * @param values the value of each parameter name; it may throw, or return {@code null}, for a name it does not
+     *               know
      * @return the exact value
-     * @throws QchainException with {@link ErrorKey#DIVISION_BY_ZERO} at the division's position
+     * @throws QchainException with {@link ErrorKey#DIVISION_BY_ZERO} at the division's position, or
+     *                         {@link ErrorKey#FREE_PARAMETERS} at a name whose value is {@code null}
      */
     default Rational evaluate(Function<String, Rational> values) {
         if (this instanceof Num n) {
             return n.value();
         }
         if (this instanceof Var v) {
-            return values.apply(v.name());
+            Rational r = values.apply(v.name());
+            if (r == null) {
+                throw new QchainException(v.pos(), ErrorKey.FREE_PARAMETERS, v.name());
+            }
+            return r;
         }
         if (this instanceof Neg g) {
             return g.operand().evaluate(values).negate();
@@ -114,7 +126,61 @@ public sealed interface Expr {
         if (base.isZero() && p.exponent() < 0) {
             throw new QchainException(p.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(p) + "'");
         }
+        // the numerator and denominator of b^k have about k times the bits of b's: refuse before computing
+        long bits = (long) Math.max(base.numerator().bitLength(), base.denominator().bitLength())
+            * Math.abs((long) p.exponent());
+        if (bits > MAX_POWER_BITS) {
+            throw new QchainException(p.pos(), ErrorKey.POWER_TOO_LARGE, Expr.toPlain(p),
+                (long) (bits * LOG10_2), (long) (MAX_POWER_BITS * LOG10_2));
+        }
         return base.pow(p.exponent());
+    }
+
+    /**
+     * A bottom-up fold over a tree: each method receives the already folded operands. The symbolic module and the
+     * formatters map trees into their own values with it, without instanceof chains of their own.
+     *
+     * @param <T> the result type
+     */
+    interface Folder<T> {
+        /** A constant. */
+        T num(Rational value);
+
+        /** A parameter name. */
+        T var(String name);
+
+        /** Unary minus of the folded operand. */
+        T neg(T operand);
+
+        /** A binary operation on the folded operands. */
+        T bin(Op op, T left, T right);
+
+        /** The folded base to an integer power (possibly negative). */
+        T pow(T base, int exponent);
+    }
+
+    /**
+     * Folds this tree bottom-up.
+     *
+     * @param f   what each kind of node becomes
+     * @param <T> the result type
+     * @return the folded value of the root
+     */
+    default <T> T fold(Folder<T> f) {
+        if (this instanceof Num n) {
+            return f.num(n.value());
+        }
+        if (this instanceof Var v) {
+            return f.var(v.name());
+        }
+        if (this instanceof Neg g) {
+            return f.neg(g.operand().fold(f));
+        }
+        if (this instanceof Bin b) {
+            return f.bin(b.op(), b.left().fold(f), b.right().fold(f));
+        }
+        Pow p = (Pow) this;
+        return f.pow(p.base().fold(f), p.exponent());
     }
 
     /** The parameter names used, in order of first appearance. */

@@ -39,6 +39,11 @@ final class ExprPrinter {
             // left-associative: the right operand of - and / needs brackets at equal precedence
             String l = print(b.left(), p);
             String r = print(b.right(), (b.op() == Expr.Op.SUB || b.op() == Expr.Op.DIV) ? p + 1 : p);
+            if ((b.op() == Expr.Op.MUL || b.op() == Expr.Op.DIV) && b.right() instanceof Expr.Num n
+                && (n.value().signum() < 0 || !n.value().isInteger()) && !r.startsWith("(")) {
+                // "a * -1/2" would read back as (a * -1) / 2 and "a / -1/2" as (a / -1) / 2
+                r = "(" + r + ")";
+            }
             s = l + " " + b.op().symbol() + " " + r;
         } else {
             Expr.Pow p = (Expr.Pow) e;

@@ -1,11 +1,13 @@
 package org.qchain.exact.model;
 
 import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
+import java.util.Set;
 import org.qchain.exact.Rational;
 
 /**
@@ -19,6 +21,8 @@ public final class Model {
     private final List<String> states;
     private final List<Transition> transitions;
     private final Transition[][] grid;
+    private final List<List<Transition>> rows;
+    private final List<String> used;
 
     private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
                   List<Transition> transitions) {
@@ -29,12 +33,31 @@ public final class Model {
         this.transitions = List.copyOf(transitions);
         int n = states.size();
         this.grid = new Transition[n][n];
+        List<List<Transition>> byRow = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            byRow.add(new ArrayList<>());
+        }
+        Set<String> names = new LinkedHashSet<>();
         for (Transition t : transitions) {
+            if (t.from() < 0 || t.from() >= n || t.to() < 0 || t.to() >= n) {
+                throw new IllegalArgumentException("state index out of range in " + t);
+            }
             if (grid[t.from()][t.to()] != null) {
                 throw new IllegalArgumentException("duplicate transition " + states.get(t.from()) + " -> " + states.get(t.to()));
             }
             grid[t.from()][t.to()] = t;
+            byRow.get(t.from()).add(t);
+            names.addAll(t.expr().variables());
         }
+        this.rows = byRow.stream().map(List::copyOf).toList();
+        List<String> u = new ArrayList<>();
+        for (ParamDecl p : this.params) {
+            if (names.remove(p.name())) {
+                u.add(p.name());
+            }
+        }
+        u.addAll(names); // names used but not declared (only in models built in code) keep their first-use order
+        this.used = List.copyOf(u);
     }
 
     /**
@@ -120,15 +143,28 @@ public final class Model {
         return Optional.ofNullable(grid[i][j]);
     }
 
-    /** The listed transitions out of state {@code i}, in file order. */
+    /** The listed transitions out of state {@code i}, in file order (an unmodifiable list). */
     public List<Transition> outgoing(int i) {
-        List<Transition> out = new ArrayList<>();
-        for (Transition t : transitions) {
-            if (t.from() == i) {
-                out.add(t);
-            }
-        }
-        return out;
+        return rows.get(i);
+    }
+
+    /**
+     * The last listed transition out of state {@code i} in file order: row-sum and remainder errors point at it.
+     *
+     * @param i the row
+     * @return the transition, or empty if the row lists none
+     */
+    public Optional<Transition> lastListed(int i) {
+        List<Transition> r = rows.get(i);
+        return r.isEmpty() ? Optional.empty() : Optional.of(r.get(r.size() - 1));
+    }
+
+    /**
+     * Names of the parameters that some transition uses, in declaration order. Declared but unused parameters are
+     * left out; they need no value.
+     */
+    public List<String> usedParameters() {
+        return used;
     }
 
     /**

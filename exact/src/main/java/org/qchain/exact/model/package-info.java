@@ -1,5 +1,31 @@
 /**
- * Model files: the parsed form of a chain ({@link org.qchain.exact.model.Model}) with its parameters, states and
- * transitions as small expression trees ({@link org.qchain.exact.model.Expr}).
+ * Model files: reading a chain from text, and turning it into an exact matrix.
+ *
+ * <p>Data flows one way. {@link org.qchain.exact.model.ModelParser} reads the model format (described in full in
+ * {@code docs/model-format.md}) or a CSV matrix into a {@link org.qchain.exact.model.Model}: its
+ * {@link org.qchain.exact.model.ChainKind kind}, its {@link org.qchain.exact.model.ParamDecl parameters} with
+ * {@link org.qchain.exact.model.Domain domains} and nominal values, its states, and its
+ * {@link org.qchain.exact.model.Transition transitions} as small expression trees of our own
+ * ({@link org.qchain.exact.model.Expr}). Parsing checks text, names and structure but evaluates nothing, so a
+ * model with free parameters parses; the symbolic module maps the same trees into its ring.
+ * {@link org.qchain.exact.model.Chains} evaluates a model at rational parameter values and validates the numbers
+ * (probabilities in [0, 1], rows summing to exactly 1, non-negative rates), returning a
+ * {@link org.qchain.exact.RationalMatrix}: the one-step matrix of a discrete chain or the generator of a
+ * continuous one.
+ *
+ * <pre>{@code
+ * Model m = ModelParser.parse("pump.chain", """
+ *     param p in (0, 1) = 1/20
+ *     states Up Down
+ *     Up   Down p
+ *     Down Up   1/2
+ *     """);
+ * RationalMatrix nominal = Chains.transitionMatrix(m);                       // [[19/20, 1/20], [1/2, 1/2]]
+ * RationalMatrix other = Chains.transitionMatrix(m, Chains.parseAssignments(m, "p=0.1"));
+ * }</pre>
+ *
+ * <p>Every error is a {@link org.qchain.exact.QchainException} with an {@link org.qchain.exact.ErrorKey} and, for
+ * errors in a file, a {@link org.qchain.exact.SourcePos} printed as {@code file:line:column}. The lexer, the
+ * expression parser, the CSV reader and the printer are package-private helpers.
  */
 package org.qchain.exact.model;
