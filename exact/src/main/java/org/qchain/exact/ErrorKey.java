@@ -88,7 +88,9 @@ public enum ErrorKey {
     /** {0}: entry label, {1}: formula, {2}: condition, {3}: where it fails. */
     SYMBOLIC_RANGE("{0} is {1}: needs {2}; {3}"),
     /** {0}: what, {1}: detail. */
-    SWEEP("invalid sweep ''{0}'': {1}");
+    SWEEP("invalid sweep ''{0}'': {1}"),
+    /** {0}: the power as written, {1}: its degree, {2}: the largest degree allowed. */
+    SYMBOLIC_POWER_TOO_LARGE("''{0}'' would have degree {1} in the parameters, more than the {2} a power in a model may have");
 
     private final String pattern;
 

@@ -3,10 +3,12 @@ package org.qchain.symbolic;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.qchain.exact.MatrixPowers;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.SourcePos;
 import org.qchain.exact.model.ChainKind;
+import org.qchain.exact.model.Chains;
 import org.qchain.exact.model.Domain;
 import org.qchain.exact.model.Expr;
 import org.qchain.exact.model.Model;
@@ -167,24 +169,13 @@ public final class TestChains {
         return new ParamDecl(name, d, Optional.ofNullable(nominal), new SourcePos("<test>", 1, 7));
     }
 
-    /** {@code p^n} by {@code n - 1} plain multiplications in the exact module. */
+    /** {@code p^n} by the exact module's engine. */
     public static RationalMatrix exactPower(RationalMatrix p, int n) {
-        RationalMatrix r = RationalMatrix.identity(p.rows());
-        for (int k = 0; k < n; k++) {
-            r = r.multiply(p);
-        }
-        return r;
+        return MatrixPowers.power(p, n);
     }
 
-    /** The model's one-step matrix at a point, evaluated by the exact module's expression evaluator. */
+    /** The model's one-step matrix at a point, built and validated by the exact module. */
     public static RationalMatrix exactMatrix(Model m, java.util.Map<String, Rational> point) {
-        int n = m.size();
-        Rational[][] e = new Rational[n][n];
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                e[i][j] = m.entry(i, j).evaluate(point::get);
-            }
-        }
-        return RationalMatrix.of(e);
+        return Chains.transitionMatrix(m, point);
     }
 }
