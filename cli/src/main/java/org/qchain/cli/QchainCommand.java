@@ -1,0 +1,160 @@
+package org.qchain.cli;
+
+import java.io.OutputStreamWriter;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+import org.qchain.cli.format.Caution;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.HelpCommand;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Spec;
+
+/**
+ * The root command {@code qchain}. Called without a subcommand it prints its usage on stderr and exits 2.
+ *
+ * <p>{@link #newCommandLine(boolean)} builds the configured command tree (error handlers, exit code lists and the
+ * caution footer on every help); {@link #run(String[])} is the process entry point used by {@link Main}.
+ */
+@Command(name = "qchain", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+    description = "Exact n-step transition probabilities of Markov chains: exact fractions, with correctly rounded"
+        + " decimals beside them.",
+    subcommands = {StepCommand.class, CheckCommand.class, DemoCommand.class, CompletionCommand.class,
+        HelpCommand.class})
+public final class QchainCommand implements Callable<Integer> {
+    /** Milliseconds the Ctrl-C hook waits for the work to stop and clean up before the JVM halts. */
+    private static final long INTERRUPT_GRACE_MS = 3000;
+
+    private final boolean progressAllowed;
+
+    /** The progress line in use, so that the Ctrl-C hook can clear it before its message. */
+    private volatile TerminalProgress current;
+
+    @Spec
+    CommandSpec spec;
+
+    /**
+     * @param progressAllowed whether long work may show progress on stderr (stderr is a terminal)
+     */
+    QchainCommand(boolean progressAllowed) {
+        this.progressAllowed = progressAllowed;
+    }
+
+    @Override
+    public Integer call() {
+        spec.commandLine().usage(spec.commandLine().getErr());
+        return ExitCodes.INPUT;
+    }
+
+    /** A progress reporter for a subcommand; it prints only if progress is allowed. */
+    TerminalProgress progress(PrintWriter err) {
+        TerminalProgress p = new TerminalProgress(err, progressAllowed);
+        current = p;
+        return p;
+    }
+
+    /** Clears the progress line, if one is shown. */
+    void clearProgress() {
+        TerminalProgress p = current;
+        if (p != null) {
+            p.clear();
+        }
+    }
+
+    /**
+     * The configured command tree.
+     *
+     * @param progressAllowed whether long work may show progress on stderr; tests pass {@code false}
+     * @return the command line, ready for {@code setOut}/{@code setErr} and {@code execute}
+     */
+    public static CommandLine newCommandLine(boolean progressAllowed) {
+        return newCommandLine(progressAllowed, new Errors());
+    }
+
+    private static CommandLine newCommandLine(boolean progressAllowed, Errors errors) {
+        CommandLine cl = new CommandLine(new QchainCommand(progressAllowed));
+        cl.setExecutionExceptionHandler(errors);
+        cl.setParameterExceptionHandler(errors);
+        Map<String, String> codes = new LinkedHashMap<>();
+        codes.put(" " + ExitCodes.OK, "success");
+        codes.put(" " + ExitCodes.INTERNAL, "internal error (set QCHAIN_DEBUG=1 for a stack trace)");
+        codes.put(" " + ExitCodes.INPUT, "bad input or usage: the message names file:line:col or the option");
+        codes.put(ExitCodes.INTERRUPTED + "", "interrupted (Ctrl-C); no partial output file is left");
+        Deque<CommandLine> todo = new ArrayDeque<>();
+        todo.add(cl);
+        while (!todo.isEmpty()) {
+            CommandLine c = todo.pop();
+            c.getCommandSpec().usageMessage()
+                .exitCodeListHeading("%nExit codes:%n")
+                .exitCodeList(codes)
+                .footerHeading("%n")
+                .footer(Caution.TEXT);
+            todo.addAll(c.getSubcommands().values());
+        }
+        return cl;
+    }
+
+    /**
+     * Runs qchain as a process: UTF-8 stdout and stderr, progress when stderr is a terminal, a Ctrl-C hook that
+     * interrupts the work and prints {@code qchain: interrupted} once, and no stack trace for any failure.
+     *
+     * @param args the command-line arguments
+     * @return the exit code
+     */
+    static int run(String[] args) {
+        PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
+        PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
+        Errors errors = new Errors();
+        CountDownLatch done = new CountDownLatch(1);
+        Thread worker = Thread.currentThread();
+        CommandLine cl = newCommandLine(stderrIsTerminal(), errors);
+        QchainCommand root = cl.getCommand();
+        Runtime.getRuntime().addShutdownHook(new Thread(() -> {
+            if (done.getCount() > 0) {
+                // the JVM is shutting down before the work ended: a signal such as Ctrl-C
+                root.clearProgress();
+                errors.reportInterrupt(err);
+                worker.interrupt();
+                try {
+                    done.await(INTERRUPT_GRACE_MS, TimeUnit.MILLISECONDS);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                }
+            }
+        }, "qchain-interrupt"));
+        try {
+            cl.setOut(out);
+            cl.setErr(err);
+            return cl.execute(args);
+        } catch (Throwable t) {
+            // errors (out of memory, stack overflow) pass through picocli's handlers
+            return errors.report(t, err);
+        } finally {
+            out.flush();
+            err.flush();
+            done.countDown();
+        }
+    }
+
+    /**
+     * Whether stderr is a terminal. The launcher knows ({@code -Dqchain.stderr.tty=true|false} from {@code [ -t 2 ]});
+     * otherwise {@code System.console() != null} is the proxy. {@code QCHAIN_PROGRESS=0} turns progress off.
+     */
+    static boolean stderrIsTerminal() {
+        if ("0".equals(System.getenv("QCHAIN_PROGRESS"))) {
+            return false;
+        }
+        String tty = System.getProperty("qchain.stderr.tty");
+        if (tty != null) {
+            return Boolean.parseBoolean(tty);
+        }
+        return System.console() != null;
+    }
+}

@@ -1,0 +1,79 @@
+package org.qchain.cli;
+
+import java.util.Optional;
+import java.util.OptionalInt;
+import java.util.concurrent.Callable;
+import org.qchain.cli.result.StepResult;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code qchain step}: exact n-step transition probabilities. */
+@Command(name = "step", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
+    description = {
+        "Exact n-step transition probabilities P^n of a discrete chain, as fractions with decimals beside them.",
+        "Without --from: the whole matrix. With --from: that row (where the chain may be after n steps).",
+        "With --from and --to: one probability; add --paths K for its K most probable paths."})
+final class StepCommand implements Callable<Integer> {
+    /** Default limit on the total digits of a result. */
+    static final long DEFAULT_MAX_DIGITS = 50_000_000L;
+
+    @Spec
+    CommandSpec spec;
+
+    @ParentCommand
+    QchainCommand root;
+
+    @Mixin
+    ModelOptions model;
+
+    @Option(names = {"-n", "--steps"}, required = true, paramLabel = "N", converter = Converters.Steps.class,
+        description = "Number of steps (0 or more).")
+    long n;
+
+    @Option(names = "--from", paramLabel = "STATE", description = "Starting state: print only its row of P^n.")
+    String from;
+
+    @Option(names = "--to", paramLabel = "STATE", description = "Final state (needs --from): print one entry.")
+    String to;
+
+    @Option(names = "--paths", paramLabel = "K", converter = Converters.PathCount.class,
+        description = "Also list the K most probable paths of n steps from --from to --to, with their exact"
+            + " probabilities and share of the total.")
+    Integer paths;
+
+    @Mixin
+    OutputOptions output;
+
+    @Option(names = "--max-digits", paramLabel = "M", converter = Converters.DigitLimit.class,
+        defaultValue = "" + DEFAULT_MAX_DIGITS,
+        description = "Refuse results estimated to need more than M digits in total (default: ${DEFAULT-VALUE}).")
+    long maxDigits = DEFAULT_MAX_DIGITS;
+
+    @Override
+    public Integer call() {
+        if (to != null && from == null) {
+            throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state)");
+        }
+        if (paths != null && (from == null || to == null)) {
+            throw new ParameterException(spec.commandLine(), "--paths needs both --from and --to");
+        }
+        LoadedChain chain = LoadedChain.load(model, spec.name());
+        Emitter.checkTarget(output.output(), chain.file());
+        Stepper.Query q = new Stepper.Query(n, Optional.ofNullable(from), Optional.ofNullable(to),
+            paths == null ? OptionalInt.empty() : OptionalInt.of(paths), output.digits, maxDigits);
+        TerminalProgress progress = root.progress(spec.commandLine().getErr());
+        StepResult result;
+        try {
+            result = Stepper.compute(chain, q, progress);
+        } finally {
+            progress.clear();
+        }
+        Emitter.emit(spec, output.format.formatter().format(result), result.header().warnings(), output.output());
+        return ExitCodes.OK;
+    }
+}

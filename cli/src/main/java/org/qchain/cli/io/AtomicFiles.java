@@ -1,0 +1,111 @@
+package org.qchain.cli.io;
+
+import java.io.IOException;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+
+/**
+ * Writes output files atomically: the text goes to a temporary file in the target's directory, is forced to disk, and
+ * is then moved over the target in one step, so a reader (or an interrupted run) never sees a partial file.
+ */
+public final class AtomicFiles {
+    private AtomicFiles() {
+    }
+
+    /**
+     * Refuses an output file that is one of the inputs.
+     *
+     * @param output the output file as given
+     * @param option the option that named it, for the message
+     * @param input  an input file
+     * @throws QchainException {@link ErrorKey#BAD_ARGUMENT} if both name the same file (same normalised absolute path,
+     *                         or {@link Files#isSameFile} for existing files, which sees links)
+     */
+    public static void requireDistinct(Path output, String option, Path input) {
+        boolean same = output.toAbsolutePath().normalize().equals(input.toAbsolutePath().normalize());
+        if (!same && Files.exists(output) && Files.exists(input)) {
+            try {
+                same = Files.isSameFile(output, input);
+            } catch (IOException e) {
+                same = false;
+            }
+        }
+        if (same) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, option, output, "it is the input model; choose another file");
+        }
+    }
+
+    /**
+     * Writes {@code text} (UTF-8) to {@code target} atomically, replacing it if it exists and keeping its
+     * permissions; a new file gets {@code rw-r--r--}.
+     *
+     * @param target the file to write
+     * @param option the option that named it, for messages
+     * @param text   the content
+     * @throws QchainException {@link ErrorKey#BAD_ARGUMENT} if the file cannot be written (missing directory, no
+     *                         permission, full disk); the target is then unchanged and no temporary file is left
+     */
+    public static void write(Path target, String option, String text) {
+        Path abs = target.toAbsolutePath().normalize();
+        Path dir = abs.getParent();
+        Path tmp = null;
+        try {
+            if (Files.isDirectory(abs)) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, option, target, "it is a directory");
+            }
+            tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
+            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
+                java.nio.ByteBuffer buf = java.nio.ByteBuffer.wrap(text.getBytes(StandardCharsets.UTF_8));
+                while (buf.hasRemaining()) {
+                    ch.write(buf);
+                }
+                ch.force(true);
+            }
+            copyPermissions(abs, tmp);
+            if (Thread.currentThread().isInterrupted()) {
+                throw new QchainException(ErrorKey.INTERRUPTED);
+            }
+            Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            tmp = null;
+        } catch (AtomicMoveNotSupportedException e) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, option, target,
+                "this file system cannot replace files atomically");
+        } catch (NoSuchFileException e) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, option, target, "no such directory");
+        } catch (IOException e) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, option, target, "cannot write it ("
+                + e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage()) + ")");
+        } finally {
+            if (tmp != null) {
+                try {
+                    Files.deleteIfExists(tmp);
+                } catch (IOException ignored) {
+                    // best effort: the target itself is untouched either way
+                }
+            }
+        }
+    }
+
+    private static void copyPermissions(Path target, Path tmp) throws IOException {
+        PosixFileAttributeView view = Files.getFileAttributeView(tmp, PosixFileAttributeView.class);
+        if (view == null) {
+            return;
+        }
+        Set<PosixFilePermission> perms = Files.exists(target)
+            ? Files.getPosixFilePermissions(target)
+            : PosixFilePermissions.fromString("rw-r--r--");
+        view.setPermissions(perms);
+    }
+}

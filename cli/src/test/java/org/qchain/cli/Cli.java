@@ -1,0 +1,43 @@
+package org.qchain.cli;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import picocli.CommandLine;
+
+/** Runs qchain in-process the way picocli's "Testing your application" does: captured stdout and stderr. */
+final class Cli {
+    /** Directory of the test models, relative to the module directory (surefire's working directory). */
+    static final String MODELS = "src/test/resources/models/";
+
+    private Cli() {
+    }
+
+    /** What one run printed and returned. */
+    record Result(int code, String out, String err) {
+        /** The stderr lines. */
+        String[] errLines() {
+            return err.isEmpty() ? new String[0] : err.split("\n", -1);
+        }
+
+        @Override
+        public String toString() {
+            return "exit " + code + "\n--- stdout ---\n" + out + "--- stderr ---\n" + err;
+        }
+    }
+
+    /** Runs {@code qchain args...} with progress off. */
+    static Result run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        CommandLine cl = QchainCommand.newCommandLine(false);
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        int code = cl.execute(args);
+        return new Result(code, out.toString(), err.toString());
+    }
+
+    /** A test model's path as passed on the command line. */
+    static String model(String name) {
+        return MODELS + name;
+    }
+}

@@ -1,0 +1,102 @@
+package org.qchain.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.File;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.lang.reflect.Method;
+import java.net.MalformedURLException;
+import java.net.URL;
+import java.net.URLClassLoader;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Numeric commands must not load Symja, JAS or our symbolic module (start-up time: Symja's evaluator alone costs
+ * about a second). The commands run inside a fresh class loader over the test class path that records every class it
+ * is asked for; the check fails as soon as any numeric code path touches one of those packages.
+ */
+class NoSymjaOnNumericPathTest {
+    private static final List<String> FORBIDDEN = List.of("org.matheclipse.", "edu.jas.", "org.qchain.symbolic.",
+        "org.hipparchus.");
+
+    /** A child-first loader for the application's classes that remembers each class name requested. */
+    static final class RecordingLoader extends URLClassLoader {
+        final Set<String> requested = ConcurrentHashMap.newKeySet();
+
+        RecordingLoader(URL[] urls) {
+            super(urls, ClassLoader.getPlatformClassLoader());
+        }
+
+        @Override
+        protected Class<?> loadClass(String name, boolean resolve) throws ClassNotFoundException {
+            requested.add(name);
+            return super.loadClass(name, resolve);
+        }
+    }
+
+    private static URL[] testClassPath() throws MalformedURLException {
+        List<URL> urls = new ArrayList<>();
+        for (String entry : System.getProperty("java.class.path").split(File.pathSeparator)) {
+            if (!entry.isEmpty()) {
+                urls.add(new File(entry).toURI().toURL());
+            }
+        }
+        return urls.toArray(new URL[0]);
+    }
+
+    private static Set<String> classesRequestedBy(String... args) throws Exception {
+        try (RecordingLoader loader = new RecordingLoader(testClassPath())) {
+            Class<?> root = loader.loadClass("org.qchain.cli.QchainCommand");
+            Object cl = root.getMethod("newCommandLine", boolean.class).invoke(null, false);
+            Class<?> clType = loader.loadClass("picocli.CommandLine");
+            StringWriter out = new StringWriter();
+            StringWriter err = new StringWriter();
+            clType.getMethod("setOut", PrintWriter.class).invoke(cl, new PrintWriter(out));
+            clType.getMethod("setErr", PrintWriter.class).invoke(cl, new PrintWriter(err));
+            Method execute = clType.getMethod("execute", String[].class);
+            int code = (Integer) execute.invoke(cl, (Object) args);
+            assertEquals(0, code, () -> "stdout:\n" + out + "\nstderr:\n" + err);
+            assertTrue(out.toString().length() > 0);
+            return Set.copyOf(loader.requested);
+        }
+    }
+
+    private static void assertNoForbidden(Set<String> requested) {
+        for (String name : requested) {
+            for (String prefix : FORBIDDEN) {
+                assertTrue(!name.startsWith(prefix), () -> "numeric command loaded " + name);
+            }
+        }
+    }
+
+    @Test
+    void recordingLoaderSeesTheCommandsOwnClasses() throws Exception {
+        // guards the test itself: if the loader saw nothing, the checks below would pass vacuously
+        Set<String> requested = classesRequestedBy("step", Cli.model("plant.chain"), "-n", "4");
+        assertTrue(requested.contains("org.qchain.cli.StepCommand"), requested::toString);
+        assertTrue(requested.contains("org.qchain.exact.MatrixPowers"), requested::toString);
+    }
+
+    @Test
+    void stepInEveryShapeAndFormatLoadsNoSymbolicClass() throws Exception {
+        String m = Cli.model("plant.chain");
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "6"));
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "6", "--from", "Up", "--format", "latex"));
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "6", "--from", "Up", "--to", "Down", "--paths", "2",
+            "--format", "markdown", "--at", "w=1/10"));
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "6", "--format", "json"));
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "6", "--format", "csv"));
+    }
+
+    @Test
+    void checkAndDemoLoadNoSymbolicClass() throws Exception {
+        assertNoForbidden(classesRequestedBy("check", Cli.model("plant.chain")));
+        assertNoForbidden(classesRequestedBy("demo"));
+    }
+}

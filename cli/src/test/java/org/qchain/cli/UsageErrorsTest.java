@@ -1,0 +1,109 @@
+package org.qchain.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * Usage errors exit 2 with a message naming the option at fault, and never print a stack trace. Exit codes and
+ * message layout: common practice, no source.
+ */
+class UsageErrorsTest {
+    private static final String MODEL = Cli.model("plant.chain");
+
+    private static void assertUsageError(Cli.Result r, String firstLine, String command) {
+        assertEquals(2, r.code(), r::toString);
+        assertEquals("", r.out(), r::toString);
+        String[] lines = r.errLines();
+        assertEquals(firstLine, lines[0], r::toString);
+        assertEquals("Try '" + command + " --help' for more information.", lines[lines.length - 2], r::toString);
+        assertFalse(r.err().contains("Exception"), r::toString);
+        assertFalse(r.err().contains("\tat "), r::toString);
+    }
+
+    @Test
+    void bareCommandPrintsUsageOnStderrAndExits2() {
+        Cli.Result r = Cli.run();
+        assertEquals(2, r.code());
+        assertEquals("", r.out());
+        assertTrue(r.err().startsWith("Usage: qchain [-hV] [COMMAND]\n"), r::toString);
+    }
+
+    @Test
+    void unknownCommandIsAUsageError() {
+        Cli.Result r = Cli.run("stpe");
+        assertEquals(2, r.code(), r::toString);
+        assertEquals("qchain: Unmatched argument at index 0: 'stpe'", r.errLines()[0], r::toString);
+        assertTrue(r.err().contains("step"), r::toString);
+    }
+
+    @Test
+    void missingStepsNamesTheOption() {
+        assertUsageError(Cli.run("step", MODEL), "qchain: Missing required option: '--steps=N'", "qchain step");
+    }
+
+    @Test
+    void missingModelNamesTheParameter() {
+        assertUsageError(Cli.run("step", "-n", "3"), "qchain: Missing required parameter: 'MODEL'", "qchain step");
+    }
+
+    @Test
+    void nonNumericStepsShowsTheValue() {
+        assertUsageError(Cli.run("step", MODEL, "-n", "ten"),
+            "qchain: Invalid value for option '--steps': 'ten' is not a whole number of steps", "qchain step");
+    }
+
+    @Test
+    void negativeStepsIsRefused() {
+        assertUsageError(Cli.run("step", MODEL, "-n", "-1"),
+            "qchain: Invalid value for option '--steps': '-1' is negative; the number of steps must be 0 or more",
+            "qchain step");
+    }
+
+    @Test
+    void unknownFormatListsTheFormats() {
+        assertUsageError(Cli.run("step", MODEL, "-n", "2", "--format", "xml"),
+            "qchain: Invalid value for option '--format': unknown format 'xml' (expected one of: text, json, csv,"
+                + " markdown, latex)", "qchain step");
+    }
+
+    @Test
+    void zeroDigitsIsRefused() {
+        assertUsageError(Cli.run("step", MODEL, "-n", "2", "--digits", "0"),
+            "qchain: Invalid value for option '--digits': '0' must be from 1 to 100000", "qchain step");
+    }
+
+    @Test
+    void zeroMaxDigitsIsRefused() {
+        assertUsageError(Cli.run("step", MODEL, "-n", "2", "--max-digits", "0"),
+            "qchain: Invalid value for option '--max-digits': '0' must be at least 1", "qchain step");
+    }
+
+    @Test
+    void zeroPathsIsRefused() {
+        assertUsageError(Cli.run("step", MODEL, "-n", "2", "--from", "Up", "--to", "Down", "--paths", "0"),
+            "qchain: Invalid value for option '--paths': '0' must be from 1 to 10000", "qchain step");
+    }
+
+    @Test
+    void toWithoutFromIsRefused() {
+        assertUsageError(Cli.run("step", MODEL, "-n", "2", "--to", "Down"),
+            "qchain: --to needs --from (the starting state)", "qchain step");
+    }
+
+    @Test
+    void pathsWithoutToIsRefused() {
+        assertUsageError(Cli.run("step", MODEL, "-n", "2", "--from", "Up", "--paths", "3"),
+            "qchain: --paths needs both --from and --to", "qchain step");
+    }
+
+    @Test
+    void misspelledOptionSuggestsTheRightOne() {
+        Cli.Result r = Cli.run("step", MODEL, "-n", "2", "--frm", "Up");
+        assertEquals(2, r.code(), r::toString);
+        assertEquals("qchain: Unknown options: '--frm', 'Up'", r.errLines()[0], r::toString);
+        assertTrue(r.err().contains("--from"), r::toString);
+    }
+}
