@@ -203,6 +203,13 @@ final class PlainText {
         }
         BigInteger u = c.numerator().abs();
         BigInteger v = c.denominator();
+        // a lone factor of exponent 1 over a constant needs no brackets: \frac{1 - 2 a}{4}
+        if (u.equals(BigInteger.ONE) && top.size() == 1 && f.numerator().get(0).exponent() == 1) {
+            top.set(0, latexPoly(f.numerator().get(0).base()));
+        }
+        if (v.equals(BigInteger.ONE) && bottom.size() == 1 && f.denominator().get(0).exponent() == 1) {
+            bottom.set(0, latexPoly(f.denominator().get(0).base()));
+        }
         if (!u.equals(BigInteger.ONE) || top.isEmpty()) {
             top.add(0, u.toString());
         }
