@@ -155,6 +155,7 @@ function compReplyArray() {
 function _complete_qchain() {
   # Edge case: if command line has no space after subcommand, then don't assume this subcommand is selected (remkop/picocli#1468).
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} step" ];    then _picocli_qchain; return $?; fi
+  if [ "${COMP_LINE}" = "${COMP_WORDS[0]} sens" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} check" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} demo" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} completion" ];    then _picocli_qchain; return $?; fi
@@ -162,15 +163,17 @@ function _complete_qchain() {
 
   # Find the longest sequence of subcommands and call the bash function for that subcommand.
   local cmds0=(step)
-  local cmds1=(check)
-  local cmds2=(demo)
-  local cmds3=(completion)
-  local cmds4=(help)
+  local cmds1=(sens)
+  local cmds2=(check)
+  local cmds3=(demo)
+  local cmds4=(completion)
+  local cmds5=(help)
 
-  if CompWordsContainsArray "${cmds4[@]}"; then _picocli_qchain_help; return $?; fi
-  if CompWordsContainsArray "${cmds3[@]}"; then _picocli_qchain_completion; return $?; fi
-  if CompWordsContainsArray "${cmds2[@]}"; then _picocli_qchain_demo; return $?; fi
-  if CompWordsContainsArray "${cmds1[@]}"; then _picocli_qchain_check; return $?; fi
+  if CompWordsContainsArray "${cmds5[@]}"; then _picocli_qchain_help; return $?; fi
+  if CompWordsContainsArray "${cmds4[@]}"; then _picocli_qchain_completion; return $?; fi
+  if CompWordsContainsArray "${cmds3[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds2[@]}"; then _picocli_qchain_check; return $?; fi
+  if CompWordsContainsArray "${cmds1[@]}"; then _picocli_qchain_sens; return $?; fi
   if CompWordsContainsArray "${cmds0[@]}"; then _picocli_qchain_step; return $?; fi
 
   # No subcommands were specified; generate completions for the top-level command.
@@ -182,7 +185,7 @@ function _picocli_qchain() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step check demo completion help"
+  local commands="step sens check demo completion help"
   local flag_opts="'-h' '--help' '-V' '--version'"
   local arg_opts=""
 
@@ -202,8 +205,8 @@ function _picocli_qchain_step() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits'"
+  local flag_opts="'--factor' '--symbolic' '-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -241,6 +244,9 @@ function _picocli_qchain_step() {
     '--max-digits')
       return
       ;;
+    '--max-terms')
+      return
+      ;;
   esac
 
   if [[ "${curr_word}" == -* ]]; then
@@ -249,6 +255,73 @@ function _picocli_qchain_step() {
     local positionals=""
     local currIndex
     currIndex=$(currentPositionalIndex "step" "${arg_opts}" "${flag_opts}")
+    if (( currIndex >= 0 && currIndex <= 0 )); then
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      positionals=$( compgen -f -- "${curr_word}" ) # files
+    fi
+    local IFS=$'\n'
+    COMPREPLY=( $(compgen -W "${commands// /$'\n'}${IFS}${positionals}" -- "${curr_word}") )
+  fi
+}
+
+# Generates completions for the options and subcommands of the `sens` subcommand.
+function _picocli_qchain_sens() {
+  # Get completion data
+  local curr_word=${COMP_WORDS[COMP_CWORD]}
+  local prev_word=${COMP_WORDS[COMP_CWORD-1]}
+
+  local commands=""
+  local flag_opts="'--factor' '-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms'"
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+
+  type compopt &>/dev/null && compopt +o default
+
+  case ${prev_word} in
+    '--at')
+      return
+      ;;
+    '-n'|'--steps')
+      return
+      ;;
+    '--from')
+      return
+      ;;
+    '--to')
+      return
+      ;;
+    '--wrt')
+      return
+      ;;
+    '--sweep')
+      return
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
+    '--digits')
+      return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+    '--max-terms')
+      return
+      ;;
+  esac
+
+  if [[ "${curr_word}" == -* ]]; then
+    COMPREPLY=( $(compgen -W "${flag_opts} ${arg_opts}" -- "${curr_word}") )
+  else
+    local positionals=""
+    local currIndex
+    currIndex=$(currentPositionalIndex "sens" "${arg_opts}" "${flag_opts}")
     if (( currIndex >= 0 && currIndex <= 0 )); then
       local IFS=$'\n'
       type compopt &>/dev/null && compopt -o filenames
@@ -349,7 +422,7 @@ function _picocli_qchain_help() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step check demo completion"
+  local commands="step sens check demo completion"
   local flag_opts="'-h' '--help'"
   local arg_opts=""
 

@@ -63,4 +63,12 @@ final class Converters {
             return (int) whole(value, "paths", 1, MAX, "must be from 1 to " + MAX);
         }
     }
+
+    /** A limit on polynomial terms of symbolic results: an integer {@code >= 1}. */
+    static final class TermLimit implements ITypeConverter<Long> {
+        @Override
+        public Long convert(String value) {
+            return whole(value, "terms", 1, Long.MAX_VALUE, "must be at least 1");
+        }
+    }
 }

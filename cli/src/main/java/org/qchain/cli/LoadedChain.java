@@ -37,6 +37,18 @@ record LoadedChain(Model model, Optional<Path> file, RationalMatrix p) {
     }
 
     /**
+     * Validates and evaluates a model already parsed from the file that {@code options} name.
+     *
+     * @param model   the parsed model
+     * @param options the model file and {@code --at}
+     * @param command the command's name, for messages
+     * @return the chain
+     */
+    static LoadedChain load(Model model, ModelOptions options, String command) {
+        return evaluate(model, Optional.of(options.model), options.at(), command);
+    }
+
+    /**
      * Reads the model from text (the demo's bundled example).
      *
      * @param name the name for messages

@@ -4,6 +4,8 @@ import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import org.qchain.cli.result.StepResult;
+import org.qchain.exact.model.Model;
+import org.qchain.exact.model.ModelParser;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -17,7 +19,10 @@ import picocli.CommandLine.Spec;
     description = {
         "Exact n-step transition probabilities P^n of a discrete chain, as fractions with decimals beside them.",
         "Without --from: the whole matrix. With --from: that row (where the chain may be after n steps).",
-        "With --from and --to: one probability; add --paths K for its K most probable paths."})
+        "With --from and --to: one probability; add --paths K for its K most probable paths.",
+        "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function",
+        "of the parameters (--factor: factored), with its value at the nominal or --at point when every parameter",
+        "has one."})
 final class StepCommand implements Callable<Integer> {
     /** Default limit on the total digits of a result. */
     static final long DEFAULT_MAX_DIGITS = 50_000_000L;
@@ -54,6 +59,21 @@ final class StepCommand implements Callable<Integer> {
         description = "Refuse results estimated to need more than M digits in total (default: ${DEFAULT-VALUE}).")
     long maxDigits = DEFAULT_MAX_DIGITS;
 
+    @Option(names = "--factor",
+        description = "Symbolic results: print each formula factored over the rationals instead of expanded.")
+    boolean factor;
+
+    @Option(names = "--symbolic",
+        description = "Keep every parameter symbolic, even those with nominal values (formulas, and values at the"
+            + " nominal or --at point). Models with a parameter without a value are symbolic anyway.")
+    boolean symbolic;
+
+    @Option(names = "--max-terms", paramLabel = "T", converter = Converters.TermLimit.class,
+        defaultValue = "" + SymbolicStepOptions.DEFAULT_MAX_TERMS,
+        description = "Symbolic results: refuse powers estimated to need more than T polynomial terms in total"
+            + " (default: ${DEFAULT-VALUE}).")
+    long maxTerms = SymbolicStepOptions.DEFAULT_MAX_TERMS;
+
     @Override
     public Integer call() {
         if (to != null && from == null) {
@@ -62,8 +82,20 @@ final class StepCommand implements Callable<Integer> {
         if (paths != null && (from == null || to == null)) {
             throw new ParameterException(spec.commandLine(), "--paths needs both --from and --to");
         }
-        LoadedChain chain = LoadedChain.load(model, spec.name());
-        Emitter.checkTarget(output.output(), chain.file());
+        Model parsed = ModelParser.parseFile(model.model);
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
+        if (SymbolicRoute.applies(parsed, symbolic)) {
+            if (paths != null) {
+                throw new ParameterException(spec.commandLine(), "--paths needs numeric values for every parameter"
+                    + " (the most probable paths of a symbolic chain depend on the parameters)");
+            }
+            return SymbolicRoute.step(this, parsed);
+        }
+        if (factor) {
+            throw new ParameterException(spec.commandLine(), "--factor applies to symbolic results: the model has"
+                + " values for all its parameters (use --symbolic to keep them symbolic)");
+        }
+        LoadedChain chain = LoadedChain.load(parsed, model, spec.name());
         Stepper.Query q = new Stepper.Query(n, Optional.ofNullable(from), Optional.ofNullable(to),
             paths == null ? OptionalInt.empty() : OptionalInt.of(paths), output.digits, maxDigits);
         TerminalProgress progress = root.progress(spec.commandLine().getErr());

@@ -79,10 +79,13 @@ class BadInputTest {
     }
 
     @Test
-    void freeParametersWithoutValuesAreRefused() {
-        // for now; symbolic output will take this route later (EvaluationRoute)
-        assertOneLineError("qchain: parameters without a value: p (give values with --at, or use a symbolic"
-            + " command)", Cli.run("step", Cli.model("free.chain"), "-n", "2"));
+    void freeParametersWithoutValuesGiveFormulas() {
+        // a parameter without a value takes the symbolic path (SymbolicCommandsTest has the full outputs)
+        Cli.Result r = Cli.run("step", Cli.model("free.chain"), "-n", "2", "--from", "On", "--to", "Off", "--format",
+            "csv");
+        assertEquals(0, r.code(), r::toString);
+        // P^2(On, Off) = (1 - p) p + p (1 - 1/3) = 5/3 p - p^2 (derived by hand)
+        assertEquals("n,from,to,formula\r\n2,On,Off,5/3*p - p^2\r\n", r.out());
     }
 
     @Test
@@ -90,8 +93,8 @@ class BadInputTest {
         Cli.Result r = Cli.run("step", Cli.model("free.chain"), "-n", "1", "--at", "p=1/4", "--from", "On",
             "--to", "Off", "--format", "csv");
         assertEquals(0, r.code(), r::toString);
-        // the one-step entry is p itself
-        assertEquals("n,from,to,value,decimal\r\n1,On,Off,1/4,0.250000000000\r\n", r.out());
+        // the one-step entry is p itself; the symbolic path appends the formula to the numeric columns
+        assertEquals("n,from,to,value,decimal,formula\r\n1,On,Off,1/4,0.250000000000,p\r\n", r.out());
     }
 
     @Test

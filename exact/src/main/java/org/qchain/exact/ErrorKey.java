@@ -83,12 +83,14 @@ public enum ErrorKey {
     /** {0}: n, {1}: estimated terms, {2}: degree bound, {3}: limit, {4}: option that raises it. */
     SYMBOLIC_TOO_LARGE("the symbolic P^{0} would have up to about {1} polynomial terms in total (entries of degree up to {2}),"
         + " more than the limit {3}; raise it with {4}"),
-    /** {0}: entry label such as {@code Worn->Worn}, {1}: formula, {2}: what its rows sum to. */
+    /** {0}: entry label such as {@code Worn->Worn}, {1}: formula, {0}: the state, {1}: what the row sums to. */
     SYMBOLIC_ROW_SUM("row {0} sums to {1}, not identically 1"),
     /** {0}: entry label, {1}: formula, {2}: condition, {3}: where it fails. */
     SYMBOLIC_RANGE("{0} is {1}: needs {2}; {3}"),
     /** {0}: what, {1}: detail. */
     SWEEP("invalid sweep ''{0}'': {1}"),
+    /** {0}: the power as written, {1}: its degree, {2}: the largest degree allowed. */
+    SYMBOLIC_POWER_TOO_LARGE("''{0}'' would have degree {1} in the parameters, more than the {2} a power in a model may have"),
 
     // --- closed forms in n (appended) --------------------------------------------------------------------------
     /** {0}: what the closed-form engine cannot do, and what is still available. */

@@ -202,6 +202,14 @@ public final class MatrixPowers {
      */
     static BigInteger[] vectorSteps(IntMatrix a, int from, long n, Progress progress) {
         Thread caller = Thread.currentThread();
+        if (Limbs.smallNonNegative(a)) {
+            return Limbs.vectorSteps(a, from, n, progress, caller);
+        }
+        return vectorStepsBig(a, from, n, progress, caller);
+    }
+
+    /** {@link #vectorSteps} on {@link BigInteger}s, for matrices with negative or large entries. */
+    static BigInteger[] vectorStepsBig(IntMatrix a, int from, long n, Progress progress, Thread caller) {
         BigInteger[] v = a.e[from];
         int[] idx = a.nz[from];
         long stride = Math.max(1, n / 1000);
@@ -216,22 +224,41 @@ public final class MatrixPowers {
         return v;
     }
 
-    /** {@code A^n}, {@code n >= 1}, left to right over the bits of {@code n}. */
+    /**
+     * {@code A^n}, {@code n >= 1}, left to right over the bits of {@code n}. Once the entries pass
+     * {@link BigMath#matrixApintBits} the remaining squarings run on apfloat (one conversion in, one out).
+     */
     static IntMatrix integerPower(IntMatrix a, long n, Progress progress) {
         Thread caller = Thread.currentThread();
         int top = 63 - Long.numberOfLeadingZeros(n);
         long total = top + Long.bitCount(n) - 1L;
         long done = 0;
         IntMatrix r = a;
+        ApintMatrix big = null;
+        ApintMatrix bigA = null;
         for (int bit = top - 1; bit >= 0; bit--) {
-            r = r.multiply(r, caller);
-            progress.update("squaring", ++done, total);
-            if ((n >>> bit & 1) != 0) {
-                r = r.multiply(a, caller);
+            if (big == null && r.maxBits() >= BigMath.matrixApintBits) {
+                big = ApintMatrix.of(r, caller);
+                bigA = ApintMatrix.of(a, caller);
+            }
+            boolean multiply = (n >>> bit & 1) != 0;
+            if (big != null) {
+                big = big.multiply(big, caller);
                 progress.update("squaring", ++done, total);
+                if (multiply) {
+                    big = big.multiply(bigA, caller);
+                    progress.update("squaring", ++done, total);
+                }
+            } else {
+                r = r.multiply(r, caller);
+                progress.update("squaring", ++done, total);
+                if (multiply) {
+                    r = r.multiply(a, caller);
+                    progress.update("squaring", ++done, total);
+                }
             }
         }
-        return r;
+        return big == null ? r : big.toIntMatrix(caller);
     }
 
     /**

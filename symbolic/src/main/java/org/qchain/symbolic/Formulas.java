@@ -49,6 +49,11 @@ public final class Formulas {
         return PlainText.latexFactored(f);
     }
 
+    /** A parameter name as the LaTeX printers write it ({@code p1} as {@code p_{1}}, {@code mu} as {@code \mathit{mu}}). */
+    public static String latexName(String name) {
+        return PlainText.latexName(name);
+    }
+
     /**
      * The formula of an entry in the requested style.
      *

@@ -211,8 +211,17 @@ public final class ParamRing {
             throw new QchainException(p.pos(), ErrorKey.DIVISION_BY_ZERO,
                 " in '" + Expr.toPlain(p) + "' (the base is identically 0)");
         }
+        long degree = Math.abs((long) p.exponent())
+            * Math.max(base.numerator().totalDegree(), base.denominator().totalDegree());
+        if (degree > MAX_EXPR_DEGREE) {
+            throw new QchainException(p.pos(), ErrorKey.SYMBOLIC_POWER_TOO_LARGE, Expr.toPlain(p), degree,
+                MAX_EXPR_DEGREE);
+        }
         return base.pow(p.exponent());
     }
+
+    /** The largest total degree a power written in a model expression may reach, checked before expanding it. */
+    public static final int MAX_EXPR_DEGREE = 10_000;
 
     void check(ParamRing other) {
         if (other != this && !other.names.equals(names)) {

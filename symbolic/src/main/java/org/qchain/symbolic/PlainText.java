@@ -15,6 +15,11 @@ final class PlainText {
 
     // ------------------------------------------------------------------------------------------------- plain
     static String poly(Poly p) {
+        return terms(p, false);
+    }
+
+    /** The expanded polynomial: plain ({@code 3/4*a*b^2}) or LaTeX ({@code \frac{3}{4} a b^{2}}), same term order. */
+    private static String terms(Poly p, boolean latex) {
         if (p.isZero()) {
             return "0";
         }
@@ -32,14 +37,15 @@ final class PlainText {
                 sb.append(neg ? " - " : " + ");
             }
             first = false;
-            String mono = monomial(vars, t.exponents(), "*", false);
+            String mono = monomial(vars, t.exponents(), latex ? " " : "*", latex);
             Rational a = c.abs();
+            String coef = latex ? latexRational(a) : a.toString();
             if (mono.isEmpty()) {
-                sb.append(a);
+                sb.append(coef);
             } else if (a.isOne()) {
                 sb.append(mono);
             } else {
-                sb.append(a).append('*').append(mono);
+                sb.append(coef).append(latex ? " " : "*").append(mono);
             }
         }
         return sb.toString();
@@ -166,34 +172,7 @@ final class PlainText {
     }
 
     static String latexPoly(Poly p) {
-        if (p.isZero()) {
-            return "0";
-        }
-        List<String> vars = p.ring().variables();
-        StringBuilder sb = new StringBuilder();
-        boolean first = true;
-        for (Poly.Term t : p.terms()) {
-            Rational c = t.coefficient();
-            boolean neg = c.signum() < 0;
-            if (first) {
-                if (neg) {
-                    sb.append('-');
-                }
-            } else {
-                sb.append(neg ? " - " : " + ");
-            }
-            first = false;
-            String mono = monomial(vars, t.exponents(), " ", true);
-            Rational a = c.abs();
-            if (mono.isEmpty()) {
-                sb.append(latexRational(a));
-            } else if (a.isOne()) {
-                sb.append(mono);
-            } else {
-                sb.append(latexRational(a)).append(' ').append(mono);
-            }
-        }
-        return sb.toString();
+        return terms(p, true);
     }
 
     static String latexRatFun(RatFun f) {
@@ -224,6 +203,13 @@ final class PlainText {
         }
         BigInteger u = c.numerator().abs();
         BigInteger v = c.denominator();
+        // a lone factor of exponent 1 over a constant needs no brackets: \frac{1 - 2 a}{4}
+        if (u.equals(BigInteger.ONE) && top.size() == 1 && f.numerator().get(0).exponent() == 1) {
+            top.set(0, latexPoly(f.numerator().get(0).base()));
+        }
+        if (v.equals(BigInteger.ONE) && bottom.size() == 1 && f.denominator().get(0).exponent() == 1) {
+            bottom.set(0, latexPoly(f.denominator().get(0).base()));
+        }
         if (!u.equals(BigInteger.ONE) || top.isEmpty()) {
             top.add(0, u.toString());
         }

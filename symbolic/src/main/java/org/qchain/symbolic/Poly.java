@@ -389,9 +389,37 @@ public final class Poly {
         if (d.p.isConstant()) {
             return Optional.of(new Poly(ring, p.divide(d.p.leadingBaseCoefficient())));
         }
-        // for a single divisor the division remainder is zero exactly when d divides this ({d} is a Groebner basis)
-        GenPolynomial<BigRational>[] qr = p.quotientRemainder(d.p);
-        return qr[1].isZERO() ? Optional.of(new Poly(ring, qr[0])) : Optional.empty();
+        // For a single divisor the division remainder is zero exactly when d divides this ({d} is a Groebner basis),
+        // and as soon as the leading term of the running remainder is not a multiple of lt(d) that term would stay
+        // in the remainder: stop early. Our own loop on one mutable sorted map: JAS's quotientRemainder copies the
+        // whole remainder at every step (quadratic; measured 10x slower on P^8 numerators of 300 terms).
+        java.util.TreeMap<ExpVector, BigRational> r = new java.util.TreeMap<>(ring.jas.tord.getDescendComparator());
+        r.putAll(p.getMap());
+        ExpVector ld = d.p.leadingExpVector();
+        BigRational lc = d.p.leadingBaseCoefficient();
+        List<Map.Entry<ExpVector, BigRational>> dTerms = new ArrayList<>(d.p.getMap().entrySet());
+        GenPolynomial<BigRational> q = new GenPolynomial<>(ring.jas);
+        while (!r.isEmpty()) {
+            Map.Entry<ExpVector, BigRational> lt = r.firstEntry();
+            if (!lt.getKey().multipleOf(ld)) {
+                return Optional.empty();
+            }
+            ExpVector e = lt.getKey().subtract(ld);
+            BigRational c = lt.getValue().divide(lc);
+            q.doPutToMap(e, c);
+            for (Map.Entry<ExpVector, BigRational> t : dTerms) {
+                ExpVector k = t.getKey().sum(e);
+                BigRational v = t.getValue().multiply(c);
+                BigRational old = r.get(k);
+                BigRational nv = old == null ? v.negate() : old.subtract(v);
+                if (nv.isZERO()) {
+                    r.remove(k);
+                } else {
+                    r.put(k, nv);
+                }
+            }
+        }
+        return Optional.of(new Poly(ring, q));
     }
 
     /**

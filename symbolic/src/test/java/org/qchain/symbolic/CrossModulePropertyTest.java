@@ -13,7 +13,8 @@ import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.model.Model;
 
 /**
- * Symbolic powers evaluated at rational points equal the exact module's powers of the substituted chain.
+ * Symbolic powers evaluated at rational points equal the exact module's powers of the substituted chain
+ * ({@code Chains.transitionMatrix} at the point, then {@code MatrixPowers.power}).
  * Source: common practice, no source (evaluation is a ring homomorphism Q(params) -> Q wherever the denominators
  * do not vanish, so it commutes with matrix products).
  */

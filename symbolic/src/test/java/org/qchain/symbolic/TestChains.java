@@ -3,134 +3,27 @@ package org.qchain.symbolic;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.qchain.exact.MatrixPowers;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.SourcePos;
 import org.qchain.exact.model.ChainKind;
+import org.qchain.exact.model.Chains;
 import org.qchain.exact.model.Domain;
 import org.qchain.exact.model.Expr;
 import org.qchain.exact.model.Model;
+import org.qchain.exact.model.ModelParser;
 import org.qchain.exact.model.ParamDecl;
 import org.qchain.exact.model.Transition;
 
-/** Builds models in tests without the model parser: a tiny reader for expressions and a chain builder. */
+/** Builds models in tests from matrices of expression strings (read by the model parser's expression grammar). */
 public final class TestChains {
     private TestChains() {
     }
 
-    /** Reads {@code + - * / ^ ( )}, rationals and names; enough for test input. */
+    /** Reads an expression with the model parser's grammar. */
     public static Expr expr(String s) {
-        return new Reader(s).parse();
-    }
-
-    private static final class Reader {
-        private final String s;
-        private int i;
-
-        Reader(String s) {
-            this.s = s;
-        }
-
-        Expr parse() {
-            Expr e = sum();
-            skip();
-            if (i != s.length()) {
-                throw new IllegalArgumentException("junk at " + i + " in " + s);
-            }
-            return e;
-        }
-
-        private void skip() {
-            while (i < s.length() && s.charAt(i) == ' ') {
-                i++;
-            }
-        }
-
-        private boolean eat(char c) {
-            skip();
-            if (i < s.length() && s.charAt(i) == c) {
-                i++;
-                return true;
-            }
-            return false;
-        }
-
-        private Expr sum() {
-            Expr e = product();
-            while (true) {
-                if (eat('+')) {
-                    e = new Expr.Bin(Expr.Op.ADD, e, product(), null);
-                } else if (eat('-')) {
-                    e = new Expr.Bin(Expr.Op.SUB, e, product(), null);
-                } else {
-                    return e;
-                }
-            }
-        }
-
-        private Expr product() {
-            Expr e = unary();
-            while (true) {
-                if (eat('*')) {
-                    e = new Expr.Bin(Expr.Op.MUL, e, unary(), null);
-                } else if (eat('/')) {
-                    e = new Expr.Bin(Expr.Op.DIV, e, unary(), null);
-                } else {
-                    return e;
-                }
-            }
-        }
-
-        private Expr unary() {
-            if (eat('-')) {
-                return new Expr.Neg(unary(), null);
-            }
-            return power();
-        }
-
-        private Expr power() {
-            Expr b = atom();
-            if (eat('^')) {
-                boolean paren = eat('(');
-                boolean neg = eat('-');
-                skip();
-                int st = i;
-                while (i < s.length() && Character.isDigit(s.charAt(i))) {
-                    i++;
-                }
-                int e = Integer.parseInt(s.substring(st, i));
-                if (paren && !eat(')')) {
-                    throw new IllegalArgumentException("missing ) in " + s);
-                }
-                return new Expr.Pow(b, neg ? -e : e, null);
-            }
-            return b;
-        }
-
-        private Expr atom() {
-            skip();
-            if (eat('(')) {
-                Expr e = sum();
-                if (!eat(')')) {
-                    throw new IllegalArgumentException("missing ) in " + s);
-                }
-                return e;
-            }
-            int st = i;
-            if (i < s.length() && Character.isDigit(s.charAt(i))) {
-                while (i < s.length() && (Character.isDigit(s.charAt(i)) || s.charAt(i) == '.')) {
-                    i++;
-                }
-                return new Expr.Num(Rational.parse(s.substring(st, i)), null);
-            }
-            while (i < s.length() && (Character.isLetterOrDigit(s.charAt(i)) || s.charAt(i) == '_')) {
-                i++;
-            }
-            if (st == i) {
-                throw new IllegalArgumentException("expected a term at " + i + " in " + s);
-            }
-            return new Expr.Var(s.substring(st, i), new SourcePos("<test>", 1, st + 1));
-        }
+        return ModelParser.parseExpression("<test>", s);
     }
 
     /**
@@ -167,24 +60,13 @@ public final class TestChains {
         return new ParamDecl(name, d, Optional.ofNullable(nominal), new SourcePos("<test>", 1, 7));
     }
 
-    /** {@code p^n} by {@code n - 1} plain multiplications in the exact module. */
+    /** {@code p^n} by the exact module's engine. */
     public static RationalMatrix exactPower(RationalMatrix p, int n) {
-        RationalMatrix r = RationalMatrix.identity(p.rows());
-        for (int k = 0; k < n; k++) {
-            r = r.multiply(p);
-        }
-        return r;
+        return MatrixPowers.power(p, n);
     }
 
-    /** The model's one-step matrix at a point, evaluated by the exact module's expression evaluator. */
+    /** The model's one-step matrix at a point, built and validated by the exact module. */
     public static RationalMatrix exactMatrix(Model m, java.util.Map<String, Rational> point) {
-        int n = m.size();
-        Rational[][] e = new Rational[n][n];
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                e[i][j] = m.entry(i, j).evaluate(point::get);
-            }
-        }
-        return RationalMatrix.of(e);
+        return Chains.transitionMatrix(m, point);
     }
 }

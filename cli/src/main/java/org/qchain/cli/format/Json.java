@@ -67,6 +67,13 @@ public final class Json {
         return this;
     }
 
+    /** Appends a nested object written into a fresh writer by the caller (mutates). */
+    public Json object(String key, Json inner) {
+        key(key);
+        sb.append(inner.close());
+        return this;
+    }
+
     /** Closes the object and returns its text. */
     public String close() {
         return sb.append('}').toString();

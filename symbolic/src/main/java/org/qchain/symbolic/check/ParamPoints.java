@@ -21,13 +21,14 @@ public final class ParamPoints {
      * @param model the model
      * @param at    user values (may be empty)
      * @return the merged point (parameters without a nominal value and not in {@code at} are absent)
-     * @throws QchainException {@link ErrorKey#UNKNOWN_PARAMETER} for an undeclared name,
+     * @throws QchainException {@link ErrorKey#BAD_ARGUMENT} for an undeclared name (as the exact module's {@code Chains}),
      *                         {@link ErrorKey#VALUE_OUTSIDE_DOMAIN} for a value outside its domain
      */
     public static Map<String, Rational> resolve(Model model, Map<String, Rational> at) {
         for (Map.Entry<String, Rational> e : at.entrySet()) {
             ParamDecl d = model.param(e.getKey())
-                .orElseThrow(() -> new QchainException(ErrorKey.UNKNOWN_PARAMETER, e.getKey()));
+                .orElseThrow(() -> new QchainException(ErrorKey.BAD_ARGUMENT, "parameter", e.getKey(),
+                    "the model declares no such parameter"));
             if (!d.domain().contains(e.getValue())) {
                 throw new QchainException(ErrorKey.VALUE_OUTSIDE_DOMAIN, e.getKey(), e.getValue(), d.domain());
             }

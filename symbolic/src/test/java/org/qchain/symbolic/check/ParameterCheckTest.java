@@ -112,6 +112,6 @@ class ParameterCheckTest {
         assertEquals("value 3/2 of parameter 'p' is outside its domain (0, 1)", out.getMessage());
         QchainException unknown = assertThrows(QchainException.class,
             () -> ParamPoints.resolve(m, Map.of("z", Rational.of(1, 2))));
-        assertEquals(ErrorKey.UNKNOWN_PARAMETER, unknown.key());
+        assertEquals(ErrorKey.BAD_ARGUMENT, unknown.key());
     }
 }

@@ -1,0 +1,67 @@
+package org.qchain.cli;
+
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code qchain sens}: the sensitivity of one n-step probability to a parameter. The fields are plain option values
+ * and the work is in {@link SensRun}, so that building the command tree (picocli reflects over this class) loads no
+ * symbolic class.
+ */
+@Command(name = "sens", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
+    description = {
+        "Sensitivity of the n-step probability P^n(FROM -> TO) to a parameter: P and its exact derivative dP/dp as",
+        "formulas in the parameters, their values and the elasticity (p/P) dP/dp at the nominal values (or --at),",
+        "and with --sweep a table of P and dP/dp over an exact range of the parameter, exact and decimal."})
+final class SensCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @ParentCommand
+    QchainCommand root;
+
+    @Mixin
+    ModelOptions model;
+
+    @Option(names = {"-n", "--steps"}, required = true, paramLabel = "N", converter = Converters.Steps.class,
+        description = "Number of steps (0 or more).")
+    long n;
+
+    @Option(names = "--from", required = true, paramLabel = "STATE", description = "Starting state.")
+    String from;
+
+    @Option(names = "--to", required = true, paramLabel = "STATE", description = "State after n steps.")
+    String to;
+
+    @Option(names = "--wrt", required = true, paramLabel = "PARAM",
+        description = "The parameter p of the derivative dP/dp.")
+    String wrt;
+
+    @Option(names = "--sweep", paramLabel = "NAME=START:STEP:END",
+        description = "A table of P and dP/dp for NAME = START, START+STEP, ... up to END (exact rationals, e.g."
+            + " p=0:1/100:1/10; at most 10001 points); the other parameters at their nominal or --at values.")
+    String sweep;
+
+    @Option(names = "--factor", description = "Print the formulas factored over the rationals.")
+    boolean factor;
+
+    @Mixin
+    OutputOptions output;
+
+    @Option(names = "--max-terms", paramLabel = "T", converter = Converters.TermLimit.class,
+        defaultValue = "" + SymbolicStepOptions.DEFAULT_MAX_TERMS,
+        description = "Refuse symbolic powers estimated to need more than T polynomial terms (default:"
+            + " ${DEFAULT-VALUE}).")
+    long maxTerms = SymbolicStepOptions.DEFAULT_MAX_TERMS;
+
+    @Override
+    public Integer call() {
+        Emitter.checkTarget(output.output(), java.util.Optional.of(model.model));
+        return SensRun.run(this);
+    }
+}
