@@ -156,6 +156,7 @@ function _complete_qchain() {
   # Edge case: if command line has no space after subcommand, then don't assume this subcommand is selected (remkop/picocli#1468).
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} step" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} sens" ];    then _picocli_qchain; return $?; fi
+  if [ "${COMP_LINE}" = "${COMP_WORDS[0]} closed" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} check" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} demo" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} completion" ];    then _picocli_qchain; return $?; fi
@@ -164,15 +165,17 @@ function _complete_qchain() {
   # Find the longest sequence of subcommands and call the bash function for that subcommand.
   local cmds0=(step)
   local cmds1=(sens)
-  local cmds2=(check)
-  local cmds3=(demo)
-  local cmds4=(completion)
-  local cmds5=(help)
+  local cmds2=(closed)
+  local cmds3=(check)
+  local cmds4=(demo)
+  local cmds5=(completion)
+  local cmds6=(help)
 
-  if CompWordsContainsArray "${cmds5[@]}"; then _picocli_qchain_help; return $?; fi
-  if CompWordsContainsArray "${cmds4[@]}"; then _picocli_qchain_completion; return $?; fi
-  if CompWordsContainsArray "${cmds3[@]}"; then _picocli_qchain_demo; return $?; fi
-  if CompWordsContainsArray "${cmds2[@]}"; then _picocli_qchain_check; return $?; fi
+  if CompWordsContainsArray "${cmds6[@]}"; then _picocli_qchain_help; return $?; fi
+  if CompWordsContainsArray "${cmds5[@]}"; then _picocli_qchain_completion; return $?; fi
+  if CompWordsContainsArray "${cmds4[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds3[@]}"; then _picocli_qchain_check; return $?; fi
+  if CompWordsContainsArray "${cmds2[@]}"; then _picocli_qchain_closed; return $?; fi
   if CompWordsContainsArray "${cmds1[@]}"; then _picocli_qchain_sens; return $?; fi
   if CompWordsContainsArray "${cmds0[@]}"; then _picocli_qchain_step; return $?; fi
 
@@ -185,7 +188,7 @@ function _picocli_qchain() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens check demo completion help"
+  local commands="step sens closed check demo completion help"
   local flag_opts="'-h' '--help' '-V' '--version'"
   local arg_opts=""
 
@@ -332,6 +335,73 @@ function _picocli_qchain_sens() {
   fi
 }
 
+# Generates completions for the options and subcommands of the `closed` subcommand.
+function _picocli_qchain_closed() {
+  # Get completion data
+  local curr_word=${COMP_WORDS[COMP_CWORD]}
+  local prev_word=${COMP_WORDS[COMP_CWORD-1]}
+
+  local commands=""
+  local flag_opts="'-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--from' '--to' '--start' '--form' '--format' '--digits' '-o' '--output' '--max-terms'"
+  local FORM_option_args=("MATRIX" "GF" "RECURRENCE") # --form values
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+
+  type compopt &>/dev/null && compopt +o default
+
+  case ${prev_word} in
+    '--at')
+      return
+      ;;
+    '--from')
+      return
+      ;;
+    '--to')
+      return
+      ;;
+    '--start')
+      return
+      ;;
+    '--form')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORM_option_args[@]}" ) )
+      return $?
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
+    '--digits')
+      return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+    '--max-terms')
+      return
+      ;;
+  esac
+
+  if [[ "${curr_word}" == -* ]]; then
+    COMPREPLY=( $(compgen -W "${flag_opts} ${arg_opts}" -- "${curr_word}") )
+  else
+    local positionals=""
+    local currIndex
+    currIndex=$(currentPositionalIndex "closed" "${arg_opts}" "${flag_opts}")
+    if (( currIndex >= 0 && currIndex <= 0 )); then
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      positionals=$( compgen -f -- "${curr_word}" ) # files
+    fi
+    local IFS=$'\n'
+    COMPREPLY=( $(compgen -W "${commands// /$'\n'}${IFS}${positionals}" -- "${curr_word}") )
+  fi
+}
+
 # Generates completions for the options and subcommands of the `check` subcommand.
 function _picocli_qchain_check() {
   # Get completion data
@@ -422,7 +492,7 @@ function _picocli_qchain_help() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens check demo completion"
+  local commands="step sens closed check demo completion"
   local flag_opts="'-h' '--help'"
   local arg_opts=""
 

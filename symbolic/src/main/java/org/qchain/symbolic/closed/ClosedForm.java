@@ -206,7 +206,9 @@ public final class ClosedForm {
     private List<Eigenvalue> describeEigenvalues() {
         List<Eigenvalue> out = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
-            Fml f = field.formula(g.factor, "x");
+            // a linear factor reads x - (lambda), the way its eigenvalue is printed
+            Fml f = g.kind == Spectral.Kind.LINEAR && !g.lambda.isZERO()
+                ? Fml.sum(Fml.name("x"), Fml.neg(field.formula(g.lambda))) : field.formula(g.factor, "x");
             List<String> values = new ArrayList<>();
             String kind;
             if (g.kind == Spectral.Kind.LINEAR) {
@@ -505,6 +507,10 @@ public final class ClosedForm {
 
     private Fml modulus(Spectral.Group g) {
         if (g.kind == Spectral.Kind.LINEAR) {
+            if (ParamField.isConstant(g.lambda)) {
+                BigRational v = ParamField.constantValue(g.lambda);
+                return field.formula(new Quotient<>(field.field, field.poly.getONE().multiply(v.abs())));
+            }
             return Fml.call("abs", field.formula(g.lambda));
         }
         if (g.kind == Spectral.Kind.QUADRATIC) {

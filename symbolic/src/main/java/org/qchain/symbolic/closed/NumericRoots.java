@@ -1,13 +1,14 @@
 package org.qchain.symbolic.closed;
 
 import edu.jas.arith.BigRational;
-import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import org.apfloat.Apcomplex;
 import org.apfloat.ApcomplexMath;
 import org.apfloat.Apfloat;
 import org.apfloat.ApfloatMath;
+import org.qchain.exact.Decimals;
+import org.qchain.exact.Rational;
 
 /**
  * All complex roots of a polynomial with rational coefficients and simple roots (an irreducible factor over Q),
@@ -126,14 +127,15 @@ final class NumericRoots {
         return real;
     }
 
-    /** A number to {@code digits} significant digits, plain notation. */
+    /**
+     * A number to {@code digits} significant digits, correctly rounded from the (more precise) apfloat value, in
+     * the exact module's decimal style.
+     */
     static String format(Apfloat x, int digits) {
         if (x.signum() == 0) {
             return "0";
         }
-        Apfloat r = ApfloatMath.round(x, digits, RoundingMode.HALF_EVEN);
-        String s = r.toString(true);
-        return s;
+        return Decimals.format(Rational.of(new java.math.BigDecimal(x.toString(true))), digits);
     }
 
     /** {@code re}, or {@code re + im*i} / {@code re - im*i}. */

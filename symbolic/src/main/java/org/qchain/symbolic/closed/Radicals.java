@@ -27,7 +27,7 @@ final class Radicals {
         GenPolynomial<BigRational> in = f.poly.getONE();
         GenPolynomial<BigRational> product = f.poly.getONE();
         for (Map.Entry<GenPolynomial<BigRational>, Long> e : fac.factors(all).entrySet()) {
-            GenPolynomial<BigRational> g = e.getKey();
+            GenPolynomial<BigRational> g = f.integral(e.getKey());
             if (g.isConstant()) {
                 continue;
             }

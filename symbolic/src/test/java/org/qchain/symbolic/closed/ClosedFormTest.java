@@ -76,6 +76,7 @@ class ClosedFormTest {
         assertEquals("1/2", half.values().get(0));
         assertEquals(2, half.multiplicity());
         assertEquals(2, half.jordanIndex());
+        assertEquals("1/2", cf.longRun().rate());
         RationalMatrix at = null;
         for (int n = 0; n <= 12; n++) {
             Rational h = Rational.of(1, 2).pow(n);

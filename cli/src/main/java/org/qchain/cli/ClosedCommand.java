@@ -1,0 +1,110 @@
+package org.qchain.cli;
+
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import org.qchain.cli.format.ClosedFormatter;
+import org.qchain.cli.format.OutputFormat;
+import org.qchain.cli.result.ClosedResult;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.TypeConversionException;
+
+/**
+ * {@code qchain closed}: P^n as formulas in a symbolic n and the free parameters. This class only declares the
+ * options; the work is in {@link ClosedRun}, so that building the command tree (picocli reflects over this class)
+ * loads no symbolic class.
+ */
+@Command(name = "closed", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
+    description = {
+        "P^n of a discrete chain as one formula in a symbolic n (and the parameters without a value), valid for every"
+            + " n from the stated valid_from on, under the stated parameter conditions.",
+        "Without --from: the whole matrix. With --start A (or --from A): that row. With --from A --to B: one entry.",
+        "--form gf prints the generating functions sum_n P^n z^n, --form recurrence the linear recurrences with"
+            + " their initial values; these exist for every chain.",
+        "Parameters given with --at are substituted first; all others stay symbolic. Numeric values (convergence"
+            + " rate, roots of named factors) use --at and the nominal values."})
+final class ClosedCommand implements Callable<Integer> {
+
+    /** The values of {@code --form}. */
+    enum Form {
+        /** The closed form in n. */
+        MATRIX("matrix"),
+        /** The generating function in z. */
+        GF("gf"),
+        /** The linear recurrence in n. */
+        RECURRENCE("recurrence");
+
+        final String word;
+
+        Form(String word) {
+            this.word = word;
+        }
+    }
+
+    /** Converts {@code --form}; a bad word is a usage error naming it. */
+    static final class FormConverter implements ITypeConverter<Form> {
+        @Override
+        public Form convert(String value) {
+            for (Form f : Form.values()) {
+                if (f.word.equalsIgnoreCase(value.strip())) {
+                    return f;
+                }
+            }
+            throw new TypeConversionException("'" + value + "' is not a form; use matrix, gf or recurrence");
+        }
+    }
+
+    @Spec
+    CommandSpec spec;
+
+    @Mixin
+    ModelOptions model;
+
+    @Option(names = "--from", paramLabel = "STATE", description = "Starting state: print only its row, or with --to"
+        + " one entry.")
+    String from;
+
+    @Option(names = "--to", paramLabel = "STATE", description = "Final state (needs --from): print one entry.")
+    String to;
+
+    @Option(names = "--start", paramLabel = "STATE", description = "Start distribution concentrated on STATE: print"
+        + " its row (where the chain is after n steps).")
+    String start;
+
+    @Option(names = "--form", paramLabel = "FORM", converter = FormConverter.class, defaultValue = "matrix",
+        description = "What to print: matrix (closed form in n, the default), gf (generating function in z) or"
+            + " recurrence (linear recurrence in n with initial values).")
+    Form form = Form.MATRIX;
+
+    @Mixin
+    OutputOptions output;
+
+    @Option(names = "--max-terms", paramLabel = "T", converter = Converters.TermLimit.class,
+        defaultValue = "" + SymbolicStepOptions.DEFAULT_MAX_TERMS,
+        description = "Refuse chains whose powers up to P^s (s states, all the method multiplies out) are estimated"
+            + " to need more than T polynomial terms (default: ${DEFAULT-VALUE}).")
+    long maxTerms = SymbolicStepOptions.DEFAULT_MAX_TERMS;
+
+    @Override
+    public Integer call() {
+        if (to != null && from == null) {
+            throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state)");
+        }
+        if (start != null && from != null) {
+            throw new ParameterException(spec.commandLine(), "--start and --from both name the starting state; give one");
+        }
+        if (output.format == OutputFormat.CSV) {
+            throw new ParameterException(spec.commandLine(),
+                "--format csv is not available for closed forms; use text, json, latex or markdown");
+        }
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
+        ClosedResult result = ClosedRun.compute(this);
+        Emitter.emit(spec, ClosedFormatter.format(result, output.format), result.warnings(), output.output());
+        return ExitCodes.OK;
+    }
+}

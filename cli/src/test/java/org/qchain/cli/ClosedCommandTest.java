@@ -1,0 +1,113 @@
+package org.qchain.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.junit.jupiter.api.Test;
+
+/**
+ * {@code qchain closed}: exact output in every format against golden files in
+ * {@code src/test/resources/golden/closed/}, and the usage errors. The layouts are our own (common practice, no
+ * source; JSON RFC 8259, the shape named in issue 4 of this project). The formula in them is the standard two-state
+ * closed form P^n(Lit -> Lit) = (b + a (1 - a - b)^n)/(a + b) (Grinstead and Snell, Introduction to Probability,
+ * ch. 11, from memory), whose agreement with exact powers the symbolic module's tests check.
+ *
+ * <p>After an intended change of layout, regenerate with {@code mvn -pl cli test -Dtest=ClosedCommandTest
+ * -Dqchain.updateGolden=true} and review the diff before committing.
+ */
+class ClosedCommandTest {
+    private static final Path GOLDEN = Path.of("src/test/resources/golden/closed");
+    private static final String BEACON = Cli.model("beacon.chain");
+
+    record Case(String file, List<String> args) {
+        @Override
+        public String toString() {
+            return file;
+        }
+    }
+
+    static Stream<Case> cases() {
+        List<Case> out = new ArrayList<>();
+        for (String f : new String[] {"text", "json", "markdown", "latex"}) {
+            String ext = f.equals("text") ? "txt" : f.equals("markdown") ? "md" : f.equals("latex") ? "tex" : f;
+            out.add(new Case("matrix." + ext, List.of(BEACON, "--format", f)));
+            out.add(new Case("row." + ext, List.of(BEACON, "--start", "Lit", "--format", f)));
+            out.add(new Case("entry." + ext, List.of(BEACON, "--from", "Lit", "--to", "Dark", "--format", f)));
+            out.add(new Case("gf." + ext, List.of(BEACON, "--form", "gf", "--from", "Lit", "--to", "Lit", "--format", f)));
+            out.add(new Case("recurrence." + ext, List.of(BEACON, "--form", "recurrence", "--from", "Lit", "--format", f)));
+        }
+        // a is given, b keeps its nominal value 1/2 for the numeric rate
+        out.add(new Case("at.txt", List.of(BEACON, "--at", "a=1/10", "--from", "Lit")));
+        // numeric chains: a Jordan block (binomial terms) and a period-2 chain
+        out.add(new Case("jordan.json", List.of(Cli.model("closed-jordan.chain"), "--format", "json")));
+        out.add(new Case("periodic.txt", List.of(Cli.model("closed-periodic.chain"))));
+        return out.stream();
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("cases")
+    void closedOutputMatchesGolden(Case c) throws IOException {
+        List<String> args = new ArrayList<>(List.of("closed"));
+        args.addAll(c.args());
+        Cli.Result r = Cli.run(args.toArray(new String[0]));
+        assertEquals(0, r.code(), r::toString);
+        assertEquals("", r.err(), "stderr carries nothing on success");
+        Path golden = GOLDEN.resolve(c.file());
+        if (Boolean.getBoolean("qchain.updateGolden")) {
+            Files.createDirectories(GOLDEN);
+            Files.writeString(golden, r.out(), StandardCharsets.UTF_8);
+        }
+        assertEquals(Files.readString(golden, StandardCharsets.UTF_8), r.out(), c.file());
+    }
+
+    @Test
+    void jsonHasTheDocumentedShape() {
+        Cli.Result r = Cli.run("closed", BEACON, "--format", "json");
+        assertEquals(0, r.code(), r::toString);
+        assertTrue(r.out().startsWith("{\"n_symbol\":\"n\",\"valid_from\":0,\"conditions\":[\"a + b != 0\"],"
+            + "\"states\":[\"Lit\",\"Dark\"],\"matrix\":[[\"b/(a + b) + a/(a + b)*(1 - a - b)^n\","), r.out());
+        Cli.Result e = Cli.run("closed", BEACON, "--from", "Lit", "--to", "Lit", "--format", "json");
+        assertTrue(e.out().contains("\"from\":\"Lit\",\"to\":\"Lit\",\"formula\":\"b/(a + b) + a/(a + b)*(1 - a - b)^n\""),
+            e.out());
+    }
+
+    private static void assertUsage(String message, String... args) {
+        Cli.Result r = Cli.run(args);
+        assertEquals(2, r.code(), r::toString);
+        assertEquals("", r.out());
+        assertEquals("qchain: " + message, r.errLines()[0], r::toString);
+        assertTrue(!r.err().contains("\tat "), "no stack trace");
+    }
+
+    @Test
+    void badOptionsAreUsageErrors() {
+        assertUsage("--to needs --from (the starting state)", "closed", BEACON, "--to", "Lit");
+        assertUsage("--start and --from both name the starting state; give one", "closed", BEACON, "--start", "Lit",
+            "--from", "Dark");
+        assertUsage("invalid --from 'Gone': not a state of " + BEACON + " (states: Lit, Dark)", "closed", BEACON,
+            "--from", "Gone");
+        assertUsage("--format csv is not available for closed forms; use text, json, latex or markdown", "closed",
+            BEACON, "--format", "csv");
+        assertUsage("Invalid value for option '--form': 'series' is not a form; use matrix, gf or recurrence",
+            "closed", BEACON, "--form", "series");
+        assertUsage("invalid --at 'a=2': value 2 of parameter 'a' is outside its domain (0, 1)", "closed", BEACON,
+            "--at", "a=2");
+        assertUsage("this is a continuous chain; closed forms in n are for discrete-time chains", "closed",
+            Cli.model("continuous.chain"));
+    }
+
+    @Test
+    void hugeInputIsRefusedWithTheEstimate() {
+        assertUsage("the symbolic P^2 would have up to about 24 polynomial terms in total (entries of degree up to 2),"
+            + " more than the limit 3; raise it with --max-terms", "closed", BEACON, "--max-terms", "3");
+    }
+}
