@@ -516,7 +516,9 @@ public final class ClosedForm {
         if (g.kind == Spectral.Kind.QUADRATIC) {
             if (ParamField.isConstant(g.delta) && ParamField.constantValue(g.delta).signum() < 0) {
                 // a complex pair for every parameter value: both roots have modulus sqrt(l1 l2) = sqrt(a_0)
-                return Fml.call("sqrt", field.formula(g.coeffs[0]));
+                Quotient<BigRational>[] root = Radicals.split(field, g.coeffs[0]);
+                boolean square = root[1].isONE();
+                return square ? field.formula(root[0]) : Fml.prod(field.formula(root[0]), Fml.call("sqrt", field.formula(root[1])));
             }
             List<Fml> r = quadraticRoots(g);
             return Fml.call("max", Fml.call("abs", r.get(0)), Fml.call("abs", r.get(1)));

@@ -178,7 +178,7 @@ class ClosedFormTest {
         ClosedForm cf = ClosedForms.of(m);
         assertEquals(1, cf.validFrom());
         assertTrue(cf.longRun().converges());
-        assertEquals("sqrt(1/2)", cf.longRun().rate());
+        assertEquals("1/2*sqrt(2)", cf.longRun().rate());
         assertEquals(List.of("1/2 + 1/2*sqrt(-1)", "1/2 - 1/2*sqrt(-1)"), cf.eigenvalues().get(2).values());
         Chains.assertMatchesPowers(cf, m, List.of(Map.of()), 10);
     }
