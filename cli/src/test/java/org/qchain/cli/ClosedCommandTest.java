@@ -50,6 +50,14 @@ class ClosedCommandTest {
         // numeric chains: a Jordan block (binomial terms) and a period-2 chain
         out.add(new Case("jordan.json", List.of(Cli.model("closed-jordan.chain"), "--format", "json")));
         out.add(new Case("periodic.txt", List.of(Cli.model("closed-periodic.chain"))));
+        // an irreducible quadratic factor (square roots) in every format, and a named cubic with numeric roots
+        for (String f : new String[] {"text", "json", "markdown", "latex"}) {
+            String ext = f.equals("text") ? "txt" : f.equals("markdown") ? "md" : f.equals("latex") ? "tex" : f;
+            out.add(new Case("quadratic." + ext, List.of(Cli.model("closed-stages.chain"), "--from", "Working",
+                "--to", "Fixing", "--format", f)));
+        }
+        out.add(new Case("cubic.txt", List.of(Cli.model("closed-cubic.chain"), "--from", "Run", "--to", "Run",
+            "--digits", "15")));
         return out.stream();
     }
 

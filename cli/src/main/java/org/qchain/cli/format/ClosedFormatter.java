@@ -270,9 +270,9 @@ public final class ClosedFormatter {
             }
         }
         r.longRun().ifPresent(lr -> {
-            sb.append("\nLong run: ").append(lr.period() == 1 ? "P^n converges as n grows; its limit"
+            sb.append("\nLong run: ").append(lr.period() == 1 ? "P^n converges as n grows; its limit:"
                 : "periodic with period " + lr.period() + "; the limits of P^(" + lr.period() + "m + r)");
-            sb.append(".\n\n| ").append(lr.period() > 1 ? "r | " : "").append("from | to | limit |\n| ")
+            sb.append(lr.period() == 1 ? "\n\n| " : ":\n\n| ").append(lr.period() > 1 ? "r | " : "").append("from | to | limit |\n| ")
                 .append(lr.period() > 1 ? "--- | " : "").append("--- | --- | --- |\n");
             for (int k = 0; k < lr.limits().size(); k++) {
                 for (int i = 0; i < r.rows().size(); i++) {
