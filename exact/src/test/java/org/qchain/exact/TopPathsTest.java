@@ -68,6 +68,25 @@ class TopPathsTest {
         assertEquals(all.subList(0, Math.min(k, all.size())), top);
     }
 
+    // common practice, no source: without the backward pruning (used for very long paths) the result is the same
+    @Property(seed = "4343", tries = 30)
+    void sameWithoutPruning(@ForAll @LongRange(min = 0, max = 1_000_000) long seed,
+            @ForAll @IntRange(min = 1, max = 4) int size, @ForAll @IntRange(min = 1, max = 7) int n,
+            @ForAll @IntRange(min = 1, max = 12) int k) {
+        Random rnd = new Random(seed);
+        RationalMatrix p = RandomChains.stochastic(rnd, size, 4, 0.5);
+        int from = rnd.nextInt(size);
+        int to = rnd.nextInt(size);
+        List<WeightedPath> all = bruteForce(p, from, to, n);
+        long saved = TopPaths.maxPruningBits;
+        TopPaths.maxPruningBits = 0;
+        try {
+            assertEquals(all.subList(0, Math.min(k, all.size())), TopPaths.mostProbable(p, from, to, n, k));
+        } finally {
+            TopPaths.maxPruningBits = saved;
+        }
+    }
+
     // common practice, no source: the paths are disjoint events inside "at state to after n steps", so their
     // probabilities sum to at most the n-step entry, and to exactly it when K covers all paths
     @Property(seed = "8", tries = 30)
