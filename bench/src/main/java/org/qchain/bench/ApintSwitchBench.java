@@ -55,6 +55,8 @@ public class ApintSwitchBench {
 
     /** Three states, n = 700,000 (entries of about 2.1 million digits), apfloat where the thresholds say. */
     @Benchmark
+    @Warmup(iterations = 0)
+    @Measurement(iterations = 2)
     @Fork(value = 1, jvmArgsAppend = "-Dqchain.exact.apint=auto")
     public RationalMatrix threeStateN700kAuto() {
         return MatrixPowers.power(threeState, 700_000);
@@ -62,6 +64,8 @@ public class ApintSwitchBench {
 
     /** Three states, n = 700,000, BigInteger only. */
     @Benchmark
+    @Warmup(iterations = 0)
+    @Measurement(iterations = 2)
     @Fork(value = 1, jvmArgsAppend = "-Dqchain.exact.apint=never")
     public RationalMatrix threeStateN700kBigIntegerOnly() {
         return MatrixPowers.power(threeState, 700_000);
