@@ -32,6 +32,12 @@ final class KnownDenominator {
     private final BigInteger composite;
     private final Map<List<Long>, BigInteger> reducedDenominators = new HashMap<>();
     private BigInteger full;
+    /**
+     * For each odd prime below 2^62 the window {@code p^c} ({@code c} the largest exponent with {@code p^c < 2^62},
+     * at most the cap), else {@code null}; {@link #window} is their product, or zero if there is none.
+     */
+    private final BigInteger[] windowPowers;
+    private final BigInteger window;
 
     private KnownDenominator(BigInteger base, long n, BigInteger[] primes, long[] caps, BigInteger composite) {
         this.base = base;
@@ -39,6 +45,18 @@ final class KnownDenominator {
         this.primes = primes;
         this.caps = caps;
         this.composite = composite;
+        this.windowPowers = new BigInteger[primes.length];
+        BigInteger q = BigInteger.ONE;
+        for (int i = 0; i < primes.length; i++) {
+            BigInteger p = primes[i];
+            if (p.equals(BigInteger.TWO) || p.bitLength() > 62 || caps[i] == 0) {
+                continue;
+            }
+            int c = Math.max(1, (int) Math.min(caps[i], 62 / p.bitLength()));
+            windowPowers[i] = p.pow(c);
+            q = q.multiply(windowPowers[i]);
+        }
+        this.window = q.equals(BigInteger.ONE) ? BigInteger.ZERO : q;
     }
 
     /**
@@ -128,35 +146,81 @@ final class KnownDenominator {
         Long[] removed = new Long[primes.length];
         BigInteger y = x;
         boolean any = false;
+        // One remainder by the window product Q gives every valuation below its window (x = r mod p^c); only a
+        // prime whose window is exhausted (p^c divides x) needs the stepwise strip.
+        BigInteger r = window.signum() == 0 || x.bitLength() < window.bitLength() ? x.abs() : x.abs().mod(window);
+        BigInteger g = BigInteger.ONE;
+        int twos = 0;
+        boolean[] exhausted = new boolean[primes.length];
         for (int i = 0; i < primes.length; i++) {
-            BigInteger[] holder = {y};
-            long v = strip(holder, primes[i], caps[i]);
-            y = holder[0];
+            long v;
+            if (primes[i].equals(BigInteger.TWO)) {
+                v = Math.min(x.getLowestSetBit(), caps[i]);
+                twos = (int) v;
+            } else if (windowPowers[i] == null) {
+                v = 0;
+                exhausted[i] = true;
+            } else {
+                long w = r.mod(windowPowers[i]).longValue();
+                if (w == 0) {
+                    v = 0;
+                    exhausted[i] = true;
+                } else {
+                    long pl = primes[i].longValue();
+                    v = 0;
+                    while (w % pl == 0) {
+                        w /= pl;
+                        v++;
+                    }
+                    if (v > 0) {
+                        g = g.multiply(primes[i].pow((int) v));
+                    }
+                }
+            }
             removed[i] = v;
             any |= v != 0;
         }
+        if (twos > 0) {
+            y = y.shiftRight(twos);
+        }
+        if (!g.equals(BigInteger.ONE)) {
+            y = y.divide(g);
+        }
+        for (int i = 0; i < primes.length; i++) {
+            if (exhausted[i]) {
+                BigInteger[] holder = {y};
+                long v = strip(holder, primes[i], caps[i]);
+                y = holder[0];
+                removed[i] = v;
+                any |= v != 0;
+            }
+        }
         List<Long> key = Arrays.asList(removed);
         BigInteger den = any ? reducedDenominators.computeIfAbsent(key, k -> partialDenominator(removed)) : value();
-        if (composite != null) {
-            // all factors of the composite part are above the trial limit; an ordinary gcd on what is left
-            BigInteger g = y.gcd(den);
-            if (!g.equals(BigInteger.ONE)) {
-                y = y.divide(g);
-                den = den.divide(g);
+        if (composite != null && !y.gcd(composite).equals(BigInteger.ONE)) {
+            // y shares a factor with the composite part (all of whose factors are above the trial limit): an
+            // ordinary gcd on what is left. The test before it costs one remainder by the small composite.
+            BigInteger common = y.gcd(den);
+            if (!common.equals(BigInteger.ONE)) {
+                y = y.divide(common);
+                den = den.divide(common);
             }
         }
         return Rational.ofReduced(y, den);
     }
 
+    /**
+     * {@code d^n / prod p^v}: one division by the removed part, which is small in the usual case (linear time),
+     * instead of rebuilding {@code d^n} from prime powers for every pattern of removed factors.
+     */
     private BigInteger partialDenominator(Long[] removed) {
-        BigInteger r = composite == null ? BigInteger.ONE : BigMath.pow(composite, Math.toIntExact(n));
+        BigInteger g = BigInteger.ONE;
         for (int i = 0; i < primes.length; i++) {
-            long e = caps[i] - removed[i];
-            if (e > 0) {
-                r = r.multiply(BigMath.pow(primes[i], Math.toIntExact(e)));
+            if (removed[i] > 0) {
+                g = g.multiply(BigMath.pow(primes[i], Math.toIntExact(removed[i])));
             }
         }
-        return r;
+        return value().divide(g);
     }
 
     /**

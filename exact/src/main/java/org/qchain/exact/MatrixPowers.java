@@ -202,6 +202,14 @@ public final class MatrixPowers {
      */
     static BigInteger[] vectorSteps(IntMatrix a, int from, long n, Progress progress) {
         Thread caller = Thread.currentThread();
+        if (Limbs.smallNonNegative(a)) {
+            return Limbs.vectorSteps(a, from, n, progress, caller);
+        }
+        return vectorStepsBig(a, from, n, progress, caller);
+    }
+
+    /** {@link #vectorSteps} on {@link BigInteger}s, for matrices with negative or large entries. */
+    static BigInteger[] vectorStepsBig(IntMatrix a, int from, long n, Progress progress, Thread caller) {
         BigInteger[] v = a.e[from];
         int[] idx = a.nz[from];
         long stride = Math.max(1, n / 1000);
@@ -216,23 +224,68 @@ public final class MatrixPowers {
         return v;
     }
 
-    /** {@code A^n}, {@code n >= 1}, left to right over the bits of {@code n}. */
+    /**
+     * {@code A^n}, {@code n >= 1}, left to right over the bits of {@code n}. Short non-negative entries are
+     * multiplied on limb arrays ({@link LimbMatrix}); past {@link LimbMatrix#MAX_LIMBS} limbs on {@link BigInteger}
+     * ({@link IntMatrix}); past {@link BigMath#matrixApintBits} bits the remaining squarings run on apfloat (one
+     * conversion in, one out).
+     */
     static IntMatrix integerPower(IntMatrix a, long n, Progress progress) {
         Thread caller = Thread.currentThread();
         int top = 63 - Long.numberOfLeadingZeros(n);
         long total = top + Long.bitCount(n) - 1L;
         long done = 0;
+        // three representations as the entries grow: limb arrays (short, non-negative), BigInteger, apfloat
+        LimbMatrix small = null;
+        LimbMatrix smallA = null;
+        if (limbPath && Limbs.smallNonNegative(a)) {
+            small = LimbMatrix.of(a);
+            smallA = small;
+        }
         IntMatrix r = a;
+        ApintMatrix big = null;
+        ApintMatrix bigA = null;
         for (int bit = top - 1; bit >= 0; bit--) {
-            r = r.multiply(r, caller);
-            progress.update("squaring", ++done, total);
-            if ((n >>> bit & 1) != 0) {
-                r = r.multiply(a, caller);
+            boolean multiply = (n >>> bit & 1) != 0;
+            if (small != null && small.maxLimbs() > LimbMatrix.MAX_LIMBS) {
+                r = small.toIntMatrix();
+                small = null;
+            }
+            if (small == null && big == null && r.maxBits() >= BigMath.matrixApintBits) {
+                big = ApintMatrix.of(r, caller);
+                bigA = ApintMatrix.of(a, caller);
+            }
+            if (small != null) {
+                small = small.multiply(small, caller);
                 progress.update("squaring", ++done, total);
+                if (multiply) {
+                    small = small.multiply(smallA, caller);
+                    progress.update("squaring", ++done, total);
+                }
+            } else if (big != null) {
+                big = big.multiply(big, caller);
+                progress.update("squaring", ++done, total);
+                if (multiply) {
+                    big = big.multiply(bigA, caller);
+                    progress.update("squaring", ++done, total);
+                }
+            } else {
+                r = r.multiply(r, caller);
+                progress.update("squaring", ++done, total);
+                if (multiply) {
+                    r = r.multiply(a, caller);
+                    progress.update("squaring", ++done, total);
+                }
             }
         }
-        return r;
+        if (small != null) {
+            return small.toIntMatrix();
+        }
+        return big == null ? r : big.toIntMatrix(caller);
     }
+
+    /** Tests switch the limb path off to compare it with the BigInteger path. */
+    static volatile boolean limbPath = true;
 
     /**
      * Whether {@code n} vector steps are cheaper than squaring: a cost model in word multiplications. Step {@code t}

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
+import java.math.BigInteger;
 import java.util.Random;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
@@ -70,8 +71,9 @@ class MatrixPowersIdentityTest {
         Random rnd = new Random(seed);
         CommonDenominatorForm f = CommonDenominatorForm.of(RandomChains.stochastic(rnd, size, 40, 0.5));
         int from = rnd.nextInt(size);
-        assertArrayEquals(MatrixPowers.integerPower(f.a, n, Progress.NONE).e[from],
-                MatrixPowers.vectorSteps(f.a, from, n, Progress.NONE));
+        BigInteger[] bySquaring = MatrixPowers.integerPower(f.a, n, Progress.NONE).e[from];
+        assertArrayEquals(bySquaring, MatrixPowers.vectorSteps(f.a, from, n, Progress.NONE));
+        assertArrayEquals(bySquaring, MatrixPowers.vectorStepsBig(f.a, from, n, Progress.NONE, Thread.currentThread()));
     }
 
     // common practice, no source: P^0 = I, P^1 = P
