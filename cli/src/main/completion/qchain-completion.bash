@@ -339,7 +339,7 @@ function _picocli_qchain_check() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'-h' '--help' '-V' '--version'"
+  local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
   local arg_opts="'--at' '--digits'"
 
   type compopt &>/dev/null && compopt +o default

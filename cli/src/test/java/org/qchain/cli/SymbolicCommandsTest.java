@@ -49,6 +49,7 @@ class SymbolicCommandsTest {
             out.add(new Case("sens-sweep." + ext, List.of("sens", FREE, "-n", "3", "--from", "Up", "--to", "Down",
                 "--wrt", "p", "--at", "p=1/20", "--sweep", "p=0:1/100:1/20", "--format", f)));
         }
+        out.add(new Case("check.txt", List.of("check", FREE)));
         out.add(new Case("step-matrix-at.json", List.of("step", FREE, "-n", "2", "--at", "p=1/20", "--format", "json")));
         out.add(new Case("sens-formula.txt", List.of("sens", FREE, "-n", "2", "--from", "Worn", "--to", "Up", "--wrt",
             "r")));
@@ -168,10 +169,14 @@ class SymbolicCommandsTest {
         Path bad = Files.createTempFile("pump-bad", ".chain");
         try {
             Files.writeString(bad, Files.readString(Path.of(NOMINAL)).replace("= 1/20", "= 4/5"));
-            Cli.Result r = Cli.run("step", bad.toString(), "-n", "2", "--symbolic");
-            assertEquals(2, r.code(), r::toString);
-            assertEquals("qchain: " + bad + ":8:1: Worn->Worn is 1 - p - r: needs p + r <= 1; fails near p=1, r=1"
-                + " (a corner of the domain); the nominal values p=4/5, r=1/4 break it (Worn->Worn = -1/20)\n", r.err());
+            for (String cmd : List.of("step", "check")) {
+                Cli.Result r = cmd.equals("step") ? Cli.run("step", bad.toString(), "-n", "2", "--symbolic")
+                    : Cli.run("check", bad.toString(), "--symbolic");
+                assertEquals(2, r.code(), r::toString);
+                assertEquals("qchain: " + bad + ":8:1: Worn->Worn is 1 - p - r: needs p + r <= 1; fails near p=1,"
+                    + " r=1 (a corner of the domain); the nominal values p=4/5, r=1/4 break it (Worn->Worn = -1/20)\n",
+                    r.err(), cmd);
+            }
         } finally {
             Files.delete(bad);
         }
