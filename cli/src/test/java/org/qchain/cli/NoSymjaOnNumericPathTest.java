@@ -50,7 +50,7 @@ class NoSymjaOnNumericPathTest {
         return urls.toArray(new URL[0]);
     }
 
-    private static Set<String> classesRequestedBy(String... args) throws Exception {
+    static Set<String> classesRequestedBy(String... args) throws Exception {
         try (RecordingLoader loader = new RecordingLoader(testClassPath())) {
             Class<?> root = loader.loadClass("org.qchain.cli.QchainCommand");
             Object cl = root.getMethod("newCommandLine", boolean.class).invoke(null, false);

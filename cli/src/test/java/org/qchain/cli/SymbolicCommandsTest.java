@@ -182,6 +182,20 @@ class SymbolicCommandsTest {
         }
     }
 
+    @Test
+    void symbolicPathUsesJasButNeverLoadsSymjasEvaluator() throws Exception {
+        // our arithmetic and printing are JAS and our own code: Symja (about a second to start) stays unloaded
+        for (String[] args : List.of(new String[] {"step", FREE, "-n", "3", "--factor", "--format", "latex"},
+            new String[] {"sens", FREE, "-n", "3", "--from", "Up", "--to", "Down", "--wrt", "p", "--at", "p=1/20"},
+            new String[] {"check", FREE})) {
+            java.util.Set<String> loaded = NoSymjaOnNumericPathTest.classesRequestedBy(args);
+            assertTrue(loaded.contains("org.qchain.symbolic.RatFunMatrix"), args[0]);
+            for (String name : loaded) {
+                assertTrue(!name.startsWith("org.matheclipse."), () -> args[0] + " loaded " + name);
+            }
+        }
+    }
+
     private static String[] concat(String[] a, String... b) {
         String[] out = java.util.Arrays.copyOf(a, a.length + b.length);
         System.arraycopy(b, 0, out, a.length, b.length);
