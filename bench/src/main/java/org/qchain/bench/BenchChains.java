@@ -14,10 +14,10 @@ public final class BenchChains {
     }
 
     /** Divisors of 240 that are at least 20: row denominators of the dense case with common denominator 240. */
-    static final int[] DIVISORS_OF_240 = {20, 24, 30, 40, 48, 60, 80, 120, 240};
+    public static final int[] DIVISORS_OF_240 = {20, 24, 30, 40, 48, 60, 80, 120, 240};
 
     /** Row denominators of decimal probabilities with one to three decimals. */
-    static final int[] DECIMAL_DENOMINATORS = {10, 20, 50, 100, 1000};
+    public static final int[] DECIMAL_DENOMINATORS = {10, 20, 50, 100, 1000};
 
     /**
      * A dense chain: every row picks a denominator from {@code dens} and splits it into {@code size} positive parts.

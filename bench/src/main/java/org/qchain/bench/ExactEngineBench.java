@@ -23,8 +23,8 @@ import org.qchain.exact.RationalMatrix;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Warmup(iterations = 2, time = 2)
-@Measurement(iterations = 3, time = 3)
+@Warmup(iterations = 2, time = 1)
+@Measurement(iterations = 3, time = 2)
 @Fork(1)
 public class ExactEngineBench {
     RationalMatrix dense20;

@@ -25,8 +25,8 @@ import org.openjdk.jmh.annotations.Warmup;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Warmup(iterations = 2, time = 1)
-@Measurement(iterations = 3, time = 2)
+@Warmup(iterations = 1, time = 1)
+@Measurement(iterations = 3, time = 1)
 @Fork(1)
 public class MultiplyBench {
     /** Decimal digits of each operand (and of the power's result). */

@@ -1,10 +1,13 @@
 package org.qchain.cli;
 
 import java.util.List;
+import java.util.Optional;
+import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import org.qchain.cli.format.OutputFormat;
 import org.qchain.cli.result.StepResult;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
@@ -48,13 +51,14 @@ final class CheckCommand implements Callable<Integer> {
         LoadedChain chain = LoadedChain.load(parsed, model, spec.name());
         RationalMatrix p = chain.p();
         verifyStochastic(chain, p);
+        // one step needs no size guard: the result is the model itself
         StepResult.Matrix m = (StepResult.Matrix) Stepper.compute(chain,
-            new Stepper.Query(1, java.util.Optional.empty(), java.util.Optional.empty(),
-                java.util.OptionalInt.empty(), digits, Long.MAX_VALUE), org.qchain.exact.Progress.NONE);
+            new Stepper.Query(1, Optional.empty(), Optional.empty(), OptionalInt.empty(), digits, Long.MAX_VALUE),
+            Progress.NONE);
         int size = chain.states().size();
         String ok = "OK: " + size + (size == 1 ? " state" : " states") + ", " + chain.model().kind().word()
             + ", rows sum to 1\n";
-        Emitter.emit(spec, OutputFormat.TEXT.formatter().format(m) + ok, List.of(), java.util.Optional.empty());
+        Emitter.emit(spec, OutputFormat.TEXT.formatter().format(m) + ok, List.of(), Optional.empty());
         return ExitCodes.OK;
     }
 

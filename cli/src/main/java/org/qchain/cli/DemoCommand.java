@@ -11,6 +11,8 @@ import java.util.concurrent.Callable;
 import org.qchain.cli.format.OutputFormat;
 import org.qchain.cli.io.AtomicFiles;
 import org.qchain.cli.result.StepResult;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -37,13 +39,18 @@ final class DemoCommand implements Callable<Integer> {
     QchainCommand root;
 
     @Option(names = "--save-model", paramLabel = "FILE",
-        description = "Write the bundled example model to FILE (atomically) and stop.")
+        description = "Write the bundled example model to FILE (a new file) and stop.")
     Path saveModel;
 
     @Override
     public Integer call() throws IOException {
         String text = LoadedChain.resource("examples/" + EXAMPLE);
         if (saveModel != null) {
+            if (Files.exists(saveModel)) {
+                // the user may have edited an earlier copy: never overwrite it
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "--save-model", saveModel,
+                    "the file exists; choose another name");
+            }
             AtomicFiles.write(saveModel, "--save-model", text);
             spec.commandLine().getErr().println("qchain: wrote the example model to " + saveModel);
             return ExitCodes.OK;

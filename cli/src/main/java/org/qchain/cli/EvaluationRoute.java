@@ -13,8 +13,10 @@ import org.qchain.exact.model.Model;
 /**
  * The one place that decides how a model is evaluated. Today every route is numeric: all parameters need a value
  * (nominal or from {@code --at}; declared but unused parameters need none), otherwise the model is refused with {@link ErrorKey#FREE_PARAMETERS}. Symbolic
- * output extends this: add a {@code Symbolic} route here and let the commands dispatch on it, keeping the symbolic
- * classes out of the numeric path (numeric commands must not load Symja).
+ * output extends this: add a {@code Symbolic} record to {@link Route}, return it from {@link #decide} for free
+ * parameters, and dispatch on it where {@code LoadedChain.evaluate} now takes the numeric route, calling the symbolic
+ * code through a class of its own that only that branch references (the JVM loads classes lazily, so numeric runs
+ * still never load Symja; {@code NoSymjaOnNumericPathTest} checks it).
  */
 final class EvaluationRoute {
     private EvaluationRoute() {

@@ -8,8 +8,10 @@ import org.qchain.cli.result.Entry;
 import org.qchain.cli.result.ExactValue;
 import org.qchain.cli.result.StepResult;
 import org.qchain.exact.Decimals;
+import org.qchain.exact.ErrorKey;
 import org.qchain.exact.MatrixPowers;
 import org.qchain.exact.Progress;
+import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.SizeEstimate;
@@ -47,7 +49,7 @@ final class Stepper {
      * @param q        the query
      * @param progress told about long work; may throw to stop it
      * @return the result value
-     * @throws org.qchain.exact.QchainException for an unknown state, a result past the size limit, an interruption
+     * @throws QchainException for an unknown state, a result past the size limit, an interruption
      */
     static StepResult compute(LoadedChain chain, Query q, Progress progress) {
         RationalMatrix p = chain.p();
@@ -83,7 +85,7 @@ final class Stepper {
                                                    List<String> warnings, Progress progress) {
         int k = q.paths().getAsInt();
         if (q.n() > Integer.MAX_VALUE) {
-            throw new org.qchain.exact.QchainException(org.qchain.exact.ErrorKey.BAD_ARGUMENT, "-n", q.n(),
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, "-n", q.n(),
                 "--paths needs n at most " + Integer.MAX_VALUE);
         }
         List<StepResult.PathLine> out = new ArrayList<>();

@@ -1,6 +1,7 @@
 package org.qchain.cli;
 
 import java.io.PrintWriter;
+import java.util.function.LongSupplier;
 import org.qchain.exact.Progress;
 
 /**
@@ -14,7 +15,7 @@ final class TerminalProgress implements Progress {
 
     private final PrintWriter err;
     private final boolean show;
-    private final java.util.function.LongSupplier clock;
+    private final LongSupplier clock;
     private final long start;
     private long last = Long.MIN_VALUE;
     private int shownWidth;
@@ -28,7 +29,7 @@ final class TerminalProgress implements Progress {
     }
 
     /** With a clock in nanoseconds, for tests. */
-    TerminalProgress(PrintWriter err, boolean show, java.util.function.LongSupplier clock) {
+    TerminalProgress(PrintWriter err, boolean show, LongSupplier clock) {
         this.err = err;
         this.show = show;
         this.clock = clock;

@@ -77,4 +77,14 @@ class CheckAndDemoTest {
         assertEquals(Files.readString(EXAMPLE), Files.readString(copy));
         assertEquals(0, Cli.run("check", copy.toString()).code());
     }
+
+    @Test
+    void demoNeverOverwritesAnExistingFile(@TempDir Path dir) throws IOException {
+        Path mine = dir.resolve("mine.chain");
+        Files.writeString(mine, "my edits\n");
+        Cli.Result r = Cli.run("demo", "--save-model", mine.toString());
+        assertEquals(2, r.code(), r::toString);
+        assertEquals("qchain: invalid --save-model '" + mine + "': the file exists; choose another name\n", r.err());
+        assertEquals("my edits\n", Files.readString(mine));
+    }
 }

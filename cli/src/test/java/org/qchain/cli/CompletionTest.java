@@ -9,7 +9,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 
-/** The bash completion script comes from the command definitions, and the committed copy is current. */
+/**
+ * The bash completion script comes from the command definitions (picocli's AutoComplete), and the committed copy is
+ * current; common practice, no source.
+ */
 class CompletionTest {
     /** The committed copy; regenerate with: ./qchain completion > cli/src/main/completion/qchain-completion.bash */
     private static final Path COMMITTED = Path.of("src/main/completion/qchain-completion.bash");

@@ -25,8 +25,12 @@ class GoldenOutputTest {
     private static final Path GOLDEN = Path.of("src/test/resources/golden");
     private static final String MODEL = Cli.model("plant.chain");
 
-    /** One golden case: the file name and the arguments after {@code step MODEL -n 4}. */
-    record Case(String file, List<String> args) {
+    /** One golden case: the file name, the model and the arguments after {@code step MODEL -n 4}. */
+    record Case(String file, String model, List<String> args) {
+        Case(String file, List<String> args) {
+            this(file, MODEL, args);
+        }
+
         @Override
         public String toString() {
             return file;
@@ -44,13 +48,15 @@ class GoldenOutputTest {
                 "--format", f)));
         }
         out.add(new Case("step-matrix-digits5.txt", List.of("--digits", "5")));
+        // six states at 20 digits: the decimal overview is split into column blocks of at most 100 characters
+        out.add(new Case("step-matrix-wide.txt", Cli.model("depot.chain"), List.of("--digits", "20")));
         return out.stream();
     }
 
     @ParameterizedTest(name = "{0}")
     @MethodSource("cases")
     void stepOutputMatchesGolden(Case c) throws IOException {
-        List<String> args = new ArrayList<>(List.of("step", MODEL, "-n", "4"));
+        List<String> args = new ArrayList<>(List.of("step", c.model(), "-n", "4"));
         args.addAll(c.args());
         Cli.Result r = Cli.run(args.toArray(new String[0]));
         assertEquals(0, r.code(), r::toString);

@@ -7,7 +7,10 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.junit.jupiter.api.Test;
 
-/** Every help lists the exit codes and ends with the safety caution; {@code --version} prints the build version. */
+/**
+ * Every help lists the exit codes and ends with the safety caution; {@code --version} prints the build version. The
+ * texts are the project's own (common practice, no source).
+ */
 class HelpAndVersionTest {
     /** The caution as picocli wraps it at 80 columns. */
     private static final String CAUTION_WRAPPED = "Caution: results are only as good as the model; safety-critical"

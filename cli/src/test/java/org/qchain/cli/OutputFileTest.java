@@ -12,7 +12,10 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** {@code --output}: written atomically, never over the model, a clear one-line error when it cannot be written. */
+/**
+ * {@code --output}: written atomically, never over the model, a clear one-line error when it cannot be written. The
+ * rules are the project's (common practice, no source).
+ */
 class OutputFileTest {
     private static final String MODEL = Cli.model("plant.chain");
 

@@ -126,6 +126,22 @@ class StepValuesTest {
     }
 
     @Test
+    void warningsGoToStderrAndIntoTheJsonArrayButNotIntoOtherStdout() {
+        // by hand: the only 2-step path from Up to Down is Up -> Worn -> Down, so 3 paths cannot be listed
+        String warning = "only 1 path of 2 steps leads from Up to Down; --paths asked for 3";
+        Cli.Result json = Cli.run("step", PLANT, "-n", "2", "--from", "Up", "--to", "Down", "--paths", "3",
+            "--format", "json");
+        assertEquals(0, json.code(), json::toString);
+        assertEquals("qchain: warning: " + warning + "\n", json.err());
+        assertTrue(json.out().endsWith(",\"warnings\":[\"" + warning + "\"]}\n"), json::toString);
+        Cli.Result csv = Cli.run("step", PLANT, "-n", "2", "--from", "Up", "--to", "Down", "--paths", "3",
+            "--format", "csv");
+        assertEquals("qchain: warning: " + warning + "\n", csv.err());
+        assertEquals("rank,probability,decimal,share,percent,path\r\n"
+            + "1,3/2000,0.00150000000000,1,100,Up Worn Down\r\n", csv.out());
+    }
+
+    @Test
     void zeroStepsIsTheIdentity() {
         assertEquals(RationalMatrix.identity(3), matrixOf(json("step", PLANT, "-n", "0", "--format", "json")));
     }

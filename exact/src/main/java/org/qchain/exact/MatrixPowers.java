@@ -225,24 +225,44 @@ public final class MatrixPowers {
     }
 
     /**
-     * {@code A^n}, {@code n >= 1}, left to right over the bits of {@code n}. Once the entries pass
-     * {@link BigMath#matrixApintBits} the remaining squarings run on apfloat (one conversion in, one out).
+     * {@code A^n}, {@code n >= 1}, left to right over the bits of {@code n}. Short non-negative entries are
+     * multiplied on limb arrays ({@link LimbMatrix}); past {@link LimbMatrix#MAX_LIMBS} limbs on {@link BigInteger}
+     * ({@link IntMatrix}); past {@link BigMath#matrixApintBits} bits the remaining squarings run on apfloat (one
+     * conversion in, one out).
      */
     static IntMatrix integerPower(IntMatrix a, long n, Progress progress) {
         Thread caller = Thread.currentThread();
         int top = 63 - Long.numberOfLeadingZeros(n);
         long total = top + Long.bitCount(n) - 1L;
         long done = 0;
+        // three representations as the entries grow: limb arrays (short, non-negative), BigInteger, apfloat
+        LimbMatrix small = null;
+        LimbMatrix smallA = null;
+        if (limbPath && Limbs.smallNonNegative(a)) {
+            small = LimbMatrix.of(a);
+            smallA = small;
+        }
         IntMatrix r = a;
         ApintMatrix big = null;
         ApintMatrix bigA = null;
         for (int bit = top - 1; bit >= 0; bit--) {
-            if (big == null && r.maxBits() >= BigMath.matrixApintBits) {
+            boolean multiply = (n >>> bit & 1) != 0;
+            if (small != null && small.maxLimbs() > LimbMatrix.MAX_LIMBS) {
+                r = small.toIntMatrix();
+                small = null;
+            }
+            if (small == null && big == null && r.maxBits() >= BigMath.matrixApintBits) {
                 big = ApintMatrix.of(r, caller);
                 bigA = ApintMatrix.of(a, caller);
             }
-            boolean multiply = (n >>> bit & 1) != 0;
-            if (big != null) {
+            if (small != null) {
+                small = small.multiply(small, caller);
+                progress.update("squaring", ++done, total);
+                if (multiply) {
+                    small = small.multiply(smallA, caller);
+                    progress.update("squaring", ++done, total);
+                }
+            } else if (big != null) {
                 big = big.multiply(big, caller);
                 progress.update("squaring", ++done, total);
                 if (multiply) {
@@ -258,8 +278,14 @@ public final class MatrixPowers {
                 }
             }
         }
+        if (small != null) {
+            return small.toIntMatrix();
+        }
         return big == null ? r : big.toIntMatrix(caller);
     }
+
+    /** Tests switch the limb path off to compare it with the BigInteger path. */
+    static volatile boolean limbPath = true;
 
     /**
      * Whether {@code n} vector steps are cheaper than squaring: a cost model in word multiplications. Step {@code t}

@@ -14,8 +14,9 @@ import java.util.Objects;
  * the (at most) {@code K} best prefixes of {@code t} steps from the start to {@code j}. The best {@code K} paths
  * into {@code (t+1, j)} all extend one of the kept prefixes of a predecessor (a prefix that is not among the best
  * {@code K} of its state has {@code K} better ones, and each of them extended by the same step is better), so
- * nothing is lost. States from which the target cannot be reached in the remaining steps are dropped first. Work is
- * about {@code n × transitions × K} comparisons. Weights are kept as integers over the common denominator
+ * nothing is lost. States from which the target cannot be reached in the remaining steps are dropped first (when
+ * {@code (n + 1) × states} is at most 2^26; beyond that only at the last layer). Work is about
+ * {@code n × transitions × K} multiplications and comparisons. Weights are kept as integers over the common denominator
  * {@code d^t}, so comparing two prefixes of one layer needs no fractions.
  *
  * <p>Order: higher probability first; equal probabilities in ascending lexicographic order of their state
@@ -84,33 +85,33 @@ public final class TopPaths {
         }
         CommonDenominatorForm f = CommonDenominatorForm.of(p);
         IntMatrix a = f.a;
-        BitSet[] alive = backwardReach(a, to, n);
-        if (!alive[0].get(from)) {
+        BitSet[] alive = (long) (n + 1) * s <= maxPruningBits ? backwardReach(a, to, n) : null;
+        if (alive != null && !alive[0].get(from)) {
             return List.of();
         }
         Thread caller = Thread.currentThread();
         @SuppressWarnings("unchecked")
-        List<Node>[] cur = new List[s];
-        cur[from] = List.of(new Node(from, null, BigInteger.ONE));
+        List<Prefix>[] cur = new List[s];
+        cur[from] = List.of(new Prefix(new Node(from, null), BigInteger.ONE));
         for (int t = 1; t <= n; t++) {
             MatrixPowers.checkInterrupt(caller);
             @SuppressWarnings("unchecked")
-            List<Node>[] next = new List[s];
-            BitSet ok = alive[t];
+            List<Prefix>[] next = new List[s];
+            BitSet ok = alive == null ? null : alive[t];
             for (int i = 0; i < s; i++) {
                 if (cur[i] == null) {
                     continue;
                 }
                 for (int j : a.nz[i]) {
-                    if (!ok.get(j)) {
+                    if (ok != null ? !ok.get(j) : t == n && j != to) {
                         continue;
                     }
                     if (next[j] == null) {
                         next[j] = new ArrayList<>();
                     }
                     BigInteger aij = a.e[i][j];
-                    for (Node x : cur[i]) {
-                        next[j].add(new Node(j, x, x.weight.multiply(aij)));
+                    for (Prefix x : cur[i]) {
+                        next[j].add(new Prefix(new Node(j, x.node), x.weight.multiply(aij)));
                     }
                 }
             }
@@ -127,8 +128,8 @@ public final class TopPaths {
         }
         KnownDenominator den = KnownDenominator.power(f.d, n);
         List<WeightedPath> out = new ArrayList<>();
-        for (Node x : cur[to] == null ? List.<Node>of() : cur[to]) {
-            out.add(new WeightedPath(x.states(n), den.reduce(x.weight)));
+        for (Prefix x : cur[to] == null ? List.<Prefix>of() : cur[to]) {
+            out.add(new WeightedPath(x.node.states(n), den.reduce(x.weight)));
         }
         return out;
     }
@@ -154,16 +155,17 @@ public final class TopPaths {
         return alive;
     }
 
-    /** A prefix: its last state, the prefix before it and its weight (integer over {@code d^depth}). */
+    /**
+     * A path as a persistent list from its last state back to the first; prefixes share their beginnings. Weights
+     * are not kept here but only for the current layer ({@link Prefix}), so old layers hold no big numbers.
+     */
     private static final class Node {
         final int state;
         final Node parent;
-        final BigInteger weight;
 
-        Node(int state, Node parent, BigInteger weight) {
+        Node(int state, Node parent) {
             this.state = state;
             this.parent = parent;
-            this.weight = weight;
         }
 
         List<Integer> states(int steps) {
@@ -193,8 +195,15 @@ public final class TopPaths {
         return c;
     }
 
-    private static final Comparator<Node> BEST_FIRST = (x, y) -> {
+    /** A kept prefix of the current layer and its weight (an integer over {@code d^t}). */
+    private record Prefix(Node node, BigInteger weight) {
+    }
+
+    private static final Comparator<Prefix> BEST_FIRST = (x, y) -> {
         int c = y.weight.compareTo(x.weight);
-        return c != 0 ? c : lexicographic(x, y);
+        return c != 0 ? c : lexicographic(x.node, y.node);
     };
+
+    /** Above this many bits ({@code (n + 1) × states}) the backward pruning sets are not built (tests lower it). */
+    static volatile long maxPruningBits = 1L << 26;
 }

@@ -10,6 +10,8 @@ import org.qchain.cli.result.StepResult;
  * (exact last, so long fractions do not push other columns apart), then the caution.
  */
 final class TextFormatter implements Formatter {
+    /** Lines of the decimal overview stay within this many characters where they can. */
+    static final int WIDTH = 100;
 
     @Override
     public String matrix(StepResult.Matrix m) {
@@ -20,20 +22,27 @@ final class TextFormatter implements Formatter {
         sb.append("Row i, column j: probability of being in state j after ").append(steps(h.n()))
             .append(", starting in state i.\n\n");
         sb.append("Decimals (").append(digits(h)).append("):\n");
-        TextTable overview = new TextTable();
-        List<String> head = new ArrayList<>();
-        head.add("from\\to");
-        head.addAll(m.states());
-        overview.addRow(head);
-        for (int i = 0; i < m.states().size(); i++) {
-            List<String> line = new ArrayList<>();
-            line.add(m.states().get(i));
-            for (Entry e : m.entries().get(i)) {
-                line.add(e.decimal());
+        List<int[]> blocks = columnBlocks(m);
+        for (int[] block : blocks) {
+            if (blocks.size() > 1) {
+                sb.append("columns ").append(block[0] + 1).append(" to ").append(block[1]).append(" of ")
+                    .append(m.states().size()).append(":\n");
             }
-            overview.addRow(line);
+            TextTable overview = new TextTable();
+            List<String> head = new ArrayList<>();
+            head.add("from\\to");
+            head.addAll(m.states().subList(block[0], block[1]));
+            overview.addRow(head);
+            for (int i = 0; i < m.states().size(); i++) {
+                List<String> line = new ArrayList<>();
+                line.add(m.states().get(i));
+                for (Entry e : m.entries().get(i).subList(block[0], block[1])) {
+                    line.add(e.decimal());
+                }
+                overview.addRow(line);
+            }
+            sb.append(overview.render()).append('\n');
         }
-        sb.append(overview.render()).append('\n');
         sb.append("Exact values:\n");
         TextTable list = new TextTable().addRow("from", "to", "decimal", "exact");
         for (int i = 0; i < m.states().size(); i++) {
@@ -43,7 +52,36 @@ final class TextFormatter implements Formatter {
             }
         }
         sb.append(list.render());
-        return sb.append('\n').append(Caution.TEXT).append('\n').toString();
+        return sb.append('\n').append(Caution.wrapped(WIDTH)).append('\n').toString();
+    }
+
+    /**
+     * Splits the overview's columns into blocks [start, end) whose lines stay within {@link #WIDTH} characters (at
+     * least one column a block), so that a matrix of many states stays readable in a terminal.
+     */
+    private static List<int[]> columnBlocks(StepResult.Matrix m) {
+        int n = m.states().size();
+        int label = "from\\to".length();
+        for (String s : m.states()) {
+            label = Math.max(label, s.length());
+        }
+        List<int[]> out = new ArrayList<>();
+        int start = 0;
+        int used = label;
+        for (int j = 0; j < n; j++) {
+            int w = m.states().get(j).length();
+            for (List<Entry> row : m.entries()) {
+                w = Math.max(w, row.get(j).decimal().length());
+            }
+            if (j > start && used + 2 + w > WIDTH) {
+                out.add(new int[] {start, j});
+                start = j;
+                used = label;
+            }
+            used += 2 + w;
+        }
+        out.add(new int[] {start, n});
+        return out;
     }
 
     @Override
@@ -60,7 +98,7 @@ final class TextFormatter implements Formatter {
             t.addRow(r.states().get(j), e.decimal(), e.exact().plain());
         }
         sb.append(t.render());
-        return sb.append('\n').append(Caution.TEXT).append('\n').toString();
+        return sb.append('\n').append(Caution.wrapped(WIDTH)).append('\n').toString();
     }
 
     @Override
@@ -75,7 +113,7 @@ final class TextFormatter implements Formatter {
         sb.append("  exact    ").append(s.value().exact().plain()).append('\n');
         sb.append("  decimal  ").append(s.value().decimal()).append("  (").append(digits(h)).append(")\n");
         s.paths().ifPresent(paths -> appendPaths(sb, s, name, paths));
-        return sb.append('\n').append(Caution.TEXT).append('\n').toString();
+        return sb.append('\n').append(Caution.wrapped(WIDTH)).append('\n').toString();
     }
 
     private static void appendPaths(StringBuilder sb, StepResult.Single s, String name,

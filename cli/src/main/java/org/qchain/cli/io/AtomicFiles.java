@@ -1,6 +1,7 @@
 package org.qchain.cli.io;
 
 import java.io.IOException;
+import java.nio.ByteBuffer;
 import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
@@ -67,7 +68,7 @@ public final class AtomicFiles {
             }
             tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
-                java.nio.ByteBuffer buf = java.nio.ByteBuffer.wrap(text.getBytes(StandardCharsets.UTF_8));
+                ByteBuffer buf = ByteBuffer.wrap(text.getBytes(StandardCharsets.UTF_8));
                 while (buf.hasRemaining()) {
                     ch.write(buf);
                 }

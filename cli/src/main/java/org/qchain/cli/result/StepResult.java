@@ -1,6 +1,7 @@
 package org.qchain.cli.result;
 
 import java.util.List;
+import java.util.Optional;
 
 /**
  * What {@code qchain step} (and {@code check}) computed, ready for a formatter. Formatters never compute; they lay
@@ -67,7 +68,7 @@ public sealed interface StepResult permits StepResult.Matrix, StepResult.Row, St
      * @param value  P^n(from, to)
      * @param paths  the most probable paths, best first; absent when not asked for ({@code --paths})
      */
-    record Single(Header header, String from, String to, Entry value, java.util.Optional<List<PathLine>> paths)
+    record Single(Header header, String from, String to, Entry value, Optional<List<PathLine>> paths)
         implements StepResult {
         /** Copies the list. */
         public Single {
