@@ -82,6 +82,21 @@ class SymbolicCommandsTest {
     }
 
     @Test
+    void sensitivityOfTheThreeDayDownProbabilityMatchesTheHandDerivation() {
+        // derived by hand: the 3-step paths Up -> Down are Up Worn Down Down (p p 1/2), Up Up Worn Down ((1-p) p p)
+        // and Up Worn Worn Down (p (1-p-r) p), so P = p^2 (5/2 - 2p - r), dP/dp = 5p - 6p^2 - 2pr; at p = 1/20,
+        // r = 1/4: P = 43/8000, dP/dp = 21/100, elasticity (p/P) dP/dp = 84/43
+        Cli.Result r = Cli.run("sens", FREE, "-n", "3", "--from", "Up", "--to", "Down", "--wrt", "p", "--at", "p=1/20",
+            "--format", "json");
+        assertEquals(0, r.code(), r::toString);
+        assertTrue(r.out().contains("\"formula\":\"5/2*p^2 - 2*p^3 - p^2*r\",\"derivative\":\"5*p - 6*p^2 - 2*p*r\""),
+            r.out());
+        assertTrue(r.out().contains("\"value\":\"43/8000\""), r.out());
+        assertTrue(r.out().contains("\"derivative_value\":\"21/100\""), r.out());
+        assertTrue(r.out().contains("\"elasticity\":\"84/43\""), r.out());
+    }
+
+    @Test
     void valuesAtThePointEqualTheExactModulesNumericStep() {
         // the same chain with the point as nominal values goes the numeric path: the exact values must agree
         for (int n : new int[] {1, 4, 9}) {
