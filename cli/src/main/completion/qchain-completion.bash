@@ -208,7 +208,7 @@ function _picocli_qchain_step() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'--factor' '--symbolic' '-h' '--help' '-V' '--version'"
+  local flag_opts="'--symbolic' '--factor' '-h' '--help' '-V' '--version'"
   local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
@@ -409,7 +409,7 @@ function _picocli_qchain_check() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'-h' '--help' '-V' '--version'"
+  local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
   local arg_opts="'--at' '--digits'"
 
   type compopt &>/dev/null && compopt +o default

@@ -11,6 +11,8 @@ import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.model.Model;
+import org.qchain.exact.model.ModelParser;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -34,9 +36,19 @@ final class CheckCommand implements Callable<Integer> {
         description = "Significant digits of the decimals, correctly rounded (default: ${DEFAULT-VALUE}).")
     int digits = OutputOptions.DEFAULT_DIGITS;
 
+    @Option(names = "--symbolic",
+        description = "Keep the parameters symbolic: print the entries as formulas and check, over the parameter"
+            + " domains, that rows sum to 1 identically and entries stay in [0, 1] (with the conditions where they"
+            + " may not). Models with a parameter without a value (none given with --at) are checked this way anyway.")
+    boolean symbolic;
+
     @Override
     public Integer call() {
-        LoadedChain chain = LoadedChain.load(model, spec.name());
+        Model parsed = ModelParser.parseFile(model.model);
+        if (SymbolicRoute.appliesToCheck(parsed, symbolic, model.at())) {
+            return SymbolicRoute.check(this, parsed);
+        }
+        LoadedChain chain = LoadedChain.load(parsed, model, spec.name());
         RationalMatrix p = chain.p();
         verifyStochastic(chain, p);
         // one step needs no size guard: the result is the model itself

@@ -47,17 +47,11 @@ final class SensCommand implements Callable<Integer> {
             + " p=0:1/100:1/10; at most 10001 points); the other parameters at their nominal or --at values.")
     String sweep;
 
-    @Option(names = "--factor", description = "Print the formulas factored over the rationals.")
-    boolean factor;
-
     @Mixin
     OutputOptions output;
 
-    @Option(names = "--max-terms", paramLabel = "T", converter = Converters.TermLimit.class,
-        defaultValue = "" + SymbolicStepOptions.DEFAULT_MAX_TERMS,
-        description = "Refuse symbolic powers estimated to need more than T polynomial terms (default:"
-            + " ${DEFAULT-VALUE}).")
-    long maxTerms = SymbolicStepOptions.DEFAULT_MAX_TERMS;
+    @Mixin
+    SymbolicOptions symbolicOptions;
 
     @Override
     public Integer call() {

@@ -121,7 +121,8 @@ final class SensRun {
         TerminalProgress progress = c.root.progress(c.spec.commandLine().getErr());
         SensResult result;
         try {
-            EntrySensitivity s = Sensitivity.of(ctx.p(), c.n, from, to, c.wrt, new SymbolicLimits(c.maxTerms),
+            SymbolicLimits limits = new SymbolicLimits(c.symbolicOptions.maxTerms);
+            EntrySensitivity s = Sensitivity.of(ctx.p(), c.n, from, to, c.wrt, limits,
                 k -> progress.update("multiplying", k, c.n - 1));
             result = result(c, m, ctx, s, from, to, range);
         } finally {
@@ -176,7 +177,8 @@ final class SensRun {
             sweep = Optional.of(new Sweep(r.parameter(), r.start(), r.step(), r.end(), others, lines));
         }
         return new SensResult(m.source(), m.kind().word(), c.n, digits, c.from, c.to, c.wrt, ctx.parameters(),
-            SymbolicStep.formula(s.probability(), c.factor), SymbolicStep.formula(s.derivative(), c.factor), at, sweep,
+            SymbolicStep.formula(s.probability(), c.symbolicOptions.factor),
+            SymbolicStep.formula(s.derivative(), c.symbolicOptions.factor), at, sweep,
             ctx.warnings());
     }
 }

@@ -59,20 +59,13 @@ final class StepCommand implements Callable<Integer> {
         description = "Refuse results estimated to need more than M digits in total (default: ${DEFAULT-VALUE}).")
     long maxDigits = DEFAULT_MAX_DIGITS;
 
-    @Option(names = "--factor",
-        description = "Symbolic results: print each formula factored over the rationals instead of expanded.")
-    boolean factor;
-
     @Option(names = "--symbolic",
         description = "Keep every parameter symbolic, even those with nominal values (formulas, and values at the"
             + " nominal or --at point). Models with a parameter without a value are symbolic anyway.")
     boolean symbolic;
 
-    @Option(names = "--max-terms", paramLabel = "T", converter = Converters.TermLimit.class,
-        defaultValue = "" + SymbolicStepOptions.DEFAULT_MAX_TERMS,
-        description = "Symbolic results: refuse powers estimated to need more than T polynomial terms in total"
-            + " (default: ${DEFAULT-VALUE}).")
-    long maxTerms = SymbolicStepOptions.DEFAULT_MAX_TERMS;
+    @Mixin
+    SymbolicOptions symbolicOptions;
 
     @Override
     public Integer call() {
@@ -91,7 +84,7 @@ final class StepCommand implements Callable<Integer> {
             }
             return SymbolicRoute.step(this, parsed);
         }
-        if (factor) {
+        if (symbolicOptions.factor) {
             throw new ParameterException(spec.commandLine(), "--factor applies to symbolic results: the model has"
                 + " values for all its parameters (use --symbolic to keep them symbolic)");
         }

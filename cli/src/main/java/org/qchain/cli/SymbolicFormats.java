@@ -237,20 +237,19 @@ final class SymbolicFormats {
         return sb.append('\n').append(Caution.TEXT).append('\n').toString();
     }
 
-    private static Json entryJson(Entry e) {
-        return Json.object().string("value", e.exact().plain()).string("decimal", e.decimal());
-    }
-
     private static String sensJson(SensRun.SensResult s) {
         Json j = Json.object().number("n", s.n()).string("from", s.from()).string("to", s.to()).string("wrt", s.wrt())
             .strings("parameters", s.parameters()).string("formula", s.probability().plain())
             .string("derivative", s.derivative().plain());
         if (s.at().isPresent()) {
             SensRun.AtPoint a = s.at().get();
-            j.object("at", point(a.point())).object("value", entryJson(a.probability()))
-                .object("derivative_value", entryJson(a.derivative()));
+            j.object("at", point(a.point())).string("value", a.probability().exact().plain())
+                .string("decimal", a.probability().decimal())
+                .string("derivative_value", a.derivative().exact().plain())
+                .string("derivative_decimal", a.derivative().decimal());
             if (a.elasticity().isPresent()) {
-                j.object("elasticity", entryJson(a.elasticity().get()));
+                j.string("elasticity", a.elasticity().get().exact().plain())
+                    .string("elasticity_decimal", a.elasticity().get().decimal());
             }
         }
         if (s.sweep().isPresent()) {

@@ -52,7 +52,7 @@ final class SymbolicStep {
     private static SymbolicResult compute(SymbolicContext ctx, StepCommand c, TerminalProgress progress) {
         Model m = ctx.model();
         RatFunMatrix p = ctx.p();
-        SymbolicLimits limits = new SymbolicLimits(c.maxTerms);
+        SymbolicLimits limits = new SymbolicLimits(c.symbolicOptions.maxTerms);
         List<String> rowNames = new ArrayList<>();
         List<String> colNames = new ArrayList<>();
         List<List<RatFun>> cells = new ArrayList<>();
@@ -86,7 +86,7 @@ final class SymbolicStep {
         for (List<RatFun> row : cells) {
             List<SymbolicResult.Formula> out = new ArrayList<>();
             for (RatFun f : row) {
-                out.add(formula(f, c.factor));
+                out.add(formula(f, c.symbolicOptions.factor));
             }
             formulas.add(out);
         }
@@ -95,7 +95,7 @@ final class SymbolicStep {
             values = Optional.of(values(ctx, cells, c.n, fromIdx, toIdx, c.output.digits));
         }
         return new SymbolicResult(m.source(), m.kind().word(), c.n, c.output.digits, ctx.parameters(), m.states(),
-            c.factor, from, to, rowNames, colNames, formulas, ctx.point(), values, ctx.warnings());
+            c.symbolicOptions.factor, from, to, rowNames, colNames, formulas, ctx.point(), values, ctx.warnings());
     }
 
     static SymbolicResult.Formula formula(RatFun f, boolean factor) {

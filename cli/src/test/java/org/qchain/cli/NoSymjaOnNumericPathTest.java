@@ -50,7 +50,7 @@ class NoSymjaOnNumericPathTest {
         return urls.toArray(new URL[0]);
     }
 
-    private static Set<String> classesRequestedBy(String... args) throws Exception {
+    static Set<String> classesRequestedBy(String... args) throws Exception {
         try (RecordingLoader loader = new RecordingLoader(testClassPath())) {
             Class<?> root = loader.loadClass("org.qchain.cli.QchainCommand");
             Object cl = root.getMethod("newCommandLine", boolean.class).invoke(null, false);
@@ -60,7 +60,16 @@ class NoSymjaOnNumericPathTest {
             clType.getMethod("setOut", PrintWriter.class).invoke(cl, new PrintWriter(out));
             clType.getMethod("setErr", PrintWriter.class).invoke(cl, new PrintWriter(err));
             Method execute = clType.getMethod("execute", String[].class);
-            int code = (Integer) execute.invoke(cl, (Object) args);
+            // libraries that look classes up through the context loader (log4j, inside JAS) must see this one
+            Thread t = Thread.currentThread();
+            ClassLoader previous = t.getContextClassLoader();
+            t.setContextClassLoader(loader);
+            int code;
+            try {
+                code = (Integer) execute.invoke(cl, (Object) args);
+            } finally {
+                t.setContextClassLoader(previous);
+            }
             assertEquals(0, code, () -> "stdout:\n" + out + "\nstderr:\n" + err);
             assertTrue(out.toString().length() > 0);
             return Set.copyOf(loader.requested);

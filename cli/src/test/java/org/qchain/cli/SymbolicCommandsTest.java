@@ -49,6 +49,7 @@ class SymbolicCommandsTest {
             out.add(new Case("sens-sweep." + ext, List.of("sens", FREE, "-n", "3", "--from", "Up", "--to", "Down",
                 "--wrt", "p", "--at", "p=1/20", "--sweep", "p=0:1/100:1/20", "--format", f)));
         }
+        out.add(new Case("check.txt", List.of("check", FREE)));
         out.add(new Case("step-matrix-at.json", List.of("step", FREE, "-n", "2", "--at", "p=1/20", "--format", "json")));
         out.add(new Case("sens-formula.txt", List.of("sens", FREE, "-n", "2", "--from", "Worn", "--to", "Up", "--wrt",
             "r")));
@@ -78,6 +79,21 @@ class SymbolicCommandsTest {
             out.add(s.group(1));
         }
         return out;
+    }
+
+    @Test
+    void sensitivityOfTheThreeDayDownProbabilityMatchesTheHandDerivation() {
+        // derived by hand: the 3-step paths Up -> Down are Up Worn Down Down (p p 1/2), Up Up Worn Down ((1-p) p p)
+        // and Up Worn Worn Down (p (1-p-r) p), so P = p^2 (5/2 - 2p - r), dP/dp = 5p - 6p^2 - 2pr; at p = 1/20,
+        // r = 1/4: P = 43/8000, dP/dp = 21/100, elasticity (p/P) dP/dp = 84/43
+        Cli.Result r = Cli.run("sens", FREE, "-n", "3", "--from", "Up", "--to", "Down", "--wrt", "p", "--at", "p=1/20",
+            "--format", "json");
+        assertEquals(0, r.code(), r::toString);
+        assertTrue(r.out().contains("\"formula\":\"5/2*p^2 - 2*p^3 - p^2*r\",\"derivative\":\"5*p - 6*p^2 - 2*p*r\""),
+            r.out());
+        assertTrue(r.out().contains("\"value\":\"43/8000\""), r.out());
+        assertTrue(r.out().contains("\"derivative_value\":\"21/100\""), r.out());
+        assertTrue(r.out().contains("\"elasticity\":\"84/43\""), r.out());
     }
 
     @Test
@@ -168,12 +184,30 @@ class SymbolicCommandsTest {
         Path bad = Files.createTempFile("pump-bad", ".chain");
         try {
             Files.writeString(bad, Files.readString(Path.of(NOMINAL)).replace("= 1/20", "= 4/5"));
-            Cli.Result r = Cli.run("step", bad.toString(), "-n", "2", "--symbolic");
-            assertEquals(2, r.code(), r::toString);
-            assertEquals("qchain: " + bad + ":8:1: Worn->Worn is 1 - p - r: needs p + r <= 1; fails near p=1, r=1"
-                + " (a corner of the domain); the nominal values p=4/5, r=1/4 break it (Worn->Worn = -1/20)\n", r.err());
+            for (String cmd : List.of("step", "check")) {
+                Cli.Result r = cmd.equals("step") ? Cli.run("step", bad.toString(), "-n", "2", "--symbolic")
+                    : Cli.run("check", bad.toString(), "--symbolic");
+                assertEquals(2, r.code(), r::toString);
+                assertEquals("qchain: " + bad + ":8:1: Worn->Worn is 1 - p - r: needs p + r <= 1; fails near p=1,"
+                    + " r=1 (a corner of the domain); the nominal values p=4/5, r=1/4 break it (Worn->Worn = -1/20)\n",
+                    r.err(), cmd);
+            }
         } finally {
             Files.delete(bad);
+        }
+    }
+
+    @Test
+    void symbolicPathUsesJasButNeverLoadsSymjasEvaluator() throws Exception {
+        // our arithmetic and printing are JAS and our own code: Symja (about a second to start) stays unloaded
+        for (String[] args : List.of(new String[] {"step", FREE, "-n", "3", "--factor", "--format", "latex"},
+            new String[] {"sens", FREE, "-n", "3", "--from", "Up", "--to", "Down", "--wrt", "p", "--at", "p=1/20"},
+            new String[] {"check", FREE})) {
+            java.util.Set<String> loaded = NoSymjaOnNumericPathTest.classesRequestedBy(args);
+            assertTrue(loaded.contains("org.qchain.symbolic.RatFunMatrix"), args[0]);
+            for (String name : loaded) {
+                assertTrue(!name.startsWith("org.matheclipse."), () -> args[0] + " loaded " + name);
+            }
         }
     }
 
