@@ -85,10 +85,10 @@ final class ClosedCommand implements Callable<Integer> {
     OutputOptions output;
 
     @Option(names = "--max-terms", paramLabel = "T", converter = Converters.TermLimit.class,
-        defaultValue = "" + SymbolicStepOptions.DEFAULT_MAX_TERMS,
+        defaultValue = "" + SymbolicOptions.DEFAULT_MAX_TERMS,
         description = "Refuse chains whose powers up to P^s (s states, all the method multiplies out) are estimated"
             + " to need more than T polynomial terms (default: ${DEFAULT-VALUE}).")
-    long maxTerms = SymbolicStepOptions.DEFAULT_MAX_TERMS;
+    long maxTerms = SymbolicOptions.DEFAULT_MAX_TERMS;
 
     @Override
     public Integer call() {
