@@ -11,6 +11,7 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.TypeConversionException;
 
@@ -61,6 +62,9 @@ final class ClosedCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    @ParentCommand
+    QchainCommand root;
 
     @Mixin
     ModelOptions model;

@@ -48,9 +48,14 @@ final class ClosedRun {
         Optional<Integer> row = Optional.ofNullable(first).map(s -> state(m, c.start != null ? "--start" : "--from", s));
         Optional<Integer> col = Optional.ofNullable(c.to).map(s -> state(m, "--to", s));
         SymbolicLimits limits = new SymbolicLimits(c.maxTerms);
-        return c.form == ClosedCommand.Form.MATRIX
-            ? fromClosedForm(m, ClosedForms.of(m, at, limits), at, row, col)
-            : fromSeries(m, ClosedForms.series(m, at, limits), row, col);
+        TerminalProgress progress = c.root.progress(c.spec.commandLine().getErr());
+        try {
+            return c.form == ClosedCommand.Form.MATRIX
+                ? fromClosedForm(m, ClosedForms.of(m, at, limits, progress), at, row, col)
+                : fromSeries(m, ClosedForms.series(m, at, limits, progress), row, col);
+        } finally {
+            progress.clear();
+        }
     }
 
     private static Map<String, Rational> assignments(Model m, String text) {

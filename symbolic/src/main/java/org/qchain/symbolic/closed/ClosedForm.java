@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
@@ -46,10 +47,10 @@ public final class ClosedForm {
     private final List<String> conditions;
     private final List<Eigenvalue> eigenvalues;
 
-    ClosedForm(Series series, List<String> states) {
+    ClosedForm(Series series, List<String> states, Progress progress) {
         this.field = series.field;
         this.ring = series.ring;
-        this.spectral = Spectral.of(series);
+        this.spectral = Spectral.of(series, progress);
         this.seriesForm = new SeriesForm(series, states);
         this.states = List.copyOf(states);
         this.size = spectral.series.size;
@@ -74,6 +75,7 @@ public final class ClosedForm {
                     }
                 }
                 validFromEntry[i][j] = v;
+                Steps.report(progress, "formulas", (long) i * size + j, (long) size * size);
                 formulas[i][j] = buildFormula(i, j);
             }
         }

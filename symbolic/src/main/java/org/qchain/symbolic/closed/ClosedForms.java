@@ -3,6 +3,7 @@ package org.qchain.symbolic.closed;
 import java.util.List;
 import java.util.Map;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.model.ChainKind;
@@ -61,7 +62,22 @@ public final class ClosedForms {
      * @throws QchainException as {@link #of(Model, Map)}
      */
     public static ClosedForm of(Model model, Map<String, Rational> at, SymbolicLimits limits) {
-        return of(matrix(model, at), model.states(), limits);
+        return of(matrix(model, at), model.states(), limits, Progress.NONE);
+    }
+
+    /**
+     * As {@link #of(Model, Map, SymbolicLimits)} with progress reports (phases {@code powers}, {@code factoring},
+     * {@code projectors}, {@code formulas}); an interrupt of the calling thread stops the work.
+     *
+     * @param model    a discrete-time model
+     * @param at       values for some parameters (may be empty)
+     * @param limits   the size limit for the powers P^1 .. P^s the method multiplies out
+     * @param progress receives the reports
+     * @return the closed form
+     * @throws QchainException as {@link #of(Model, Map)}, and {@link ErrorKey#INTERRUPTED} if interrupted
+     */
+    public static ClosedForm of(Model model, Map<String, Rational> at, SymbolicLimits limits, Progress progress) {
+        return of(matrix(model, at), model.states(), limits, progress);
     }
 
     /**
@@ -79,15 +95,16 @@ public final class ClosedForms {
      *
      * @param p      the one-step matrix
      * @param states a name per row
-     * @param limits the size limit for the powers P^1 .. P^s the method multiplies out
+     * @param limits   the size limit for the powers P^1 .. P^s the method multiplies out
+     * @param progress receives progress reports ({@link Progress#NONE} for none)
      * @return the closed form
      * @throws IllegalArgumentException if the number of names differs from the size
      * @throws QchainException          with {@link ErrorKey#SYMBOLIC_TOO_LARGE} if P^s is estimated past the
      *                                  limit, {@link ErrorKey#CLOSED_FORM_UNSUPPORTED} for a repeated irreducible
      *                                  factor of degree at least 2 with a Jordan block
      */
-    public static ClosedForm of(RatFunMatrix p, List<String> states, SymbolicLimits limits) {
-        return new ClosedForm(Series.of(guarded(p, states, limits)), states);
+    public static ClosedForm of(RatFunMatrix p, List<String> states, SymbolicLimits limits, Progress progress) {
+        return new ClosedForm(Series.of(guarded(p, states, limits), progress), states, progress);
     }
 
     /**
@@ -101,7 +118,20 @@ public final class ClosedForms {
      * @throws QchainException as {@link #of(Model, Map)}, except for the unsupported case
      */
     public static SeriesForm series(Model model, Map<String, Rational> at, SymbolicLimits limits) {
-        return new SeriesForm(Series.of(guarded(matrix(model, at), model.states(), limits)), model.states());
+        return series(model, at, limits, Progress.NONE);
+    }
+
+    /**
+     * As {@link #series(Model, Map, SymbolicLimits)} with progress reports; an interrupt stops the work.
+     *
+     * @param model    a discrete-time model
+     * @param at       values for some parameters (may be empty)
+     * @param limits   the size limit
+     * @param progress receives the reports
+     * @return the series forms
+     */
+    public static SeriesForm series(Model model, Map<String, Rational> at, SymbolicLimits limits, Progress progress) {
+        return new SeriesForm(Series.of(guarded(matrix(model, at), model.states(), limits), progress), model.states());
     }
 
     /** As {@link #series(Model, Map, SymbolicLimits)} with the default limit. */

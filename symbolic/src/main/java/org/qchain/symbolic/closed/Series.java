@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.SortedMap;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.symbolic.ParamRing;
 import org.qchain.symbolic.RatFunMatrix;
@@ -36,7 +37,7 @@ final class Series {
     final List<GenPolynomial<Quotient<BigRational>>> factors;
     final List<Integer> multiplicities;
 
-    private Series(ParamField field, ParamRing ring, Quotient<BigRational>[][] matrix) {
+    private Series(ParamField field, ParamRing ring, Quotient<BigRational>[][] matrix, Progress progress) {
         this.field = field;
         this.ring = ring;
         this.matrix = matrix;
@@ -46,6 +47,7 @@ final class Series {
         List<Quotient<BigRational>[][]> pw = new ArrayList<>();
         pw.add(Mat.identity(f, s));
         for (int k = 1; k <= s; k++) {
+            Steps.report(progress, "powers", k - 1, s);
             pw.add(Mat.multiply(f, pw.get(k - 1), matrix));
         }
         this.powers = List.copyOf(pw);
@@ -74,6 +76,7 @@ final class Series {
             adj.add(b);
         }
         this.adjugate = List.copyOf(adj);
+        Steps.report(progress, "factoring", 0, 1);
         FactorAbstract<Quotient<BigRational>> factorizer = FactorFactory.getImplementation(f.field);
         SortedMap<GenPolynomial<Quotient<BigRational>>, Long> fm = factorizer.factors(chi);
         List<GenPolynomial<Quotient<BigRational>>> fs = new ArrayList<>();
@@ -96,7 +99,7 @@ final class Series {
     }
 
     /** From a matrix of the symbolic module, in the variables that occur in it. */
-    static Series of(RatFunMatrix p) {
+    static Series of(RatFunMatrix p, Progress progress) {
         List<String> names = p.occurringVariables();
         ParamField f = new ParamField(names, "x");
         int s = p.size();
@@ -106,6 +109,6 @@ final class Series {
                 q[i][j] = Bridge.toField(f, p.get(i, j));
             }
         }
-        return new Series(f, p.ring(), q);
+        return new Series(f, p.ring(), q, progress);
     }
 }

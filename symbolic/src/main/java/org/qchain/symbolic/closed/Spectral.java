@@ -9,6 +9,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 
 /**
@@ -92,8 +93,9 @@ final class Spectral {
         this.groups = groups;
     }
 
-    static Spectral of(Series sr) {
-        List<Group> groups = decompose(sr.field, sr.matrix, sr.powers, sr.chi, sr.adjugate, sr.factors, sr.multiplicities);
+    static Spectral of(Series sr, Progress progress) {
+        List<Group> groups = decompose(sr.field, sr.matrix, sr.powers, sr.chi, sr.adjugate, sr.factors, sr.multiplicities,
+            progress);
         return new Spectral(sr, groups);
     }
 
@@ -121,12 +123,14 @@ final class Spectral {
     private static List<Group> decompose(ParamField f, Quotient<BigRational>[][] p,
                                          List<Quotient<BigRational>[][]> powers, GenPolynomial<Quotient<BigRational>> chi,
                                          List<Quotient<BigRational>[][]> adj,
-                                         List<GenPolynomial<Quotient<BigRational>>> fs, List<Integer> ms) {
+                                         List<GenPolynomial<Quotient<BigRational>>> fs, List<Integer> ms,
+                                         Progress progress) {
         int s = p.length;
         List<Group> groups = new ArrayList<>();
         Quotient<BigRational>[][] total = Mat.zero(f, s);
         GenPolynomial<Quotient<BigRational>> chiDeriv = derivative(f, chi);
         for (int i = 0; i < fs.size(); i++) {
+            Steps.report(progress, "projectors", i, fs.size());
             GenPolynomial<Quotient<BigRational>> g = fs.get(i);
             int m = ms.get(i);
             if (m == 1) {

@@ -265,4 +265,24 @@ class ClosedFormTest {
             () -> ClosedForms.of(TWO_STATE, Map.of(), new org.qchain.symbolic.SymbolicLimits(3)));
         assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE, e.key());
     }
+
+    @Test
+    void progressIsReportedAndAnInterruptStopsTheWork() {
+        List<String> phases = new java.util.ArrayList<>();
+        ClosedForms.of(TWO_STATE, Map.of(), org.qchain.symbolic.SymbolicLimits.DEFAULT,
+            (phase, done, total) -> {
+                if (!phases.contains(phase)) {
+                    phases.add(phase);
+                }
+            });
+        assertEquals(List.of("powers", "factoring", "projectors", "formulas"), phases);
+        Thread.currentThread().interrupt();
+        try {
+            QchainException e = assertThrows(QchainException.class, () -> ClosedForms.of(TWO_STATE, Map.of(),
+                org.qchain.symbolic.SymbolicLimits.DEFAULT, org.qchain.exact.Progress.NONE));
+            assertEquals(ErrorKey.INTERRUPTED, e.key());
+        } finally {
+            Thread.interrupted();
+        }
+    }
 }
