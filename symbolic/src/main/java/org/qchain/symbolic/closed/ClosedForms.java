@@ -74,10 +74,10 @@ public final class ClosedForms {
      * @param limits   the size limit for the powers P^1 .. P^s the method multiplies out
      * @param progress receives the reports
      * @return the closed form
-     * @throws QchainException as {@link #of(Model, Map)}, and {@link ErrorKey#INTERRUPTED} if interrupted
+     * @throws QchainException as {@link #of(Model, Map)}, and {@link ErrorKey#INTERRUPTED} if the thread is interrupted
      */
     public static ClosedForm of(Model model, Map<String, Rational> at, SymbolicLimits limits, Progress progress) {
-        return of(matrix(model, at), model.states(), limits, progress);
+        return interruptible(() -> of(matrix(model, at), model.states(), limits, progress));
     }
 
     /**
@@ -104,7 +104,7 @@ public final class ClosedForms {
      *                                  factor of degree at least 2 with a Jordan block
      */
     public static ClosedForm of(RatFunMatrix p, List<String> states, SymbolicLimits limits, Progress progress) {
-        return new ClosedForm(Series.of(guarded(p, states, limits), progress), states, progress);
+        return interruptible(() -> new ClosedForm(Series.of(guarded(p, states, limits), progress), states, progress));
     }
 
     /**
@@ -131,7 +131,17 @@ public final class ClosedForms {
      * @return the series forms
      */
     public static SeriesForm series(Model model, Map<String, Rational> at, SymbolicLimits limits, Progress progress) {
-        return new SeriesForm(Series.of(guarded(matrix(model, at), model.states(), limits), progress), model.states());
+        return interruptible(() -> new SeriesForm(Series.of(guarded(matrix(model, at), model.states(), limits), progress),
+            model.states()));
+    }
+
+    /** JAS stops its own loops on an interrupt with an exception of its own: report it as ours. */
+    private static <T> T interruptible(java.util.function.Supplier<T> work) {
+        try {
+            return work.get();
+        } catch (edu.jas.kern.PreemptingException e) {
+            throw new QchainException(ErrorKey.INTERRUPTED);
+        }
     }
 
     /** As {@link #series(Model, Map, SymbolicLimits)} with the default limit. */
