@@ -10,6 +10,7 @@ import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.model.Chains;
+import org.qchain.exact.model.Domain;
 import org.qchain.exact.model.Model;
 import org.qchain.exact.model.ModelParser;
 import org.qchain.exact.model.ParamDecl;
@@ -173,7 +174,12 @@ final class ClosedRun {
         }
         ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits, lr.rate(), rateValue);
         Optional<String> pointText = pt.filter(p -> !p.isEmpty()).map(ClosedRun::pointText);
-        return new ClosedResult(m.source(), c.form.word, cf.nSymbol(), validFrom, cf.conditions(), m.states(),
+        Map<String, Domain> domains = new LinkedHashMap<>();
+        for (String name : cf.parameters()) {
+            m.param(name).ifPresent(d -> domains.put(name, d.domain()));
+        }
+        return new ClosedResult(m.source(), c.form.word, cf.nSymbol(), validFrom, cf.conditions(),
+            cf.conditionsNotProved(domains), m.states(),
             cf.parameters(), selection(row, col), names(m, ri), names(m, ci), cells, latex, List.of(), eig,
             Optional.of(longRun), roots, pointText, c.output.digits, warnings);
     }
@@ -219,7 +225,7 @@ final class ClosedRun {
                 recs.add(rr);
             }
         }
-        return new ClosedResult(m.source(), c.form.word, ClosedForm.N_SYMBOL, validFrom, List.of(), m.states(),
+        return new ClosedResult(m.source(), c.form.word, ClosedForm.N_SYMBOL, validFrom, List.of(), List.of(), m.states(),
             sf.parameters(), selection(row, col), names(m, ri), names(m, ci), cells, latex, recs, List.of(),
             Optional.empty(), List.of(), Optional.empty(), c.output.digits, List.of());
     }

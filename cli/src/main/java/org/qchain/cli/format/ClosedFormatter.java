@@ -74,6 +74,7 @@ public final class ClosedFormatter {
                 sb.append(" where ").append(String.join(", ", r.conditions()));
             }
             sb.append('.');
+            sb.append(domainNote(r));
             if (r.validFrom() > 0) {
                 sb.append(" For smaller n (eigenvalue 0), qchain step gives P^n exactly.");
             }
@@ -113,6 +114,18 @@ public final class ClosedFormatter {
         }
         r.longRun().ifPresent(lr -> longRunText(sb, r, lr));
         return sb.append('\n').append(Caution.wrapped(100)).append('\n').toString();
+    }
+
+    /** Whether the conditions are known to hold inside the parameters' domains; empty without conditions. */
+    private static String domainNote(ClosedResult r) {
+        if (r.conditions().isEmpty()) {
+            return "";
+        }
+        if (r.notProved().isEmpty()) {
+            return (r.conditions().size() == 1 ? " It" : " They") + " always hold"
+                + (r.conditions().size() == 1 ? "s" : "") + " inside the parameters' domains.";
+        }
+        return " Not shown to hold throughout the parameters' domains: " + String.join(", ", r.notProved()) + ".";
     }
 
     private static void longRunText(StringBuilder sb, ClosedResult r, ClosedResult.LongRun lr) {
@@ -159,6 +172,7 @@ public final class ClosedFormatter {
             .number("valid_from", r.validFrom())
             .strings("conditions", r.conditions())
             .strings("states", r.states());
+        List<String> notProved = r.notProved();
         switch (r.selection()) {
             case ENTRY:
                 j.string("from", r.rows().get(0)).string("to", r.cols().get(0)).string("formula", r.cells().get(0).get(0));
@@ -170,6 +184,9 @@ public final class ClosedFormatter {
                 j.stringRows("matrix", r.cells());
         }
         j.string("form", r.form()).strings("parameters", r.parameters());
+        if (!series(r)) {
+            j.strings("conditions_not_proved", notProved);
+        }
         if (r.form().equals("gf")) {
             j.string("variable", "z");
         }
@@ -238,7 +255,7 @@ public final class ClosedFormatter {
                 sb.append(" where ").append(String.join(", ", c));
             }
         }
-        sb.append(".\n\n");
+        sb.append('.').append(domainNote(r)).append("\n\n");
         sb.append("| from | to | ").append(r.form().equals("gf") ? "G(z)" : (r.form().equals("recurrence") ? "recurrence" : "P^n"))
             .append(" |\n| --- | --- | --- |\n");
         for (int i = 0; i < r.rows().size(); i++) {
@@ -303,9 +320,9 @@ public final class ClosedFormatter {
         if (!series(r)) {
             sb.append("% valid for n >= ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
-                sb.append(" where ").append(String.join(", ", r.conditions()));
+                sb.append(" where ").append(String.join(", ", r.conditions())).append('.');
             }
-            sb.append('\n');
+            sb.append(domainNote(r)).append('\n');
         }
         sb.append("\\begin{align*}\n");
         List<String> lines = new ArrayList<>();

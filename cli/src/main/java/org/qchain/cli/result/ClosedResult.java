@@ -14,6 +14,7 @@ import java.util.Optional;
  * @param nSymbol     the symbol of the step count, {@code n}
  * @param validFrom   the least n from which every printed formula holds
  * @param conditions  parameter conditions, each {@code "POLY != 0"}
+ * @param notProved   the conditions not shown to hold for every value inside the parameters' domains
  * @param states      all state names, in model order
  * @param parameters  the free parameters the formulas use
  * @param selection   which part of P^n is printed
@@ -30,7 +31,7 @@ import java.util.Optional;
  * @param warnings    warnings (also printed on stderr)
  */
 public record ClosedResult(String source, String form, String nSymbol, int validFrom, List<String> conditions,
-                           List<String> states, List<String> parameters, Selection selection, List<String> rows,
+                           List<String> notProved, List<String> states, List<String> parameters, Selection selection, List<String> rows,
                            List<String> cols, List<List<String>> cells, List<List<String>> latex,
                            List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                            List<Roots> roots, Optional<String> point, int digits, List<String> warnings) {
@@ -38,6 +39,7 @@ public record ClosedResult(String source, String form, String nSymbol, int valid
     /** Copies the lists. */
     public ClosedResult {
         conditions = List.copyOf(conditions);
+        notProved = List.copyOf(notProved);
         states = List.copyOf(states);
         parameters = List.copyOf(parameters);
         rows = List.copyOf(rows);

@@ -15,6 +15,7 @@ import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.model.Domain;
 import org.qchain.symbolic.ParamRing;
 import org.qchain.symbolic.RatFun;
 import org.qchain.symbolic.RatFunMatrix;
@@ -280,6 +281,25 @@ public final class ClosedForm {
      */
     public List<String> conditions() {
         return conditions;
+    }
+
+    /**
+     * The conditions of {@link #conditions()} that could not be shown to hold for every parameter value inside the
+     * given domains (an empty list means: inside the domains, the formulas always hold). The check is sound, not
+     * complete: one parameter is decided exactly (Sturm sequences); for several, a condition is listed unless a
+     * sign argument or interval arithmetic proves it.
+     *
+     * @param domains the domain of each parameter (a parameter without one counts as unproved)
+     * @return the conditions not shown to hold, in the order of {@link #conditions()}
+     */
+    public List<String> conditionsNotProved(Map<String, Domain> domains) {
+        List<String> out = new ArrayList<>();
+        for (int k = 0; k < conditionPolys.size(); k++) {
+            if (!DomainCheck.holdsThroughout(field, conditionPolys.get(k), domains)) {
+                out.add(conditions.get(k));
+            }
+        }
+        return List.copyOf(out);
     }
 
     /** The factors of the characteristic polynomial and their eigenvalues: eigenvalue 1 first. */

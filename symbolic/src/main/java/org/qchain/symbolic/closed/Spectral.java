@@ -269,6 +269,18 @@ final class Spectral {
         return gr;
     }
 
+    /** The derivative of a univariate polynomial over Q. */
+    static GenPolynomial<BigRational> derivativeOf(GenPolynomial<BigRational> p) {
+        GenPolynomial<BigRational> d = p.ring.getZERO();
+        for (Map.Entry<ExpVector, BigRational> t : p.getMap().entrySet()) {
+            long k = t.getKey().getVal(0);
+            if (k > 0) {
+                d = d.sum(t.getValue().multiply(new BigRational(k)), ExpVector.create(1, 0, k - 1));
+            }
+        }
+        return d;
+    }
+
     static GenPolynomial<Quotient<BigRational>> derivative(ParamField f, GenPolynomial<Quotient<BigRational>> p) {
         GenPolynomial<Quotient<BigRational>> d = f.univariate.getZERO();
         for (Map.Entry<ExpVector, Quotient<BigRational>> t : p.getMap().entrySet()) {

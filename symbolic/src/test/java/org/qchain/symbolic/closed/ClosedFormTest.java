@@ -285,4 +285,52 @@ class ClosedFormTest {
             Thread.interrupted();
         }
     }
+
+    @Test
+    void conditionsAreCheckedAgainstTheDomains() {
+        org.qchain.exact.model.Domain unit = org.qchain.exact.model.Domain.probability();
+        // a + b > 0 on (0, 1)^2: proved by the sign argument
+        assertEquals(List.of(), ClosedForms.of(TWO_STATE).conditionsNotProved(Map.of("a", unit, "b", unit)));
+        // a domain that contains a + b = 0 (a in (-1, 1)) is not proved
+        org.qchain.exact.model.Domain wide = new org.qchain.exact.model.Domain(Rational.of(-1), false,
+            java.util.Optional.of(Rational.ONE), false);
+        assertEquals(List.of("a + b != 0"), ClosedForms.of(TWO_STATE).conditionsNotProved(Map.of("a", wide, "b", unit)));
+        // one parameter, decided exactly by Sturm sequences: 121 - 1400 w + 2500 w^2 has its two roots
+        // (14 +- sqrt(75))/50, about 0.107 and 0.453, inside (0, 1) (derived by hand), 14 + 53 w has none
+        Model m = Chains.model(List.of("w"), new String[][] {
+            {"1 - w", "w", "0"}, {"3/10", "1 - 3/10 - 3/50", "3/50"}, {"1/2", "0", "1/2"}});
+        ClosedForm cf = ClosedForms.of(m);
+        List<String> open = cf.conditionsNotProved(Map.of("w", unit));
+        for (String c : open) {
+            assertTrue(cf.conditions().contains(c));
+        }
+        // every condition that involves w only linearly with positive coefficients is proved
+        for (String c : cf.conditions()) {
+            if (c.matches("[0-9]+ \\+ [0-9]+\\*w != 0")) {
+                assertFalse(open.contains(c), c);
+            }
+        }
+        // a quadratic condition with two roots in (0, 1) is reported; on (1/2, 1) it is proved
+        String quad = "1 - 4*w + 3*w^2 != 0"; // (1 - w)(1 - 3w): roots 1/3 and 1
+        assertFalse(DomainCheck.holdsThroughout(cf.field(), cf.field().poly.parse("1 - 4*w + 3*w^2"), Map.of("w", unit)),
+            quad);
+        org.qchain.exact.model.Domain upper = new org.qchain.exact.model.Domain(Rational.of(1, 2), false,
+            java.util.Optional.of(Rational.ONE), false);
+        assertTrue(DomainCheck.holdsThroughout(cf.field(), cf.field().poly.parse("1 - 4*w + 3*w^2"), Map.of("w", upper)),
+            quad + " on (1/2, 1): the root 1 is the open end");
+        org.qchain.exact.model.Domain closedUpper = new org.qchain.exact.model.Domain(Rational.of(1, 2), false,
+            java.util.Optional.of(Rational.ONE), true);
+        assertFalse(DomainCheck.holdsThroughout(cf.field(), cf.field().poly.parse("1 - 4*w + 3*w^2"), Map.of("w", closedUpper)),
+            quad + " on (1/2, 1]: fails at 1");
+        org.qchain.exact.model.Domain between = new org.qchain.exact.model.Domain(Rational.of(1, 3), false,
+            java.util.Optional.of(Rational.ONE), false);
+        assertTrue(DomainCheck.holdsThroughout(cf.field(), cf.field().poly.parse("1 - 4*w + 3*w^2"), Map.of("w", between)),
+            quad + " on (1/3, 1): both roots are open ends");
+        org.qchain.exact.model.Domain closedLower = new org.qchain.exact.model.Domain(Rational.of(1, 3), true,
+            java.util.Optional.of(Rational.ONE), false);
+        assertFalse(DomainCheck.holdsThroughout(cf.field(), cf.field().poly.parse("1 - 4*w + 3*w^2"), Map.of("w", closedLower)),
+            quad + " on [1/3, 1): fails at 1/3");
+        assertFalse(DomainCheck.holdsThroughout(cf.field(), cf.field().poly.parse("1 - 4*w + 3*w^2"),
+            Map.of("w", org.qchain.exact.model.Domain.positive())), quad + " on (0, inf)");
+    }
 }
