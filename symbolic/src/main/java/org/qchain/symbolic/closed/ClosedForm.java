@@ -375,16 +375,7 @@ public final class ClosedForm {
         if (n < 0) {
             throw new IllegalArgumentException("n must not be negative: " + n);
         }
-        for (String p : field.names) {
-            if (!at.containsKey(p)) {
-                throw new QchainException(ErrorKey.BAD_ARGUMENT, "parameter values", at.keySet(), "no value for " + p);
-            }
-        }
-        for (GenPolynomial<BigRational> c : conditionPolys) {
-            if (field.evaluate(c, at).isZERO()) {
-                throw new QchainException(ErrorKey.CLOSED_FORM_CONDITION, Fml.plain(field.formula(c)) + " != 0", at);
-            }
-        }
+        checkPoint(at);
         Rational[][] out = new Rational[size][size];
         if (n < validFrom) {
             for (int i = 0; i < size; i++) {
@@ -407,6 +398,51 @@ public final class ClosedForm {
             }
         }
         return RationalMatrix.of(out);
+    }
+
+    /**
+     * One entry of P^n evaluated exactly at a parameter point, from the closed form (for n below
+     * {@link #validFrom(int, int)} from the initial terms). The cost grows with n: the powers of the eigenvalues are
+     * exact rationals.
+     *
+     * @param n  the step count, at least 0
+     * @param i  the row (from)
+     * @param j  the column (to)
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return the exact value
+     * @throws IllegalArgumentException  if n is negative
+     * @throws IndexOutOfBoundsException if i or j is out of range
+     * @throws QchainException           as {@link #evaluate(long, Map)}
+     */
+    public Rational evaluate(long n, int i, int j, Map<String, Rational> at) {
+        if (n < 0) {
+            throw new IllegalArgumentException("n must not be negative: " + n);
+        }
+        checkPoint(at);
+        if (n < validFrom) {
+            return ParamField.rational(substitute(spectral.series.powers.get((int) n)[i][j], at));
+        }
+        Evaluator<BigRational> ev = new Evaluator<>(BigRational.ZERO, q -> substitute(q, at));
+        BigRational s = BigRational.ZERO;
+        for (Spectral.Group g : spectral.groups) {
+            if (g != zero) {
+                s = s.sum(ev.entry(g, n, i, j));
+            }
+        }
+        return ParamField.rational(s);
+    }
+
+    private void checkPoint(Map<String, Rational> at) {
+        for (String p : field.names) {
+            if (!at.containsKey(p)) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "parameter values", at.keySet(), "no value for " + p);
+            }
+        }
+        for (GenPolynomial<BigRational> c : conditionPolys) {
+            if (field.evaluate(c, at).isZERO()) {
+                throw new QchainException(ErrorKey.CLOSED_FORM_CONDITION, Fml.plain(field.formula(c)) + " != 0", at);
+            }
+        }
     }
 
     private BigRational substitute(Quotient<BigRational> q, Map<String, Rational> at) {

@@ -79,10 +79,16 @@ final class Chains {
         for (int n = 0; n <= last; n++) {
             assertEquals(p.power(n), cf.evaluate(n), "symbolic P^" + n);
         }
+        for (int i = 0; i < s; i++) {
+            for (int j = 0; j < s; j++) {
+                assertBalancedLatex(cf.latex(i, j));
+            }
+        }
         for (Map<String, Rational> at : points) {
             List<RationalMatrix> exact = powers(matrix(m, at), last);
             for (int n = 0; n <= last; n++) {
                 assertEquals(exact.get(n), cf.evaluate(n, at), "P^" + n + " at " + at);
+                assertEquals(exact.get(n).get(0, s - 1), cf.evaluate(n, 0, s - 1, at), "entry of P^" + n + " at " + at);
             }
             // the chain with the values given first has a closed form of its own: it must agree as well
             ClosedForm substituted = ClosedForms.of(m, at);
@@ -90,6 +96,17 @@ final class Chains {
                 assertEquals(exact.get(n), substituted.evaluate(n, Map.of()), "substituted P^" + n + " at " + at);
             }
         }
+    }
+
+    /** Braces balance and every \\left has its \\right (common practice, no source: TeX's grouping rules). */
+    static void assertBalancedLatex(String tex) {
+        int depth = 0;
+        for (char c : tex.toCharArray()) {
+            depth += c == '{' ? 1 : (c == '}' ? -1 : 0);
+            org.junit.jupiter.api.Assertions.assertTrue(depth >= 0, tex);
+        }
+        assertEquals(0, depth, tex);
+        assertEquals(tex.split("\\\\left", -1).length, tex.split("\\\\right", -1).length, tex);
     }
 
     static Map<String, Rational> at(Object... kv) {
