@@ -15,5 +15,9 @@
  *
  * <p>Numeric commands never touch {@code org.qchain.symbolic} or Symja, so they start fast; a test checks that no
  * Symja class is loaded by {@code step}.
+ *
+ * <p>{@code ClosedCommand} ({@code qchain closed}) declares its options only; its work is in {@code ClosedRun}, which
+ * calls {@link org.qchain.symbolic.closed.ClosedForms} and builds a {@link org.qchain.cli.result.ClosedResult} for
+ * {@link org.qchain.cli.format.ClosedFormatter}, so that building the command tree loads no symbolic class.
  */
 package org.qchain.cli;
