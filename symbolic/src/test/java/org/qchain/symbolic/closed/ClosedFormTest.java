@@ -333,4 +333,18 @@ class ClosedFormTest {
         assertFalse(DomainCheck.holdsThroughout(cf.field(), cf.field().poly.parse("1 - 4*w + 3*w^2"),
             Map.of("w", org.qchain.exact.model.Domain.positive())), quad + " on (0, inf)");
     }
+
+    @Test
+    void theCommandLineTestChainsMatchPowers() {
+        // the chains of the CLI's golden tests that no other test here covers (common practice, no source: the check
+        // is against exact powers); model text as in cli/src/test/resources/models
+        Model stages = org.qchain.exact.model.ModelParser.parse("closed-stages.chain", String.join("\n",
+            "chain discrete", "param a in (0, 1) = 1/40", "states Working Diagnosing Fixing",
+            "Working Diagnosing a", "Diagnosing Fixing 1/2", "Fixing Working 1/2", ""));
+        Chains.assertMatchesPowers(ClosedForms.of(stages), stages, List.of(Chains.at("a", "1/40")), 0);
+        Model plant = org.qchain.exact.model.ModelParser.parse("plant.chain", String.join("\n",
+            "chain discrete", "param w in (0, 1) = 1/20", "states Up Worn Down",
+            "Up Worn w", "Worn Down 3/100", "Worn Up 1/4", "Down Up 1/2", ""));
+        Chains.assertMatchesPowers(ClosedForms.of(plant), plant, List.of(Chains.at("w", "1/20"), Chains.at("w", "3/4")), 0);
+    }
 }
