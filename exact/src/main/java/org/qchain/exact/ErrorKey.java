@@ -90,7 +90,10 @@ public enum ErrorKey {
     /** {0}: what, {1}: detail. */
     SWEEP("invalid sweep ''{0}'': {1}"),
     /** {0}: the power as written, {1}: its degree, {2}: the largest degree allowed. */
-    SYMBOLIC_POWER_TOO_LARGE("''{0}'' would have degree {1} in the parameters, more than the {2} a power in a model may have");
+    SYMBOLIC_POWER_TOO_LARGE("''{0}'' would have degree {1} in the parameters, more than the {2} a power in a model may have"),
+    /** {0}: n, {1}: estimated digits, {2}: limit, {3}: option that raises it. */
+    SYMBOLIC_DIGITS_TOO_LARGE("the symbolic P^{0} would have up to about {1} digits in its coefficients, more than the"
+        + " limit {2}; raise it with {3}");
 
     private final String pattern;
 
