@@ -276,7 +276,7 @@ function _picocli_qchain_sens() {
 
   local commands=""
   local flag_opts="'--factor' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms'"
+  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -315,6 +315,9 @@ function _picocli_qchain_sens() {
       return $?
       ;;
     '--max-terms')
+      return
+      ;;
+    '--max-digits')
       return
       ;;
   esac

@@ -53,6 +53,12 @@ final class SensCommand implements Callable<Integer> {
     @Mixin
     SymbolicOptions symbolicOptions;
 
+    @Option(names = "--max-digits", paramLabel = "M", converter = Converters.DigitLimit.class,
+        defaultValue = "" + StepCommand.DEFAULT_MAX_DIGITS,
+        description = "Refuse symbolic powers estimated to need more than M digits in their coefficients"
+            + " (default: ${DEFAULT-VALUE}).")
+    long maxDigits = StepCommand.DEFAULT_MAX_DIGITS;
+
     @Override
     public Integer call() {
         Emitter.checkTarget(output.output(), java.util.Optional.of(model.model));

@@ -121,7 +121,7 @@ final class SensRun {
         TerminalProgress progress = c.root.progress(c.spec.commandLine().getErr());
         SensResult result;
         try {
-            SymbolicLimits limits = new SymbolicLimits(c.symbolicOptions.maxTerms);
+            SymbolicLimits limits = new SymbolicLimits(c.symbolicOptions.maxTerms, c.maxDigits);
             EntrySensitivity s = Sensitivity.of(ctx.p(), c.n, from, to, c.wrt, limits,
                 k -> progress.update("multiplying", k, c.n - 1));
             result = result(c, m, ctx, s, from, to, range);

@@ -56,7 +56,8 @@ final class StepCommand implements Callable<Integer> {
 
     @Option(names = "--max-digits", paramLabel = "M", converter = Converters.DigitLimit.class,
         defaultValue = "" + DEFAULT_MAX_DIGITS,
-        description = "Refuse results estimated to need more than M digits in total (default: ${DEFAULT-VALUE}).")
+        description = "Refuse results estimated to need more than M digits in total (symbolic results: in their"
+            + " coefficients; default: ${DEFAULT-VALUE}).")
     long maxDigits = DEFAULT_MAX_DIGITS;
 
     @Option(names = "--symbolic",

@@ -52,7 +52,7 @@ final class SymbolicStep {
     private static SymbolicResult compute(SymbolicContext ctx, StepCommand c, TerminalProgress progress) {
         Model m = ctx.model();
         RatFunMatrix p = ctx.p();
-        SymbolicLimits limits = new SymbolicLimits(c.symbolicOptions.maxTerms);
+        SymbolicLimits limits = new SymbolicLimits(c.symbolicOptions.maxTerms, c.maxDigits);
         List<String> rowNames = new ArrayList<>();
         List<String> colNames = new ArrayList<>();
         List<List<RatFun>> cells = new ArrayList<>();

@@ -91,6 +91,9 @@ public enum ErrorKey {
     SWEEP("invalid sweep ''{0}'': {1}"),
     /** {0}: the power as written, {1}: its degree, {2}: the largest degree allowed. */
     SYMBOLIC_POWER_TOO_LARGE("''{0}'' would have degree {1} in the parameters, more than the {2} a power in a model may have"),
+    /** {0}: n, {1}: estimated digits, {2}: limit, {3}: option that raises it. */
+    SYMBOLIC_DIGITS_TOO_LARGE("the symbolic P^{0} would have up to about {1} digits in its coefficients, more than the"
+        + " limit {2}; raise it with {3}"),
 
     // --- closed forms in n (appended) --------------------------------------------------------------------------
     /** {0}: what the closed-form engine cannot do, and what is still available. */

@@ -241,8 +241,23 @@ public final class RatFunMatrix {
         }
         long entries = (long) size() * size();
         if (n == 0) {
-            return new PowerEstimate(0, 0, 1, entries);
+            return new PowerEstimate(0, 0, 1, entries, entries);
         }
+        // coefficient height: A = A'/c with A' integral; log10 of s * T * H * c bounds the digits added per step
+        java.math.BigInteger c = java.math.BigInteger.ONE;
+        java.math.BigInteger h = java.math.BigInteger.ONE;
+        long maxTerms = 1;
+        for (Poly[] row : m) {
+            for (Poly p : row) {
+                maxTerms = Math.max(maxTerms, p.termCount());
+                for (Poly.Term t : p.terms()) {
+                    java.math.BigInteger den = t.coefficient().denominator();
+                    c = c.divide(c.gcd(den)).multiply(den);
+                    h = h.max(t.coefficient().numerator().abs());
+                }
+            }
+        }
+        double perStep = Math.log10(size()) + Math.log10(maxTerms) + log10(h) + log10(c);
         long bigD = sat(n, deg);
         int used = 0;
         double box = 1;
@@ -256,7 +271,28 @@ public final class RatFunMatrix {
         double per = Math.min(box, simplex);
         long perEntry = per >= 9.0e18 ? Long.MAX_VALUE : (long) Math.ceil(per);
         double total = per * entries;
-        return new PowerEstimate(n, bigD, perEntry, total >= 9.0e18 ? Long.MAX_VALUE : (long) Math.ceil(total));
+        double digits = total * (n * perStep + 1);
+        return new PowerEstimate(n, bigD, perEntry, total >= 9.0e18 ? Long.MAX_VALUE : (long) Math.ceil(total),
+            digits >= 9.0e18 ? Long.MAX_VALUE : (long) Math.ceil(digits));
+    }
+
+    private static double log10(java.math.BigInteger x) {
+        int bits = x.bitLength();
+        if (bits < 1000) {
+            return Math.log10(x.doubleValue());
+        }
+        return Math.log10(x.shiftRight(bits - 64).doubleValue()) + (bits - 64) * Math.log10(2);
+    }
+
+    private static void check(PowerEstimate est, SymbolicLimits limits, long terms, long digits) {
+        if (terms > limits.maxTerms()) {
+            throw new QchainException(ErrorKey.SYMBOLIC_TOO_LARGE, est.n(), terms, est.degree(), limits.maxTerms(),
+                SymbolicLimits.OPTION);
+        }
+        if (digits > limits.maxDigits()) {
+            throw new QchainException(ErrorKey.SYMBOLIC_DIGITS_TOO_LARGE, est.n(), digits, limits.maxDigits(),
+                SymbolicLimits.DIGITS_OPTION);
+        }
     }
 
     private static long sat(long x, long y) {
@@ -299,16 +335,13 @@ public final class RatFunMatrix {
      * @param limits   the size limit
      * @param progress told the number of multiplications done so far (for a progress display); may do nothing
      * @return {@code P^n}, every entry canonical
-     * @throws QchainException {@link ErrorKey#SYMBOLIC_TOO_LARGE} with the estimate if it exceeds the limit,
-     *                         {@link ErrorKey#BAD_ARGUMENT} for a negative {@code n},
+     * @throws QchainException {@link ErrorKey#SYMBOLIC_TOO_LARGE} or {@link ErrorKey#SYMBOLIC_DIGITS_TOO_LARGE} with
+     *                         the estimate if it exceeds a limit, {@link ErrorKey#BAD_ARGUMENT} for a negative {@code n},
      *                         {@link ErrorKey#INTERRUPTED} if the thread is interrupted meanwhile
      */
     public RatFunMatrix power(long n, SymbolicLimits limits, LongConsumer progress) {
         PowerEstimate est = estimatePower(n);
-        if (est.totalTerms() > limits.maxTerms()) {
-            throw new QchainException(ErrorKey.SYMBOLIC_TOO_LARGE, n, est.totalTerms(), est.degree(),
-                limits.maxTerms(), SymbolicLimits.OPTION);
-        }
+        check(est, limits, est.totalTerms(), est.digits());
         int s = size();
         if (n == 0) {
             return identity(ring, s);
@@ -336,10 +369,8 @@ public final class RatFunMatrix {
         java.util.Objects.checkIndex(from, s);
         PowerEstimate est = estimatePower(n);
         long rowTerms = est.totalTerms() == Long.MAX_VALUE ? Long.MAX_VALUE : est.totalTerms() / s;
-        if (rowTerms > limits.maxTerms()) {
-            throw new QchainException(ErrorKey.SYMBOLIC_TOO_LARGE, n, rowTerms, est.degree(), limits.maxTerms(),
-                SymbolicLimits.OPTION);
-        }
+        long rowDigits = est.digits() == Long.MAX_VALUE ? Long.MAX_VALUE : est.digits() / s;
+        check(est, limits, rowTerms, rowDigits);
         if (n == 0) {
             return List.of(identity(ring, s).a[from]);
         }

@@ -71,7 +71,8 @@
  * <h2>Domains, limits, threads</h2>
  * A {@code param} without a declared domain has the default domain (0, 1) in a discrete chain and (0, infinity) in a
  * continuous one ({@code Domain.defaultFor}). Powers are refused before any work when the estimate
- * ({@link org.qchain.symbolic.RatFunMatrix#estimatePower}) exceeds {@link org.qchain.symbolic.SymbolicLimits};
+ * ({@link org.qchain.symbolic.RatFunMatrix#estimatePower}: terms from degrees, digits from coefficient heights)
+ * exceeds {@link org.qchain.symbolic.SymbolicLimits} (terms or digits);
  * powers written inside model expressions are refused past degree {@link org.qchain.symbolic.ParamRing#MAX_EXPR_DEGREE}.
  * Values are immutable and thread-safe; JAS's thread pool is switched off (it kept the JVM alive for a minute) and its
  * log4j output is routed to the simple logger before the first JAS class initialises.

@@ -35,6 +35,29 @@ class SizeGuardTest {
     }
 
     @Test
+    void digitEstimateBoundsTheCoefficientDigits() {
+        // each coefficient of A^n is a sum of at most (sT)^n products of n coefficients (common practice, no source)
+        for (int n : new int[] {1, 5, 20, 40}) {
+            RatFunMatrix pn = p.power(n);
+            long digits = 0;
+            for (int i = 0; i < 3; i++) {
+                for (int j = 0; j < 3; j++) {
+                    for (Poly.Term t : pn.get(i, j).numerator().terms()) {
+                        digits += t.coefficient().numerator().abs().toString().length()
+                            + t.coefficient().denominator().toString().length();
+                    }
+                }
+            }
+            PowerEstimate e = p.estimatePower(n);
+            assertTrue(digits <= e.digits(), n + ": " + digits + " digits > " + e);
+        }
+        QchainException e = assertThrows(QchainException.class,
+            () -> p.power(40, new SymbolicLimits(1_000_000, 1000), x -> { }));
+        assertEquals(ErrorKey.SYMBOLIC_DIGITS_TOO_LARGE, e.key());
+        assertTrue(e.getMessage().endsWith("more than the limit 1000; raise it with --max-digits"), e.getMessage());
+    }
+
+    @Test
     void powersPastTheLimitAreRefusedWithTheEstimate() {
         QchainException e = assertThrows(QchainException.class,
             () -> p.power(20, new SymbolicLimits(1000), x -> { }));
