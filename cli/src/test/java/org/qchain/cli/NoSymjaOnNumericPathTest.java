@@ -19,7 +19,8 @@ import org.junit.jupiter.api.Test;
 /**
  * Numeric commands must not load Symja, JAS or our symbolic module (start-up time: Symja's evaluator alone costs
  * about a second). The commands run inside a fresh class loader over the test class path that records every class it
- * is asked for; the check fails as soon as any numeric code path touches one of those packages.
+ * is asked for; the check fails as soon as any numeric code path touches one of those packages. (A rule of this
+ * project, common practice, no source: the numbers it protects are in docs/performance.md, "Start-up".)
  */
 class NoSymjaOnNumericPathTest {
     private static final List<String> FORBIDDEN = List.of("org.matheclipse.", "edu.jas.", "org.qchain.symbolic.",

@@ -18,7 +18,7 @@ import org.hipparchus.linear.FieldMatrix;
  */
 class HipparchusReferenceTest {
 
-    // reference library: Hipparchus, org.hipparchus.linear.AbstractFieldMatrix#power over BigFractionField
+    // source: reference library Hipparchus 3.0, org.hipparchus.linear.AbstractFieldMatrix#power over BigFractionField
     @Property(seed = "314159", tries = 30)
     void sameExactPowerAsHipparchus(@ForAll @LongRange(min = 0, max = 1_000_000) long seed,
             @ForAll @IntRange(min = 1, max = 8) int size, @ForAll @IntRange(min = 0, max = 40) int n,

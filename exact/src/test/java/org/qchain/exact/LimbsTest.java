@@ -12,7 +12,7 @@ import net.jqwik.api.constraints.LongRange;
 /** The limb kernel against BigInteger arithmetic. */
 class LimbsTest {
 
-    // reference library: Java SE BigInteger (multiply, add, toByteArray round trip)
+    // source: reference library Java SE BigInteger (multiply, add, toByteArray round trip)
     @Property(seed = "64", tries = 300)
     void mulAddMatchesBigInteger(@ForAll @LongRange(min = 0, max = Long.MAX_VALUE) long seed,
             @ForAll @IntRange(min = 1, max = 9) int terms) {
