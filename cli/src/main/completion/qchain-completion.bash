@@ -209,7 +209,7 @@ function _picocli_qchain_step() {
 
   local commands=""
   local flag_opts="'--symbolic' '--factor' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-terms'"
+  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -245,6 +245,9 @@ function _picocli_qchain_step() {
       return $?
       ;;
     '--max-digits')
+      return
+      ;;
+    '--max-path-digits')
       return
       ;;
     '--max-terms')

@@ -60,6 +60,12 @@ final class StepCommand implements Callable<Integer> {
             + " coefficients; default: ${DEFAULT-VALUE}).")
     long maxDigits = DEFAULT_MAX_DIGITS;
 
+    @Option(names = "--max-path-digits", paramLabel = "W", converter = Converters.DigitLimit.class,
+        defaultValue = "" + org.qchain.exact.SizeEstimate.DEFAULT_MAX_PATH_DIGITS,
+        description = "Refuse a --paths search estimated to process more than W digits in all; the work grows"
+            + " with the square of n (default: ${DEFAULT-VALUE}).")
+    long maxPathDigits = org.qchain.exact.SizeEstimate.DEFAULT_MAX_PATH_DIGITS;
+
     @Option(names = "--symbolic",
         description = "Keep every parameter symbolic, even those with nominal values (formulas, and values at the"
             + " nominal or --at point). Models with a parameter without a value are symbolic anyway.")
@@ -91,7 +97,7 @@ final class StepCommand implements Callable<Integer> {
         }
         LoadedChain chain = LoadedChain.load(parsed, model, spec.name());
         Stepper.Query q = new Stepper.Query(n, Optional.ofNullable(from), Optional.ofNullable(to),
-            paths == null ? OptionalInt.empty() : OptionalInt.of(paths), output.digits, maxDigits);
+            paths == null ? OptionalInt.empty() : OptionalInt.of(paths), output.digits, maxDigits, maxPathDigits);
         TerminalProgress progress = root.progress(spec.commandLine().getErr());
         StepResult result;
         try {

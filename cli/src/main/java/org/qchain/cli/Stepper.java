@@ -25,6 +25,8 @@ import org.qchain.exact.WeightedPath;
 final class Stepper {
     /** The option that raises the size limit, named in the refusal. */
     static final String MAX_DIGITS_OPTION = "--max-digits";
+    /** The option that raises the limit on the work of a path search. */
+    static final String MAX_PATH_DIGITS_OPTION = "--max-path-digits";
 
     private Stepper() {
     }
@@ -39,7 +41,13 @@ final class Stepper {
      * @param digits    significant digits of the decimals
      * @param maxDigits refuse results estimated to have more digits in total
      */
-    record Query(long n, Optional<String> from, Optional<String> to, OptionalInt paths, int digits, long maxDigits) {
+    record Query(long n, Optional<String> from, Optional<String> to, OptionalInt paths, int digits, long maxDigits,
+                 long maxPathDigits) {
+        /** A query with the default limit on the path search. */
+        Query(long n, Optional<String> from, Optional<String> to, OptionalInt paths, int digits, long maxDigits) {
+            this(n, from, to, paths, digits, maxDigits, SizeEstimate.DEFAULT_MAX_PATH_DIGITS);
+        }
+
     }
 
     /**
@@ -92,6 +100,10 @@ final class Stepper {
         if (total.isZero()) {
             warnings.add("no path of " + q.n() + " steps leads from " + q.from().get() + " to " + q.to().get());
             return out;
+        }
+        long work = SizeEstimate.digitsOfPathSearch(chain.p(), q.n(), k);
+        if (work > q.maxPathDigits()) {
+            throw new QchainException(ErrorKey.PATH_SEARCH_TOO_LARGE, work, q.maxPathDigits(), MAX_PATH_DIGITS_OPTION);
         }
         List<WeightedPath> top = TopPaths.mostProbable(chain.p(), from, to, (int) q.n(), k, progress);
         for (WeightedPath w : top) {

@@ -121,4 +121,27 @@ class BadInputTest {
             "--format", "json");
         assertEquals(0, r.code(), r::toString);
     }
+
+    // common practice, no source: a path search is quadratic in n, so it is estimated and refused before it starts
+    @Test
+    void pathSearchOverItsLimitIsRefusedWithTheEstimate() {
+        Cli.Result r = Cli.run("step", Cli.model("plant.chain"), "-n", "200000", "--from", "Up", "--to", "Down",
+            "--paths", "5");
+        assertEquals(2, r.code(), r::toString);
+        assertEquals("", r.out());
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("qchain: the path search would process about"
+            + " (\\d+) digits in all, more than the limit 50000000000; raise it with --max-path-digits, or ask for"
+            + " fewer steps or paths\n").matcher(r.err());
+        assertEquals(true, m.matches(), r::toString);
+        assertEquals(true, Long.parseLong(m.group(1)) > 50_000_000_000L, r::toString);
+    }
+
+    @Test
+    void raisingThePathLimitLetsTheSameQueryThrough() {
+        assertEquals(2, Cli.run("step", Cli.model("plant.chain"), "-n", "40", "--from", "Up", "--to", "Down",
+            "--paths", "2", "--max-path-digits", "10").code());
+        Cli.Result r = Cli.run("step", Cli.model("plant.chain"), "-n", "40", "--from", "Up", "--to", "Down",
+            "--paths", "2", "--max-path-digits", "100000000", "--format", "json");
+        assertEquals(0, r.code(), r::toString);
+    }
 }

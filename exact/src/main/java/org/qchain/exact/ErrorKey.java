@@ -99,7 +99,9 @@ public enum ErrorKey {
     /** {0}: what the closed-form engine cannot do, and what is still available. */
     CLOSED_FORM_UNSUPPORTED("no closed form in n: {0}"),
     /** {0}: the condition that fails, {1}: the parameter values. */
-    CLOSED_FORM_CONDITION("the closed form needs {0}, which fails at {1}; compute it with these values given (--at) instead");
+    CLOSED_FORM_CONDITION("the closed form needs {0}, which fails at {1}; compute it with these values given (--at) instead"),
+    /** {0}: estimated digits processed, {1}: limit, {2}: option that raises it. */
+    PATH_SEARCH_TOO_LARGE("the path search would process about {0} digits in all, more than the limit {1}; raise it with {2}, or ask for fewer steps or paths");
 
     private final String pattern;
 

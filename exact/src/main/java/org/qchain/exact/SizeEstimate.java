@@ -75,6 +75,40 @@ public final class SizeEstimate {
         return saturate(sh.rowDigits(from));
     }
 
+    /** The default limit on {@link #digitsOfPathSearch}: about 15 s of work on one core of a 2026 server. */
+    public static final long DEFAULT_MAX_PATH_DIGITS = 50_000_000_000L;
+
+    /**
+     * Estimated work of {@link TopPaths#mostProbable}: the decimal digits of all the prefix weights it forms. Layer
+     * {@code t} extends at most {@code k} prefixes along each of the {@code z} non-zero entries of {@code P}, and
+     * each weight is an integer over {@code d^t} of at most {@code t log10 d + 1} digits, so the work is at most
+     * {@code k z sum_t (t log10 d + 1) = k z (n (n + 1) / 2 log10 d + n)}, with {@code log10 d} bounded from above by
+     * {@code bitLength(d) log10 2}. Quadratic in {@code n}: the reason a
+     * path search is refused long before its result (k paths) is large.
+     *
+     * @param p a square matrix
+     * @param n the path length, {@code >= 0}
+     * @param k the number of paths asked for, {@code >= 1}
+     * @return the estimate; {@link Long#MAX_VALUE} if it does not fit in a {@code long}
+     * @throws IllegalArgumentException if {@code p} is not square, {@code n < 0} or {@code k < 1}
+     */
+    public static long digitsOfPathSearch(RationalMatrix p, long n, int k) {
+        if (k < 1) {
+            throw new IllegalArgumentException("k must be at least 1: " + k);
+        }
+        Shape sh = Shape.of(p, n);
+        long nonZero = 0;
+        for (int i = 0; i < sh.size; i++) {
+            for (int j = 0; j < sh.size; j++) {
+                if (!p.get(i, j).isZero()) {
+                    nonZero++;
+                }
+            }
+        }
+        double nn = n;
+        return saturate((double) k * nonZero * (nn * (nn + 1) / 2 * Math.max(sh.log10D, 1e-9) + nn));
+    }
+
     /**
      * Refuses a computation whose estimated size is over the limit.
      *

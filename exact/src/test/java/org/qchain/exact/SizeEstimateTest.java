@@ -89,4 +89,68 @@ class SizeEstimateTest {
         assertTrue(e.getMessage().contains("4300000"), e.getMessage());
         assertTrue(e.getMessage().contains("--max-digits"), e.getMessage());
     }
+
+    // derived by hand: P = [[9/10, 1/10], [1/2, 1/2]] has d = 10 and 4 non-zero entries; log10 d is bounded by
+    // bitLength(10) log10 2 = 4 * 0.30103 = 1.20412; k = 1, n = 3 gives 1 * 4 * (3 * 4 / 2 * 1.20412 + 3) = 40.9, so 41
+    @Test
+    void pathSearchWorkFollowsItsBound() {
+        RationalMatrix p = RationalMatrix.of(new Rational[][] {
+            {Rational.of(9, 10), Rational.of(1, 10)}, {Rational.of(1, 2), Rational.of(1, 2)}});
+        assertEquals(41, SizeEstimate.digitsOfPathSearch(p, 3, 1));
+        // quadratic in n, linear in k
+        long a = SizeEstimate.digitsOfPathSearch(p, 1000, 1);
+        assertTrue(SizeEstimate.digitsOfPathSearch(p, 2000, 1) > 3.9 * a);
+        assertEquals(5 * a, SizeEstimate.digitsOfPathSearch(p, 1000, 5), 5.0);
+        assertThrows(IllegalArgumentException.class, () -> SizeEstimate.digitsOfPathSearch(p, 3, 0));
+    }
+
+    // common practice, no source: the estimate bounds the digits of the weights a plain k-best search really forms
+    @Property(seed = "99", tries = 20)
+    void pathSearchEstimateBoundsTheRealWork(@ForAll @LongRange(min = 0, max = 1_000_000) long seed,
+            @ForAll @IntRange(min = 1, max = 5) int size, @ForAll @IntRange(min = 1, max = 25) int n,
+            @ForAll @IntRange(min = 1, max = 4) int k) {
+        RationalMatrix p = RandomChains.stochastic(new Random(seed), size, 60, 0.3);
+        BigInteger d = BigInteger.ONE;
+        for (int i = 0; i < size; i++) {
+            for (int j = 0; j < size; j++) {
+                BigInteger q = p.get(i, j).denominator();
+                d = d.divide(d.gcd(q)).multiply(q);
+            }
+        }
+        // every weight of layer t is an integer over d^t: keep the k largest per state, count digits formed
+        java.util.List<java.util.List<BigInteger>> cur = new java.util.ArrayList<>();
+        for (int i = 0; i < size; i++) {
+            cur.add(new java.util.ArrayList<>());
+        }
+        cur.get(0).add(BigInteger.ONE);
+        long work = 0;
+        for (int t = 1; t <= n; t++) {
+            java.util.List<java.util.List<BigInteger>> next = new java.util.ArrayList<>();
+            for (int j = 0; j < size; j++) {
+                next.add(new java.util.ArrayList<>());
+            }
+            for (int i = 0; i < size; i++) {
+                for (int j = 0; j < size; j++) {
+                    Rational x = p.get(i, j);
+                    if (x.isZero()) {
+                        continue;
+                    }
+                    BigInteger a = x.numerator().multiply(d.divide(x.denominator()));
+                    for (BigInteger w : cur.get(i)) {
+                        BigInteger v = w.multiply(a);
+                        work += digits(v);
+                        next.get(j).add(v);
+                    }
+                }
+            }
+            for (java.util.List<BigInteger> l : next) {
+                l.sort(java.util.Comparator.reverseOrder());
+                while (l.size() > k) {
+                    l.remove(l.size() - 1);
+                }
+            }
+            cur = next;
+        }
+        assertTrue(SizeEstimate.digitsOfPathSearch(p, n, k) >= work, "estimate below the real work " + work);
+    }
 }
