@@ -117,7 +117,7 @@ public final class ClosedForm {
                     // lambda^n and the coefficient N_k / lambda^k; a parametric one keeps lambda^(n-k), which
                     // needs no condition lambda != 0
                     boolean constant = ParamField.isConstant(g.lambda);
-                    Fml exponent = k == 0 || constant ? N : Fml.sum(N, Fml.neg(Fml.integer(k)));
+                    Fml exponent = constant ? N : shifted(-k);
                     Quotient<BigRational> coef = constant && k > 0 ? c.divide(ParamField.power(g.lambda, k)) : c;
                     Fml power = g.lambda.isONE() ? Fml.ONE : Fml.pow(field.formula(g.lambda), exponent);
                     terms.add(Fml.prod(List.of(field.formula(coef), binom, power)));
