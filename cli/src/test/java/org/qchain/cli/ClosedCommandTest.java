@@ -58,6 +58,11 @@ class ClosedCommandTest {
         }
         // a condition with roots inside the domain (a double eigenvalue there): reported as not shown to hold
         out.add(new Case("plant-entry.txt", List.of(Cli.model("plant.chain"), "--from", "Up", "--to", "Down")));
+        // a double irreducible quadratic with a Jordan block: binomial(n, k) times the (n - k)-th powers of the pair
+        String rounds = Cli.model("closed-rounds.chain");
+        out.add(new Case("rounds.txt", List.of(rounds, "--from", "Draft1")));
+        out.add(new Case("rounds.json", List.of(rounds, "--format", "json")));
+        out.add(new Case("rounds-entry.tex", List.of(rounds, "--from", "Draft1", "--to", "Revise2", "--format", "latex")));
         out.add(new Case("cubic.txt", List.of(Cli.model("closed-cubic.chain"), "--from", "Run", "--to", "Run",
             "--digits", "15")));
         return out.stream();

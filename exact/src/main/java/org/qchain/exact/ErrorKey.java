@@ -96,7 +96,10 @@ public enum ErrorKey {
         + " limit {2}; raise it with {3}"),
 
     // --- closed forms in n (appended) --------------------------------------------------------------------------
-    /** {0}: what the closed-form engine cannot do, and what is still available. */
+    /**
+     * {0}: what the closed-form engine cannot do, and what is still available. No current case raises it (repeated
+     * factors with Jordan blocks now have closed forms); kept because keys are never dropped.
+     */
     CLOSED_FORM_UNSUPPORTED("no closed form in n: {0}"),
     /** {0}: the condition that fails, {1}: the parameter values. */
     CLOSED_FORM_CONDITION("the closed form needs {0}, which fails at {1}; compute it with these values given (--at) instead"),

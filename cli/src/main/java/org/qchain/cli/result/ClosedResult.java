@@ -82,7 +82,7 @@ public record ClosedResult(String source, String form, String nSymbol, int valid
      *
      * @param factor       the monic irreducible factor, plain syntax
      * @param multiplicity its multiplicity
-     * @param jordanIndex  the largest Jordan block of a rational eigenvalue (1: none)
+     * @param jordanIndex  the size of the largest Jordan block of each eigenvalue of the factor (1: none)
      * @param kind         {@code rational}, {@code quadratic} or {@code roots}
      * @param values       the eigenvalues as formulas
      */

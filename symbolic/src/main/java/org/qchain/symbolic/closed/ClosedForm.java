@@ -112,42 +112,58 @@ public final class ClosedForm {
                     if (c.isZERO()) {
                         continue;
                     }
-                    Fml binom = k == 0 ? Fml.ONE : (k == 1 ? N : Fml.call("binomial", N, Fml.integer(k)));
+                    Fml binom = binomial(k);
                     // a constant eigenvalue is never 0 here, so binomial(n, k) lambda^(n-k) N_k is written with
                     // lambda^n and the coefficient N_k / lambda^k; a parametric one keeps lambda^(n-k), which
                     // needs no condition lambda != 0
                     boolean constant = ParamField.isConstant(g.lambda);
-                    Fml exponent = k == 0 || constant ? N : Fml.sum(N, Fml.neg(Fml.integer(k)));
+                    Fml exponent = constant ? N : shifted(-k);
                     Quotient<BigRational> coef = constant && k > 0 ? c.divide(ParamField.power(g.lambda, k)) : c;
                     Fml power = g.lambda.isONE() ? Fml.ONE : Fml.pow(field.formula(g.lambda), exponent);
                     terms.add(Fml.prod(List.of(field.formula(coef), binom, power)));
                 }
                 break;
             case QUADRATIC: {
-                Quotient<BigRational> x = g.x[i][j];
-                Quotient<BigRational> y = g.y[i][j];
                 Fml sqrt = Fml.call("sqrt", field.formula(g.delta));
                 List<Fml> roots = quadraticRoots(g);
-                Fml l1n = Fml.pow(roots.get(0), N);
-                Fml l2n = Fml.pow(roots.get(1), N);
-                if (!x.isZERO()) {
-                    terms.add(Fml.prod(field.formula(x), Fml.sum(l1n, l2n)));
-                }
-                if (!y.isZERO()) {
-                    terms.add(Fml.prod(field.formula(y), Fml.div(Fml.sum(l1n, Fml.neg(l2n)), sqrt)));
+                for (int k = 0; k < g.x.size(); k++) {
+                    Quotient<BigRational> x = g.x.get(k)[i][j];
+                    Quotient<BigRational> y = g.y.get(k)[i][j];
+                    Fml exponent = shifted(-k);
+                    Fml l1n = Fml.pow(roots.get(0), exponent);
+                    Fml l2n = Fml.pow(roots.get(1), exponent);
+                    if (!x.isZERO()) {
+                        terms.add(Fml.prod(List.of(field.formula(x), binomial(k), Fml.sum(l1n, l2n))));
+                    }
+                    if (!y.isZERO()) {
+                        terms.add(Fml.prod(List.of(field.formula(y), binomial(k),
+                            Fml.div(Fml.sum(l1n, Fml.neg(l2n)), sqrt))));
+                    }
                 }
                 break;
             }
             default:
-                for (int t = 0; t < g.degree; t++) {
-                    Quotient<BigRational> c = g.c.get(t)[i][j];
-                    if (!c.isZERO()) {
-                        Fml k = t == 0 ? N : Fml.sum(N, Fml.integer(t));
-                        terms.add(Fml.prod(field.formula(c), Fml.call("rootsum", k, Fml.name(g.name))));
+                for (int k = 0; k < g.c.size(); k++) {
+                    for (int t = 0; t < g.degree; t++) {
+                        Quotient<BigRational> c = g.c.get(k).get(t)[i][j];
+                        if (!c.isZERO()) {
+                            terms.add(Fml.prod(List.of(field.formula(c), binomial(k),
+                                Fml.call("rootsum", shifted(t - k), Fml.name(g.name)))));
+                        }
                     }
                 }
         }
         return Fml.sum(terms);
+    }
+
+    /** {@code binomial(n, k)}, written 1 for k = 0 and n for k = 1. */
+    private static Fml binomial(int k) {
+        return k == 0 ? Fml.ONE : (k == 1 ? N : Fml.call("binomial", N, Fml.integer(k)));
+    }
+
+    /** {@code n + d}. */
+    private static Fml shifted(int d) {
+        return d == 0 ? N : Fml.sum(N, Fml.integer(d));
     }
 
     // --- conditions --------------------------------------------------------------------------------------------
@@ -165,16 +181,20 @@ public final class ClosedForm {
                     addAll(used, m);
                 }
             } else if (g.kind == Spectral.Kind.QUADRATIC) {
-                addAll(used, g.x);
-                addAll(used, g.y);
+                for (int k = 0; k < g.x.size(); k++) {
+                    addAll(used, g.x.get(k));
+                    addAll(used, g.y.get(k));
+                }
                 used.add(g.delta);
                 // sqrt(D) stands in a denominator: D != 0
                 for (GenPolynomial<BigRational> p : field.irreducibleFactors(g.delta.num)) {
                     out.put(key(p), p);
                 }
             } else {
-                for (Quotient<BigRational>[][] m : g.c) {
-                    addAll(used, m);
+                for (List<Quotient<BigRational>[][]> ck : g.c) {
+                    for (Quotient<BigRational>[][] m : ck) {
+                        addAll(used, m);
+                    }
                 }
             }
             for (Quotient<BigRational> q : used) {

@@ -44,9 +44,7 @@ public final class ClosedForms {
      * @return the closed form
      * @throws QchainException with {@link ErrorKey#WRONG_KIND} for a continuous-time model,
      *                         {@link ErrorKey#UNKNOWN_PARAMETER} for a value of an undeclared parameter,
-     *                         {@link ErrorKey#SYMBOLIC_TOO_LARGE} if P^s is estimated past the limit,
-     *                         {@link ErrorKey#CLOSED_FORM_UNSUPPORTED} for a repeated irreducible factor of degree
-     *                         at least 2 with a Jordan block
+     *                         {@link ErrorKey#SYMBOLIC_TOO_LARGE} if P^s is estimated past the limit
      */
     public static ClosedForm of(Model model, Map<String, Rational> at) {
         return of(model, at, SymbolicLimits.DEFAULT);
@@ -100,22 +98,21 @@ public final class ClosedForms {
      * @return the closed form
      * @throws IllegalArgumentException if the number of names differs from the size
      * @throws QchainException          with {@link ErrorKey#SYMBOLIC_TOO_LARGE} if P^s is estimated past the
-     *                                  limit, {@link ErrorKey#CLOSED_FORM_UNSUPPORTED} for a repeated irreducible
-     *                                  factor of degree at least 2 with a Jordan block
+     *                                  limit
      */
     public static ClosedForm of(RatFunMatrix p, List<String> states, SymbolicLimits limits, Progress progress) {
         return interruptible(() -> new ClosedForm(Series.of(guarded(p, states, limits), progress), states, progress));
     }
 
     /**
-     * The generating functions and recurrences of P^n, which need no factorisation into eigenvalues and so exist
-     * for every chain (also where {@link #of(Model, Map)} reports {@link ErrorKey#CLOSED_FORM_UNSUPPORTED}).
+     * The generating functions and recurrences of P^n, which need no factorisation into eigenvalues (and so cost
+     * less than {@link #of(Model, Map)}).
      *
      * @param model  a discrete-time model
      * @param at     values for some parameters (may be empty)
      * @param limits the size limit
      * @return the series forms
-     * @throws QchainException as {@link #of(Model, Map)}, except for the unsupported case
+     * @throws QchainException as {@link #of(Model, Map)}
      */
     public static SeriesForm series(Model model, Map<String, Rational> at, SymbolicLimits limits) {
         return series(model, at, limits, Progress.NONE);

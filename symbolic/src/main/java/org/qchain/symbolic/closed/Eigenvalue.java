@@ -10,7 +10,8 @@ import java.util.List;
  * @param factorLatex  the same in LaTeX
  * @param degree       its degree in x
  * @param multiplicity its multiplicity in the characteristic polynomial
- * @param jordanIndex  for a rational eigenvalue, the size of its largest Jordan block (1 = no block); 1 otherwise
+ * @param jordanIndex  the size of the largest Jordan block of each of the factor's eigenvalues (1 = no block; the
+ *                     same for every root of an irreducible factor)
  * @param kind         {@code rational} (one eigenvalue in Q(parameters)), {@code quadratic} (a conjugate pair with
  *                     a square root) or {@code roots} (the roots of the named factor)
  * @param values       the eigenvalues as formulas: one, two (with {@code sqrt}), or {@code "roots of NAME"}

@@ -42,25 +42,33 @@ final class Evaluator<C extends GcdRingElem<C>> {
                 return s;
             }
             case QUADRATIC: {
-                C x = conv.apply(g.x[i][j]);
-                C y = conv.apply(g.y[i][j]);
-                if (x.isZERO() && y.isZERO()) {
-                    return fac.getZERO();
-                }
                 C d = conv.apply(g.delta);
                 C half = fac.fromInteger(2).inverse();
-                // l1^n = (u/2 + (s/2) sqrt(D))^n = xn + yn sqrt(D); l1^n + l2^n = 2 xn; (l1^n - l2^n)/sqrt(D) = 2 yn
-                List<C> l1n = sqrtPower(conv.apply(g.u).multiply(half), conv.apply(g.scale).multiply(half), d, n);
                 C two = fac.fromInteger(2);
-                return x.multiply(two.multiply(l1n.get(0))).sum(y.multiply(two.multiply(l1n.get(1))));
+                C s = fac.getZERO();
+                for (int k = 0; k < g.x.size() && k <= n; k++) {
+                    C x = conv.apply(g.x.get(k)[i][j]);
+                    C y = conv.apply(g.y.get(k)[i][j]);
+                    if (x.isZERO() && y.isZERO()) {
+                        continue;
+                    }
+                    // l1^m = (u/2 + (s/2) sqrt(D))^m = xm + ym sqrt(D); l1^m + l2^m = 2 xm; (l1^m - l2^m)/sqrt(D) = 2 ym
+                    List<C> l1m = sqrtPower(conv.apply(g.u).multiply(half), conv.apply(g.scale).multiply(half), d, n - k);
+                    C term = x.multiply(two.multiply(l1m.get(0))).sum(y.multiply(two.multiply(l1m.get(1))));
+                    s = s.sum(term.multiply(fac.fromInteger(binomial(n, k))));
+                }
+                return s;
             }
             default: {
                 List<C> p = powerSums(g, n + g.degree);
                 C s = fac.getZERO();
-                for (int t = 0; t < g.degree; t++) {
-                    Quotient<BigRational> ct = g.c.get(t)[i][j];
-                    if (!ct.isZERO()) {
-                        s = s.sum(conv.apply(ct).multiply(p.get((int) (n + t))));
+                for (int k = 0; k < g.c.size() && k <= n; k++) {
+                    C b = fac.fromInteger(binomial(n, k));
+                    for (int t = 0; t < g.degree; t++) {
+                        Quotient<BigRational> ct = g.c.get(k).get(t)[i][j];
+                        if (!ct.isZERO()) {
+                            s = s.sum(conv.apply(ct).multiply(b).multiply(p.get((int) (n - k + t))));
+                        }
                     }
                 }
                 return s;

@@ -24,14 +24,22 @@ import org.qchain.exact.QchainException;
  *   <li>{@code f = x - lambda}: {@code P^n E_f = sum_k binomial(n, k) lambda^(n-k) (P - lambda I)^k E_f}, with
  *       k below the Jordan index (the smallest k with {@code (P - lambda I)^k E_f = 0}). For {@code lambda = 0} only
  *       the terms with {@code n = k} survive, so they vanish for n at least the index: that index is valid_from.</li>
- *   <li>f of degree e &ge; 2 with {@code f(P) E_f = 0} (no Jordan block on its roots): for each root r,
- *       {@code E_r = E_f q_r(P) / f'(r)} with {@code q_r(y) = f(y)/(y - r)}; reducing modulo f gives
- *       {@code P^n E_f = sum_{t<e} C_t p_(n+t)}, where {@code p_k} is the k-th power sum of the roots of f and the
- *       matrices {@code C_t} lie over Q(parameters). For e = 2 with roots {@code (u +- sqrt(D))/2} this is
- *       {@code X (l1^n + l2^n) + Y (l1^n - l2^n)/sqrt(D)}, real for real parameters whatever the sign of D.</li>
+ *   <li>f of degree e &ge; 2 and multiplicity 1: for each root r, {@code E_r = adj(rI - P) / chi'(r)}; reducing
+ *       modulo f gives {@code P^n E_f = sum_{t<e} C_t p_(n+t)}, where {@code p_k} is the k-th power sum of the roots
+ *       of f and the matrices {@code C_t} lie over Q(parameters).</li>
+ *   <li>f of degree e &ge; 2 and multiplicity m &gt; 1, with or without a Jordan block: Newton's iteration
+ *       {@code s <- s - f(s)/f'(s) mod f^m} from {@code s = x} gives the polynomial s with {@code f(s) = 0 mod f^m}
+ *       and {@code s = x mod f} (the Jordan-Chevalley decomposition), so on the generalised eigenspace
+ *       {@code S = s(P)} is the semisimple part of P, with minimal polynomial f, and {@code N = P - S} the nilpotent
+ *       part; both are polynomials in P and commute. Then {@code P^n E_f = sum_k binomial(n, k) S^(n-k) N^k E_f},
+ *       and S splits by roots as above: {@code E_r = E_f q_r(S) / f'(r)} with {@code q_r(y) = f(y)/(y - r)}, so
+ *       {@code P^n E_f = sum_{k<J} binomial(n, k) sum_{t<e} C_(k,t) p_(n-k+t)} with J the Jordan index (the least
+ *       J with {@code N^J E_f = 0}; 1 without a Jordan block) and {@code C_(k,t) = sum_i h_(i,t) S^i N^k E_f}. The
+ *       terms with k &gt; n vanish (the binomial is 0).</li>
  * </ul>
- * A factor of degree &ge; 2 with a Jordan block is not handled (the generating function and the recurrence still
- * are).
+ * For e = 2 with roots {@code u/2 +- (s/2) sqrt(D)}, each k gives
+ * {@code binomial(n, k) (X_k (l1^(n-k) + l2^(n-k)) + Y_k (l1^(n-k) - l2^(n-k))/sqrt(D))}, real for real parameters
+ * whatever the sign of D.
  */
 final class Spectral {
 
@@ -55,10 +63,14 @@ final class Spectral {
         Quotient<BigRational> u;
         Quotient<BigRational> scale;
         Quotient<BigRational> delta;
-        Quotient<BigRational>[][] x;
-        Quotient<BigRational>[][] y;
-        /** ROOTS (and QUADRATIC): P^n E = sum_t C_t p_(n+t). */
-        List<Quotient<BigRational>[][]> c = List.of();
+        /** QUADRATIC: X_k and Y_k, k below the Jordan index. */
+        List<Quotient<BigRational>[][]> x = List.of();
+        List<Quotient<BigRational>[][]> y = List.of();
+        /**
+         * ROOTS (and QUADRATIC): {@code c.get(k).get(t)} is C_(k,t) in
+         * {@code P^n E = sum_k binomial(n, k) sum_t C_(k,t) p_(n-k+t)}, k below the Jordan index.
+         */
+        List<List<Quotient<BigRational>[][]>> c = List.of();
         /** Order of the roots as roots of unity, or 0 if they are not all roots of unity. */
         int unitOrder;
         /** ROOTS: printed name of the factor, f1, f2, ... */
@@ -78,9 +90,9 @@ final class Spectral {
             return kind == Kind.LINEAR && lambda.isZERO();
         }
 
-        /** The Jordan index (LINEAR) or 1. */
+        /** The Jordan index: the size of the largest Jordan block of each root (1: none). */
         int index() {
-            return kind == Kind.LINEAR ? nilpotent.size() : 1;
+            return kind == Kind.LINEAR ? nilpotent.size() : c.size();
         }
     }
 
@@ -141,12 +153,13 @@ final class Spectral {
                 continue;
             }
             GenPolynomial<Quotient<BigRational>> gm = ParamField.power(g, m);
+            GenPolynomial<Quotient<BigRational>> idem = f.univariate.getONE();
             Quotient<BigRational>[][] e;
             if (fs.size() == 1) {
                 e = Mat.identity(f, s);
             } else {
                 GenPolynomial<Quotient<BigRational>> h = chi.divide(gm);
-                GenPolynomial<Quotient<BigRational>> idem = h.multiply(h.modInverse(gm)).remainder(chi);
+                idem = h.multiply(h.modInverse(gm)).remainder(chi);
                 e = evalAt(f, idem, powers);
             }
             total = Mat.addScaled(total, f.one(), e);
@@ -168,7 +181,7 @@ final class Spectral {
                 }
                 gr.nilpotent = List.copyOf(nil);
             } else {
-                semisimple(f, gr, powers);
+                repeated(f, gr, gm, idem, chi, powers);
             }
             gr.unitOrder = unitOrder(f, g, s);
             groups.add(gr);
@@ -192,39 +205,87 @@ final class Spectral {
         .thenComparingInt(g -> g.degree)
         .thenComparing(g -> g.factor.toString());
 
-    /** Fills X, Y (QUADRATIC) and C_t for a factor of degree at least 2, or refuses a Jordan block. */
-    private static void semisimple(ParamField f, Group gr, List<Quotient<BigRational>[][]> powers) {
+    /**
+     * Fills C_(k,t) (and X_k, Y_k) for a repeated factor f of degree e at least 2, Jordan block or not. All the work
+     * is on polynomials modulo f^m (then times the idempotent e_f modulo chi, evaluated at P from the stored powers):
+     * s with {@code f(s) = 0 mod f^m}, {@code s = x mod f} by Newton's iteration (each step doubles the power of f
+     * that divides f(s); f' is invertible modulo f^m because f is irreducible, so separable, and
+     * {@code s = x mod f}); the nilpotent part {@code v = x - s}; and
+     * {@code C_(k,t) = [sum_i h_(i,t) s^i v^k e_f mod chi](P)} with {@code h_(i,t)} the coefficients of
+     * {@code b_i(x)/f'(x) mod f}, {@code b_i} the coefficient of y^i in {@code f(y)/(y - x)}.
+     */
+    private static void repeated(ParamField f, Group gr, GenPolynomial<Quotient<BigRational>> fm,
+                                 GenPolynomial<Quotient<BigRational>> idem, GenPolynomial<Quotient<BigRational>> chi,
+                                 List<Quotient<BigRational>[][]> powers) {
         int e = gr.degree;
         Quotient<BigRational>[] a = gr.coeffs;
-        Quotient<BigRational>[][] fp = Mat.zero(f, gr.projector.length);
-        for (int j = 0; j <= e; j++) {
-            fp = Mat.addScaled(fp, a[j], powers.get(j));
+        GenPolynomial<Quotient<BigRational>> fd = derivative(f, gr.factor);
+        GenPolynomial<Quotient<BigRational>> xpoly = f.univariate.univariate(0);
+        GenPolynomial<Quotient<BigRational>> sp = xpoly;
+        for (int step = 0; step <= gr.multiplicity; step++) {
+            GenPolynomial<Quotient<BigRational>> fs = compose(gr.factor, sp, fm);
+            if (fs.isZERO()) {
+                break;
+            }
+            if (step == gr.multiplicity) {
+                throw new QchainException(ErrorKey.INTERNAL, "Newton's iteration for the semisimple part did not end");
+            }
+            sp = sp.subtract(fs.multiply(compose(fd, sp, fm).modInverse(fm))).remainder(fm);
         }
-        if (!Mat.isZero(Mat.multiply(f, fp, gr.projector))) {
-            throw new QchainException(ErrorKey.CLOSED_FORM_UNSUPPORTED,
-                "the repeated factor " + Fml.plain(f.formula(gr.factor, "x"))
-                    + " of the characteristic polynomial has a Jordan block; use the generating function or the recurrence");
-        }
-        // f'(x) and its inverse modulo f
-        GenPolynomial<Quotient<BigRational>> w = derivative(f, gr.factor).modInverse(gr.factor);
-        List<Quotient<BigRational>[][]> c = new ArrayList<>();
-        for (int t = 0; t < e; t++) {
-            c.add(Mat.zero(f, gr.projector.length));
-        }
-        for (int j = 0; j < e; j++) {
-            // b_j(x) = sum_{i>j} a_i x^(i-j-1), the coefficient of y^j in f(y)/(y - x)
+        GenPolynomial<Quotient<BigRational>> v = xpoly.subtract(sp);
+        // h_(i,t): b_i(x) / f'(x) mod f
+        GenPolynomial<Quotient<BigRational>> w = fd.modInverse(gr.factor);
+        List<Quotient<BigRational>[]> h = new ArrayList<>();
+        for (int i = 0; i < e; i++) {
             GenPolynomial<Quotient<BigRational>> b = f.univariate.getZERO();
-            for (int i = j + 1; i <= e; i++) {
-                b = b.sum(a[i], ExpVector.create(1, 0, i - j - 1));
+            for (int j = i + 1; j <= e; j++) {
+                b = b.sum(a[j], ExpVector.create(1, 0, j - i - 1));
             }
-            Quotient<BigRational>[] h = coefficients(f, b.multiply(w).remainder(gr.factor), e - 1);
-            Quotient<BigRational>[][] ep = Mat.multiply(f, gr.projector, powers.get(j));
+            h.add(coefficients(f, b.multiply(w).remainder(gr.factor), e - 1));
+        }
+        // s^i e_f mod f^m, i < e
+        List<GenPolynomial<Quotient<BigRational>>> si = new ArrayList<>();
+        si.add(f.univariate.getONE());
+        for (int i = 1; i < e; i++) {
+            si.add(si.get(i - 1).multiply(sp).remainder(fm));
+        }
+        List<List<Quotient<BigRational>[][]>> c = new ArrayList<>();
+        GenPolynomial<Quotient<BigRational>> vk = f.univariate.getONE();
+        for (int k = 0; ; k++) {
+            List<Quotient<BigRational>[][]> ck = new ArrayList<>();
+            boolean zero = true;
             for (int t = 0; t < e; t++) {
-                c.set(t, Mat.addScaled(c.get(t), h[t], ep));
+                GenPolynomial<Quotient<BigRational>> g = f.univariate.getZERO();
+                for (int i = 0; i < e; i++) {
+                    g = g.sum(si.get(i).multiply(h.get(i)[t]));
+                }
+                Quotient<BigRational>[][] m = evalAt(f, g.multiply(vk).remainder(fm).multiply(idem).remainder(chi), powers);
+                zero &= Mat.isZero(m);
+                ck.add(m);
             }
+            if (zero) {
+                break;
+            }
+            if (k == gr.multiplicity) {
+                throw new QchainException(ErrorKey.INTERNAL, "Jordan chain longer than the multiplicity");
+            }
+            c.add(List.copyOf(ck));
+            vk = vk.multiply(v).remainder(fm);
         }
         gr.c = List.copyOf(c);
         quadraticParts(f, gr);
+    }
+
+    /** {@code p(s) mod m}, by Horner's rule. */
+    private static GenPolynomial<Quotient<BigRational>> compose(GenPolynomial<Quotient<BigRational>> p,
+                                                               GenPolynomial<Quotient<BigRational>> s,
+                                                               GenPolynomial<Quotient<BigRational>> m) {
+        int d = (int) p.degree(0);
+        GenPolynomial<Quotient<BigRational>> r = p.ring.getZERO();
+        for (int k = d; k >= 0; k--) {
+            r = r.multiply(s).sum(p.coefficient(ExpVector.create(1, 0, k)), p.ring.evzero).remainder(m);
+        }
+        return r;
     }
 
     /**
@@ -263,7 +324,7 @@ final class Spectral {
             gr.lambda = a[0].negate();
             gr.nilpotent = java.util.Collections.singletonList(proj);
         } else {
-            gr.c = List.copyOf(c);
+            gr.c = List.of(List.copyOf(c));
             quadraticParts(f, gr);
         }
         return gr;
@@ -292,9 +353,12 @@ final class Spectral {
         return d;
     }
 
+    /**
+     * X_k and Y_k of a quadratic factor from C_(k,0), C_(k,1): with roots {@code l = u/2 +- (s/2) sqrt(core)},
+     * {@code sum_l l^j (C_0 + C_1 l) = (C_0 + (u/2) C_1)(l1^j + l2^j) + (s core/2) C_1 (l1^j - l2^j)/sqrt(core)}.
+     */
     private static void quadraticParts(ParamField f, Group gr) {
         Quotient<BigRational>[] a = gr.coeffs;
-        List<Quotient<BigRational>[][]> c = gr.c;
         if (gr.kind == Kind.QUADRATIC) {
             Quotient<BigRational> two = f.of(2);
             gr.u = a[1].negate();
@@ -303,9 +367,15 @@ final class Spectral {
             Quotient<BigRational>[] split = Radicals.split(f, delta);
             gr.scale = split[0];
             gr.delta = split[1];
-            gr.x = Mat.addScaled(c.get(0), gr.u.divide(two), c.get(1));
-            // Y (l1^n - l2^n)/sqrt(delta) with Y = (delta/2) C_1, written over sqrt(core): Y / s
-            gr.y = Mat.addScaled(Mat.zero(f, gr.projector.length), delta.divide(two).divide(gr.scale), c.get(1));
+            List<Quotient<BigRational>[][]> xs = new ArrayList<>();
+            List<Quotient<BigRational>[][]> ys = new ArrayList<>();
+            for (List<Quotient<BigRational>[][]> c : gr.c) {
+                xs.add(Mat.addScaled(c.get(0), gr.u.divide(two), c.get(1)));
+                // Y (l1^n - l2^n)/sqrt(delta) with Y = (delta/2) C_1, written over sqrt(core): Y / s
+                ys.add(Mat.addScaled(Mat.zero(f, gr.projector.length), delta.divide(two).divide(gr.scale), c.get(1)));
+            }
+            gr.x = List.copyOf(xs);
+            gr.y = List.copyOf(ys);
         }
     }
 

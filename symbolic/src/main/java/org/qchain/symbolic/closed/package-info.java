@@ -20,14 +20,20 @@
  *       {@code sum_t C_t p_(n+t)} with {@code p_k} the k-th power sum of its roots. A factor of multiplicity
  *       m &gt; 1: the Chinese remainder theorem gives the projector {@code E = e(P)}; for {@code f = x - lambda}
  *       the terms {@code binomial(n, k) lambda^(n-k) (P - lambda I)^k E} up to the Jordan index; for a factor of
- *       degree at least 2 without a Jordan block the same power-sum form with {@code E_r = E q_r(P)/f'(r)},
- *       {@code q_r(y) = f(y)/(y - r)}; with a Jordan block, {@link org.qchain.exact.ErrorKey#CLOSED_FORM_UNSUPPORTED}
- *       (the series forms still exist).</li>
+ *       degree at least 2, Newton's iteration {@code s <- s - f(s)/f'(s) mod f^m} from {@code s = x} gives the
+ *       semisimple part {@code S = s(P)} and the nilpotent part {@code N = P - S} on the generalised eigenspace
+ *       (Jordan-Chevalley), so {@code P^n E = sum_k binomial(n, k) S^(n-k) N^k E} with k below the Jordan index, and
+ *       S splits by roots in the power-sum form above with {@code E_r = E q_r(S)/f'(r)},
+ *       {@code q_r(y) = f(y)/(y - r)}: the factor contributes {@code sum_k binomial(n, k) sum_t C_(k,t) p_(n-k+t)}
+ *       (without a Jordan block only k = 0).</li>
  *   <li>Printing: a linear factor gives {@code lambda^n}; a quadratic one, roots {@code u/2 +- (s/2) sqrt(D)} with
  *       square factors pulled out of D, gives {@code X*(l1^n + l2^n) + Y*(l1^n - l2^n)/sqrt(D)}, which is
- *       unchanged when sqrt(D) changes sign and so real for real parameters even where D &lt; 0; a factor of degree
- *       3 or more is named ({@code f1}, ...) and appears as {@code rootsum(n + t, f1)}, its roots given numerically
- *       by {@link org.qchain.symbolic.closed.ClosedForm#rootPolynomials}.</li>
+ *       unchanged when sqrt(D) changes sign and so real for real parameters even where D &lt; 0, and with a Jordan
+ *       block also {@code binomial(n, k)*(X_k*(l1^(n - k) + l2^(n - k)) + Y_k*(l1^(n - k) - l2^(n - k))/sqrt(D))}; a
+ *       factor of degree 3 or more is named ({@code f1}, ...) and appears as {@code rootsum(n + t, f1)}, with a
+ *       Jordan block also as {@code binomial(n, k)*rootsum(n - k + t, f1)}, its roots given numerically by
+ *       {@link org.qchain.symbolic.closed.ClosedForm#rootPolynomials}. A term with the factor
+ *       {@code binomial(n, k)} is 0 for n &lt; k.</li>
  *   <li>Eigenvalue 0 contributes only for n below its Jordan index: that index is {@code validFrom}. The
  *       conditions are the irreducible factors of every denominator in the formulas, and the radicand under a
  *       square root in a denominator, each as {@code "POLY != 0"}.</li>

@@ -239,19 +239,6 @@ class ClosedFormTest {
     }
 
     @Test
-    void jordanBlockOnAQuadraticFactorIsRefusedButSeriesRemain() {
-        // [[B, I], [0, B]] with B = [[0, -1], [1, 0]]: chi = (x^2 + 1)^2 with one Jordan block (derived by hand)
-        String[][] rows = {{"0", "-1", "1", "0"}, {"1", "0", "0", "1"}, {"0", "0", "0", "-1"}, {"0", "0", "1", "0"}};
-        Model m = Chains.model(List.of(), rows);
-        QchainException e = assertThrows(QchainException.class, () -> ClosedForms.of(m));
-        assertEquals(ErrorKey.CLOSED_FORM_UNSUPPORTED, e.key());
-        SeriesForm sf = ClosedForms.series(m, Map.of());
-        assertEquals("x^4 + 2*x^2 + 1", sf.characteristicPolynomial());
-        // [(I - zB)^-1]_11 = 1/(1 + z^2) for the rotation block (derived by hand)
-        assertEquals("1/(1 + z^2)", sf.generatingFunction(0, 0).plain());
-    }
-
-    @Test
     void continuousChainsAndUnknownValuesAreRefused() {
         Model ctmc = org.qchain.exact.model.ModelParser.parse("t.chain", "chain continuous\nstates A B\nA B 2\nB A 3\n");
         assertEquals(ErrorKey.WRONG_KIND, assertThrows(QchainException.class, () -> ClosedForms.of(ctmc)).key());
@@ -346,5 +333,14 @@ class ClosedFormTest {
             "chain discrete", "param w in (0, 1) = 1/20", "states Up Worn Down",
             "Up Worn w", "Worn Down 3/100", "Worn Up 1/4", "Down Up 1/2", ""));
         Chains.assertMatchesPowers(ClosedForms.of(plant), plant, List.of(Chains.at("w", "1/20"), Chains.at("w", "3/4")), 0);
+        Model rounds = org.qchain.exact.model.ModelParser.parse("closed-rounds.chain", String.join("\n",
+            "chain discrete", "states Draft1 Revise1 Draft2 Revise2 Archived",
+            "Draft1 Revise1 1/4", "Draft1 Draft2 1/8", "Draft1 Archived 1/8",
+            "Revise1 Draft1 1/4", "Revise1 Revise2 1/8", "Revise1 Archived 3/8",
+            "Draft2 Revise2 1/4", "Draft2 Archived 1/4", "Revise2 Draft2 1/4", "Revise2 Archived 1/2", ""));
+        // the same matrix as JordanBlockTest's double quadratic with a Jordan block
+        assertEquals(Chains.matrix(Chains.model(List.of(), JordanBlockTest.chained(JordanBlockTest.A2, 2)), Map.of()),
+            Chains.matrix(rounds, Map.of()));
+        Chains.assertMatchesPowers(ClosedForms.of(rounds), rounds, List.of(Map.of()), 0);
     }
 }
