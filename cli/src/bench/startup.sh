@@ -3,7 +3,7 @@
 # Needs hyperfine (Debian: apt-get install hyperfine). Run from the repository root after `./qchain --version`
 # (which builds the jar and the class-data archive). Figures go to docs/performance.md ("Start-up").
 set -euo pipefail
-cd "$(dirname "$0")/../.."
+cd "$(dirname "$0")/../../.."
 ./qchain --version >/dev/null
 J=cli/target/qchain.jar
 M=docs/examples/pump-station.chain
@@ -13,5 +13,6 @@ hyperfine -N -w 5 -r "${RUNS:-30}" --export-markdown "${OUT:-/dev/stdout}" \
   "java -XX:+UseSerialGC -jar $J step $M -n 12" \
   "java -XX:TieredStopAtLevel=1 -jar $J step $M -n 12" \
   "java $L -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -Xshare:auto -jar $J step $M -n 12" \
+  "java $L -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -Xshare:off -jar $J step $M -n 12" \
   "java $L -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -Xshare:auto -XX:SharedArchiveFile=cli/target/qchain.jsa -jar $J step $M -n 12" \
   "./qchain step $M -n 12"
