@@ -15,4 +15,5 @@ hyperfine -N -w 5 -r "${RUNS:-30}" --export-markdown "${OUT:-/dev/stdout}" \
   "java $L -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -Xshare:auto -jar $J step $M -n 12" \
   "java $L -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -Xshare:off -jar $J step $M -n 12" \
   "java $L -XX:+UseSerialGC -XX:TieredStopAtLevel=1 -Xshare:auto -XX:SharedArchiveFile=cli/target/qchain.jsa -jar $J step $M -n 12" \
+  "java $L -XX:+UseSerialGC -Xshare:auto -XX:SharedArchiveFile=cli/target/qchain.jsa -jar $J step $M -n 12" \
   "./qchain step $M -n 12"
