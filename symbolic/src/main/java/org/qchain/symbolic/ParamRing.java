@@ -174,50 +174,58 @@ public final class ParamRing {
      *                         an expression that is identically zero
      */
     public RatFun fromExpr(Expr e) {
-        if (e instanceof Expr.Num n) {
-            return RatFun.of(constant(n.value()));
-        }
-        if (e instanceof Expr.Var v) {
-            Integer i = index.get(v.name());
-            if (i == null) {
-                throw new QchainException(v.pos(), ErrorKey.UNKNOWN_PARAMETER, v.name());
+        return e.fold(new Expr.Folder<RatFun>() {
+            @Override
+            public RatFun num(Expr.Num n) {
+                return RatFun.of(constant(n.value()));
             }
-            return RatFun.of(variable(v.name()));
-        }
-        if (e instanceof Expr.Neg g) {
-            return fromExpr(g.operand()).negate();
-        }
-        if (e instanceof Expr.Bin b) {
-            RatFun l = fromExpr(b.left());
-            RatFun r = fromExpr(b.right());
-            switch (b.op()) {
-                case ADD:
-                    return l.add(r);
-                case SUB:
-                    return l.subtract(r);
-                case MUL:
-                    return l.multiply(r);
-                default:
-                    if (r.isZero()) {
-                        throw new QchainException(b.pos(), ErrorKey.DIVISION_BY_ZERO,
-                            " in '" + Expr.toPlain(b) + "' (the divisor is identically 0)");
-                    }
-                    return l.divide(r);
+
+            @Override
+            public RatFun var(Expr.Var v) {
+                if (!index.containsKey(v.name())) {
+                    throw new QchainException(v.pos(), ErrorKey.UNKNOWN_PARAMETER, v.name());
+                }
+                return RatFun.of(variable(v.name()));
             }
-        }
-        Expr.Pow p = (Expr.Pow) e;
-        RatFun base = fromExpr(p.base());
-        if (base.isZero() && p.exponent() < 0) {
-            throw new QchainException(p.pos(), ErrorKey.DIVISION_BY_ZERO,
-                " in '" + Expr.toPlain(p) + "' (the base is identically 0)");
-        }
-        long degree = Math.abs((long) p.exponent())
-            * Math.max(base.numerator().totalDegree(), base.denominator().totalDegree());
-        if (degree > MAX_EXPR_DEGREE) {
-            throw new QchainException(p.pos(), ErrorKey.SYMBOLIC_POWER_TOO_LARGE, Expr.toPlain(p), degree,
-                MAX_EXPR_DEGREE);
-        }
-        return base.pow(p.exponent());
+
+            @Override
+            public RatFun neg(Expr.Neg g, RatFun operand) {
+                return operand.negate();
+            }
+
+            @Override
+            public RatFun bin(Expr.Bin b, RatFun l, RatFun r) {
+                switch (b.op()) {
+                    case ADD:
+                        return l.add(r);
+                    case SUB:
+                        return l.subtract(r);
+                    case MUL:
+                        return l.multiply(r);
+                    default:
+                        if (r.isZero()) {
+                            throw new QchainException(b.pos(), ErrorKey.DIVISION_BY_ZERO,
+                                " in '" + Expr.toPlain(b) + "' (the divisor is identically 0)");
+                        }
+                        return l.divide(r);
+                }
+            }
+
+            @Override
+            public RatFun pow(Expr.Pow p, RatFun base) {
+                if (base.isZero() && p.exponent() < 0) {
+                    throw new QchainException(p.pos(), ErrorKey.DIVISION_BY_ZERO,
+                        " in '" + Expr.toPlain(p) + "' (the base is identically 0)");
+                }
+                long degree = Math.abs((long) p.exponent())
+                    * Math.max(base.numerator().totalDegree(), base.denominator().totalDegree());
+                if (degree > MAX_EXPR_DEGREE) {
+                    throw new QchainException(p.pos(), ErrorKey.SYMBOLIC_POWER_TOO_LARGE, Expr.toPlain(p), degree,
+                        MAX_EXPR_DEGREE);
+                }
+                return base.pow(p.exponent());
+            }
+        });
     }
 
     /** The largest total degree a power written in a model expression may reach, checked before expanding it. */

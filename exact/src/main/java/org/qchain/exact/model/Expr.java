@@ -91,76 +91,35 @@ public sealed interface Expr {
      *                         {@link ErrorKey#FREE_PARAMETERS} at a name whose value is {@code null}
      */
     default Rational evaluate(Function<String, Rational> values) {
-        if (this instanceof Num n) {
-            return n.value();
-        }
-        if (this instanceof Var v) {
-            Rational r = values.apply(v.name());
-            if (r == null) {
-                throw new QchainException(v.pos(), ErrorKey.FREE_PARAMETERS, v.name());
-            }
-            return r;
-        }
-        if (this instanceof Neg g) {
-            return g.operand().evaluate(values).negate();
-        }
-        if (this instanceof Bin b) {
-            Rational l = b.left().evaluate(values);
-            Rational r = b.right().evaluate(values);
-            switch (b.op()) {
-                case ADD:
-                    return l.add(r);
-                case SUB:
-                    return l.subtract(r);
-                case MUL:
-                    return l.multiply(r);
-                default:
-                    if (r.isZero()) {
-                        throw new QchainException(b.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(b) + "'");
-                    }
-                    return l.divide(r);
-            }
-        }
-        Pow p = (Pow) this;
-        Rational base = p.base().evaluate(values);
-        if (base.isZero() && p.exponent() < 0) {
-            throw new QchainException(p.pos(), ErrorKey.DIVISION_BY_ZERO, " in '" + Expr.toPlain(p) + "'");
-        }
-        // the numerator and denominator of b^k have about k times the bits of b's: refuse before computing
-        long bits = (long) Math.max(base.numerator().bitLength(), base.denominator().bitLength())
-            * Math.abs((long) p.exponent());
-        if (bits > MAX_POWER_BITS) {
-            throw new QchainException(p.pos(), ErrorKey.POWER_TOO_LARGE, Expr.toPlain(p),
-                (long) (bits * LOG10_2), (long) (MAX_POWER_BITS * LOG10_2));
-        }
-        return base.pow(p.exponent());
+        return fold(new RationalFolder(values));
     }
 
     /**
-     * A bottom-up fold over a tree: each method receives the already folded operands. The symbolic module and the
-     * formatters map trees into their own values with it, without instanceof chains of their own.
+     * A bottom-up fold over a tree: each method receives its node (for the node's position in error messages) and
+     * the already folded operands. {@link #evaluate}, the symbolic module and the formatters map trees into their own
+     * values with it, without instanceof chains of their own.
      *
      * @param <T> the result type
      */
     interface Folder<T> {
         /** A constant. */
-        T num(Rational value);
+        T num(Num node);
 
         /** A parameter name. */
-        T var(String name);
+        T var(Var node);
 
         /** Unary minus of the folded operand. */
-        T neg(T operand);
+        T neg(Neg node, T operand);
 
         /** A binary operation on the folded operands. */
-        T bin(Op op, T left, T right);
+        T bin(Bin node, T left, T right);
 
-        /** The folded base to an integer power (possibly negative). */
-        T pow(T base, int exponent);
+        /** The folded base to the node's integer power (possibly negative). */
+        T pow(Pow node, T base);
     }
 
     /**
-     * Folds this tree bottom-up.
+     * Folds this tree bottom-up, left operand before right.
      *
      * @param f   what each kind of node becomes
      * @param <T> the result type
@@ -168,19 +127,20 @@ public sealed interface Expr {
      */
     default <T> T fold(Folder<T> f) {
         if (this instanceof Num n) {
-            return f.num(n.value());
+            return f.num(n);
         }
         if (this instanceof Var v) {
-            return f.var(v.name());
+            return f.var(v);
         }
         if (this instanceof Neg g) {
-            return f.neg(g.operand().fold(f));
+            return f.neg(g, g.operand().fold(f));
         }
         if (this instanceof Bin b) {
-            return f.bin(b.op(), b.left().fold(f), b.right().fold(f));
+            T l = b.left().fold(f);
+            return f.bin(b, l, b.right().fold(f));
         }
         Pow p = (Pow) this;
-        return f.pow(p.base().fold(f), p.exponent());
+        return f.pow(p, p.base().fold(f));
     }
 
     /** The parameter names used, in order of first appearance. */

@@ -122,20 +122,20 @@ class ExprRoundTripTest {
                 continue; // division by zero at this point
             }
             Rational folded = e.fold(new Expr.Folder<Rational>() {
-                public Rational num(Rational v) {
-                    return v;
+                public Rational num(Expr.Num node) {
+                    return node.value();
                 }
 
-                public Rational var(String name) {
-                    return at.get(name);
+                public Rational var(Expr.Var node) {
+                    return at.get(node.name());
                 }
 
-                public Rational neg(Rational x) {
+                public Rational neg(Expr.Neg node, Rational x) {
                     return x.negate();
                 }
 
-                public Rational bin(Expr.Op op, Rational l, Rational r) {
-                    switch (op) {
+                public Rational bin(Expr.Bin node, Rational l, Rational r) {
+                    switch (node.op()) {
                         case ADD:
                             return l.add(r);
                         case SUB:
@@ -147,8 +147,8 @@ class ExprRoundTripTest {
                     }
                 }
 
-                public Rational pow(Rational b, int x) {
-                    return b.pow(x);
+                public Rational pow(Expr.Pow node, Rational b) {
+                    return b.pow(node.exponent());
                 }
             });
             assertEquals(direct, folded, Expr.toPlain(e));
