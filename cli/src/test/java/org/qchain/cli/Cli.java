@@ -1,7 +1,13 @@
 package org.qchain.cli;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import picocli.CommandLine;
 
 /** Runs qchain in-process the way picocli's "Testing your application" does: captured stdout and stderr. */
@@ -39,5 +45,17 @@ final class Cli {
     /** A test model's path as passed on the command line. */
     static String model(String name) {
         return MODELS + name;
+    }
+
+    /**
+     * Asserts that stdout equals the golden file; with {@code -Dqchain.updateGolden=true} it first rewrites the file
+     * (then read the diff before committing).
+     */
+    static void assertMatchesGolden(Result r, Path golden) throws IOException {
+        if (Boolean.getBoolean("qchain.updateGolden")) {
+            Files.createDirectories(golden.getParent());
+            Files.writeString(golden, r.out(), StandardCharsets.UTF_8);
+        }
+        assertEquals(Files.readString(golden, StandardCharsets.UTF_8), r.out(), golden.toString());
     }
 }

@@ -3,8 +3,6 @@ package org.qchain.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -61,11 +59,6 @@ class GoldenOutputTest {
         Cli.Result r = Cli.run(args.toArray(new String[0]));
         assertEquals(0, r.code(), r::toString);
         assertEquals("", r.err(), "stderr carries nothing on success");
-        Path golden = GOLDEN.resolve(c.file());
-        if (Boolean.getBoolean("qchain.updateGolden")) {
-            Files.createDirectories(GOLDEN);
-            Files.writeString(golden, r.out(), StandardCharsets.UTF_8);
-        }
-        assertEquals(Files.readString(golden, StandardCharsets.UTF_8), r.out(), c.file());
+        Cli.assertMatchesGolden(r, GOLDEN.resolve(c.file()));
     }
 }

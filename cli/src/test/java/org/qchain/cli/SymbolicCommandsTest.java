@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -62,12 +61,7 @@ class SymbolicCommandsTest {
         Cli.Result r = Cli.run(c.args().toArray(new String[0]));
         assertEquals(0, r.code(), r::toString);
         assertEquals(WARNING, r.err(), "the range warning, on stderr only");
-        Path golden = GOLDEN.resolve(c.file());
-        if (Boolean.getBoolean("qchain.updateGolden")) {
-            Files.createDirectories(GOLDEN);
-            Files.writeString(golden, r.out(), StandardCharsets.UTF_8);
-        }
-        assertEquals(Files.readString(golden, StandardCharsets.UTF_8), r.out(), c.file());
+        Cli.assertMatchesGolden(r, GOLDEN.resolve(c.file()));
     }
 
     private static List<String> jsonArray(String json, String key) {
