@@ -9,7 +9,6 @@ import org.qchain.cli.result.ClosedResult;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
-import org.qchain.exact.model.Chains;
 import org.qchain.exact.model.Domain;
 import org.qchain.exact.model.Model;
 import org.qchain.exact.model.ModelParser;
@@ -44,10 +43,11 @@ final class ClosedRun {
 
     private ClosedResult run() {
         Model m = ModelParser.parseFile(c.model.model);
-        Map<String, Rational> at = c.model.at().map(t -> assignments(m, t)).orElse(Map.of());
+        Map<String, Rational> at = c.model.at().map(t -> OptionValues.assignments(m, t)).orElse(Map.of());
         String first = c.start != null ? c.start : c.from;
-        Optional<Integer> row = Optional.ofNullable(first).map(s -> state(m, c.start != null ? "--start" : "--from", s));
-        Optional<Integer> col = Optional.ofNullable(c.to).map(s -> state(m, "--to", s));
+        String rowOption = c.start != null ? "--start" : "--from";
+        Optional<Integer> row = Optional.ofNullable(first).map(s -> OptionValues.state(m, rowOption, s));
+        Optional<Integer> col = Optional.ofNullable(c.to).map(s -> OptionValues.state(m, "--to", s));
         SymbolicLimits limits = new SymbolicLimits(c.maxTerms);
         TerminalProgress progress = c.root.progress(c.spec.commandLine().getErr());
         try {
@@ -57,19 +57,6 @@ final class ClosedRun {
         } finally {
             progress.clear();
         }
-    }
-
-    private static Map<String, Rational> assignments(Model m, String text) {
-        try {
-            return Chains.parseAssignments(m, text);
-        } catch (QchainException e) {
-            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--at", text, e.detail());
-        }
-    }
-
-    private static int state(Model m, String option, String name) {
-        return m.indexOf(name).orElseThrow(() -> new QchainException(ErrorKey.BAD_ARGUMENT, option, name,
-            "not a state of " + m.source() + " (states: " + String.join(", ", m.states()) + ")"));
     }
 
     private static List<Integer> indices(Model m, Optional<Integer> pick) {

@@ -7,7 +7,6 @@ import java.util.Optional;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
-import org.qchain.exact.model.Chains;
 import org.qchain.exact.model.Model;
 
 /**
@@ -47,17 +46,8 @@ final class EvaluationRoute {
      * @throws QchainException {@link ErrorKey#FREE_PARAMETERS} if a parameter has no value; the parser's errors for a
      *                         malformed {@code --at}
      */
-    /** Reads {@code --at}; its errors name the option and the text given. */
-    private static Map<String, Rational> assignments(Model model, String text) {
-        try {
-            return Chains.parseAssignments(model, text);
-        } catch (QchainException e) {
-            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--at", text, e.detail());
-        }
-    }
-
     static Route decide(Model model, Optional<String> at) {
-        Map<String, Rational> values = at.map(text -> assignments(model, text)).orElse(Map.of());
+        Map<String, Rational> values = at.map(text -> OptionValues.assignments(model, text)).orElse(Map.of());
         List<String> free = new ArrayList<>();
         for (String name : model.usedParameters()) {
             boolean nominal = model.param(name).flatMap(d -> d.nominal()).isPresent();

@@ -84,8 +84,7 @@ record LoadedChain(Model model, Optional<Path> file, RationalMatrix p) {
      * @throws QchainException {@link ErrorKey#BAD_ARGUMENT} listing the states if there is no such state
      */
     int state(String option, String name) {
-        return model.indexOf(name).orElseThrow(() -> new QchainException(ErrorKey.BAD_ARGUMENT, option, name,
-            "not a state of " + source() + " (states: " + String.join(", ", model.states()) + ")"));
+        return OptionValues.state(model, option, name);
     }
 
     /** The state names. */

@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
         "has one."})
 final class StepCommand implements Callable<Integer> {
     /** Default limit on the total digits of a result. */
-    static final long DEFAULT_MAX_DIGITS = 50_000_000L;
+    static final long DEFAULT_MAX_DIGITS = org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS;
 
     @Spec
     CommandSpec spec;

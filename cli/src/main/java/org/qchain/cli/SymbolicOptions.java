@@ -7,8 +7,11 @@ import picocli.CommandLine.Option;
  * must load no symbolic class.
  */
 final class SymbolicOptions {
-    /** Default limit on the estimated number of polynomial terms of a symbolic power (the library's default). */
-    static final long DEFAULT_MAX_TERMS = 2_000_000L;
+    /**
+     * Default limit on the estimated number of polynomial terms of a symbolic power: the library's own. A constant
+     * expression, so javac copies the value here and reading it loads no symbolic class (JLS 13.1).
+     */
+    static final long DEFAULT_MAX_TERMS = org.qchain.symbolic.SymbolicLimits.DEFAULT_MAX_TERMS;
 
     @Option(names = "--factor",
         description = "Symbolic results: print each formula factored over the rationals instead of expanded.")

@@ -150,7 +150,7 @@ final class SymbolicStep {
                            Optional<Map<String, Rational>> point, List<String> warnings) {
 
         static SymbolicContext of(Model m, Optional<String> at) {
-            Map<String, Rational> given = at.map(text -> assignments(m, text)).orElse(Map.of());
+            Map<String, Rational> given = at.map(text -> OptionValues.assignments(m, text)).orElse(Map.of());
             RatFunMatrix p = RatFunMatrix.fromModel(m);
             CheckReport report = ParameterCheck.check(m, p);
             report.throwIfErrors();
@@ -177,17 +177,6 @@ final class SymbolicStep {
         }
 
         int state(String option, String name) {
-            return model.indexOf(name).orElseThrow(() -> new QchainException(ErrorKey.BAD_ARGUMENT, option, name,
-                "not a state of " + model.source() + " (states: " + String.join(", ", model.states()) + ")"));
+            return OptionValues.state(model, option, name);
         }
-    }
-
-    /** Reads {@code --at} as the numeric path does; its errors name the option. */
-    static Map<String, Rational> assignments(Model model, String text) {
-        try {
-            return Chains.parseAssignments(model, text);
-        } catch (QchainException e) {
-            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--at", text, e.detail());
-        }
-    }
-}
+    }}
