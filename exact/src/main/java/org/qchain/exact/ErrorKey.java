@@ -104,7 +104,16 @@ public enum ErrorKey {
     /** {0}: the condition that fails, {1}: the parameter values. */
     CLOSED_FORM_CONDITION("the closed form needs {0}, which fails at {1}; compute it with these values given (--at) instead"),
     /** {0}: estimated digits processed, {1}: limit, {2}: option that raises it. */
-    PATH_SEARCH_TOO_LARGE("the path search would process about {0} digits in all, more than the limit {1}; raise it with {2}, or ask for fewer steps or paths");
+    PATH_SEARCH_TOO_LARGE("the path search would process about {0} digits in all, more than the limit {1}; raise it with {2}, or ask for fewer steps or paths"),
+
+    // --- linear systems, long run and absorption (appended) ---------------------------------------------------------
+    /** {0}: what is singular and why (names states or the condition). */
+    SINGULAR_SYSTEM("the system is singular: {0}"),
+    /** {0}: what cannot be computed, {1}: why. */
+    NO_ABSORPTION("{0}: {1}"),
+    /** {0}: size of the system, {1}: estimated digits, {2}: limit, {3}: option that raises it. */
+    SOLVE_TOO_LARGE("the exact solve of a {0}-state system would have about {1} digits in its result, more than the"
+        + " limit {2}; raise it with {3}");
 
     private final String pattern;
 
