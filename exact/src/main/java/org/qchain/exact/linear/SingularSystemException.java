@@ -12,7 +12,13 @@ public final class SingularSystemException extends QchainException {
 
     private final int index;
 
-    SingularSystemException(int index, String detail) {
+    /**
+     * A singular system.
+     *
+     * @param index  the 0-based unknown left undetermined
+     * @param detail what is singular and why
+     */
+    public SingularSystemException(int index, String detail) {
         super(ErrorKey.SINGULAR_SYSTEM, detail);
         this.index = index;
     }
