@@ -79,7 +79,8 @@ public final class CertifiedPowers {
         if (n <= 1) {
             return exactRow(p, from, n, settings.digits());
         }
-        return Ziv.round(bits -> rowEnclosure(p, from, n, bits, progress), settings.digits(),
+        Plan plan = Plan.of(p, from, n);
+        return Ziv.round(bits -> plan.enclose(bits, progress), settings.digits(),
             startBits(p.size(), n, settings), settings.maxBits(),
             () -> exactFallback(p, n, settings).map(d -> MatrixPowers.rowOfPower(d, from, n)));
     }
@@ -105,7 +106,8 @@ public final class CertifiedPowers {
         if (n <= 1) {
             return exactRow(p, from, n, settings.digits())[to];
         }
-        return Ziv.round(bits -> new Enclosure[] {rowEnclosure(p, from, n, bits, progress)[to]}, settings.digits(),
+        Plan plan = Plan.of(p, from, n);
+        return Ziv.round(bits -> new Enclosure[] {plan.enclose(bits, progress)[to]}, settings.digits(),
             startBits(p.size(), n, settings), settings.maxBits(),
             () -> exactFallback(p, n, settings).map(d -> new Rational[] {MatrixPowers.entryOfPower(d, from, to, n)}))[0];
     }
@@ -155,11 +157,58 @@ public final class CertifiedPowers {
      */
     public static Enclosure[] rowEnclosure(SparseRationalMatrix p, int from, long n, int bits, Progress progress) {
         check(p, n);
+        java.util.Objects.checkIndex(from, p.size());
         if (n == 0) {
             return exactEnclosures(exactRow(p, from, 0, 1));
         }
-        FixedPointBounds b = FixedPointBounds.of(p, bits);
-        Thread caller = Thread.currentThread();
+        return Plan.of(p, from, n).enclose(bits, progress);
+    }
+
+    /**
+     * How a row is enclosed, decided once for all precisions: for a large {@code n} on a stochastic matrix whose
+     * powers contract ({@link Contraction}), vector steps until the rest cannot matter; otherwise vector steps or
+     * squaring, whichever costs less.
+     */
+    private record Plan(SparseRationalMatrix p, int from, long n, Optional<Contraction.Bound> bound,
+                        Optional<java.util.BitSet> support) {
+        /** Contraction is tried when {@code n} is this many times the number of states or more. */
+        static final int CONTRACTION_MIN_STEPS_PER_STATE = 32;
+        /** ... and the states are at most this many (its bound needs all rows of {@code P^k}, dense). */
+        static final int CONTRACTION_MAX_STATES = 4000;
+        /** The work of the bound's floating-point steps, in multiply-adds, at most. */
+        static final double CONTRACTION_WORK = 4e8;
+
+        static Plan of(SparseRationalMatrix p, int from, long n) {
+            int s = p.size();
+            if (n >= (long) CONTRACTION_MIN_STEPS_PER_STATE * s && s <= CONTRACTION_MAX_STATES
+                    && Contraction.isStochastic(p)) {
+                Optional<java.util.BitSet> support = Contraction.support(p, from, n, 8 * s + 64);
+                if (support.isPresent()) {
+                    int maxK = (int) Math.max(2, Math.min(256, CONTRACTION_WORK / ((double) s * p.nonZeroCount())));
+                    Optional<Contraction.Bound> bound = Contraction.doeblin(p, maxK, Thread.currentThread());
+                    if (bound.isPresent()) {
+                        return new Plan(p, from, n, bound, support);
+                    }
+                }
+            }
+            return new Plan(p, from, n, Optional.empty(), Optional.empty());
+        }
+
+        Enclosure[] enclose(int bits, Progress progress) {
+            if (n <= 1) {
+                return exactEnclosures(exactRow(p, from, n, 1));
+            }
+            FixedPointBounds b = FixedPointBounds.of(p, bits);
+            Thread caller = Thread.currentThread();
+            if (bound.isPresent()) {
+                return Contraction.row(b, bound.get(), support.get(), from, n, progress, caller);
+            }
+            return CertifiedPowers.direct(b, from, n, progress, caller);
+        }
+    }
+
+    private static Enclosure[] direct(FixedPointBounds b, int from, long n, Progress progress, Thread caller) {
+        int bits = b.w;
         if (preferVectorSteps(b, n)) {
             int[] idx = b.cols[from];
             BigInteger[] lo = b.lo[from];
