@@ -5,6 +5,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalLong;
 import java.util.PriorityQueue;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.Progress;
+import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.SourcePos;
 import org.qchain.exact.floats.Binary64;
@@ -47,6 +50,8 @@ public final class Verifier implements ReferenceReader.Sink {
     private final Tolerance tolerance;
     private final int keep;
     private final PriorityQueue<EntryCheck> worst;
+    private final Progress progress;
+    private final Thread caller = Thread.currentThread();
     private long checked;
     private long over;
     private long nonFinite;
@@ -64,6 +69,22 @@ public final class Verifier implements ReferenceReader.Sink {
      * @throws IllegalArgumentException if {@code keep < 0}
      */
     public Verifier(Target target, Truth truth, Tolerance tolerance, int keep) {
+        this(target, truth, tolerance, keep, Progress.NONE);
+    }
+
+    /**
+     * A verifier that reports progress (phase {@code "checking"}, every 4,096 values, out of the target's size) and
+     * stops when the calling thread is interrupted.
+     *
+     * @param target    what the file holds
+     * @param truth     the exact values
+     * @param tolerance when a value passes
+     * @param keep      how many of the worst entries to keep for the report, {@code >= 0}
+     * @param progress  receives progress reports
+     * @throws IllegalArgumentException if {@code keep < 0}
+     */
+    public Verifier(Target target, Truth truth, Tolerance tolerance, int keep, Progress progress) {
+        this.progress = progress;
         if (keep < 0) {
             throw new IllegalArgumentException("keep must not be negative: " + keep);
         }
@@ -79,6 +100,12 @@ public final class Verifier implements ReferenceReader.Sink {
     public void accept(int row, int col, GivenValue value, SourcePos pos) {
         EntryCheck c = check(row, col, value, pos);
         checked++;
+        if ((checked & 4095) == 0) {
+            if (caller.isInterrupted()) {
+                throw new QchainException(ErrorKey.INTERRUPTED);
+            }
+            progress.update("checking", Math.min(checked, target.size()), target.size());
+        }
         if (!c.pass()) {
             over++;
         }

@@ -237,8 +237,36 @@ class VerifierTest {
             public void close() {
             }
         };
-        VerifyReport rep = verify(t, (i, j) -> i == j ? Rational.of(1, 2) : Rational.of(1, 598), tol(null, null, 0L), gen);
+        long[] last = new long[2];
+        Verifier v = new Verifier(t, (i, j) -> i == j ? Rational.of(1, 2) : Rational.of(1, 598), tol(null, null, 0L), 5,
+            (phase, done, total) -> {
+                last[0] = done;
+                last[1] = total;
+            });
+        VerifyReport rep = v.report(ReferenceReader.read("gen.csv", gen, t, v));
         assertEquals(90_000, rep.checked());
         assertTrue(rep.passed(), () -> rep.worst().toString());
+        assertEquals(90_000 / 4096 * 4096, last[0]);
+        assertEquals(90_000, last[1]);
+    }
+
+    // common practice, no source: an interrupted check stops with the INTERRUPTED key (Ctrl-C in the CLI)
+    @Test
+    void interruptStopsTheCheck() {
+        StringBuilder sb = new StringBuilder();
+        for (int k = 0; k < 5000; k++) {
+            sb.append("0.5\n");
+        }
+        List<String> names = java.util.stream.IntStream.range(0, 5000).mapToObj(i -> "S" + i).toList();
+        Target t = Target.vector(names, "the model has 5000 states");
+        Verifier v = new Verifier(t, (i, j) -> Rational.of(1, 2), tol(null, null, 0L), 5, (p, d, n) -> { });
+        Thread.currentThread().interrupt();
+        try {
+            org.qchain.exact.QchainException e = org.junit.jupiter.api.Assertions.assertThrows(
+                org.qchain.exact.QchainException.class, () -> ReferenceReader.read("x.csv", new StringReader(sb.toString()), t, v));
+            assertEquals(org.qchain.exact.ErrorKey.INTERRUPTED, e.key());
+        } finally {
+            Thread.interrupted();
+        }
     }
 }
