@@ -8,6 +8,7 @@
  * {@link org.qchain.exact.reference.Tolerance} exactly, rounds only the errors for display, and keeps counts and the
  * worst entries ({@link org.qchain.exact.reference.EntryCheck}) for the
  * {@link org.qchain.exact.reference.VerifyReport}. Memory is proportional to the target, not to the file.
+ * {@link org.qchain.exact.reference.PowerRows} supplies the exact {@code P^n} row by row as the file asks for it.
  *
  * <h2>Example</h2>
  * <pre>{@code

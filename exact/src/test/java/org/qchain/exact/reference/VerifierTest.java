@@ -269,4 +269,29 @@ class VerifierTest {
             Thread.interrupted();
         }
     }
+
+    // common practice, no source: P^n's rows computed on demand equal the whole power (MatrixPowers, itself checked
+    // against Hipparchus), on a chain small enough for the whole power and one large enough for row by row
+    @Test
+    void powerRowsEqualTheWholePower() {
+        java.util.Random rnd = new java.util.Random(4);
+        for (int size : new int[] {5, 70}) {
+            Rational[][] e = new Rational[size][size];
+            for (int i = 0; i < size; i++) {
+                int a = rnd.nextInt(size);
+                int b = (a + 1 + rnd.nextInt(size - 1)) % size;
+                for (int j = 0; j < size; j++) {
+                    e[i][j] = j == a ? Rational.of(3, 10) : j == b ? Rational.of(7, 10) : Rational.ZERO;
+                }
+            }
+            RationalMatrix m = RationalMatrix.of(e);
+            RationalMatrix p7 = MatrixPowers.power(m, 7);
+            PowerRows rows = new PowerRows(m, 7, org.qchain.exact.Progress.NONE);
+            for (int k = 0; k < 200; k++) {
+                int i = rnd.nextInt(size);
+                int j = rnd.nextInt(size);
+                assertEquals(p7.get(i, j), rows.get(i, j));
+            }
+        }
+    }
 }
