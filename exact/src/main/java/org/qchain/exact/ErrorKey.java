@@ -139,7 +139,7 @@ public enum ErrorKey {
     /** {0}: what is singular and why (names states or the condition). */
     SINGULAR_SYSTEM("the system is singular: {0}"),
     /** {0}: what cannot be computed, {1}: why. */
-    NO_ABSORPTION("{0}: {1}"),
+    NOT_APPLICABLE("{0}: {1}"),
     /** {0}: size of the system, {1}: estimated digits, {2}: limit, {3}: option that raises it. */
     SOLVE_TOO_LARGE("the exact solve of a {0}-state system would have about {1} digits in its result, more than the"
         + " limit {2}; raise it with {3}");
