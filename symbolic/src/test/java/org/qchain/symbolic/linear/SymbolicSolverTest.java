@@ -118,4 +118,42 @@ class SymbolicSolverTest {
         assertEquals(RatFun.of(b, a.add(b)), pi[0]);
         assertEquals(RatFun.of(a, a.add(b)), pi[1]);
     }
+
+    // gambler's ruin with p symbolic (standard result; Grinstead and Snell, Introduction to Probability, ch. 12):
+    // ruin probability from i is ((q/p)^i - (q/p)^N)/(1 - (q/p)^N); the symbolic engine at p = 1/3 .. 3/4 equals
+    // the formula and the exact engine; expected duration at p = 1/2 is i(N - i)
+    @Test
+    void gamblersRuinSymbolic() {
+        ParamRing ring = ParamRing.of(List.of("p"));
+        RatFunArithmetic f = RatFunArithmetic.of(ring);
+        int target = 4;
+        RatFun p = RatFun.of(ring.variable("p"));
+        RatFun q = f.subtract(f.one(), p);
+        java.util.List<java.util.List<RatFun>> m = new java.util.ArrayList<>();
+        for (int i = 0; i <= target; i++) {
+            java.util.List<RatFun> row = new java.util.ArrayList<>(java.util.Collections.nCopies(target + 1, f.zero()));
+            if (i == 0 || i == target) {
+                row.set(i, f.one());
+            } else {
+                row.set(i + 1, p);
+                row.set(i - 1, q);
+            }
+            m.add(row);
+        }
+        java.util.List<String> names = java.util.stream.IntStream.rangeClosed(0, target).mapToObj(i -> "S" + i).toList();
+        org.qchain.exact.longrun.ChainEngine.Absorption<RatFun> a =
+            org.qchain.exact.longrun.ChainEngine.absorb(f, m, names, java.util.Set.of());
+        for (Rational pv : List.of(Rational.of(1, 3), Rational.of(3, 4), Rational.of(2, 5))) {
+            Rational ratio = Rational.ONE.subtract(pv).divide(pv);
+            Rational rn = ratio.pow(target);
+            for (int i = 1; i < target; i++) {
+                Rational expected = ratio.pow(i).subtract(rn).divide(Rational.ONE.subtract(rn));
+                assertEquals(expected, a.probabilities().get(i - 1).get(0).evaluate(Map.of("p", pv)));
+            }
+        }
+        Map<String, Rational> half = Map.of("p", Rational.of(1, 2));
+        for (int i = 1; i < target; i++) {
+            assertEquals(Rational.of((long) i * (target - i)), a.expectedSteps().get(i - 1).evaluate(half));
+        }
+    }
 }
