@@ -129,4 +129,60 @@ final class NumericEngine {
         StepResult.Header h = new StepResult.Header(model.source(), model.model().kind().word(), 1, List.of());
         return new CheckResult.Numeric(new StepResult.Matrix(h, states, rows));
     }
+
+    // --- classes, longrun, absorb --------------------------------------------------------------------------------
+
+    /**
+     * The size guard of the exact solves: Hadamard's bound gives the digits of the common denominator (at most the
+     * sum over rows of log10(row denominator * row length)); each of the up to n^2 result entries has at most about
+     * twice that many digits.
+     */
+    static void guardSolve(LoadedModel model, long maxDigits) {
+        RationalMatrix p = model.matrix();
+        int n = p.rows();
+        double det = 0;
+        for (int i = 0; i < n; i++) {
+            java.math.BigInteger l = java.math.BigInteger.ONE;
+            int nz = 0;
+            for (int j = 0; j < n; j++) {
+                Rational x = p.get(i, j);
+                if (!x.isZero()) {
+                    nz++;
+                    java.math.BigInteger d = x.denominator();
+                    l = l.divide(l.gcd(d)).multiply(d);
+                }
+            }
+            det += l.bitLength() * Math.log10(2) + Math.log10(Math.max(2, nz + 1));
+        }
+        long digits = (long) Math.min(Long.MAX_VALUE / 4.0, 2.0 * det * n * n);
+        if (digits > maxDigits) {
+            throw new QchainException(ErrorKey.SOLVE_TOO_LARGE, n, digits, maxDigits, MAX_DIGITS_OPTION);
+        }
+    }
+
+    private static List<List<Rational>> rows(LoadedModel model) {
+        RationalMatrix p = model.matrix();
+        List<List<Rational>> out = new ArrayList<>();
+        for (int i = 0; i < p.rows(); i++) {
+            out.add(List.of(p.row(i)));
+        }
+        return out;
+    }
+
+    static org.qchain.result.ClassesResult classes(LoadedModel model) {
+        return ChainResults.classes(model, org.qchain.exact.longrun.Arithmetic.RATIONAL, rows(model),
+            org.qchain.result.ExactValue::new, List.of(), List.of(), List.of());
+    }
+
+    static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q) {
+        guardSolve(model, q.maxDigits());
+        return ChainResults.longRun(model, q, org.qchain.exact.longrun.Arithmetic.RATIONAL, rows(model),
+            org.qchain.result.ExactValue::new, List.of(), List.of());
+    }
+
+    static org.qchain.result.AbsorbResult absorb(LoadedModel model, AbsorbQuery q) {
+        guardSolve(model, q.limits().maxDigits());
+        return ChainResults.absorb(model, q, org.qchain.exact.longrun.Arithmetic.RATIONAL, rows(model),
+            org.qchain.result.ExactValue::new, List.of(), List.of());
+    }
 }

@@ -433,4 +433,136 @@ final class SymbolicEngine {
             m.states(), sf.parameters(), selection(row, col), names(m, ri), names(m, ci), cells, recs, List.of(),
             Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of());
     }
+
+    // --- classes, longrun, absorb --------------------------------------------------------------------------------
+
+    /** The option that raises the limit on the states of a symbolic solve. */
+    static final String MAX_STATES_OPTION = "--max-states";
+
+    private static RatFunMatrix substituted(LoadedModel model) {
+        RatFunMatrix p = checked(model).p();
+        return model.given().isEmpty() ? p : p.substitute(model.given());
+    }
+
+    private static List<List<RatFun>> rows(RatFunMatrix p) {
+        List<List<RatFun>> out = new ArrayList<>();
+        for (int i = 0; i < p.size(); i++) {
+            List<RatFun> row = new ArrayList<>();
+            for (int j = 0; j < p.size(); j++) {
+                row.add(p.get(i, j));
+            }
+            out.add(row);
+        }
+        return out;
+    }
+
+    private static void guardStates(LoadedModel model, int maxStates) {
+        int n = model.states().size();
+        if (n > maxStates) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, MAX_STATES_OPTION, maxStates, "the symbolic solve has "
+                + n + " states, more than the limit " + maxStates + "; raise it with " + MAX_STATES_OPTION
+                + " or give parameter values with --at");
+        }
+    }
+
+    static org.qchain.result.ClassesResult classes(LoadedModel model) {
+        RatFunMatrix p = substituted(model);
+        org.qchain.symbolic.linear.RatFunArithmetic f = org.qchain.symbolic.linear.RatFunArithmetic.of(p.ring());
+        List<List<RatFun>> rows = rows(p);
+        return ChainResults.classes(model, f, rows, x -> new RatFunFormula(x, false), p.occurringVariables(),
+            specialValues(model, p, rows), checked(model).warnings());
+    }
+
+    static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q) {
+        guardStates(model, q.maxStates());
+        RatFunMatrix p = substituted(model);
+        return ChainResults.longRun(model, q, org.qchain.symbolic.linear.RatFunArithmetic.of(p.ring()), rows(p),
+            x -> new RatFunFormula(x, false), p.occurringVariables(), checked(model).warnings());
+    }
+
+    static org.qchain.result.AbsorbResult absorb(LoadedModel model, AbsorbQuery q) {
+        guardStates(model, q.limits().maxStates());
+        RatFunMatrix p = substituted(model);
+        return ChainResults.absorb(model, q, org.qchain.symbolic.linear.RatFunArithmetic.of(p.ring()), rows(p),
+            x -> new RatFunFormula(x, false), p.occurringVariables(), checked(model).warnings());
+    }
+
+    /**
+     * Parameter values inside or on the edge of the domains where an entry vanishes (a root of a factor of its
+     * numerator that is linear in one parameter) and the structure then differs from the generic one.
+     */
+    private static List<org.qchain.result.ClassesResult.SpecialValue> specialValues(LoadedModel model,
+            RatFunMatrix p, List<List<RatFun>> rows) {
+        Model m = model.model();
+        java.util.TreeMap<String, java.util.TreeSet<Rational>> roots = new java.util.TreeMap<>();
+        for (List<RatFun> row : rows) {
+            for (RatFun x : row) {
+                if (x.isZero() || x.numerator().isConstant()) {
+                    continue;
+                }
+                for (org.qchain.symbolic.Poly.Factor fac : x.numerator().factor().factors()) {
+                    org.qchain.symbolic.Poly b = fac.base();
+                    List<String> vars = b.occurringVariables();
+                    if (vars.size() != 1 || b.totalDegree() != 1) {
+                        continue;
+                    }
+                    String v = vars.get(0);
+                    Rational c0 = b.substitute(Map.of(v, Rational.ZERO)).constantValue().orElseThrow();
+                    Rational c1 = b.substitute(Map.of(v, Rational.ONE)).constantValue().orElseThrow().subtract(c0);
+                    Rational root = c0.negate().divide(c1);
+                    Domain d = m.param(v).map(org.qchain.exact.model.ParamDecl::domain)
+                        .orElse(Domain.defaultFor(m.kind()));
+                    boolean edge = root.equals(d.lower()) || d.upper().map(root::equals).orElse(false);
+                    if (d.contains(root) || edge) {
+                        roots.computeIfAbsent(v, k -> new java.util.TreeSet<>()).add(root);
+                    }
+                }
+            }
+        }
+        org.qchain.exact.longrun.Structure generic = org.qchain.exact.longrun.Structure.of(graph(rows));
+        List<org.qchain.result.ClassesResult.SpecialValue> out = new ArrayList<>();
+        for (Map.Entry<String, java.util.TreeSet<Rational>> e : roots.entrySet()) {
+            for (Rational r : e.getValue()) {
+                List<List<RatFun>> at = rows(p.substitute(Map.of(e.getKey(), r)));
+                org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(graph(at));
+                if (!s.equals(generic)) {
+                    out.add(new org.qchain.result.ClassesResult.SpecialValue(e.getKey() + " = " + r,
+                        effect(generic, s, model.states())));
+                }
+            }
+        }
+        return out;
+    }
+
+    private static boolean[][] graph(List<List<RatFun>> rows) {
+        int n = rows.size();
+        boolean[][] g = new boolean[n][n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                g[i][j] = !rows.get(i).get(j).isZero();
+            }
+        }
+        return g;
+    }
+
+    /** What changes between two structures, in words. */
+    static String effect(org.qchain.exact.longrun.Structure generic, org.qchain.exact.longrun.Structure s,
+            List<String> names) {
+        List<String> parts = new ArrayList<>();
+        for (int a : s.absorbing()) {
+            if (!generic.absorbing().contains(a)) {
+                parts.add(names.get(a) + " can no longer leave");
+            }
+        }
+        if (parts.isEmpty() || !generic.classes().equals(s.classes())) {
+            List<String> cls = new ArrayList<>();
+            for (int c = 0; c < s.classes().size(); c++) {
+                cls.add("{" + String.join(", ", s.classes().get(c).stream().map(names::get).toList()) + "}"
+                    + (s.closed().get(c) ? " closed" : "") + (s.closed().get(c) && s.periods().get(c) > 1
+                    ? " period " + s.periods().get(c) : ""));
+            }
+            parts.add("classes become " + String.join(", ", cls));
+        }
+        return String.join("; ", parts);
+    }
 }

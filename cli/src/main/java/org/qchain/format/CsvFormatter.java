@@ -125,4 +125,21 @@ final class CsvFormatter extends Layout {
         }
         return sb.toString();
     }
+
+    // --- classes, longrun, absorb --------------------------------------------------------------------------------
+
+    /** One record per cell: table, row label, column heading, exact value (long form, easy to filter). */
+    @Override
+    String render(Sections.Doc d) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("table", "row", "column", "value"));
+        for (Sections.Table t : d.tables()) {
+            for (List<org.qchain.result.Formula> row : t.rows()) {
+                for (int c = 1; c < row.size(); c++) {
+                    Text.csvRecord(sb, List.of(t.title(), row.get(0).plain(), t.header().get(c), row.get(c).plain()));
+                }
+            }
+        }
+        return sb.toString();
+    }
 }

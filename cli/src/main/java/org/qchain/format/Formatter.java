@@ -39,6 +39,15 @@ public interface Formatter {
         if (result instanceof ClosedResult c) {
             return closed(c);
         }
+        if (result instanceof org.qchain.result.ClassesResult c) {
+            return classes(c);
+        }
+        if (result instanceof org.qchain.result.LongRunResult l) {
+            return longRun(l);
+        }
+        if (result instanceof org.qchain.result.AbsorbResult a) {
+            return absorb(a);
+        }
         return check((CheckResult) result);
     }
 
@@ -62,4 +71,13 @@ public interface Formatter {
 
     /** A checked model. */
     String check(CheckResult c);
+
+    /** Communicating classes. */
+    String classes(org.qchain.result.ClassesResult r);
+
+    /** The long run. */
+    String longRun(org.qchain.result.LongRunResult r);
+
+    /** Absorption. */
+    String absorb(org.qchain.result.AbsorbResult r);
 }

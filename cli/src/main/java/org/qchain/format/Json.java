@@ -33,6 +33,12 @@ public final class Json {
     }
 
     /** Appends an array of strings (mutates). */
+    public Json bool(String key, boolean value) {
+        key(key);
+        sb.append(value);
+        return this;
+    }
+
     public Json strings(String key, List<String> values) {
         key(key);
         stringArray(sb, values);

@@ -245,4 +245,94 @@ final class JsonFormatter extends Layout {
             .strings("conditions", s.warnings()).string("model", s.source()).strings("warnings", s.warnings())
             .close() + "\n";
     }
+
+    // --- classes, longrun, absorb --------------------------------------------------------------------------------
+
+    @Override
+    String render(Sections.Doc d) {
+        throw new UnsupportedOperationException("JSON lays out its own fields");
+    }
+
+    private static List<List<String>> plain(List<List<org.qchain.result.Formula>> m) {
+        return m.stream().map(r -> r.stream().map(org.qchain.result.Formula::plain).toList()).toList();
+    }
+
+    private static Json byState(List<String> states, List<org.qchain.result.Formula> values) {
+        Json j = Json.object();
+        for (int i = 0; i < states.size(); i++) {
+            j.string(states.get(i), values.get(i).plain());
+        }
+        return j;
+    }
+
+    @Override
+    public String classes(org.qchain.result.ClassesResult r) {
+        return Json.object().string("source", r.source()).strings("states", r.states())
+            .strings("parameters", r.parameters())
+            .objects("classes", r.classes(), c -> Json.object().strings("states", c.states()).bool("closed", c.closed())
+                .number("period", c.period()))
+            .strings("absorbing", r.absorbing()).strings("transient", r.transients())
+            .objects("special_values", r.specialValues(), v -> Json.object().string("condition", v.condition())
+                .string("effect", v.effect()))
+            .stringRows("graph", plain(r.graph())).strings("warnings", r.warnings()).close() + "\n";
+    }
+
+    @Override
+    public String longRun(org.qchain.result.LongRunResult r) {
+        Json abs = Json.object();
+        for (org.qchain.result.LongRunResult.Absorption a : r.absorption()) {
+            List<Integer> idx = new ArrayList<>();
+            for (int k = 0; k < a.classes().size(); k++) {
+                idx.add(k);
+            }
+            abs.objects(a.state(), idx, k -> Json.object().number("class", a.classes().get(k))
+                .string("probability", a.probabilities().get(k).plain()));
+        }
+        Json j = Json.object().string("source", r.source()).strings("states", r.states())
+            .strings("parameters", r.parameters())
+            .objects("classes", r.classes(), c -> {
+                Json o = Json.object().strings("states", c.states()).bool("closed", c.closed())
+                    .number("period", c.period());
+                if (c.closed()) {
+                    o.object("stationary", byState(c.states(), c.stationary()))
+                        .object("mean_recurrence", byState(c.states(), c.meanRecurrence()));
+                }
+                return o;
+            })
+            .object("absorption_into_classes", abs).stringRows("limit", plain(r.limit())).bool("cesaro", r.cesaro());
+        r.passage().ifPresent(m -> j.stringRows("passage", plain(m)));
+        return j.strings("warnings", r.warnings()).close() + "\n";
+    }
+
+    @Override
+    public String absorb(org.qchain.result.AbsorbResult r) {
+        Json probs = Json.object();
+        for (int i = 0; i < r.transients().size(); i++) {
+            probs.object(r.transients().get(i), byState(r.absorbing(), r.probabilities().get(i)));
+        }
+        Json j = Json.object().string("source", r.source()).strings("parameters", r.parameters())
+            .strings("transient", r.transients()).strings("absorbing", r.absorbing())
+            .strings("made_absorbing", r.made()).stringRows("fundamental", plain(r.fundamental()))
+            .object("expected_steps", byState(r.transients(), r.expectedSteps()))
+            .object("variance", byState(r.transients(), r.variance())).object("absorption", probs);
+        r.from().ifPresent(f -> j.string("from", f));
+        r.rewards().ifPresent(w -> {
+            Json o = Json.object().object("per_step", byState(w.states(), w.perStep()))
+                .object("accumulated", byState(r.transients(), w.accumulated()))
+                .object("long_run_average", byState(w.states(), w.longRun()));
+            w.discount().ifPresent(v -> o.string("discount", v.plain())
+                .object("discounted", byState(w.states(), w.discounted())));
+            j.object("rewards", o);
+        });
+        r.passage().ifPresent(p -> {
+            Json ex = Json.object();
+            Json wi = Json.object();
+            for (int i = 0; i < p.states().size(); i++) {
+                ex.strings(p.states().get(i), p.exactly().get(i).stream().map(org.qchain.result.Formula::plain).toList());
+                wi.strings(p.states().get(i), p.within().get(i).stream().map(org.qchain.result.Formula::plain).toList());
+            }
+            j.object("first_passage", Json.object().object("exactly", ex).object("within", wi));
+        });
+        return j.strings("warnings", r.warnings()).close() + "\n";
+    }
 }

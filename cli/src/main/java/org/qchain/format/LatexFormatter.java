@@ -222,4 +222,25 @@ final class LatexFormatter extends Layout {
         }
         return caution(sb);
     }
+
+    // --- classes, longrun, absorb --------------------------------------------------------------------------------
+
+    @Override
+    String render(Sections.Doc d) {
+        StringBuilder sb = new StringBuilder("% ").append(Text.comment(d.heading())).append('\n');
+        for (String n : d.notes()) {
+            sb.append("% ").append(Text.comment(n)).append('\n');
+        }
+        for (Sections.Table t : d.tables()) {
+            sb.append("\\paragraph{").append(Text.latex(t.title())).append("}\n\\begin{tabular}{")
+                .append("l".repeat(t.header().size())).append("}\n");
+            sb.append(String.join(" & ", t.header().stream().map(Text::latex).toList())).append(" \\\\\n\\hline\n");
+            for (List<org.qchain.result.Formula> row : t.rows()) {
+                sb.append(String.join(" & ", row.stream().map(f -> f.plain().isEmpty() ? "" : "$" + f.latex() + "$")
+                    .toList())).append(" \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+        }
+        return caution(sb);
+    }
 }

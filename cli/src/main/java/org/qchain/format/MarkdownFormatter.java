@@ -271,4 +271,31 @@ final class MarkdownFormatter extends Layout {
         }
         return caution(sb);
     }
+
+    // --- classes, longrun, absorb --------------------------------------------------------------------------------
+
+    @Override
+    String render(Sections.Doc d) {
+        StringBuilder sb = new StringBuilder("**").append(Text.markdown(d.heading())).append("**\n");
+        for (String n : d.notes()) {
+            sb.append("\n- ").append(Text.markdown(n));
+        }
+        sb.append('\n');
+        for (Sections.Table t : d.tables()) {
+            sb.append("\n*").append(Text.markdown(t.title())).append("*\n\n| ");
+            sb.append(String.join(" | ", t.header().stream().map(Text::markdown).toList())).append(" |\n| ");
+            sb.append(String.join(" | ", separator(t.header().size()))).append(" |\n");
+            for (List<org.qchain.result.Formula> row : t.rows()) {
+                sb.append("| ").append(String.join(" | ", row.stream().map(this::cell).toList())).append(" |\n");
+            }
+        }
+        return caution(sb);
+    }
+
+    private String cell(org.qchain.result.Formula f) {
+        if (f instanceof org.qchain.result.Formula.Printed p && p.latex().startsWith("\\text{")) {
+            return Text.markdown(f.plain());
+        }
+        return f.plain().isEmpty() ? "" : "`" + Text.code(f.plain()) + "`";
+    }
 }

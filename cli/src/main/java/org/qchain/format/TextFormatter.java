@@ -367,4 +367,28 @@ final class TextFormatter extends Layout {
             .append('\n');
         return sb.toString();
     }
+
+    // --- classes, longrun, absorb --------------------------------------------------------------------------------
+
+    @Override
+    String render(Sections.Doc d) {
+        StringBuilder sb = new StringBuilder(d.heading()).append('\n');
+        for (String n : d.notes()) {
+            sb.append(n).append('\n');
+        }
+        for (Sections.Table t : d.tables()) {
+            sb.append('\n').append(t.title()).append('\n');
+            TextTable tt = new TextTable("  ");
+            tt.addRow(t.header());
+            for (java.util.List<org.qchain.result.Formula> row : t.rows()) {
+                tt.addRow(row.stream().map(this::cell).toList());
+            }
+            sb.append(tt.render());
+        }
+        return sb.append('\n').append(Caution.TEXT).append('\n').toString();
+    }
+
+    private String cell(org.qchain.result.Formula f) {
+        return Sections.exact(f).filter(r -> !r.isInteger()).map(r -> r + " (" + dec(r) + ")").orElse(f.plain());
+    }
 }

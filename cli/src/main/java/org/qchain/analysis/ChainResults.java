@@ -1,0 +1,133 @@
+package org.qchain.analysis;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.function.Function;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.Rational;
+import org.qchain.exact.longrun.Arithmetic;
+import org.qchain.exact.longrun.ChainEngine;
+import org.qchain.exact.longrun.Structure;
+import org.qchain.result.AbsorbResult;
+import org.qchain.result.ClassesResult;
+import org.qchain.result.Formula;
+import org.qchain.result.LongRunResult;
+
+/**
+ * Turns the long-run engine's answers into results, for either route: the route supplies the arithmetic, the matrix
+ * and how one value prints. Knows no symbolic type.
+ */
+final class ChainResults {
+    private ChainResults() {
+    }
+
+    /** The largest N for the first-passage distribution. */
+    static final int MAX_STEPS = 100_000;
+
+    static <T> ClassesResult classes(LoadedModel model, Arithmetic<T> f, List<List<T>> p, Function<T, Formula> fmt,
+            List<String> parameters, List<ClassesResult.SpecialValue> special, List<String> warnings) {
+        List<String> names = model.states();
+        Structure s = Structure.of(ChainEngine.graph(f, p));
+        List<ClassesResult.ChainClass> cls = new ArrayList<>();
+        for (int c = 0; c < s.classes().size(); c++) {
+            cls.add(new ClassesResult.ChainClass(names(names, s.classes().get(c)), s.closed().get(c),
+                s.periods().get(c)));
+        }
+        return new ClassesResult(model.source(), names, parameters, cls, names(names, s.absorbing()),
+            names(names, s.transients()), special, table(p, fmt), warnings);
+    }
+
+    static <T> LongRunResult longRun(LoadedModel model, LongRunQuery q, Arithmetic<T> f, List<List<T>> p,
+            Function<T, Formula> fmt, List<String> parameters, List<String> warnings) {
+        List<String> names = model.states();
+        ChainEngine.LongRun<T> lr = ChainEngine.longRun(f, p, names, q.passage());
+        List<LongRunResult.ClassLaw> laws = new ArrayList<>();
+        for (ChainEngine.ClassLaw<T> c : lr.classes()) {
+            laws.add(new LongRunResult.ClassLaw(names(names, c.states()), c.closed(), c.period(),
+                c.stationary().stream().map(fmt).toList(), c.meanRecurrence().stream().map(fmt).toList()));
+        }
+        List<Integer> closed = lr.structure().closedClasses();
+        List<LongRunResult.Absorption> abs = new ArrayList<>();
+        List<Integer> tr = lr.structure().transients();
+        for (int a = 0; a < tr.size(); a++) {
+            abs.add(new LongRunResult.Absorption(names.get(tr.get(a)), closed,
+                lr.absorption().get(a).stream().map(fmt).toList()));
+        }
+        if (lr.cesaro()) {
+            warnings = new ArrayList<>(warnings);
+            warnings.add("a closed class is periodic: P^n has no limit; the limit shown is that of the averages"
+                + " (P + P^2 + ... + P^n)/n");
+        }
+        return new LongRunResult(model.source(), names, parameters, laws, abs, table(lr.limit(), fmt), lr.cesaro(),
+            lr.passage().map(m -> table(m, fmt)), warnings);
+    }
+
+    static <T> AbsorbResult absorb(LoadedModel model, AbsorbQuery q, Arithmetic<T> f, List<List<T>> p,
+            Function<T, Formula> fmt, List<String> parameters, List<String> warnings) {
+        List<String> names = model.states();
+        Set<Integer> made = new TreeSet<>();
+        for (String a : q.absorbing()) {
+            made.add(model.state("--absorbing", a));
+        }
+        Optional<Integer> from = q.from().map(s -> model.state("--from", s));
+        for (String r : q.rewards().keySet()) {
+            model.state("--reward", r);
+        }
+        if (q.steps().isPresent() && (q.steps().getAsInt() < 1 || q.steps().getAsInt() > MAX_STEPS)) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--steps", q.steps().getAsInt(),
+                "must be between 1 and " + MAX_STEPS);
+        }
+        ChainEngine.Absorption<T> a = ChainEngine.absorb(f, p, names, made);
+        if (from.isPresent() && !a.transientStates().contains(from.get())) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--from", names.get(from.get()),
+                "is absorbing; choose one of " + String.join(", ", names(names, a.transientStates())));
+        }
+        Optional<AbsorbResult.Rewards> rewards = Optional.empty();
+        if (!q.rewards().isEmpty()) {
+            List<T> r = new ArrayList<>();
+            for (String s : names) {
+                r.add(f.of(q.rewards().getOrDefault(s, Rational.ZERO)));
+            }
+            List<List<T>> pm = ChainEngine.withAbsorbing(f, p, made);
+            ChainEngine.LongRun<T> lr = ChainEngine.longRun(f, pm, names, false);
+            List<T> disc = q.discount().map(v -> ChainEngine.discountedReward(f, pm, r, f.of(v))).orElse(List.of());
+            rewards = Optional.of(new AbsorbResult.Rewards(names, r.stream().map(fmt).toList(),
+                ChainEngine.accumulatedReward(f, a, r).stream().map(fmt).toList(),
+                ChainEngine.longRunAverageReward(f, lr, r).stream().map(fmt).toList(),
+                q.discount().map(v -> fmt.apply(f.of(v))), disc.stream().map(fmt).toList()));
+        }
+        Optional<AbsorbResult.Passage> passage = Optional.empty();
+        if (q.steps().isPresent()) {
+            List<List<T>> pm = ChainEngine.withAbsorbing(f, p, made);
+            List<List<T>> exactly = ChainEngine.firstPassage(f, pm, new TreeSet<>(a.absorbingStates()),
+                q.steps().getAsInt());
+            List<List<T>> within = new ArrayList<>();
+            for (List<T> row : exactly) {
+                List<T> cum = new ArrayList<>();
+                T s = f.zero();
+                for (T x : row) {
+                    s = f.add(s, x);
+                    cum.add(s);
+                }
+                within.add(cum);
+            }
+            passage = Optional.of(new AbsorbResult.Passage(names, table(exactly, fmt), table(within, fmt)));
+        }
+        return new AbsorbResult(model.source(), parameters, names(names, a.transientStates()),
+            names(names, a.absorbingStates()), names(names, List.copyOf(made)), table(a.fundamental(), fmt),
+            a.expectedSteps().stream().map(fmt).toList(), a.variance().stream().map(fmt).toList(),
+            table(a.probabilities(), fmt), rewards, passage, q.from(), warnings);
+    }
+
+    private static List<String> names(List<String> names, List<Integer> idx) {
+        return idx.stream().map(names::get).toList();
+    }
+
+    private static <T> List<List<Formula>> table(List<List<T>> m, Function<T, Formula> fmt) {
+        return m.stream().map(row -> row.stream().map(fmt).toList()).toList();
+    }
+}

@@ -1,0 +1,183 @@
+package org.qchain.format;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.qchain.result.AbsorbResult;
+import org.qchain.result.ClassesResult;
+import org.qchain.result.ExactValue;
+import org.qchain.result.Formula;
+import org.qchain.result.LongRunResult;
+
+/**
+ * The tables of the {@code classes}, {@code longrun} and {@code absorb} results, laid out once; the text, Markdown,
+ * LaTeX and CSV formatters each render them in their own syntax.
+ */
+final class Sections {
+    private Sections() {
+    }
+
+    /**
+     * One titled table.
+     *
+     * @param title  the table's title
+     * @param header column headings
+     * @param rows   rows of cells; a cell is a formula or a word ({@link #word})
+     */
+    record Table(String title, List<String> header, List<List<Formula>> rows) {
+    }
+
+    /** A document: a heading line and its tables. */
+    record Doc(String heading, List<Table> tables, List<String> notes) {
+    }
+
+    static Formula word(String s) {
+        return Formula.of(s, "\\text{" + Text.latex(s) + "}");
+    }
+
+    static Doc of(ClassesResult r) {
+        List<Table> t = new ArrayList<>();
+        List<List<Formula>> rows = new ArrayList<>();
+        for (int c = 0; c < r.classes().size(); c++) {
+            ClassesResult.ChainClass k = r.classes().get(c);
+            rows.add(List.of(word(String.valueOf(c)), word(String.join(" ", k.states())),
+                word(k.closed() ? "closed" : "transient"), word(k.period() == 0 ? "-" : String.valueOf(k.period()))));
+        }
+        t.add(new Table("Communicating classes", List.of("class", "states", "kind", "period"), rows));
+        t.add(matrix("One-step graph (entry from row to column; blank: no transition)", r.states(), r.states(),
+            blankZeros(r.graph())));
+        if (!r.specialValues().isEmpty()) {
+            List<List<Formula>> sv = new ArrayList<>();
+            for (ClassesResult.SpecialValue v : r.specialValues()) {
+                sv.add(List.of(word(v.condition()), word(v.effect())));
+            }
+            t.add(new Table("Parameter values that change the structure", List.of("condition", "effect"), sv));
+        }
+        List<String> notes = new ArrayList<>();
+        notes.add("absorbing: " + (r.absorbing().isEmpty() ? "(none)" : String.join(", ", r.absorbing())));
+        notes.add("transient: " + (r.transients().isEmpty() ? "(none)" : String.join(", ", r.transients())));
+        return new Doc("Structure of " + r.source() + params(r.parameters()), t, notes);
+    }
+
+    static Doc of(LongRunResult r) {
+        List<Table> t = new ArrayList<>();
+        for (int c = 0; c < r.classes().size(); c++) {
+            LongRunResult.ClassLaw k = r.classes().get(c);
+            if (!k.closed()) {
+                continue;
+            }
+            List<List<Formula>> rows = new ArrayList<>();
+            for (int i = 0; i < k.states().size(); i++) {
+                rows.add(List.of(word(k.states().get(i)), k.stationary().get(i), k.meanRecurrence().get(i)));
+            }
+            t.add(new Table("Closed class " + c + " (period " + k.period() + "): stationary law",
+                List.of("state", "stationary", "mean recurrence"), rows));
+        }
+        if (!r.absorption().isEmpty()) {
+            List<String> head = new ArrayList<>(List.of("from"));
+            for (int c : r.absorption().get(0).classes()) {
+                head.add("class " + c);
+            }
+            List<List<Formula>> rows = new ArrayList<>();
+            for (LongRunResult.Absorption a : r.absorption()) {
+                List<Formula> row = new ArrayList<>(List.of(word(a.state())));
+                row.addAll(a.probabilities());
+                rows.add(row);
+            }
+            t.add(new Table("Probability of ending in each closed class", head, rows));
+        }
+        t.add(matrix(r.cesaro() ? "Limit of the averages (P + ... + P^n)/n" : "Limit of P^n", r.states(), r.states(),
+            r.limit()));
+        r.passage().ifPresent(m -> t.add(matrix("Mean first-passage times (diagonal: mean recurrence)", r.states(),
+            r.states(), m)));
+        return new Doc("Long run of " + r.source() + params(r.parameters()), t, List.of());
+    }
+
+    static Doc of(AbsorbResult r) {
+        List<Table> t = new ArrayList<>();
+        List<String> rowsOf = r.from().map(List::of).orElse(r.transients());
+        List<List<Formula>> steps = new ArrayList<>();
+        List<String> head = new ArrayList<>(List.of("from", "expected steps", "variance"));
+        for (String a : r.absorbing()) {
+            head.add("P(end in " + a + ")");
+        }
+        for (String s : rowsOf) {
+            int i = r.transients().indexOf(s);
+            List<Formula> row = new ArrayList<>(List.of(word(s), r.expectedSteps().get(i), r.variance().get(i)));
+            row.addAll(r.probabilities().get(i));
+            steps.add(row);
+        }
+        t.add(new Table("Until absorption", head, steps));
+        List<List<Formula>> nRows = new ArrayList<>();
+        for (String s : rowsOf) {
+            nRows.add(r.fundamental().get(r.transients().indexOf(s)));
+        }
+        t.add(matrix("Expected visits N = (I - Q)^-1", rowsOf, r.transients(), nRows));
+        r.rewards().ifPresent(w -> {
+            List<String> h = new ArrayList<>(List.of("state", "reward per step", "accumulated until absorption",
+                "long-run average"));
+            if (w.discount().isPresent()) {
+                h.add("discounted (v = " + w.discount().get().plain() + ")");
+            }
+            List<List<Formula>> rows = new ArrayList<>();
+            for (int i = 0; i < w.states().size(); i++) {
+                String s = w.states().get(i);
+                if (r.from().isPresent() && !r.from().get().equals(s)) {
+                    continue;
+                }
+                int k = r.transients().indexOf(s);
+                List<Formula> row = new ArrayList<>(List.of(word(s), w.perStep().get(i),
+                    k >= 0 ? w.accumulated().get(k) : word("-"), w.longRun().get(i)));
+                if (w.discount().isPresent()) {
+                    row.add(w.discounted().get(i));
+                }
+                rows.add(row);
+            }
+            t.add(new Table("Rewards", h, rows));
+        });
+        r.passage().ifPresent(p -> {
+            List<String> h = new ArrayList<>(List.of("from", "n", "P(T = n)", "P(T <= n)"));
+            List<List<Formula>> rows = new ArrayList<>();
+            for (int i = 0; i < p.states().size(); i++) {
+                String s = p.states().get(i);
+                if (r.from().isPresent() ? !r.from().get().equals(s) : !r.transients().contains(s)) {
+                    continue;
+                }
+                for (int k = 0; k < p.exactly().get(i).size(); k++) {
+                    rows.add(List.of(word(s), word(String.valueOf(k + 1)), p.exactly().get(i).get(k),
+                        p.within().get(i).get(k)));
+                }
+            }
+            t.add(new Table("First passage into " + String.join(", ", r.absorbing()), h, rows));
+        });
+        List<String> notes = new ArrayList<>();
+        if (!r.made().isEmpty()) {
+            notes.add("made absorbing: " + String.join(", ", r.made()));
+        }
+        return new Doc("Absorption in " + r.source() + params(r.parameters()), t, notes);
+    }
+
+    private static String params(List<String> p) {
+        return p.isEmpty() ? "" : " (formulas in " + String.join(", ", p) + ")";
+    }
+
+    private static List<List<Formula>> blankZeros(List<List<Formula>> m) {
+        return m.stream().map(row -> row.stream().map(f -> f.plain().equals("0") ? word("") : f).toList()).toList();
+    }
+
+    static Table matrix(String title, List<String> rowNames, List<String> colNames, List<List<Formula>> m) {
+        List<String> head = new ArrayList<>(List.of(""));
+        head.addAll(colNames);
+        List<List<Formula>> rows = new ArrayList<>();
+        for (int i = 0; i < rowNames.size(); i++) {
+            List<Formula> row = new ArrayList<>(List.of(word(rowNames.get(i))));
+            row.addAll(m.get(i));
+            rows.add(row);
+        }
+        return new Table(title, head, rows);
+    }
+
+    /** The exact value, if the formula is a number. */
+    static java.util.Optional<org.qchain.exact.Rational> exact(Formula f) {
+        return f instanceof ExactValue e ? java.util.Optional.of(e.value()) : java.util.Optional.empty();
+    }
+}

@@ -1,0 +1,56 @@
+package org.qchain.result;
+
+import java.util.List;
+
+/**
+ * The communicating classes of a chain ({@code classes}). For free parameters, the structure for generic values
+ * inside the domains, with the parameter values that change it.
+ *
+ * @param source        the model file name as given
+ * @param states        all states, in model order
+ * @param parameters    the free parameters of a symbolic chain; empty for a numeric one
+ * @param classes       the classes, in the order of their first state
+ * @param absorbing     absorbing states
+ * @param transients    states of classes that are not closed
+ * @param specialValues parameter values inside or on the edge of the domains that change the structure
+ * @param graph         the one-step matrix (the edges of the graph), {@code graph.get(i).get(j)} for i to j
+ * @param warnings      warnings
+ */
+public record ClassesResult(String source, List<String> states, List<String> parameters, List<ChainClass> classes,
+                            List<String> absorbing, List<String> transients, List<SpecialValue> specialValues,
+                            List<List<Formula>> graph, List<String> warnings) implements Result {
+    /** Copies the lists. */
+    public ClassesResult {
+        states = List.copyOf(states);
+        parameters = List.copyOf(parameters);
+        classes = List.copyOf(classes);
+        absorbing = List.copyOf(absorbing);
+        transients = List.copyOf(transients);
+        specialValues = List.copyOf(specialValues);
+        graph = graph.stream().map(List::copyOf).toList();
+        warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * One communicating class.
+     *
+     * @param states its states, in model order
+     * @param closed whether no transition leaves it (recurrent)
+     * @param period the gcd of its cycle lengths; 0 when no return is possible (one state without a self-loop)
+     */
+    public record ChainClass(List<String> states, boolean closed, int period) {
+        /** Copies the list. */
+        public ChainClass {
+            states = List.copyOf(states);
+        }
+    }
+
+    /**
+     * A parameter value at which the structure differs from the generic one.
+     *
+     * @param condition such as {@code p = 0}
+     * @param effect    what changes, such as {@code Worn can no longer leave}
+     */
+    public record SpecialValue(String condition, String effect) {
+    }
+}
