@@ -158,6 +158,9 @@ function _complete_qchain() {
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} sens" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} closed" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} check" ];    then _picocli_qchain; return $?; fi
+  if [ "${COMP_LINE}" = "${COMP_WORDS[0]} classes" ];    then _picocli_qchain; return $?; fi
+  if [ "${COMP_LINE}" = "${COMP_WORDS[0]} longrun" ];    then _picocli_qchain; return $?; fi
+  if [ "${COMP_LINE}" = "${COMP_WORDS[0]} absorb" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} demo" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} completion" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} help" ];    then _picocli_qchain; return $?; fi
@@ -167,13 +170,19 @@ function _complete_qchain() {
   local cmds1=(sens)
   local cmds2=(closed)
   local cmds3=(check)
-  local cmds4=(demo)
-  local cmds5=(completion)
-  local cmds6=(help)
+  local cmds4=(classes)
+  local cmds5=(longrun)
+  local cmds6=(absorb)
+  local cmds7=(demo)
+  local cmds8=(completion)
+  local cmds9=(help)
 
-  if CompWordsContainsArray "${cmds6[@]}"; then _picocli_qchain_help; return $?; fi
-  if CompWordsContainsArray "${cmds5[@]}"; then _picocli_qchain_completion; return $?; fi
-  if CompWordsContainsArray "${cmds4[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds9[@]}"; then _picocli_qchain_help; return $?; fi
+  if CompWordsContainsArray "${cmds8[@]}"; then _picocli_qchain_completion; return $?; fi
+  if CompWordsContainsArray "${cmds7[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds6[@]}"; then _picocli_qchain_absorb; return $?; fi
+  if CompWordsContainsArray "${cmds5[@]}"; then _picocli_qchain_longrun; return $?; fi
+  if CompWordsContainsArray "${cmds4[@]}"; then _picocli_qchain_classes; return $?; fi
   if CompWordsContainsArray "${cmds3[@]}"; then _picocli_qchain_check; return $?; fi
   if CompWordsContainsArray "${cmds2[@]}"; then _picocli_qchain_closed; return $?; fi
   if CompWordsContainsArray "${cmds1[@]}"; then _picocli_qchain_sens; return $?; fi
@@ -188,7 +197,7 @@ function _picocli_qchain() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens closed check demo completion help"
+  local commands="step sens closed check classes longrun absorb demo completion help"
   local flag_opts="'-h' '--help' '-V' '--version'"
   local arg_opts=""
 
@@ -445,6 +454,189 @@ function _picocli_qchain_check() {
   fi
 }
 
+# Generates completions for the options and subcommands of the `classes` subcommand.
+function _picocli_qchain_classes() {
+  # Get completion data
+  local curr_word=${COMP_WORDS[COMP_CWORD]}
+  local prev_word=${COMP_WORDS[COMP_CWORD-1]}
+
+  local commands=""
+  local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+
+  type compopt &>/dev/null && compopt +o default
+
+  case ${prev_word} in
+    '--at')
+      return
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
+    '--digits')
+      return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+    '--max-digits')
+      return
+      ;;
+    '--max-states')
+      return
+      ;;
+  esac
+
+  if [[ "${curr_word}" == -* ]]; then
+    COMPREPLY=( $(compgen -W "${flag_opts} ${arg_opts}" -- "${curr_word}") )
+  else
+    local positionals=""
+    local currIndex
+    currIndex=$(currentPositionalIndex "classes" "${arg_opts}" "${flag_opts}")
+    if (( currIndex >= 0 && currIndex <= 0 )); then
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      positionals=$( compgen -f -- "${curr_word}" ) # files
+    fi
+    local IFS=$'\n'
+    COMPREPLY=( $(compgen -W "${commands// /$'\n'}${IFS}${positionals}" -- "${curr_word}") )
+  fi
+}
+
+# Generates completions for the options and subcommands of the `longrun` subcommand.
+function _picocli_qchain_longrun() {
+  # Get completion data
+  local curr_word=${COMP_WORDS[COMP_CWORD]}
+  local prev_word=${COMP_WORDS[COMP_CWORD-1]}
+
+  local commands=""
+  local flag_opts="'--passage' '--symbolic' '-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+
+  type compopt &>/dev/null && compopt +o default
+
+  case ${prev_word} in
+    '--at')
+      return
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
+    '--digits')
+      return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+    '--max-digits')
+      return
+      ;;
+    '--max-states')
+      return
+      ;;
+  esac
+
+  if [[ "${curr_word}" == -* ]]; then
+    COMPREPLY=( $(compgen -W "${flag_opts} ${arg_opts}" -- "${curr_word}") )
+  else
+    local positionals=""
+    local currIndex
+    currIndex=$(currentPositionalIndex "longrun" "${arg_opts}" "${flag_opts}")
+    if (( currIndex >= 0 && currIndex <= 0 )); then
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      positionals=$( compgen -f -- "${curr_word}" ) # files
+    fi
+    local IFS=$'\n'
+    COMPREPLY=( $(compgen -W "${commands// /$'\n'}${IFS}${positionals}" -- "${curr_word}") )
+  fi
+}
+
+# Generates completions for the options and subcommands of the `absorb` subcommand.
+function _picocli_qchain_absorb() {
+  # Get completion data
+  local curr_word=${COMP_WORDS[COMP_CWORD]}
+  local prev_word=${COMP_WORDS[COMP_CWORD-1]}
+
+  local commands=""
+  local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--from' '--absorbing' '--reward' '--discount' '--steps' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+
+  type compopt &>/dev/null && compopt +o default
+
+  case ${prev_word} in
+    '--at')
+      return
+      ;;
+    '--from')
+      return
+      ;;
+    '--absorbing')
+      return
+      ;;
+    '--reward')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+    '--discount')
+      return
+      ;;
+    '--steps')
+      return
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
+    '--digits')
+      return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+    '--max-digits')
+      return
+      ;;
+    '--max-states')
+      return
+      ;;
+  esac
+
+  if [[ "${curr_word}" == -* ]]; then
+    COMPREPLY=( $(compgen -W "${flag_opts} ${arg_opts}" -- "${curr_word}") )
+  else
+    local positionals=""
+    local currIndex
+    currIndex=$(currentPositionalIndex "absorb" "${arg_opts}" "${flag_opts}")
+    if (( currIndex >= 0 && currIndex <= 0 )); then
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      positionals=$( compgen -f -- "${curr_word}" ) # files
+    fi
+    local IFS=$'\n'
+    COMPREPLY=( $(compgen -W "${commands// /$'\n'}${IFS}${positionals}" -- "${curr_word}") )
+  fi
+}
+
 # Generates completions for the options and subcommands of the `demo` subcommand.
 function _picocli_qchain_demo() {
   # Get completion data
@@ -498,7 +690,7 @@ function _picocli_qchain_help() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens closed check demo completion"
+  local commands="step sens closed check classes longrun absorb demo completion"
   local flag_opts="'-h' '--help'"
   local arg_opts=""
 

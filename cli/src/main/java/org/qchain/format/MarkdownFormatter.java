@@ -280,7 +280,9 @@ final class MarkdownFormatter extends Layout {
         for (String n : d.notes()) {
             sb.append("\n- ").append(Text.markdown(n));
         }
-        sb.append('\n');
+        if (!d.notes().isEmpty()) {
+            sb.append('\n');
+        }
         for (Sections.Table t : d.tables()) {
             sb.append("\n*").append(Text.markdown(t.title())).append("*\n\n| ");
             sb.append(String.join(" | ", t.header().stream().map(Text::markdown).toList())).append(" |\n| ");

@@ -109,4 +109,14 @@ class NoSymjaOnNumericPathTest {
         assertNoForbidden(classesRequestedBy("check", Cli.model("plant.chain")));
         assertNoForbidden(classesRequestedBy("demo"));
     }
+
+    @Test
+    void classesLongrunAndAbsorbLoadNoSymbolicClass() throws Exception {
+        String m = Cli.model("press.chain");
+        assertNoForbidden(classesRequestedBy("classes", m));
+        assertNoForbidden(classesRequestedBy("longrun", m, "--format", "json"));
+        assertNoForbidden(classesRequestedBy("longrun", Cli.model("plant.chain"), "--passage"));
+        assertNoForbidden(classesRequestedBy("absorb", m, "--reward", Cli.model("press-rewards.txt"), "--discount",
+            "100/105", "--steps", "4", "--format", "markdown"));
+    }
 }
