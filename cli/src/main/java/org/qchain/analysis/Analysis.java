@@ -16,7 +16,8 @@ import org.qchain.result.SensResult;
  * <p>Routes: {@code step} is numeric when every used parameter has a nominal value and symbolic is not asked for
  * (values given for parameters without a nominal value are the point where a symbolic result is evaluated);
  * {@code check} is numeric when every used parameter has a value (nominal or given); {@code sens} and
- * {@code closed} are symbolic. Only the symbolic route loads JAS and Symja.
+ * {@code closed} are symbolic. Only the symbolic route loads JAS and Symja. An interruption (the thread's interrupt
+ * flag, JAS's preemption) ends every query with {@link ErrorKey#INTERRUPTED}.
  */
 public final class Analysis {
     private Analysis() {
@@ -51,7 +52,7 @@ public final class Analysis {
                     + " values for every parameter (the most probable paths of a symbolic chain depend on the"
                     + " parameters)");
             }
-            return SymbolicEngine.step(model, q, progress);
+            return Interrupts.guarded(() -> SymbolicEngine.step(model, q, progress));
         }
         return NumericEngine.step(model, q, progress);
     }
@@ -67,7 +68,7 @@ public final class Analysis {
      */
     public static SensResult sens(LoadedModel model, SensQuery q, Progress progress) {
         model.requireDiscrete("qchain sens needs a discrete chain (continuous chains are not supported yet)");
-        return SymbolicEngine.sens(model, q, progress);
+        return Interrupts.guarded(() -> SymbolicEngine.sens(model, q, progress));
     }
 
     /**
@@ -81,7 +82,7 @@ public final class Analysis {
      */
     public static ClosedResult closed(LoadedModel model, ClosedQuery q, Progress progress) {
         model.requireDiscrete("closed forms in n are for discrete-time chains");
-        return SymbolicEngine.closed(model, q, progress);
+        return Interrupts.guarded(() -> SymbolicEngine.closed(model, q, progress));
     }
 
     /**
@@ -94,7 +95,7 @@ public final class Analysis {
     public static CheckResult check(LoadedModel model, CheckQuery q) {
         model.requireDiscrete("qchain check needs a discrete chain (continuous chains are not supported yet)");
         if (route(model, q) == Route.SYMBOLIC) {
-            return SymbolicEngine.check(model);
+            return Interrupts.guarded(() -> SymbolicEngine.check(model));
         }
         return NumericEngine.check(model);
     }

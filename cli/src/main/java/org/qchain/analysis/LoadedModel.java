@@ -257,7 +257,7 @@ public final class LoadedModel {
                 s = symbolic;
                 if (s == null) {
                     // the only reference to the symbolic side: numeric runs never reach it
-                    s = SymbolicEngine.validate(model);
+                    s = Interrupts.guarded(() -> SymbolicEngine.validate(model));
                     symbolic = s;
                 }
             }

@@ -2,7 +2,7 @@ package org.qchain.cli;
 
 import java.io.PrintWriter;
 import java.util.concurrent.atomic.AtomicBoolean;
-import org.qchain.exact.ErrorKey;
+import org.qchain.analysis.Interrupts;
 import org.qchain.exact.QchainException;
 import picocli.CommandLine;
 import picocli.CommandLine.IExecutionExceptionHandler;
@@ -34,7 +34,8 @@ final class Errors implements IExecutionExceptionHandler, IParameterExceptionHan
      * @return {@link ExitCodes#INPUT}, {@link ExitCodes#INTERNAL} or {@link ExitCodes#INTERRUPTED}
      */
     int report(Throwable t, PrintWriter err) {
-        if (t instanceof QchainException q && q.key() == ErrorKey.INTERRUPTED) {
+        if (Interrupts.isInterruption(t)) {
+            // Ctrl-C: ours, Java's or JAS's way of saying so, reported once
             reportInterrupt(err);
             return ExitCodes.INTERRUPTED;
         }
