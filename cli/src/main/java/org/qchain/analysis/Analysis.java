@@ -48,9 +48,7 @@ public final class Analysis {
         model.requireDiscrete("qchain step needs a discrete chain (continuous chains are not supported yet)");
         if (route(model, q) == Route.SYMBOLIC) {
             if (q.paths().isPresent()) {
-                throw new QchainException(ErrorKey.BAD_ARGUMENT, "--paths", q.paths().getAsInt(), "needs numeric"
-                    + " values for every parameter (the most probable paths of a symbolic chain depend on the"
-                    + " parameters)");
+                throw new QchainException(AnalysisKey.PATHS_NEED_VALUES, q.paths().getAsInt());
             }
             return Interrupts.guarded(() -> SymbolicEngine.step(model, q, progress));
         }

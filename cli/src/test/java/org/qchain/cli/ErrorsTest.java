@@ -54,6 +54,14 @@ class ErrorsTest {
     }
 
     @Test
+    void theCommandLineAddsItsHintToAKeyThatCannotNameOptions() {
+        // exact's FREE_PARAMETERS says what is missing; only the command line knows the option that gives it
+        assertEquals(2, new Errors().report(new QchainException(ErrorKey.FREE_PARAMETERS, "p"), err));
+        assertEquals("qchain: parameters without a value: p (give values with --at, or use a symbolic command)\n",
+            buf.toString());
+    }
+
+    @Test
     void jasPreemptionAndJavaInterruptsAreInterruptionsToo() {
         // JAS stops a preempted computation with its own unchecked exception; a Ctrl-C during symbolic work must
         // still end as one "interrupted" line and exit 130, not as an internal error
