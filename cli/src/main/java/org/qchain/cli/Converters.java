@@ -1,34 +1,51 @@
 package org.qchain.cli;
 
+import java.math.BigInteger;
 import java.util.Arrays;
 import java.util.Iterator;
+import org.qchain.exact.Rational;
 import org.qchain.format.OutputFormat;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
 
-/** Option value converters: a bad value is a usage error (exit 2) whose message shows the value. */
+/**
+ * Option value converters: a bad value is a usage error (exit 2) whose message shows the value. Every number goes
+ * through {@link #whole}, which uses the exact module's reader.
+ */
 final class Converters {
     private Converters() {
     }
 
     /**
-     * A whole number in {@code [min, max]}.
+     * A whole number in {@code [min, max]}, read by the exact module's number reader ({@link Rational#parse}, the
+     * grammar of numbers in model files: {@code 12}, {@code 1e6}, {@code 24/2}; {@code _} may group digits), so that
+     * the command line has no number grammar of its own.
      *
      * @param value the option's text
      * @param what  what it counts, for the message ({@code "steps"})
-     * @param range the message for a value out of range
+     * @param range the message for a value below {@code min} (or above {@code max} when {@code max} is not
+     *              {@code Long.MAX_VALUE})
      */
-    private static long whole(String value, String what, long min, long max, String range) {
-        long x;
+    static long whole(String value, String what, long min, long max, String range) {
+        Rational r;
         try {
-            x = Long.parseLong(value.strip().replace("_", ""));
-        } catch (NumberFormatException e) {
+            r = Rational.parse(value.replace("_", ""));
+        } catch (RuntimeException e) {
+            // NumberFormatException, or the exact module's own error for a malformed or too large number
             throw new TypeConversionException("'" + value + "' is not a whole number of " + what);
         }
-        if (x < min || x > max) {
+        if (!r.isInteger()) {
+            throw new TypeConversionException("'" + value + "' is not a whole number of " + what);
+        }
+        BigInteger x = r.numerator();
+        if (x.compareTo(BigInteger.valueOf(min)) < 0
+            || max != Long.MAX_VALUE && x.compareTo(BigInteger.valueOf(max)) > 0) {
             throw new TypeConversionException("'" + value + "' " + range);
         }
-        return x;
+        if (x.compareTo(BigInteger.valueOf(Long.MAX_VALUE)) > 0) {
+            throw new TypeConversionException("'" + value + "' is too large: at most " + Long.MAX_VALUE);
+        }
+        return x.longValueExact();
     }
 
     /** A number of steps: an integer {@code >= 0}. */
