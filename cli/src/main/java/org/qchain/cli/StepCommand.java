@@ -26,9 +26,6 @@ import picocli.CommandLine.Spec;
         "of the parameters (--factor: factored), with its value at the nominal or --at point when every parameter",
         "has one."})
 final class StepCommand implements Callable<Integer> {
-    /** Default limit on the total digits of a result. */
-    static final long DEFAULT_MAX_DIGITS = org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS;
-
     @Spec
     CommandSpec spec;
 
@@ -56,11 +53,8 @@ final class StepCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
-    @Option(names = "--max-digits", paramLabel = "M", converter = Converters.DigitLimit.class,
-        defaultValue = "" + DEFAULT_MAX_DIGITS,
-        description = "Refuse results estimated to need more than M digits in total (symbolic results: in their"
-            + " coefficients; default: ${DEFAULT-VALUE}).")
-    long maxDigits = DEFAULT_MAX_DIGITS;
+    @Mixin
+    LimitOptions.Digits digitLimit;
 
     @Option(names = "--max-path-digits", paramLabel = "W", converter = Converters.DigitLimit.class,
         defaultValue = "" + org.qchain.exact.SizeEstimate.DEFAULT_MAX_PATH_DIGITS,
@@ -87,8 +81,8 @@ final class StepCommand implements Callable<Integer> {
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         StepQuery q = new StepQuery(n, Optional.ofNullable(from), Optional.ofNullable(to),
-            paths == null ? OptionalInt.empty() : OptionalInt.of(paths), maxDigits, maxPathDigits, symbolic,
-            symbolicOptions.factor, symbolicOptions.maxTerms);
+            paths == null ? OptionalInt.empty() : OptionalInt.of(paths), digitLimit.maxDigits, maxPathDigits, symbolic,
+            symbolicOptions.factor, symbolicOptions.maxTerms());
         if (Analysis.route(loaded, q) == Route.SYMBOLIC) {
             if (paths != null) {
                 throw new ParameterException(spec.commandLine(), "--paths needs numeric values for every parameter"
