@@ -1,5 +1,7 @@
 package org.qchain.analysis;
 
+import java.util.Optional;
+import java.util.OptionalInt;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
@@ -50,6 +52,10 @@ public final class Analysis {
             if (q.paths().isPresent()) {
                 throw new QchainException(AnalysisKey.PATHS_NEED_VALUES, q.paths().getAsInt());
             }
+            if (model.complete()) {
+                // the values at the point come from the exact engine too: its estimate first
+                NumericEngine.guard(model, q);
+            }
             return Interrupts.guarded(() -> SymbolicEngine.step(model, q, progress));
         }
         return NumericEngine.step(model, q, progress);
@@ -66,6 +72,11 @@ public final class Analysis {
      */
     public static SensResult sens(LoadedModel model, SensQuery q, Progress progress) {
         model.requireDiscrete("qchain sens needs a discrete chain (continuous chains are not supported yet)");
+        if (model.complete()) {
+            // the value at the point is checked against the exact engine's entry: its estimate first
+            NumericEngine.guard(model, new StepQuery(q.n(), Optional.of(q.from()), Optional.of(q.to()),
+                OptionalInt.empty(), q.maxDigits(), Long.MAX_VALUE, true, q.factor(), q.maxTerms()));
+        }
         return Interrupts.guarded(() -> SymbolicEngine.sens(model, q, progress));
     }
 

@@ -1,7 +1,6 @@
 package org.qchain.analysis;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -12,9 +11,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
-import org.qchain.exact.ErrorKey;
 import org.qchain.exact.Progress;
-import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.format.OutputFormat;
 import org.qchain.result.ClosedResult;
@@ -93,18 +90,5 @@ class LibraryExampleTest {
                 assertTrue(page.contains(onPage), () -> "docs/library.md lacks: " + onPage);
             }
         }
-    }
-
-    @Test
-    void aPathSearchPastItsLimitIsRefusedBeforeAnyEngineRuns() {
-        // step -n 2000000 --paths 5 on a 3-state chain: the path search's estimate refuses it before the entry is
-        // computed; a progress report would mean an engine had started
-        LoadedModel pump = LoadedModel.load(MODEL, Map.of());
-        Progress none = (phase, done, total) -> {
-            throw new AssertionError("an engine ran: " + phase);
-        };
-        QchainException e = assertThrows(QchainException.class,
-            () -> Analysis.step(pump, StepQuery.entry(2_000_000, "Up", "Down").withPaths(5), none));
-        assertEquals(ErrorKey.PATH_SEARCH_TOO_LARGE, e.key());
     }
 }
