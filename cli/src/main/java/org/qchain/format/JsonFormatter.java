@@ -201,11 +201,11 @@ final class JsonFormatter extends Layout {
             });
         }
         if (!r.isSeries()) {
-            j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor())
+            j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor().plain())
                 .number("multiplicity", e.multiplicity()).number("jordan_index", e.jordanIndex())
                 .string("kind", e.kind()).strings("values", e.values()));
             j.objects("root_polynomials", r.roots(), rt -> Json.object().string("name", rt.name())
-                .string("polynomial", rt.polynomial()).strings("roots", rt.roots()));
+                .string("polynomial", rt.polynomial().plain()).strings("roots", rt.roots()));
             r.longRun().ifPresent(lr -> {
                 List<Integer> rs = new ArrayList<>();
                 for (int k = 0; k < lr.limits().size(); k++) {
@@ -213,7 +213,7 @@ final class JsonFormatter extends Layout {
                 }
                 Json l = Json.object().number("period", lr.period())
                     .objects("limits", rs, k -> limitJson(r, k, lr.limits().get(k)))
-                    .string("rate", lr.rate());
+                    .string("rate", lr.rate().plain());
                 lr.rateValue().ifPresent(v -> l.string("rate_value", v));
                 j.object("long_run", l);
             });

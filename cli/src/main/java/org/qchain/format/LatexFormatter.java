@@ -191,14 +191,14 @@ final class LatexFormatter extends Layout {
         }
         sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
         for (ClosedResult.Eigen e : r.eigenvalues()) {
-            sb.append("% eigenvalue ").append(String.join(", ", e.values())).append(" from ").append(e.factor());
+            sb.append("% eigenvalue ").append(String.join(", ", e.values())).append(" from ").append(e.factor().plain());
             if (e.multiplicity() > 1) {
                 sb.append(", multiplicity ").append(e.multiplicity());
             }
             sb.append('\n');
         }
         r.longRun().ifPresent(lr -> sb.append("% long run: period ").append(lr.period()).append("; rate ")
-            .append(lr.rate()).append(lr.rateValue().map(v -> " = " + v).orElse("")).append('\n'));
+            .append(lr.rate().plain()).append(lr.rateValue().map(v -> " = " + v).orElse("")).append('\n'));
         return caution(sb);
     }
 

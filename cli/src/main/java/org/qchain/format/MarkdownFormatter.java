@@ -204,7 +204,7 @@ final class MarkdownFormatter extends Layout {
             sb.append("\nEigenvalues:\n\n");
             for (ClosedResult.Eigen e : r.eigenvalues()) {
                 sb.append("- `").append(Text.code(String.join(", ", e.values()))).append("` from `")
-                    .append(Text.code(e.factor())).append('`');
+                    .append(Text.code(e.factor().plain())).append('`');
                 if (e.multiplicity() > 1) {
                     sb.append(", multiplicity ").append(e.multiplicity());
                 }
@@ -214,7 +214,7 @@ final class MarkdownFormatter extends Layout {
                 sb.append('\n');
             }
             for (ClosedResult.Roots rt : r.roots()) {
-                sb.append("- `").append(rt.name()).append(" = ").append(Text.code(rt.polynomial())).append('`');
+                sb.append("- `").append(rt.name()).append(" = ").append(Text.code(rt.polynomial().plain())).append('`');
                 if (!rt.roots().isEmpty()) {
                     sb.append(": roots ").append(String.join(", ", rt.roots()));
                 }
@@ -238,7 +238,7 @@ final class MarkdownFormatter extends Layout {
                     }
                 }
             }
-            sb.append("\nConvergence rate (second-largest eigenvalue modulus): `").append(Text.code(lr.rate()))
+            sb.append("\nConvergence rate (second-largest eigenvalue modulus): `").append(Text.code(lr.rate().plain()))
                 .append('`');
             lr.rateValue().ifPresent(v -> sb.append(" = ").append(v)
                 .append(r.point().map(p -> " at " + p.text()).orElse("")));

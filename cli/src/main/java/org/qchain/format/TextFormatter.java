@@ -272,7 +272,7 @@ final class TextFormatter extends Layout {
             List<String> facts = new ArrayList<>();
             List<String> vals = new ArrayList<>();
             for (ClosedResult.Eigen e : r.eigenvalues()) {
-                facts.add(e.factor() + ":");
+                facts.add(e.factor().plain() + ":");
                 String extra = e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() : "";
                 extra += e.jordanIndex() > 1 ? ", Jordan block of size " + e.jordanIndex() : "";
                 vals.add(String.join(", ", e.values()) + (extra.isEmpty() ? "" : extra + ")"));
@@ -280,7 +280,7 @@ final class TextFormatter extends Layout {
             aligned(sb, facts, " ", vals, "  ");
         }
         for (ClosedResult.Roots rt : r.roots()) {
-            sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial());
+            sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial().plain());
             if (!rt.roots().isEmpty()) {
                 sb.append("; roots ").append(String.join(", ", rt.roots()));
             }
@@ -309,7 +309,7 @@ final class TextFormatter extends Layout {
             }
             aligned(sb, labels, "  ", values, "  ");
         }
-        sb.append("Convergence rate (second-largest eigenvalue modulus): ").append(lr.rate()).append('\n');
+        sb.append("Convergence rate (second-largest eigenvalue modulus): ").append(lr.rate().plain()).append('\n');
         lr.rateValue().ifPresent(v -> sb.append("  = ").append(v)
             .append(r.point().map(p -> " at " + p.text()).orElse("")).append(" (").append(r.digits())
             .append(" significant digits)\n"));
