@@ -3,6 +3,8 @@ package org.qchain.cli;
 import java.math.BigInteger;
 import java.util.Arrays;
 import java.util.Iterator;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.format.OutputFormat;
 import picocli.CommandLine.ITypeConverter;
@@ -30,8 +32,11 @@ final class Converters {
         Rational r;
         try {
             r = Rational.parse(value.replace("_", ""));
+        } catch (QchainException e) {
+            // the exact module's reason, unless it only repeats that the text is no number
+            String why = e.key() == ErrorKey.MALFORMED_NUMBER ? "" : " (" + e.detail() + ")";
+            throw new TypeConversionException("'" + value + "' is not a whole number of " + what + why);
         } catch (RuntimeException e) {
-            // NumberFormatException, or the exact module's own error for a malformed or too large number
             throw new TypeConversionException("'" + value + "' is not a whole number of " + what);
         }
         if (!r.isInteger()) {

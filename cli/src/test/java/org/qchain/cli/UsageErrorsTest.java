@@ -68,6 +68,10 @@ class UsageErrorsTest {
             "qchain: Invalid value for option '--steps': '7/2' is not a whole number of steps", "qchain step");
         assertUsageError(Cli.run("step", MODEL, "-n", "\u0663"),
             "qchain: Invalid value for option '--steps': '\u0663' is not a whole number of steps", "qchain step");
+        Cli.Result hugeExponent = Cli.run("step", MODEL, "-n", "1e99999999999");
+        assertEquals(2, hugeExponent.code(), hugeExponent::toString);
+        assertTrue(hugeExponent.err().startsWith("qchain: Invalid value for option '--steps': '1e99999999999' is"
+            + " not a whole number of steps ("), hugeExponent::toString);
         assertUsageError(Cli.run("step", MODEL, "-n", "99999999999999999999"),
             "qchain: Invalid value for option '--steps': '99999999999999999999' is too large: at most "
                 + Long.MAX_VALUE, "qchain step");
