@@ -25,6 +25,28 @@ public final class Analysis {
     private Analysis() {
     }
 
+    /**
+     * Runs any query: the one entry point a report (a list of queries) needs.
+     *
+     * @param model    the loaded model
+     * @param query    the query
+     * @param progress told about long work
+     * @return the query's result
+     * @throws QchainException as the query's own method
+     */
+    public static Result run(LoadedModel model, Query query, Progress progress) {
+        if (query instanceof StepQuery q) {
+            return step(model, q, progress);
+        }
+        if (query instanceof SensQuery q) {
+            return sens(model, q, progress);
+        }
+        if (query instanceof ClosedQuery q) {
+            return closed(model, q, progress);
+        }
+        return check(model, (CheckQuery) query);
+    }
+
     /** The route a step query takes on a model. */
     public static Route route(LoadedModel model, StepQuery q) {
         return q.symbolic() || model.hasParameterWithoutNominal() ? Route.SYMBOLIC : Route.NUMERIC;

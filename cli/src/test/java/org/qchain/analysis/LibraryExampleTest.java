@@ -91,4 +91,22 @@ class LibraryExampleTest {
             }
         }
     }
+
+    @Test
+    void anyQueryRunsThroughTheOneEntryPoint() {
+        // a report is a list of queries: Analysis.run gives each the result its own method gives
+        LoadedModel pump = LoadedModel.load(MODEL, Map.of());
+        List<Query> queries = List.of(StepQuery.entry(2, "Up", "Down"), SensQuery.of(2, "Up", "Down", "p"),
+            new CheckQuery(false));
+        String viaRun = "";
+        for (Query q : queries) {
+            viaRun += OutputFormat.TEXT.formatter(6).format(Analysis.run(pump, q, Progress.NONE));
+        }
+        String direct = OutputFormat.TEXT.formatter(6).format(Analysis.step(pump, StepQuery.entry(2, "Up", "Down"),
+            Progress.NONE)) + OutputFormat.TEXT.formatter(6).format(Analysis.sens(pump, SensQuery.of(2, "Up",
+            "Down", "p"), Progress.NONE)) + OutputFormat.TEXT.formatter(6).format(Analysis.check(pump,
+            new CheckQuery(false)));
+        assertEquals(direct, viaRun);
+        assertTrue(viaRun.contains("1/400"), viaRun);
+    }
 }
