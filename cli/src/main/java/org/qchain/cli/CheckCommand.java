@@ -38,7 +38,8 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         LoadedModel loaded = model.load();
         CheckResult result = Analysis.check(loaded, new CheckQuery(symbolic));
-        Emitter.emit(spec, OutputFormat.TEXT.formatter(digits.digits).format(result), result.warnings(), Optional.empty());
+        Emitter.emit(spec, OutputFormat.TEXT.formatter(digits.digits).format(result), result.warnings(),
+            Optional.empty());
         return ExitCodes.OK;
     }
 }

@@ -60,6 +60,7 @@ class EveryFormatTest {
             List.of(List.of(Formula.of("1/(1 - z)", "\\frac{1}{1 - z}"))), List.of(), List.of(), Optional.empty(),
             List.of(), Optional.empty(), 12, List.of());
         assertThrows(UnsupportedOperationException.class, () -> OutputFormat.CSV.formatter(4).format(r));
-        assertTrue(OutputFormat.LATEX.formatter(4).format(r).contains("G_{\\text{A},\\text{A}}(z) &= \\frac{1}{1 - z}"));
+        assertTrue(OutputFormat.LATEX.formatter(4).format(r)
+            .contains("G_{\\text{A},\\text{A}}(z) &= \\frac{1}{1 - z}"));
     }
 }
