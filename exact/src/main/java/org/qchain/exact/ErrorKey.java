@@ -123,7 +123,9 @@ public enum ErrorKey {
     /** {0}: what was expected. */
     REF_EMPTY("the file has no values; expected {0}"),
     /** {0}: what was expected and found. */
-    REF_SHAPE("{0}");
+    REF_SHAPE("{0}"),
+    /** {0}: the quantity, {1}: the analysis it needs. */
+    VERIFY_NOT_AVAILABLE("checking {0} needs {1}, which this version of qchain does not have yet");
 
     private final String pattern;
 
