@@ -124,6 +124,18 @@ public enum ErrorKey {
     REF_EMPTY("the file has no values; expected {0}"),
     /** {0}: what was expected and found. */
     REF_SHAPE("{0}"),
+
+    // --- input robustness: number sizes, nesting, declaration order, dense size (appended) ----------------------
+    /** {0}: the number as written (shortened), {1}: its digits, {2}: the limit. */
+    NUMBER_TOO_LONG("the number ''{0}'' has {1} digits, more than the limit of {2} digits for one number"),
+    /** {0}: the limit of nested parentheses. */
+    NESTING_TOO_DEEP("parentheses nested more than {0} deep"),
+    /** {0}: line of the first transition. */
+    PARAM_AFTER_TRANSITIONS("a ''param'' line after the transitions: declare parameters before the first transition (line {0}); move this line up"),
+    /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries. */
+    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries"),
+
+    // --- verify (issue 11, appended) ----------------------------------------------------------------------------
     /** {0}: the quantity, {1}: the analysis it needs. */
     VERIFY_NOT_AVAILABLE("checking {0} needs {1}, which this version of qchain does not have yet");
 

@@ -1,6 +1,7 @@
 package org.qchain.exact.reference;
 
 import java.util.Locale;
+import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.floats.Binary64;
@@ -79,7 +80,9 @@ public sealed interface GivenValue {
         try {
             v = Rational.parse(t);
         } catch (ArithmeticException | QchainException e) {
-            throw new NumberFormatException("'" + t + "': " + e.getMessage());
+            // a plain "malformed number" needs no detail; the reader's message already says what is expected
+            throw new NumberFormatException(e instanceof QchainException q && q.key() == ErrorKey.MALFORMED_NUMBER
+                ? q.detail() : "'" + t + "': " + e.getMessage());
         }
         // a decimal in the grammar just checked is one Double.parseDouble reads, and it rounds correctly (Java SE
         // API, Double.valueOf(String)): the same double as Binary64.round(v), found faster
