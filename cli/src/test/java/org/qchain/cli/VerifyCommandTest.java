@@ -147,6 +147,21 @@ class VerifyCommandTest {
     }
 
     @Test
+    void outputNeverOverwritesTheCheckedFile() {
+        Cli.Result r = verify("plant-p4.csv", "-n", "4", "-o", REF + "plant-p4.csv");
+        assertEquals(2, r.code(), r::toString);
+        assertTrue(r.err().startsWith("qchain: --output must not be the --against file"), r.err());
+    }
+
+    @Test
+    void showZeroPrintsTheSummaryOnly() {
+        Cli.Result r = verify("plant-p4-bad.csv", "-n", "4", "--show", "0");
+        assertEquals(3, r.code(), r::toString);
+        assertTrue(!r.out().contains("Down -> Up"), r.out());
+        assertTrue(r.out().contains("9 values checked, 1 over the tolerance; worst relative error 1.00e-6"), r.out());
+    }
+
+    @Test
     void freeParametersNeedValues() {
         String free = Cli.model("free.chain");
         Cli.Result r = Cli.run("verify", free, "--against", REF + "free-p1.csv", "-n", "1", "--from", "On");
