@@ -9,6 +9,7 @@ import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Result;
 import org.qchain.result.SensResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * Runs queries on loaded models: the one way from a query to a typed result, for the command line and for Java
@@ -114,6 +115,21 @@ public final class Analysis {
     public static ClosedResult closed(LoadedModel model, ClosedQuery q, Progress progress) {
         model.requireDiscrete("closed forms in n are for discrete-time chains");
         return Interrupts.guarded(() -> SymbolicEngine.closed(model, q, progress));
+    }
+
+    /**
+     * Another tool's floating-point results checked exactly against the exact values.
+     *
+     * @param model    the loaded model (every used parameter needs a value)
+     * @param q        the query
+     * @param progress told about long work (the exact values, then the checking)
+     * @return the result: counts, the worst entries, whether every value meets the tolerance
+     * @throws QchainException for a quantity whose analysis this build lacks, a continuous chain, free parameters,
+     *                         an unknown state, exact values past the size limit, a file of the wrong shape or with
+     *                         unknown state names (at its file:line:col), an interruption
+     */
+    public static VerifyResult verify(LoadedModel model, VerifyQuery q, Progress progress) {
+        return Verification.run(model, q, progress);
     }
 
     /**

@@ -113,4 +113,58 @@ final class Converters {
             return Arrays.stream(OutputFormat.values()).map(OutputFormat::word).iterator();
         }
     }
+
+    /** A tolerance: an exact number {@code >= 0} in the model's number grammar ({@code 1e-9}, {@code 1/1000}). */
+    static final class Bound implements ITypeConverter<org.qchain.exact.Rational> {
+        @Override
+        public org.qchain.exact.Rational convert(String value) {
+            org.qchain.exact.Rational r;
+            try {
+                r = org.qchain.exact.Rational.parse(value);
+            } catch (RuntimeException e) {
+                throw new TypeConversionException("'" + value + "' is not a number (write e.g. 1e-9 or 1/1000)");
+            }
+            if (r.signum() < 0) {
+                throw new TypeConversionException("'" + value + "' is negative; a tolerance must be 0 or more");
+            }
+            return r;
+        }
+    }
+
+    /** A tolerance in ulps: an integer {@code >= 0}. */
+    static final class UlpBound implements ITypeConverter<Long> {
+        @Override
+        public Long convert(String value) {
+            return whole(value, "ulps", 0, Long.MAX_VALUE, "is negative; a tolerance in ulps must be 0 or more");
+        }
+    }
+
+    /** How many entries to list: 0 to {@value #MAX}. */
+    static final class ShowCount implements ITypeConverter<Integer> {
+        static final int MAX = 1_000_000;
+
+        @Override
+        public Integer convert(String value) {
+            return (int) whole(value, "entries", 0, MAX, "must be from 0 to " + MAX);
+        }
+    }
+
+    /** The word given to {@code --what}. */
+    static final class VerifyWhat implements ITypeConverter<org.qchain.analysis.VerifyQuery.What> {
+        @Override
+        public org.qchain.analysis.VerifyQuery.What convert(String value) {
+            return org.qchain.analysis.VerifyQuery.What.of(value).orElseThrow(() -> new TypeConversionException(
+                "'" + value + "' is not a quantity verify checks (one of " + String.join(", ", new VerifyWhatWords())
+                + ")"));
+        }
+    }
+
+    /** The words of {@code --what}, for help and completion. */
+    static final class VerifyWhatWords implements Iterable<String> {
+        @Override
+        public Iterator<String> iterator() {
+            return Arrays.stream(org.qchain.analysis.VerifyQuery.What.values())
+                .map(org.qchain.analysis.VerifyQuery.What::word).iterator();
+        }
+    }
 }

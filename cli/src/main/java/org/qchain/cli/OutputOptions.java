@@ -32,6 +32,11 @@ final class OutputOptions {
         return format.formatter(digits());
     }
 
+    /** The formatter of {@code --format} at {@code --digits}, with binary64 columns if {@code doubles}. */
+    Formatter formatter(boolean doubles) {
+        return format.formatter(digits, doubles);
+    }
+
     /** The output file, if given. */
     Optional<Path> output() {
         return Optional.ofNullable(output);

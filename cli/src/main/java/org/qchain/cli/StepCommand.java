@@ -7,6 +7,7 @@ import org.qchain.analysis.Analysis;
 import org.qchain.analysis.LoadedModel;
 import org.qchain.analysis.Route;
 import org.qchain.analysis.StepQuery;
+import org.qchain.format.OutputFormat;
 import org.qchain.result.Result;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -70,6 +71,12 @@ final class StepCommand implements Callable<Integer> {
     @Mixin
     SymbolicOptions symbolicOptions;
 
+    @Option(names = "--double",
+        description = "With --format csv or json: add each value's correctly rounded binary64 (IEEE 754 double) as"
+            + " the shortest decimal that reads back as that double and as a hexadecimal float, for pasting exact"
+            + " reference values into other programs' tests.")
+    boolean doubles;
+
     @Override
     public Integer call() {
         if (to != null && from == null) {
@@ -77,6 +84,9 @@ final class StepCommand implements Callable<Integer> {
         }
         if (paths != null && (from == null || to == null)) {
             throw new ParameterException(spec.commandLine(), "--paths needs both --from and --to");
+        }
+        if (doubles && output.format != OutputFormat.CSV && output.format != OutputFormat.JSON) {
+            throw new ParameterException(spec.commandLine(), "--double needs --format csv or --format json");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
@@ -92,8 +102,12 @@ final class StepCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--factor applies to symbolic results: the model has"
                 + " values for all its parameters (use --symbolic to keep them symbolic)");
         }
+        if (doubles && Analysis.route(loaded, q) == Route.SYMBOLIC) {
+            throw new ParameterException(spec.commandLine(), "--double needs numeric values for every parameter"
+                + " (a formula has no double; give values with --at)");
+        }
         Result result = root.run(spec, progress -> Analysis.step(loaded, q, progress));
-        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
+        Emitter.emit(spec, output.formatter(doubles).format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }
 }
