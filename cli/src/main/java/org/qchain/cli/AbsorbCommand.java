@@ -72,7 +72,7 @@ final class AbsorbCommand implements Callable<Integer> {
     Path reward;
 
     @Option(names = "--discount", paramLabel = "V", converter = Discount.class, description = "Discount factor per"
-        + " step, 0 < V < 1, for the expected discounted reward (needs --reward).")
+        + " step, 0 < V < 1, for the expected discounted reward (needs rewards).")
     Rational discount;
 
     @Option(names = "--steps", paramLabel = "N", description = "Also the first-passage distribution P(T = n) and"
@@ -87,12 +87,14 @@ final class AbsorbCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (discount != null && reward == null) {
-            throw new picocli.CommandLine.ParameterException(spec.commandLine(), "--discount needs --reward FILE");
-        }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
-        Map<String, Rational> rewards = reward == null ? Map.of() : RewardFile.read(reward, loaded);
+        // a reward file replaces the model's own reward lines
+        Map<String, Rational> rewards = reward == null ? loaded.model().rewards() : RewardFile.read(reward, loaded);
+        if (discount != null && rewards.isEmpty()) {
+            throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+                "--discount needs rewards: --reward FILE or reward lines in the model");
+        }
         AbsorbQuery q = new AbsorbQuery(Optional.ofNullable(from), absorbing, rewards, Optional.ofNullable(discount),
             steps == null ? OptionalInt.empty() : OptionalInt.of(steps), options.query(false));
         AbsorbResult result = root.run(spec, progress -> Analysis.absorb(loaded, q));

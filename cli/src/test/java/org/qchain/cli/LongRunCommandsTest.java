@@ -131,4 +131,14 @@ class LongRunCommandsTest {
         assertEquals("qchain: invalid --absorbing 'Nope': not a state of " + PRESS + " (states: Good, Worn, Failed)\n",
             r.err());
     }
+
+    // common practice, no source: reward lines in the model give the same rewards as the same values in a file
+    @Test
+    void modelRewardLinesEqualARewardFile() {
+        Cli.Result lines = Cli.run("absorb", Cli.model("press-rewards.chain"), "--discount", "100/105", "--format", "json");
+        Cli.Result file = Cli.run("absorb", PRESS, "--reward", REWARDS, "--discount", "100/105", "--format", "json");
+        assertEquals(0, lines.code(), lines::toString);
+        String tail = "\"rewards\":";
+        assertEquals(file.out().substring(file.out().indexOf(tail)), lines.out().substring(lines.out().indexOf(tail)));
+    }
 }

@@ -28,9 +28,16 @@ public final class Model {
     private final List<List<Transition>> rows;
     private final List<String> used;
     private final InputLimits limits;
+    private final Map<String, Rational> rewards;
 
     private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
                   List<Transition> transitions, InputLimits limits) {
+        this(source, kind, params, states, transitions, limits, Map.of());
+    }
+
+    private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
+                  List<Transition> transitions, InputLimits limits, Map<String, Rational> rewards) {
+        this.rewards = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(rewards));
         this.source = source;
         this.kind = kind;
         this.params = List.copyOf(params);
@@ -227,5 +234,24 @@ public final class Model {
             return sum == null ? Expr.num(Rational.ONE) : Expr.sub(Expr.num(Rational.ONE), sum);
         }
         return sum == null ? Expr.num(Rational.ZERO) : new Expr.Neg(sum, null);
+    }
+
+    /**
+     * The rewards per step given by {@code reward STATE VALUE} lines, in file order; states not listed earn 0.
+     *
+     * @return state name to reward; empty when the model has no reward lines
+     */
+    public Map<String, Rational> rewards() {
+        return rewards;
+    }
+
+    /**
+     * This model with reward lines.
+     *
+     * @param r state name to reward per step (names of this model's states)
+     * @return a copy carrying the rewards
+     */
+    public Model withRewards(Map<String, Rational> r) {
+        return new Model(source, kind, params, states, transitions, limits, r);
     }
 }

@@ -287,6 +287,8 @@ public final class ModelParser {
         private final Map<String, Integer> stateIndex = new HashMap<>();
         private int statesLine;
         private final List<Transition> transitions = new ArrayList<>();
+        private final Map<String, Rational> rewards = new LinkedHashMap<>();
+        private final Map<String, Integer> rewardLines = new LinkedHashMap<>();
         private final Map<Long, Transition> seen = new HashMap<>();
 
         LineParser(String file, List<String> lines, InputLimits limits) {
@@ -337,13 +339,42 @@ public final class ModelParser {
                         break;
                     default:
                         markDeclaration(ln);
-                        otherLine(ln, line, w);
+                        if (w.get(0).text().equals("reward") && states != null && !stateIndex.containsKey("reward")) {
+                            rewardLine(ln, w);
+                        } else {
+                            otherLine(ln, line, w);
+                        }
                 }
             }
             if (states == null) {
                 throw new QchainException(new SourcePos(file, 1, 1), ErrorKey.MISSING_STATES, "the end of the file");
             }
-            return Model.of(file, kind(), List.copyOf(params.values()), states, transitions, limits);
+            Model m = Model.of(file, kind(), List.copyOf(params.values()), states, transitions, limits);
+            return rewards.isEmpty() ? m : m.withRewards(rewards);
+        }
+
+        /** {@code reward STATE VALUE}: an exact reward per step spent in STATE (for absorb and longrun rewards). */
+        private void rewardLine(int ln, List<Word> w) {
+            if (w.size() != 3) {
+                throw new QchainException(pos(ln, w.get(0).start()), ErrorKey.SYNTAX,
+                    "a reward line is: reward STATE VALUE (for example: reward Worn 12.5)");
+            }
+            String state = w.get(1).text();
+            SourcePos at = pos(ln, w.get(1).start());
+            if (!stateIndex.containsKey(state)) {
+                throw new QchainException(at, ErrorKey.UNKNOWN_STATE, state);
+            }
+            if (rewardLines.containsKey(state)) {
+                throw new QchainException(at, ErrorKey.SYNTAX, "a second reward for " + state + " (the first is on line "
+                    + rewardLines.get(state) + ")");
+            }
+            String v = w.get(2).text();
+            try {
+                rewards.put(state, Rational.parse(v));
+            } catch (RuntimeException e) {
+                throw new QchainException(pos(ln, w.get(2).start()), ErrorKey.MALFORMED_NUMBER, v);
+            }
+            rewardLines.put(state, ln);
         }
 
         private void markDeclaration(int ln) {
