@@ -1,7 +1,9 @@
 package org.qchain.cli;
 
+import java.math.BigInteger;
 import java.util.Arrays;
 import java.util.Iterator;
+import org.qchain.exact.NumberGrammar;
 import org.qchain.format.OutputFormat;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
@@ -19,16 +21,16 @@ final class Converters {
      * @param range the message for a value out of range
      */
     private static long whole(String value, String what, long min, long max, String range) {
-        long x;
-        try {
-            x = Long.parseLong(value.strip().replace("_", ""));
-        } catch (NumberFormatException e) {
-            throw new TypeConversionException("'" + value + "' is not a whole number of " + what);
+        // the one grammar of whole numbers: ASCII digits only ('-n \u0663' is no number), of any size
+        BigInteger x = NumberGrammar.whole(value).orElseThrow(
+            () -> new TypeConversionException("'" + value + "' is not a whole number of " + what));
+        if (x.compareTo(BigInteger.valueOf(max)) > 0) {
+            throw new TypeConversionException("'" + value + "' is too large: at most " + max + " " + what);
         }
-        if (x < min || x > max) {
+        if (x.compareTo(BigInteger.valueOf(min)) < 0) {
             throw new TypeConversionException("'" + value + "' " + range);
         }
-        return x;
+        return x.longValueExact();
     }
 
     /** A number of steps: an integer {@code >= 0}. */

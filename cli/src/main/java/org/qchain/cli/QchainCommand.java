@@ -18,7 +18,8 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Spec;
 
 /**
- * The root command {@code qchain}. Called without a subcommand it prints its usage on stderr and exits 2.
+ * The root command {@code qchain}. Called without a subcommand it says so on stderr ({@code qchain: no command
+ * given; the commands are: ...}), prints its usage and exits 2.
  *
  * <p>{@link #newCommandLine(boolean)} builds the configured command tree (error handlers, exit code lists and the
  * caution footer on every help); {@link #run(String[])} is the process entry point used by {@link Main}.
@@ -49,8 +50,16 @@ public final class QchainCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        spec.commandLine().usage(spec.commandLine().getErr());
+        PrintWriter err = spec.commandLine().getErr();
+        err.println("qchain: no command given; the commands are: " + commandNames(spec.commandLine()));
+        spec.commandLine().usage(err);
+        err.flush();
         return ExitCodes.INPUT;
+    }
+
+    /** The subcommands' names, comma-separated, in the order of the help. */
+    static String commandNames(CommandLine root) {
+        return String.join(", ", root.getSubcommands().keySet());
     }
 
     /** A progress reporter for a subcommand; it prints only if progress is allowed. */
