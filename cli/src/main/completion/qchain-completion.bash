@@ -209,13 +209,19 @@ function _picocli_qchain_step() {
 
   local commands=""
   local flag_opts="'--symbolic' '--factor' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-terms'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '-n'|'--steps')
@@ -279,13 +285,19 @@ function _picocli_qchain_sens() {
 
   local commands=""
   local flag_opts="'--factor' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '-n'|'--steps')
@@ -349,7 +361,7 @@ function _picocli_qchain_closed() {
 
   local commands=""
   local flag_opts="'-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--from' '--to' '--start' '--form' '--format' '--digits' '-o' '--output' '--max-terms'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--format' '--digits' '-o' '--output' '--max-terms'"
   local FORM_option_args=("MATRIX" "GF" "RECURRENCE") # --form values
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
@@ -357,6 +369,12 @@ function _picocli_qchain_closed() {
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--from')
@@ -416,12 +434,18 @@ function _picocli_qchain_check() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--digits'"
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--digits')

@@ -229,9 +229,10 @@ final class SymbolicEngine {
         try {
             r = SweepRange.parse(text);
         } catch (QchainException e) {
-            // SWEEP's arguments are the text and the reason: name the option instead of repeating the text
+            // SWEEP's arguments are the text and the reason; a syntax error names its column in the option's text
             throw new QchainException(ErrorKey.BAD_ARGUMENT, "--sweep", text,
-                e.key() == ErrorKey.SWEEP ? String.valueOf(e.args().get(1)) : e.detail());
+                e.key() == ErrorKey.SWEEP ? String.valueOf(e.args().get(1))
+                    : e.pos().map(p -> "at column " + p.column() + ": ").orElse("") + e.detail());
         }
         try {
             Sensitivity.checkSweep(m, r);

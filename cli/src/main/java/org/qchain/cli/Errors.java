@@ -39,7 +39,7 @@ final class Errors implements IExecutionExceptionHandler, IParameterExceptionHan
             return ExitCodes.INTERRUPTED;
         }
         if (t instanceof QchainException q && q.isInputError()) {
-            err.println("qchain: " + oneLine(q.getMessage()));
+            err.println("qchain: " + oneLine(q.getMessage()) + hint(q.key()));
             err.flush();
             return ExitCodes.INPUT;
         }
@@ -54,6 +54,18 @@ final class Errors implements IExecutionExceptionHandler, IParameterExceptionHan
         }
         err.flush();
         return ExitCodes.INTERNAL;
+    }
+
+    /** The option that raises the limit behind an exact-module message, which names no option itself. */
+    static String hint(ErrorKey key) {
+        switch (key) {
+            case NUMBER_TOO_LONG:
+                return "; raise it with --max-input-digits";
+            case DENSE_TOO_LARGE:
+                return "; raise it with --max-dense-states";
+            default:
+                return "";
+        }
     }
 
     /** Prints {@code qchain: interrupted} unless it was printed already in this process. */

@@ -212,7 +212,7 @@ public final class ModelParser {
     public static SweepSpec parseSweep(String sourceName, String text) {
         java.util.regex.Matcher old = OLD_SWEEP.matcher(text);
         if (old.matches()) {
-            throw new QchainException(new SourcePos(sourceName, 1, 1), ErrorKey.SWEEP, text.strip(), "write it as '"
+            throw new QchainException(ErrorKey.SWEEP, text.strip(), "write it as '"
                 + old.group(1) + " in [" + old.group(2).strip() + ", " + old.group(4).strip() + "] by "
                 + old.group(3).strip() + "'");
         }
