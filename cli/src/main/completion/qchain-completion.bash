@@ -361,9 +361,9 @@ function _picocli_qchain_closed() {
 
   local commands=""
   local flag_opts="'-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--format' '--digits' '-o' '--output' '--max-terms'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--digits' '-o' '--output' '--max-terms' '--format'"
   local FORM_option_args=("MATRIX" "GF" "RECURRENCE") # --form values
-  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+  local FORMAT_option_args=("text" "json" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
@@ -391,11 +391,6 @@ function _picocli_qchain_closed() {
       COMPREPLY=( $( compReplyArray "${FORM_option_args[@]}" ) )
       return $?
       ;;
-    '--format')
-      local IFS=$'\n'
-      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
-      return $?
-      ;;
     '--digits')
       return
       ;;
@@ -407,6 +402,11 @@ function _picocli_qchain_closed() {
       ;;
     '--max-terms')
       return
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
       ;;
   esac
 

@@ -19,9 +19,10 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "sens", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
-        "Sensitivity of the n-step probability P^n(FROM -> TO) to a parameter: P and its exact derivative dP/dp as",
-        "formulas in the parameters, their values and the elasticity (p/P) dP/dp at the nominal values (or --at),",
-        "and with --sweep a table of P and dP/dp over an exact range of the parameter, exact and decimal."})
+        "Sensitivity of the n-step probability P^n(FROM -> TO) to a parameter: its exact derivative and elasticity.",
+        "P and dP/dp are printed as formulas in the parameters, with their values and the elasticity (p/P) dP/dp at"
+            + " the nominal values (or --at).",
+        "With --sweep: a table of P and dP/dp over exact values of the parameter, exact and decimal."})
 final class SensCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
