@@ -243,7 +243,7 @@ public final class LoadedModel {
         for (String name : model.usedParameters()) {
             p.put(name, known.get(name));
         }
-        return Optional.of(new Point(p));
+        return Optional.of(new Point(p, given.keySet()));
     }
 
     /**

@@ -206,7 +206,7 @@ final class SymbolicEngine {
             // the formula's value must equal the exact engine's value of the substituted chain
             requireEqual(ps.probability(),
                 MatrixPowers.entryOfPower(Chains.transitionMatrix(m, point.get().values()), from, to, q.n()));
-            at = Optional.of(new SensResult.AtPoint(new Point(pt), ps.probability(), ps.derivative(),
+            at = Optional.of(new SensResult.AtPoint(new Point(pt, point.get().given()), ps.probability(), ps.derivative(),
                 ps.elasticity()));
         }
         Optional<SensResult.Sweep> sweep = Optional.empty();
@@ -330,7 +330,7 @@ final class SymbolicEngine {
             }
             p.put(name, v);
         }
-        return Optional.of(new Point(p));
+        return Optional.of(new Point(p, model.given().keySet()));
     }
 
     private static ClosedResult fromClosedForm(LoadedModel model, ClosedQuery q, ClosedForm cf,
