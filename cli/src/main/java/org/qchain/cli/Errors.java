@@ -2,6 +2,7 @@ package org.qchain.cli;
 
 import java.io.PrintWriter;
 import java.util.concurrent.atomic.AtomicBoolean;
+import org.qchain.analysis.Interrupts;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import picocli.CommandLine;
@@ -34,12 +35,13 @@ final class Errors implements IExecutionExceptionHandler, IParameterExceptionHan
      * @return {@link ExitCodes#INPUT}, {@link ExitCodes#INTERNAL} or {@link ExitCodes#INTERRUPTED}
      */
     int report(Throwable t, PrintWriter err) {
-        if (t instanceof QchainException q && q.key() == ErrorKey.INTERRUPTED) {
+        if (Interrupts.isInterruption(t)) {
+            // Ctrl-C: ours, Java's or JAS's way of saying so, reported once
             reportInterrupt(err);
             return ExitCodes.INTERRUPTED;
         }
         if (t instanceof QchainException q && q.isInputError()) {
-            err.println("qchain: " + oneLine(q.getMessage()) + hint(q.key()));
+            err.println("qchain: " + oneLine(q.getMessage()) + hint(q));
             err.flush();
             return ExitCodes.INPUT;
         }
@@ -56,16 +58,21 @@ final class Errors implements IExecutionExceptionHandler, IParameterExceptionHan
         return ExitCodes.INTERNAL;
     }
 
-    /** The option that raises the limit behind an exact-module message, which names no option itself. */
-    static String hint(ErrorKey key) {
-        switch (key) {
-            case NUMBER_TOO_LONG:
-                return "; raise it with --max-input-digits";
-            case DENSE_TOO_LARGE:
-                return "; raise it with --max-dense-states";
-            default:
-                return "";
+    /**
+     * What the command line adds to a message whose key (of a module below it) cannot name options: the option that
+     * helps.
+     */
+    static String hint(QchainException q) {
+        if (q.key() == ErrorKey.FREE_PARAMETERS) {
+            return " (give values with --at, or use a symbolic command)";
         }
+        if (q.key() == ErrorKey.NUMBER_TOO_LONG) {
+            return "; raise it with --max-input-digits";
+        }
+        if (q.key() == ErrorKey.DENSE_TOO_LARGE) {
+            return "; raise it with --max-dense-states";
+        }
+        return "";
     }
 
     /** Prints {@code qchain: interrupted} unless it was printed already in this process. */
