@@ -34,7 +34,7 @@ final class OutputOptions {
 
     /** The formatter of {@code --format} at {@code --digits}, with binary64 columns if {@code doubles}. */
     Formatter formatter(boolean doubles) {
-        return format.formatter(digits, doubles);
+        return format.formatter(digits(), doubles);
     }
 
     /** The output file, if given. */

@@ -86,11 +86,8 @@ final class VerifyCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
-    @Option(names = "--max-digits", paramLabel = "M", converter = Converters.DigitLimit.class,
-        defaultValue = "" + StepCommand.DEFAULT_MAX_DIGITS,
-        description = "Refuse exact values estimated to need more than M digits in total (default:"
-            + " ${DEFAULT-VALUE}).")
-    long maxDigits = StepCommand.DEFAULT_MAX_DIGITS;
+    @Mixin
+    LimitOptions.Digits digitLimit;
 
     @Override
     public Integer call() {
@@ -131,7 +128,7 @@ final class VerifyCommand implements Callable<Integer> {
             ulps == null ? OptionalLong.empty() : OptionalLong.of(ulps));
         VerifyQuery q = new VerifyQuery(against, against.toString(), w,
             n == null ? OptionalLong.empty() : OptionalLong.of(n), Optional.ofNullable(from), Optional.ofNullable(to),
-            tolerance, show, maxDigits);
+            tolerance, show, digitLimit.maxDigits);
         VerifyResult result = root.run(spec, progress -> Analysis.verify(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return result.passed() ? ExitCodes.OK : ExitCodes.OVER_TOLERANCE;
