@@ -583,13 +583,19 @@ function _picocli_qchain_classes() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--format')
@@ -638,13 +644,19 @@ function _picocli_qchain_longrun() {
 
   local commands=""
   local flag_opts="'--passage' '--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--format')
@@ -693,13 +705,19 @@ function _picocli_qchain_absorb() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--from' '--absorbing' '--reward' '--discount' '--steps' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--absorbing' '--reward' '--discount' '--steps' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--from')
