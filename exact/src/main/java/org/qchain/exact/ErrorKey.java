@@ -104,7 +104,19 @@ public enum ErrorKey {
     /** {0}: the condition that fails, {1}: the parameter values. */
     CLOSED_FORM_CONDITION("the closed form needs {0}, which fails at {1}; compute it with these values given (--at) instead"),
     /** {0}: estimated digits processed, {1}: limit, {2}: option that raises it. */
-    PATH_SEARCH_TOO_LARGE("the path search would process about {0} digits in all, more than the limit {1}; raise it with {2}, or ask for fewer steps or paths");
+    PATH_SEARCH_TOO_LARGE("the path search would process about {0} digits in all, more than the limit {1}; raise it with {2}, or ask for fewer steps or paths"),
+
+    // --- continuous-time chains and availability (issue 10) ---
+    /** {0}: state. */
+    UP_STATE_TWICE("state ''{0}'' is listed twice on the ''up'' line"),
+    /** {0}: the figure asked for. */
+    NO_UP_STATES("{0} needs the operating states: add a line ''up STATE STATE ...'' after ''states'' (the other states are down)"),
+    /** {0}: what is degenerate. */
+    DEGENERATE_AVAILABILITY("{0}"),
+    /** {0}: the command or figure, {1}: the chain kind it needs. */
+    NEEDS_CHAIN_KIND("{0} needs a {1} chain"),
+    /** {0}: time value, {1}: why. */
+    BAD_TIME("time t = {0}: {1}");
 
     private final String pattern;
 
