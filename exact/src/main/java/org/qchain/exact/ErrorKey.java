@@ -135,6 +135,15 @@ public enum ErrorKey {
     /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries. */
     DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries"),
 
+    // --- linear systems, long run and absorption (appended) ---------------------------------------------------------
+    /** {0}: what is singular and why (names states or the condition). */
+    SINGULAR_SYSTEM("the system is singular: {0}"),
+    /** {0}: what cannot be computed, {1}: why. */
+    NO_ABSORPTION("{0}: {1}"),
+    /** {0}: size of the system, {1}: estimated digits, {2}: limit, {3}: option that raises it. */
+    SOLVE_TOO_LARGE("the exact solve of a {0}-state system would have about {1} digits in its result, more than the"
+        + " limit {2}; raise it with {3}"),
+
     // --- continuous-time chains and availability (issue 10) ---
     /** {0}: state. */
     UP_STATE_TWICE("state ''{0}'' is listed twice on the ''up'' line"),
