@@ -3,11 +3,13 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.TransientResult;
 
 /**
  * Comma-separated values as RFC 4180 defines them: CRLF after every record, a header row, fields quoted when they hold
@@ -123,6 +125,34 @@ final class CsvFormatter extends Layout {
                 Text.csvRecord(sb, List.of(s.states().get(i), s.states().get(j), s.entries().get(i).get(j).plain()));
             }
         }
+        return sb.toString();
+    }
+
+    // --- continuous chains ---------------------------------------------------------------------------------------
+
+    @Override
+    public String transientProbabilities(TransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("t", "from", "to", "decimal", "status", "bound"));
+        List<String> names = Continuous.rowNames(r);
+        for (TransientResult.AtTime at : r.times()) {
+            for (int i = 0; i < at.rows().size(); i++) {
+                for (int j = 0; j < r.states().size(); j++) {
+                    org.qchain.exact.certified.CertifiedDecimal d = at.rows().get(i).get(j);
+                    Text.csvRecord(sb, List.of(at.t().toString(), names.get(i), r.states().get(j), d.text(),
+                        d.status().name().toLowerCase(java.util.Locale.ROOT), Continuous.bound(at.bound())));
+                }
+            }
+        }
+        return sb.toString();
+    }
+
+    @Override
+    public String availability(AvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("figure", "exact", "decimal"));
+        Continuous.figures(r, digits).forEach(f -> Text.csvRecord(sb, f));
+        Continuous.points(r).forEach(p -> Text.csvRecord(sb, List.of(p.get(0), "", p.get(1))));
         return sb.toString();
     }
 }

@@ -1,11 +1,13 @@
 package org.qchain.format;
 
+import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Result;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.TransientResult;
 
 /**
  * Lays out any result as text of one format: one method per result type. Formatters never compute beyond rounding
@@ -39,6 +41,12 @@ public interface Formatter {
         if (result instanceof ClosedResult c) {
             return closed(c);
         }
+        if (result instanceof TransientResult t) {
+            return transientProbabilities(t);
+        }
+        if (result instanceof AvailabilityResult a) {
+            return availability(a);
+        }
         return check((CheckResult) result);
     }
 
@@ -62,4 +70,10 @@ public interface Formatter {
 
     /** A checked model. */
     String check(CheckResult c);
+
+    /** P(t) of a continuous chain as certified decimals. */
+    String transientProbabilities(TransientResult r);
+
+    /** Figures of merit of a repairable system. */
+    String availability(AvailabilityResult r);
 }

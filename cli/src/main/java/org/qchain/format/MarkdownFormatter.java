@@ -3,11 +3,13 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.TransientResult;
 
 /** Markdown (pipe tables) for pasting into reports: exact values and decimals in tables, then the caution. */
 final class MarkdownFormatter extends Layout {
@@ -269,6 +271,36 @@ final class MarkdownFormatter extends Layout {
                 sb.append("- ").append(Text.markdown(w)).append('\n');
             }
         }
+        return caution(sb);
+    }
+
+    // --- continuous chains ---------------------------------------------------------------------------------------
+
+    @Override
+    public String transientProbabilities(TransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**P(t)** for `").append(Text.code(r.source())).append("` (continuous chain): row = state at the")
+            .append(" start, column = state at time t; certified decimals (").append(Text.digits(digits)).append(").\n");
+        for (TransientResult.AtTime at : r.times()) {
+            sb.append("\nt = ").append(at.t()).append(":\n\n");
+            List<List<String>> g = Continuous.grid(r, at);
+            line(sb, g.get(0).stream().map(Text::markdown).toList());
+            line(sb, separator(g.get(0).size()));
+            g.subList(1, g.size()).forEach(row -> line(sb, row.stream().map(Text::markdown).toList()));
+            sb.append("\n").append(Continuous.boundSentence(at)).append(".\n");
+        }
+        return caution(sb);
+    }
+
+    @Override
+    public String availability(AvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**Availability** of `").append(Text.code(r.source())).append("` (up: ")
+            .append(Text.markdown(String.join(", ", r.up()))).append(")\n\n");
+        line(sb, List.of("figure", "exact", "decimal"));
+        line(sb, separator(3));
+        Continuous.figures(r, digits).forEach(f -> line(sb, f.stream().map(Text::markdown).toList()));
+        Continuous.points(r).forEach(p -> line(sb, List.of(Text.markdown(p.get(0)), "", p.get(1))));
         return caution(sb);
     }
 }

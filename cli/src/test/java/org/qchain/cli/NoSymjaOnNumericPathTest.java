@@ -105,6 +105,15 @@ class NoSymjaOnNumericPathTest {
     }
 
     @Test
+    void continuousCommandsLoadNoSymbolicClass() throws Exception {
+        String m = Cli.model("generator-set.chain");
+        assertNoForbidden(classesRequestedBy("step", m, "-t", "1,10"));
+        assertNoForbidden(classesRequestedBy("step", m, "-t", "1", "--from", "Both", "--format", "json"));
+        assertNoForbidden(classesRequestedBy("avail", m, "-t", "5", "--format", "markdown"));
+        assertNoForbidden(classesRequestedBy("convert", m, "--to", "uniformized"));
+    }
+
+    @Test
     void checkAndDemoLoadNoSymbolicClass() throws Exception {
         assertNoForbidden(classesRequestedBy("check", Cli.model("plant.chain")));
         assertNoForbidden(classesRequestedBy("demo"));
