@@ -130,14 +130,46 @@ public final class CertifiedTransient {
      * @throws org.qchain.exact.QchainException with {@code INTERRUPTED} if the thread is interrupted
      */
     public CertifiedDecimal[][] decimals(int digits, int maxBits) {
+        // Fixed point bounds the absolute error, but digits are significant: a probe at low precision finds the
+        // smallest entry, and the first real attempt carries enough bits for it (Ziv's loop still decides)
+        int start = Math.min(Math.max(startBits(digits), maxBits), startBits(digits) + smallestEntryBits());
         CertifiedDecimal[] flat = Ziv.round(bits -> flatten(enclose(bits, Progress.NONE)), digits,
-            startBits(digits), Math.max(startBits(digits), maxBits), Optional::empty);
+            start, Math.max(start, maxBits), Optional::empty);
         CertifiedDecimal[][] out = new CertifiedDecimal[n][];
         for (int i = 0; i < n; i++) {
             out[i] = Arrays.copyOfRange(flat, i * n, (i + 1) * n);
         }
         return out;
     }
+
+    /**
+     * {@code -log2} of the smallest positive entry, from probes at low precision (64 bits, doubled while some
+     * positive entry still has a zero lower bound, up to {@link #MAX_PROBE_BITS}); 0 if every entry is 1/2 or more.
+     */
+    private int smallestEntryBits() {
+        for (int bits = PROBE_BITS; ; bits *= 2) {
+            int most = 0;
+            boolean unseen = false;
+            for (Enclosure[] row : enclose(bits, Progress.NONE)) {
+                for (Enclosure e : row) {
+                    Rational lo = e.lo();
+                    if (lo.signum() > 0) {
+                        most = Math.max(most, (int) (lo.denominator().bitLength() - lo.numerator().bitLength()));
+                    } else if (e.hi().signum() > 0) {
+                        unseen = true;
+                    }
+                }
+            }
+            if (!unseen || bits >= MAX_PROBE_BITS) {
+                return unseen ? Math.max(most, bits) : most;
+            }
+        }
+    }
+
+    /** The first working precision of the probes for the entries' sizes. */
+    private static final int PROBE_BITS = 64;
+    /** The probes stop here. */
+    private static final int MAX_PROBE_BITS = 1024;
 
     /** A first working precision for {@code digits} decimal digits, with guard bits. */
     public static int startBits(int digits) {
