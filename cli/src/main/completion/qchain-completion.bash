@@ -288,13 +288,16 @@ function _picocli_qchain_sens() {
 
   local commands=""
   local flag_opts="'--factor' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
+  local arg_opts="'--at' '--of' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--of')
       return
       ;;
     '-n'|'--steps')

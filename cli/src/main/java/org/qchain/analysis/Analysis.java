@@ -141,6 +141,28 @@ public final class Analysis {
     }
 
     /**
+     * The exact derivative of a figure of merit of a continuous chain with respect to a parameter.
+     *
+     * @param model the loaded model
+     * @param q     the query
+     * @return the result
+     * @throws QchainException for a discrete chain, no {@code up} line, an unknown parameter or state, an infinite
+     *                         MTTF, a parameter without a value
+     */
+    public static org.qchain.result.RateSensResult rateSens(LoadedModel model, RateSensQuery q) {
+        model.generator("qchain sens --of " + Figures.name(q.figure()));
+        java.util.List<Integer> up = model.model().upStates().orElseThrow(() -> new QchainException(
+            ErrorKey.NO_UP_STATES, "qchain sens --of " + Figures.name(q.figure())));
+        int from = q.from().map(f -> model.state("--from", f)).orElse(up.get(0));
+        org.qchain.exact.ctmc.RateSensitivity.Derivative d = org.qchain.exact.ctmc.RateSensitivity.of(model.model(),
+            model.given(), q.wrt(), q.figure(), from);
+        Optional<String> start = q.figure() == org.qchain.exact.ctmc.RateSensitivity.Figure.MTTF
+            ? Optional.of(model.states().get(from)) : Optional.empty();
+        return new org.qchain.result.RateSensResult(model.source(), Figures.name(q.figure()), start, q.wrt(),
+            model.point().orElseThrow(), d.value(), d.derivative(), d.elasticity(), java.util.List.of());
+    }
+
+    /**
      * The validated one-step matrix.
      *
      * @param model the loaded model (already validated by loading)

@@ -8,6 +8,7 @@ import org.qchain.exact.Decimals;
 import org.qchain.exact.Rational;
 import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.result.AvailabilityResult;
+import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 
 /** Phrases and tables shared by every format's layout of continuous-chain results. */
@@ -95,6 +96,22 @@ final class Continuous {
         for (AvailabilityResult.PointAvailability p : r.point()) {
             out.add(List.of("A(" + p.t() + ") from " + r.from(), p.value().text(), bound(p.value().enclosure().width())));
         }
+        return out;
+    }
+
+    /** What a rate sensitivity is about, e.g. {@code MTTF from Both}. */
+    static String figureName(RateSensResult r) {
+        return r.figure() + r.from().map(f -> " from " + f).orElse("");
+    }
+
+    /** The rows of a rate sensitivity: name, exact value, decimal. */
+    static List<List<String>> sensRows(RateSensResult r, int digits) {
+        List<List<String>> out = new ArrayList<>();
+        String f = figureName(r);
+        out.add(List.of(f, r.value().toString(), Text.decimal(r.value(), digits)));
+        out.add(List.of("d(" + f + ")/d" + r.wrt(), r.derivative().toString(), Text.decimal(r.derivative(), digits)));
+        out.add(List.of("elasticity (" + r.wrt() + "/figure) d/d" + r.wrt(), exact(r.elasticity(), "undefined"),
+            decimal(r.elasticity(), "undefined", digits)));
         return out;
     }
 }

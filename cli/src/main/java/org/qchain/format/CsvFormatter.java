@@ -5,6 +5,7 @@ import java.util.List;
 import org.qchain.exact.Rational;
 import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.RateSensResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -153,6 +154,14 @@ final class CsvFormatter extends Layout {
         Text.csvRecord(sb, List.of("figure", "exact", "decimal"));
         Continuous.figures(r, digits).forEach(f -> Text.csvRecord(sb, f));
         Continuous.points(r).forEach(p -> Text.csvRecord(sb, List.of(p.get(0), "", p.get(1))));
+        return sb.toString();
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("quantity", "exact", "decimal"));
+        Continuous.sensRows(r, digits).forEach(x -> Text.csvRecord(sb, x));
         return sb.toString();
     }
 }

@@ -2,6 +2,7 @@ package org.qchain.format;
 
 import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.RateSensResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Result;
 import org.qchain.result.SensResult;
@@ -47,6 +48,9 @@ public interface Formatter {
         if (result instanceof AvailabilityResult a) {
             return availability(a);
         }
+        if (result instanceof RateSensResult r) {
+            return rateSens(r);
+        }
         return check((CheckResult) result);
     }
 
@@ -76,4 +80,7 @@ public interface Formatter {
 
     /** Figures of merit of a repairable system. */
     String availability(AvailabilityResult r);
+
+    /** The derivative of a figure of merit with respect to a rate. */
+    String rateSens(RateSensResult r);
 }

@@ -6,6 +6,7 @@ import java.util.Map;
 import org.qchain.exact.Rational;
 import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.RateSensResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Point;
 import org.qchain.result.SensResult;
@@ -314,6 +315,27 @@ final class JsonFormatter extends Layout {
             .number("digits", digits)
             .string("model", r.source())
             .strings("warnings", r.warnings())
+            .string("caution", Caution.TEXT);
+        return j.close() + "\n";
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        Json pt = Json.object();
+        r.point().values().forEach((k, v) -> pt.string(k, v.toString()));
+        Json j = Json.object()
+            .string("of", r.figure())
+            .string("wrt", r.wrt())
+            .string("value", r.value().toString())
+            .string("derivative", r.derivative().toString())
+            .string("elasticity", Continuous.exact(r.elasticity(), "undefined"))
+            .object("decimals", Json.object()
+                .string("value", dec(r.value()))
+                .string("derivative", dec(r.derivative()))
+                .string("elasticity", Continuous.decimal(r.elasticity(), "undefined", digits)))
+            .object("at", pt);
+        r.from().ifPresent(f -> j.string("from", f));
+        j.number("digits", digits).string("model", r.source()).strings("warnings", r.warnings())
             .string("caution", Caution.TEXT);
         return j.close() + "\n";
     }

@@ -5,6 +5,7 @@ import java.util.List;
 import org.qchain.exact.Rational;
 import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.RateSensResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -261,6 +262,20 @@ final class LatexFormatter extends Layout {
         }
         for (List<String> p : Continuous.points(r)) {
             sb.append(Text.latex(p.get(0))).append(" & & ").append(Text.latex(p.get(1))).append(" \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+        return caution(sb);
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% Sensitivity of ").append(Text.comment(Continuous.figureName(r))).append(" to ")
+            .append(Text.comment(r.wrt())).append(" in ").append(Text.comment(r.source())).append('\n');
+        sb.append("\\begin{tabular}{lll}\n quantity & exact & decimal \\\\ \\hline\n");
+        for (List<String> x : Continuous.sensRows(r, digits)) {
+            sb.append(Text.latex(x.get(0))).append(" & $").append(Text.frac(Rational.parse(x.get(1).equals("undefined")
+                ? "0" : x.get(1)))).append("$ & ").append(Text.latex(x.get(2))).append(" \\\\\n");
         }
         sb.append("\\end{tabular}\n");
         return caution(sb);

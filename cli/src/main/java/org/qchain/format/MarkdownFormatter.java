@@ -5,6 +5,7 @@ import java.util.List;
 import org.qchain.exact.Rational;
 import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.RateSensResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -301,6 +302,18 @@ final class MarkdownFormatter extends Layout {
         line(sb, separator(3));
         Continuous.figures(r, digits).forEach(f -> line(sb, f.stream().map(Text::markdown).toList()));
         Continuous.points(r).forEach(p -> line(sb, List.of(Text.markdown(p.get(0)), "", p.get(1))));
+        return caution(sb);
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**Sensitivity** of ").append(Text.markdown(Continuous.figureName(r))).append(" to `")
+            .append(Text.code(r.wrt())).append("` in `").append(Text.code(r.source())).append("` at ")
+            .append(Text.markdown(r.point().text())).append("\n\n");
+        line(sb, List.of("quantity", "exact", "decimal"));
+        line(sb, separator(3));
+        Continuous.sensRows(r, digits).forEach(x -> line(sb, x.stream().map(Text::markdown).toList()));
         return caution(sb);
     }
 }

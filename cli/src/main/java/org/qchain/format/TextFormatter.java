@@ -5,6 +5,7 @@ import java.util.List;
 import org.qchain.exact.Rational;
 import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.RateSensResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -406,6 +407,17 @@ final class TextFormatter extends Layout {
             sb.append(pts.render());
         }
         sb.append("\nTimes are in the unit of the model's rates; failure frequency is per that unit.\n");
+        return end(sb);
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Sensitivity of ").append(Continuous.figureName(r)).append(" to ").append(r.wrt()).append(" in ")
+            .append(r.source()).append(" at ").append(r.point().text()).append(" (exact)\n\n");
+        TextTable table = new TextTable().addRow("quantity", "decimal", "exact");
+        Continuous.sensRows(r, digits).forEach(x -> table.addRow(x.get(0), x.get(2), x.get(1)));
+        sb.append(table.render());
         return end(sb);
     }
 }

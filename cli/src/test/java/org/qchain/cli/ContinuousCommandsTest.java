@@ -37,6 +37,15 @@ class ContinuousCommandsTest {
         }
         out.add(new Case("step-t-row.json", List.of("step", GEN, "-t", "0..2:1", "--from", "None", "--format", "json",
             "--digits", "20")));
+        out.add(new Case("sens-mttf.txt", List.of("sens", GEN, "--of", "mttf", "--wrt", "mu")));
+        out.add(new Case("sens-availability.json", List.of("sens", GEN, "--of", "availability", "--wrt", "lam",
+            "--format", "json")));
+        out.add(new Case("sens-failure-frequency.md", List.of("sens", GEN, "--of", "failure-frequency", "--wrt", "mu",
+            "--format", "markdown")));
+        out.add(new Case("sens-unavailability.tex", List.of("sens", GEN, "--of", "unavailability", "--wrt", "mu",
+            "--format", "latex")));
+        out.add(new Case("sens-mttf.csv", List.of("sens", GEN, "--of", "mttf", "--wrt", "lam", "--from", "One",
+            "--format", "csv")));
         out.add(new Case("convert-jump.chain", List.of("convert", GEN, "--to", "jump")));
         out.add(new Case("convert-uniformized.chain", List.of("convert", GEN, "--to", "uniformized", "--rate", "1/10")));
         return out.stream();
@@ -83,11 +92,22 @@ class ContinuousCommandsTest {
             {"step", GEN, "-t", "-1"}, {"step", GEN, "-t", "x"}, {"step", GEN, "-t", "2..1:1"}, {"step", GEN},
             {"step", GEN, "-t", "1", "-n", "2"}, {"step", GEN, "-t", "1", "--to", "One"},
             {"convert", GEN, "--to", "jump", "--rate", "2"}, {"convert", GEN, "--to", "uniformized", "--rate", "1/1000"},
-            {"avail", GEN, "--hours-per-year", "0"}, {"avail", GEN, "--from", "Nowhere", "-t", "1"}}) {
+            {"avail", GEN, "--hours-per-year", "0"}, {"sens", GEN, "--of", "speed", "--wrt", "mu"},
+            {"sens", GEN, "--of", "mttf", "--wrt", "mu", "-n", "3"}, {"sens", GEN, "--of", "mttf", "--wrt", "nu"},
+            {"sens", GEN, "--of", "mttf", "--wrt", "mu", "--from", "None"}, {"sens", GEN, "--wrt", "mu"}, {"avail", GEN, "--from", "Nowhere", "-t", "1"}}) {
             Cli.Result r = Cli.run(args);
             assertEquals(2, r.code(), r::toString);
             assertTrue(r.err().startsWith("qchain: ") && !r.err().contains("\tat "), r::toString);
         }
+    }
+
+    @Test
+    void mttfGainPerUnitOfRepairRateIsOneOverTwoLambdaSquared() {
+        // Two units in parallel, one crew: MTTF = (3 lam + mu)/(2 lam^2), so dMTTF/dmu = 1/(2 lam^2) = 125000 at
+        // lam = 1/500 (R. Billinton and R. N. Allan, "Reliability Evaluation of Engineering Systems", ch. 9; from memory).
+        Cli.Result r = Cli.run("sens", GEN, "--of", "mttf", "--wrt", "mu", "--format", "json");
+        assertEquals(0, r.code(), r::toString);
+        assertTrue(r.out().contains("\"derivative\":\"125000\""), r.out());
     }
 
     @Test

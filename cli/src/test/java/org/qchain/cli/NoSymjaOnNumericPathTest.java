@@ -111,6 +111,7 @@ class NoSymjaOnNumericPathTest {
         assertNoForbidden(classesRequestedBy("step", m, "-t", "1", "--from", "Both", "--format", "json"));
         assertNoForbidden(classesRequestedBy("avail", m, "-t", "5", "--format", "markdown"));
         assertNoForbidden(classesRequestedBy("convert", m, "--to", "uniformized"));
+        assertNoForbidden(classesRequestedBy("sens", m, "--of", "mttf", "--wrt", "mu", "--format", "json"));
     }
 
     @Test

@@ -150,11 +150,7 @@ public enum ErrorKey {
     /** {0}: the figure asked for. */
     NO_UP_STATES("{0} needs the operating states: add a line ''up STATE STATE ...'' after ''states'' (the other states are down)"),
     /** {0}: what is degenerate. */
-    DEGENERATE_AVAILABILITY("{0}"),
-    /** {0}: the command or figure, {1}: the chain kind it needs. */
-    NEEDS_CHAIN_KIND("{0} needs a {1} chain"),
-    /** {0}: time value, {1}: why. */
-    BAD_TIME("time t = {0}: {1}");
+    DEGENERATE_AVAILABILITY("{0}");
 
     private final String pattern;
 
