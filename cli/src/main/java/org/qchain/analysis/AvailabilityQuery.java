@@ -17,7 +17,7 @@ import org.qchain.exact.ctmc.Availability;
  * @param maxBits      the largest working precision for them, in bits
  */
 public record AvailabilityQuery(Optional<String> from, List<Rational> times, Rational hoursPerYear, int digits,
-                                int maxBits) {
+                                int maxBits) implements Query {
     /**
      * Checks the ranges.
      *

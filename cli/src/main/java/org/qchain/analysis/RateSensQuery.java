@@ -11,5 +11,5 @@ import org.qchain.exact.ctmc.RateSensitivity;
  * @param wrt    the parameter
  * @param from   the start, for the MTTF (default: the first state on the {@code up} line)
  */
-public record RateSensQuery(RateSensitivity.Figure figure, String wrt, Optional<String> from) {
+public record RateSensQuery(RateSensitivity.Figure figure, String wrt, Optional<String> from) implements Query {
 }

@@ -13,7 +13,7 @@ import org.qchain.exact.certified.CertifiedPowers;
  * @param digits  significant digits, at least 1
  * @param maxBits the largest working precision, in bits
  */
-public record TransientQuery(List<Rational> times, Optional<String> from, int digits, int maxBits) {
+public record TransientQuery(List<Rational> times, Optional<String> from, int digits, int maxBits) implements Query {
     /**
      * Checks the ranges.
      *

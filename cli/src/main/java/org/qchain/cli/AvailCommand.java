@@ -57,7 +57,7 @@ final class AvailCommand implements Callable<Integer> {
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         AvailabilityQuery q = new AvailabilityQuery(Optional.ofNullable(from),
-            times == null ? List.of() : times.times(), h, output.digits, CertifiedPowers.DEFAULT_MAX_BITS);
+            times == null ? List.of() : times.times(), h, output.digits(), CertifiedPowers.DEFAULT_MAX_BITS);
         Result result = root.run(spec, progress -> Analysis.availability(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

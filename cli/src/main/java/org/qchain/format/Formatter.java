@@ -9,6 +9,7 @@ import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
 import org.qchain.result.TransientResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * Lays out any result as text of one format: one method per result type. Formatters never compute beyond rounding
@@ -51,6 +52,9 @@ public interface Formatter {
         if (result instanceof RateSensResult r) {
             return rateSens(r);
         }
+        if (result instanceof VerifyResult v) {
+            return verify(v);
+        }
         return check((CheckResult) result);
     }
 
@@ -83,4 +87,6 @@ public interface Formatter {
 
     /** The derivative of a figure of merit with respect to a rate. */
     String rateSens(RateSensResult r);
+    /** Float results checked against the exact values. */
+    String verify(VerifyResult v);
 }
