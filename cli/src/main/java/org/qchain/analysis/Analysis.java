@@ -57,6 +57,9 @@ public final class Analysis {
         if (query instanceof RateSensQuery q) {
             return rateSens(model, q);
         }
+        if (query instanceof VerifyQuery q) {
+            return verify(model, q, progress);
+        }
         return check(model, (CheckQuery) query);
     }
 
