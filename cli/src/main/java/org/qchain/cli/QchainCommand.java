@@ -32,7 +32,8 @@ import picocli.CommandLine.Spec;
     description = "Exact n-step transition probabilities of Markov chains: exact fractions, with correctly rounded"
         + " decimals beside them.",
     subcommands = {StepCommand.class, SensCommand.class, ClosedCommand.class, CheckCommand.class, VerifyCommand.class,
-        ClassesCommand.class, LongRunCommand.class, AbsorbCommand.class, DemoCommand.class, CompletionCommand.class,
+        AvailCommand.class, ConvertCommand.class, ClassesCommand.class, LongRunCommand.class, AbsorbCommand.class,
+        DemoCommand.class, CompletionCommand.class,
         HelpCommand.class})
 public final class QchainCommand implements Callable<Integer> {
     /** Milliseconds the Ctrl-C hook waits for the work to stop and clean up before the JVM halts. */

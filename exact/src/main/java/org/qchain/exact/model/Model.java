@@ -28,15 +28,22 @@ public final class Model {
     private final List<List<Transition>> rows;
     private final List<String> used;
     private final InputLimits limits;
+    private final List<Integer> up;
     private final Map<String, Rational> rewards;
 
     private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
                   List<Transition> transitions, InputLimits limits) {
-        this(source, kind, params, states, transitions, limits, Map.of());
+        this(source, kind, params, states, transitions, limits, null, Map.of());
     }
 
     private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
-                  List<Transition> transitions, InputLimits limits, Map<String, Rational> rewards) {
+                  List<Transition> transitions, InputLimits limits, List<Integer> up) {
+        this(source, kind, params, states, transitions, limits, up, Map.of());
+    }
+
+    private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
+                  List<Transition> transitions, InputLimits limits, List<Integer> up, Map<String, Rational> rewards) {
+        this.up = up == null ? null : List.copyOf(up);
         this.rewards = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(rewards));
         this.source = source;
         this.kind = kind;
@@ -118,6 +125,32 @@ public final class Model {
     /** The input limits the model was read under. */
     public InputLimits limits() {
         return limits;
+    }
+
+    /**
+     * This model with its operating states marked (the {@code up} line); the other states are down.
+     *
+     * @param upStates indexes of the operating states, in the order listed
+     * @return a copy of this model that knows its operating states
+     * @throws IllegalArgumentException if an index is out of range or repeated
+     */
+    public Model withUpStates(List<Integer> upStates) {
+        java.util.Set<Integer> seen = new java.util.HashSet<>();
+        for (int i : upStates) {
+            if (i < 0 || i >= states.size() || !seen.add(i)) {
+                throw new IllegalArgumentException("bad or repeated up state index " + i);
+            }
+        }
+        return new Model(source, kind, params, states, transitions, limits, upStates, rewards);
+    }
+
+    /**
+     * The operating states (indexes, in the order the {@code up} line lists them), if the model marks them.
+     *
+     * @return the indexes, or empty if the model has no {@code up} line
+     */
+    public Optional<List<Integer>> upStates() {
+        return Optional.ofNullable(up);
     }
 
     /** The file name as given, for messages. */
@@ -252,6 +285,6 @@ public final class Model {
      * @return a copy carrying the rewards
      */
     public Model withRewards(Map<String, Rational> r) {
-        return new Model(source, kind, params, states, transitions, limits, r);
+        return new Model(source, kind, params, states, transitions, limits, up, r);
     }
 }
