@@ -1,8 +1,9 @@
 package org.qchain.exact.model;
 
 import java.util.ArrayList;
-import java.util.LinkedHashSet;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -20,7 +21,8 @@ public final class Model {
     private final List<ParamDecl> params;
     private final List<String> states;
     private final List<Transition> transitions;
-    private final Transition[][] grid;
+    /** The listed transitions by {@code from * size + to}: memory in proportion to the transitions, not to size^2. */
+    private final Map<Long, Transition> grid;
     private final List<List<Transition>> rows;
     private final List<String> used;
 
@@ -32,7 +34,7 @@ public final class Model {
         this.states = List.copyOf(states);
         this.transitions = List.copyOf(transitions);
         int n = states.size();
-        this.grid = new Transition[n][n];
+        this.grid = new HashMap<>();
         List<List<Transition>> byRow = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             byRow.add(new ArrayList<>());
@@ -42,10 +44,9 @@ public final class Model {
             if (t.from() < 0 || t.from() >= n || t.to() < 0 || t.to() >= n) {
                 throw new IllegalArgumentException("state index out of range in " + t);
             }
-            if (grid[t.from()][t.to()] != null) {
+            if (grid.putIfAbsent(key(t.from(), t.to()), t) != null) {
                 throw new IllegalArgumentException("duplicate transition " + states.get(t.from()) + " -> " + states.get(t.to()));
             }
-            grid[t.from()][t.to()] = t;
             byRow.get(t.from()).add(t);
             names.addAll(t.expr().variables());
         }
@@ -138,9 +139,13 @@ public final class Model {
         return transitions;
     }
 
+    private long key(int i, int j) {
+        return (long) i * states.size() + j;
+    }
+
     /** The listed transition from {@code i} to {@code j}, if any. */
     public Optional<Transition> listed(int i, int j) {
-        return Optional.ofNullable(grid[i][j]);
+        return Optional.ofNullable(grid.get(key(i, j)));
     }
 
     /** The listed transitions out of state {@code i}, in file order (an unmodifiable list). */
@@ -177,7 +182,7 @@ public final class Model {
      * @return the entry's expression
      */
     public Expr entry(int i, int j) {
-        Transition t = grid[i][j];
+        Transition t = grid.get(key(i, j));
         if (i != j || (t != null && kind == ChainKind.DISCRETE)) {
             return t == null ? Expr.num(Rational.ZERO) : t.expr();
         }
