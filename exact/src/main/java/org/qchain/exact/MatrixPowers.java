@@ -70,13 +70,23 @@ public final class MatrixPowers {
         KnownDenominator den = KnownDenominator.power(f.d, n);
         Rational[][] out = new Rational[s][s];
         Thread caller = Thread.currentThread();
-        for (int i = 0; i < s; i++) {
-            checkInterrupt(caller);
-            for (int j = 0; j < s; j++) {
-                out[i][j] = den.reduce(an.e[i][j]);
-            }
-            progress.update("reducing", i + 1, s);
+        java.util.concurrent.atomic.AtomicInteger done = new java.util.concurrent.atomic.AtomicInteger();
+        java.util.stream.IntStream rows = java.util.stream.IntStream.range(0, s);
+        if (s >= 8 && Runtime.getRuntime().availableProcessors() > 1) {
+            rows = rows.parallel();
         }
+        rows.forEach(i -> {
+            checkInterrupt(caller);
+            Rational[] row = new Rational[s];
+            for (int j = 0; j < s; j++) {
+                row[j] = den.reduce(an.e[i][j]);
+            }
+            out[i] = row;
+            int d = done.incrementAndGet();
+            if (Thread.currentThread() == caller) {
+                progress.update("reducing", d, s);
+            }
+        });
         return RationalMatrix.wrap(out);
     }
 
