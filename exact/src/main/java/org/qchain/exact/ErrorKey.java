@@ -133,7 +133,11 @@ public enum ErrorKey {
     /** {0}: line of the first transition. */
     PARAM_AFTER_TRANSITIONS("a ''param'' line after the transitions: declare parameters before the first transition (line {0}); move this line up"),
     /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries. */
-    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries");
+    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries"),
+
+    // --- certified decimals (issue 13) -------------------------------------------------------------------------
+    /** {0}: estimated multiplications, {1}: their operand size in bits, {2}: the limit, {3}: the option that raises it. */
+    CERTIFIED_TOO_LARGE("the certified computation would take about {0} multiplications of {1}-bit numbers, more than the limit {2}; raise it with {3}, or ask for one row (--from)");
 
     private final String pattern;
 

@@ -30,8 +30,11 @@ final class ModularPower {
     static final long MIN_BITS = 8_000;
     /** Residues kept at once (primes times entries), at most: about 100 MB of ints. */
     static final long MAX_RESIDUES = 25_000_000;
-    /** Tests and benchmarks switch the engine off to compare ({@code -Dqchain.exact.modular=never}). */
-    static volatile boolean enabled = !"never".equals(System.getProperty("qchain.exact.modular"));
+    /**
+     * Tests switch the engine off to compare; benchmarks set the system property {@code qchain.exact.modular} to
+     * {@code never} (read at every call).
+     */
+    static volatile boolean enabled = true;
 
     private ModularPower() {
     }
@@ -45,7 +48,7 @@ final class ModularPower {
      */
     static boolean applies(IntMatrix a, long n) {
         int s = a.n;
-        if (!enabled || s < MIN_STATES || 2 * a.nonZeroCount() < (long) s * s) {
+        if (!enabled || "never".equals(System.getProperty("qchain.exact.modular")) || s < MIN_STATES || 2 * a.nonZeroCount() < (long) s * s) {
             return false;
         }
         double bits = n * (double) MatrixPowers.growthBits(a);
