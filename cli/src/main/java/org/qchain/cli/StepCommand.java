@@ -24,7 +24,9 @@ import picocli.CommandLine.Spec;
         "With --from and --to: one probability; add --paths K for its K most probable paths.",
         "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function",
         "of the parameters (--factor: factored), with its value at the nominal or --at point when every parameter",
-        "has one."})
+        "has one.",
+        "--certified gives correctly rounded decimals (--digits) whose every digit is proven by an enclosure of the",
+        "exact value, without the exact fractions: for n too large for exact numbers, and for large sparse models."})
 final class StepCommand implements Callable<Integer> {
     /** Default limit on the total digits of a result. */
     static final long DEFAULT_MAX_DIGITS = org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS;
@@ -68,6 +70,17 @@ final class StepCommand implements Callable<Integer> {
             + " with the square of n (default: ${DEFAULT-VALUE}).")
     long maxPathDigits = org.qchain.exact.SizeEstimate.DEFAULT_MAX_PATH_DIGITS;
 
+    @Option(names = "--certified",
+        description = "Certified decimals instead of exact fractions: every printed digit proven by interval"
+            + " arithmetic, with the width of each enclosure. No digit limit applies; the work is estimated first.")
+    boolean certified;
+
+    @Option(names = "--max-work", paramLabel = "W", converter = Converters.WorkLimit.class,
+        defaultValue = "" + org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_WORK,
+        description = "With --certified: refuse computations estimated to need more than W multiplications of"
+            + " fixed-point numbers (default: ${DEFAULT-VALUE}).")
+    long maxWork = org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_WORK;
+
     @Option(names = "--symbolic",
         description = "Keep every parameter symbolic, even those with nominal values (formulas, and values at the"
             + " nominal or --at point). Models with a parameter without a value are symbolic anyway.")
@@ -84,11 +97,19 @@ final class StepCommand implements Callable<Integer> {
         if (paths != null && (from == null || to == null)) {
             throw new ParameterException(spec.commandLine(), "--paths needs both --from and --to");
         }
+        if (certified && paths != null) {
+            throw new ParameterException(spec.commandLine(), "--paths lists exact path probabilities; it does not"
+                + " combine with --certified");
+        }
+        if (certified && symbolic) {
+            throw new ParameterException(spec.commandLine(), "--certified gives decimals of numbers; it does not"
+                + " combine with --symbolic");
+        }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         StepQuery q = new StepQuery(n, Optional.ofNullable(from), Optional.ofNullable(to),
             paths == null ? OptionalInt.empty() : OptionalInt.of(paths), maxDigits, maxPathDigits, symbolic,
-            symbolicOptions.factor, symbolicOptions.maxTerms);
+            symbolicOptions.factor, symbolicOptions.maxTerms, certified, output.digits, maxWork);
         if (Analysis.route(loaded, q) == Route.SYMBOLIC) {
             if (paths != null) {
                 throw new ParameterException(spec.commandLine(), "--paths needs numeric values for every parameter"

@@ -3,6 +3,8 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedDecimal;
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -60,6 +62,20 @@ final class CsvFormatter extends Layout {
         Text.csvRecord(sb, List.of("n", "from", "to", "value", "decimal"));
         Text.csvRecord(sb, List.of(String.valueOf(s.header().n()), s.from(), s.to(), s.value().toString(),
             dec(s.value())));
+        return sb.toString();
+    }
+
+    @Override
+    public String certifiedStep(CertifiedStepResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("n", "from", "to", "decimal", "status", "enclosure_width"));
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.columns().size(); j++) {
+                CertifiedDecimal d = r.values().get(i).get(j);
+                Text.csvRecord(sb, List.of(String.valueOf(r.header().n()), r.rows().get(i), r.columns().get(j),
+                    d.text(), CertifiedStepResult.statusWord(d), CertifiedStepResult.widthText(d.enclosure().width())));
+            }
+        }
         return sb.toString();
     }
 

@@ -1,5 +1,6 @@
 package org.qchain.format;
 
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Result;
@@ -30,6 +31,9 @@ public interface Formatter {
         if (result instanceof StepResult.Single s) {
             return stepSingle(s);
         }
+        if (result instanceof CertifiedStepResult c) {
+            return certifiedStep(c);
+        }
         if (result instanceof SymbolicStepResult s) {
             return symbolicStep(s);
         }
@@ -50,6 +54,9 @@ public interface Formatter {
 
     /** One entry of P^n, with its paths if present. */
     String stepSingle(StepResult.Single s);
+
+    /** P^n, a row or an entry as certified decimals. */
+    String certifiedStep(CertifiedStepResult r);
 
     /** P^n, a row or an entry as formulas in the parameters. */
     String symbolicStep(SymbolicStepResult r);

@@ -32,6 +32,13 @@ public final class Json {
         return this;
     }
 
+    /** Appends a boolean member (mutates). */
+    public Json flag(String key, boolean value) {
+        key(key);
+        sb.append(value);
+        return this;
+    }
+
     /** Appends an array of strings (mutates). */
     public Json strings(String key, List<String> values) {
         key(key);
@@ -106,6 +113,11 @@ public final class Json {
      */
     static void quote(StringBuilder sb, String s) {
         sb.append('"');
+        if (plain(s)) {
+            // the common case (numbers, names): nothing to escape, one bulk copy
+            sb.append(s).append('"');
+            return;
+        }
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);
             switch (c) {
@@ -139,6 +151,17 @@ public final class Json {
             }
         }
         sb.append('"');
+    }
+
+    /** Whether {@code s} is printable ASCII without a quotation mark or reverse solidus. */
+    private static boolean plain(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            if (c < 0x20 || c > 0x7e || c == '"' || c == '\\') {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** {@code s} as a JSON string literal. */

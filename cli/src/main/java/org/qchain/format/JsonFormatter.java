@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedDecimal;
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Point;
@@ -77,6 +79,42 @@ final class JsonFormatter extends Layout {
 
     private Json common(Json j, StepResult.Header h) {
         return j.number("digits", digits).string("model", h.source()).strings("warnings", h.warnings());
+    }
+
+    // --- certified step ----------------------------------------------------------------------------------------
+
+    @Override
+    public String certifiedStep(CertifiedStepResult r) {
+        StepResult.Header h = r.header();
+        Json j = Json.object().string("kind", h.kind()).number("n", h.n());
+        r.from().ifPresent(f -> j.string("from", f));
+        r.to().ifPresent(t -> j.string("to", t));
+        j.flag("certified", true);
+        if (r.to().isPresent()) {
+            CertifiedDecimal d = r.values().get(0).get(0);
+            j.string("decimal", d.text())
+                .string("status", CertifiedStepResult.statusWord(d))
+                .string("enclosure_width", CertifiedStepResult.widthText(d.enclosure().width()));
+        } else {
+            j.strings("states", r.columns());
+            List<List<String>> texts = new ArrayList<>();
+            List<List<String>> status = new ArrayList<>();
+            List<List<String>> widths = new ArrayList<>();
+            for (List<CertifiedDecimal> row : r.values()) {
+                texts.add(row.stream().map(CertifiedDecimal::text).toList());
+                status.add(row.stream().map(CertifiedStepResult::statusWord).toList());
+                widths.add(row.stream().map(d -> CertifiedStepResult.widthText(d.enclosure().width())).toList());
+            }
+            if (r.from().isPresent()) {
+                j.strings("decimals", texts.get(0)).strings("status", status.get(0))
+                    .strings("enclosure_widths", widths.get(0));
+            } else {
+                j.stringRows("decimals", texts).stringRows("status", status).stringRows("enclosure_widths", widths);
+            }
+        }
+        j.string("max_enclosure_width", CertifiedStepResult.widthText(r.maxWidth()));
+        return j.number("digits", r.digits()).string("model", h.source()).strings("warnings", h.warnings()).close()
+            + "\n";
     }
 
     // --- symbolic step -----------------------------------------------------------------------------------------
