@@ -2,6 +2,7 @@ package org.qchain.format;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.qchain.exact.DecimalText;
 import org.qchain.exact.Rational;
 import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.result.CertifiedStepResult;
@@ -29,7 +30,7 @@ final class CsvFormatter extends Layout {
         StringBuilder sb = new StringBuilder();
         Text.csvRecord(sb, m.states());
         for (List<Rational> row : m.entries()) {
-            Text.csvRecord(sb, row.stream().map(Rational::toString).toList());
+            Text.csvRecord(sb, List.of(DecimalText.toStrings(row.toArray(new Rational[0]))));
         }
         return sb.toString();
     }

@@ -3,6 +3,7 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.qchain.exact.DecimalText;
 import org.qchain.exact.Rational;
 import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.result.CertifiedStepResult;
@@ -24,7 +25,8 @@ final class JsonFormatter extends Layout {
     }
 
     private List<String> exact(List<Rational> row) {
-        return row.stream().map(Rational::toString).toList();
+        // exact values of big powers have thousands of digits: the fast conversion, on all cores
+        return List.of(DecimalText.toStrings(row.toArray(new Rational[0])));
     }
 
     private List<String> decimals(List<Rational> row) {
@@ -65,7 +67,7 @@ final class JsonFormatter extends Layout {
             .number("n", h.n())
             .string("from", s.from())
             .string("to", s.to())
-            .string("value", s.value().toString())
+            .string("value", DecimalText.toString(s.value()))
             .string("decimal", dec(s.value()))
             .string("kind", h.kind());
         s.paths().ifPresent(paths -> j.objects("paths", paths, p -> Json.object()

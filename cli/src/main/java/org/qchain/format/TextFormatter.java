@@ -2,6 +2,7 @@ package org.qchain.format;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.qchain.exact.DecimalText;
 import org.qchain.exact.Rational;
 import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.result.CertifiedStepResult;
@@ -50,7 +51,7 @@ final class TextFormatter extends Layout {
         for (int i = 0; i < m.states().size(); i++) {
             for (int j = 0; j < m.states().size(); j++) {
                 list.addRow(m.states().get(i), m.states().get(j), decimals.get(i).get(j),
-                    m.entries().get(i).get(j).toString());
+                    DecimalText.toString(m.entries().get(i).get(j)));
             }
         }
         sb.append(list.render());
@@ -120,7 +121,7 @@ final class TextFormatter extends Layout {
         TextTable t = new TextTable().addRow("to", "decimal", "exact");
         for (int j = 0; j < r.states().size(); j++) {
             Rational e = r.entries().get(j);
-            t.addRow(r.states().get(j), dec(e), e.toString());
+            t.addRow(r.states().get(j), dec(e), DecimalText.toString(e));
         }
         sb.append(t.render());
         return end(sb);
@@ -135,7 +136,7 @@ final class TextFormatter extends Layout {
         sb.append("Probability of being in ").append(s.to()).append(" after ").append(Text.steps(h.n()))
             .append(", starting in ").append(s.from()).append(":\n");
         // not a table: a long exact value must not push the decimal's note to the right
-        sb.append("  exact    ").append(s.value()).append('\n');
+        sb.append("  exact    ").append(DecimalText.toString(s.value())).append('\n');
         sb.append("  decimal  ").append(dec(s.value())).append("  (").append(Text.digits(digits)).append(")\n");
         s.paths().ifPresent(paths -> appendPaths(sb, s, name, paths));
         return end(sb);
