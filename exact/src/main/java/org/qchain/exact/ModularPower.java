@@ -27,7 +27,7 @@ final class ModularPower {
 
     /** Smallest matrix, density and result size (bits of the largest entry) for which this engine is used. */
     static final int MIN_STATES = 12;
-    static final long MIN_BITS = 8_000;
+    static final long MIN_BITS = 12_000;
     /** Residues kept at once (primes times entries), at most: about 100 MB of ints. */
     static final long MAX_RESIDUES = 25_000_000;
     /**
@@ -40,10 +40,10 @@ final class ModularPower {
     }
 
     /**
-     * Whether {@code A^n} should go this way: measured on dense chains of 20 and 50 states (see
-     * {@code docs/performance.md}), the modular engine costs about the same as the direct one at results of
-     * 10,000–20,000 bits and 2–3 times less CPU at 80,000 bits; past {@link BigMath#matrixApintBits} the direct engine's
-     * transform multiplication takes over. Half the entries or more must be non-zero (the modular products are
+     * Whether {@code A^n} should go this way: measured whole-process on dense chains (see
+     * {@code docs/performance.md}), the modular engine took about 40 % less CPU than the direct one on a 20-state
+     * P^256 (results of 21,000 bits), about the same on a 50-state P^64 (8,800 bits), and 1.5–2 times less at
+     * 80,000 bits; past {@link BigMath#matrixApintBits} the direct engine's transform multiplication takes over. Half the entries or more must be non-zero (the modular products are
      * dense).
      */
     static boolean applies(IntMatrix a, long n) {

@@ -46,7 +46,7 @@ class ModularPowerTest {
         Random rnd = new Random(seed);
         int size = ModularPower.MIN_STATES + rnd.nextInt(6);
         RationalMatrix p = RandomChains.stochastic(rnd, size, 240, 0.1);
-        int n = 250 + rnd.nextInt(100);
+        int n = 400 + rnd.nextInt(100);
         assertTrue(ModularPower.applies(CommonDenominatorForm.of(p).a, n), "the case takes the modular route");
         RationalMatrix routed = MatrixPowers.power(p, n);
         Rational[] row = MatrixPowers.rowOfPower(p, 1, n);
