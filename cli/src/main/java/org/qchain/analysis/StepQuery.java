@@ -25,7 +25,7 @@ import org.qchain.symbolic.SymbolicLimits;
  */
 public record StepQuery(long n, Optional<String> from, Optional<String> to, OptionalInt paths, long maxDigits,
                         long maxPathDigits, boolean symbolic, boolean factor, long maxTerms, boolean certified,
-                        int digits, long maxWork) {
+                        int digits, long maxWork) implements Query {
     /** Default limit on polynomial terms (the symbolic module's; a constant, so reading it loads no class). */
     public static final long DEFAULT_MAX_TERMS = SymbolicLimits.DEFAULT_MAX_TERMS;
     /** Default limit on the work of a certified result (the exact module's). */

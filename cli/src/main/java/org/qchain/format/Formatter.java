@@ -7,6 +7,7 @@ import org.qchain.result.Result;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * Lays out any result as text of one format: one method per result type. Formatters never compute beyond rounding
@@ -43,6 +44,9 @@ public interface Formatter {
         if (result instanceof ClosedResult c) {
             return closed(c);
         }
+        if (result instanceof VerifyResult v) {
+            return verify(v);
+        }
         return check((CheckResult) result);
     }
 
@@ -69,4 +73,7 @@ public interface Formatter {
 
     /** A checked model. */
     String check(CheckResult c);
+
+    /** Float results checked against the exact values. */
+    String verify(VerifyResult v);
 }

@@ -33,7 +33,7 @@ public final class Json {
     }
 
     /** Appends a boolean member (mutates). */
-    public Json flag(String key, boolean value) {
+    public Json bool(String key, boolean value) {
         key(key);
         sb.append(value);
         return this;
