@@ -63,6 +63,6 @@ class CertifiedStepTest {
         assertEquals("", r.out());
         assertTrue(Pattern.compile("qchain: the certified computation would take about [0-9.]+e[0-9]+"
             + " multiplications of [0-9]+-bit numbers, more than the limit 10; raise it with --max-work, or ask for"
-            + " one row \\(--from\\)\n").matcher(r.err()).matches(), r.err());
+            + " one row of the power\n").matcher(r.err()).matches(), r.err());
     }
 }
