@@ -23,11 +23,12 @@ import picocli.CommandLine.Spec;
         "Exact n-step transition probabilities P^n of a discrete chain, as fractions with decimals beside them.",
         "Without --from: the whole matrix. With --from: that row (where the chain may be after n steps).",
         "With --from and --to: one probability; add --paths K for its K most probable paths.",
-        "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function",
-        "of the parameters (--factor: factored), with its value at the nominal or --at point when every parameter",
-        "has one.",
-        "--certified gives correctly rounded decimals (--digits) whose every digit is proven by an enclosure of the",
-        "exact value, without the exact fractions: for n too large for exact numbers, and for large sparse models."})
+        "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function"
+            + " of the parameters (--factor: factored), with its value at the nominal or --at point when every"
+            + " parameter has one.",
+        "--certified gives correctly rounded decimals (--digits) whose every digit is proven by an enclosure of the"
+            + " exact value, without the exact fractions: for n too large for exact numbers, and for large sparse"
+            + " models."})
 final class StepCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
