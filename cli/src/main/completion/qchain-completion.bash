@@ -226,8 +226,8 @@ function _picocli_qchain_step() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'--symbolic' '--factor' '--double' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '-t' '--time' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-terms'"
+  local flag_opts="'--certified' '--symbolic' '--factor' '--double' '-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '-t' '--time' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-work' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -275,6 +275,9 @@ function _picocli_qchain_step() {
       return
       ;;
     '--max-path-digits')
+      return
+      ;;
+    '--max-work')
       return
       ;;
     '--max-terms')

@@ -79,7 +79,8 @@ public final class Analysis {
      * @param model    the loaded model
      * @param q        the query
      * @param progress told about long work
-     * @return a {@link org.qchain.result.StepResult} on the numeric route, a
+     * @return a {@link org.qchain.result.StepResult} on the numeric route (a
+     *         {@link org.qchain.result.CertifiedStepResult} when certified decimals are asked for), a
      *         {@link org.qchain.result.SymbolicStepResult} on the symbolic one
      * @throws QchainException for an unknown state, a result past a size limit (with the estimate), a continuous
      *                         chain, paths asked of a symbolic chain, an interruption
@@ -90,11 +91,18 @@ public final class Analysis {
             if (q.paths().isPresent()) {
                 throw new QchainException(AnalysisKey.PATHS_NEED_VALUES, q.paths().getAsInt());
             }
+            if (q.certified()) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "option", "--certified", "needs numeric values for"
+                    + " every parameter (certified decimals are of numbers, not formulas)");
+            }
             if (model.complete()) {
                 // the values at the point come from the exact engine too: its estimate first
                 NumericEngine.guard(model, q);
             }
             return Interrupts.guarded(() -> SymbolicEngine.step(model, q, progress));
+        }
+        if (q.certified()) {
+            return NumericEngine.certifiedStep(model, q, progress);
         }
         return NumericEngine.step(model, q, progress);
     }

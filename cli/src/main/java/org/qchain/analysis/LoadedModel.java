@@ -11,6 +11,7 @@ import org.qchain.exact.InputLimits;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.SparseRationalMatrix;
 import org.qchain.exact.model.ChainKind;
 import org.qchain.exact.model.Chains;
 import org.qchain.exact.model.Model;
@@ -24,7 +25,8 @@ import org.qchain.result.Point;
  * accepts and refuses the same models with the same message at the same {@code file:line:col}.
  *
  * <p>Validation: a discrete model whose used parameters all have a value is evaluated exactly at that point through
- * {@link Chains#transitionMatrix(Model, Map)} (entries in [0, 1], rows summing to exactly 1). A model with a
+ * {@link Chains#sparseTransitionMatrix(Model, Map)} (entries in [0, 1], rows summing to exactly 1); the dense matrix
+ * is built from it when a query first needs it, after the dense-size refusal. A model with a
  * parameter without a value is checked with its parameters symbolic (rows summing to 1 identically, ranges over the
  * parameter domains); that check sits behind {@link SymbolicValidation}, so loading a model with values for every
  * parameter loads no JAS or Symja class. Continuous models are parsed and resolved; the queries that need a discrete
@@ -37,7 +39,8 @@ public final class LoadedModel {
     private final Optional<Path> file;
     private final Map<String, Rational> given;
     private final Map<String, Rational> known;
-    private final Optional<RationalMatrix> matrix;
+    private final Optional<SparseRationalMatrix> sparse;
+    private volatile RationalMatrix dense;
     private volatile SymbolicValidation symbolic;
 
     private LoadedModel(Model model, Optional<Path> file, Map<String, Rational> given) {
@@ -53,10 +56,11 @@ public final class LoadedModel {
         }
         this.known = java.util.Collections.unmodifiableMap(k);
         if (model.kind() == ChainKind.DISCRETE && complete()) {
-            // the numeric check: throws, located, for an entry outside [0, 1] or a row not summing to 1
-            this.matrix = Optional.of(Chains.transitionMatrix(model, given));
+            // the numeric check: throws, located, for an entry outside [0, 1] or a row not summing to 1; stored
+            // sparse, so a large model with few transitions a state needs no dense matrix unless a query asks for one
+            this.sparse = Optional.of(Chains.sparseTransitionMatrix(model, given));
         } else {
-            this.matrix = Optional.empty();
+            this.sparse = Optional.empty();
             if (model.kind() == ChainKind.DISCRETE) {
                 symbolic();
             }
@@ -255,8 +259,28 @@ public final class LoadedModel {
      *                         {@link ErrorKey#WRONG_KIND} for a continuous model
      */
     public RationalMatrix matrix() {
-        if (matrix.isPresent()) {
-            return matrix.get();
+        RationalMatrix d = dense;
+        if (d == null) {
+            SparseRationalMatrix s = sparseMatrix();
+            // the dense-size refusal, with the size in the message, before any n x n array exists
+            Chains.requireDense(model);
+            d = s.toDense();
+            dense = d;
+        }
+        return d;
+    }
+
+    /**
+     * The exact one-step matrix at the point, stored sparse (memory in proportion to the transitions): for engines
+     * that work on large sparse chains without a dense matrix.
+     *
+     * @return the matrix, validated
+     * @throws QchainException {@link ErrorKey#FREE_PARAMETERS} if a used parameter has no value;
+     *                         {@link ErrorKey#WRONG_KIND} for a continuous model
+     */
+    public SparseRationalMatrix sparseMatrix() {
+        if (sparse.isPresent()) {
+            return sparse.get();
         }
         if (model.kind() != ChainKind.DISCRETE) {
             throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(), "it has no one-step matrix");

@@ -12,6 +12,10 @@ import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.SizeEstimate;
 import org.qchain.exact.TopPaths;
 import org.qchain.exact.WeightedPath;
+import org.qchain.exact.SparseRationalMatrix;
+import org.qchain.exact.certified.CertifiedDecimal;
+import org.qchain.exact.certified.CertifiedPowers;
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.StepResult;
 
@@ -21,6 +25,14 @@ final class NumericEngine {
     static final String MAX_DIGITS_OPTION = "--max-digits";
     /** The option that raises the limit on the work of a path search. */
     static final String MAX_PATH_DIGITS_OPTION = "--max-path-digits";
+    /**
+     * What the size refusal of an exact result names: the limit, and the way to decimals without the exact
+     * fraction.
+     */
+    static final String MAX_DIGITS_OR_CERTIFIED = MAX_DIGITS_OPTION
+        + ", or ask for certified decimals without the exact fractions with --certified";
+    /** The option that raises the limit on the work of a certified result. */
+    static final String MAX_WORK_OPTION = "--max-work";
 
     private NumericEngine() {
     }
@@ -29,13 +41,14 @@ final class NumericEngine {
     static void guard(LoadedModel model, StepQuery q) {
         RationalMatrix p = model.matrix();
         if (q.from().isEmpty()) {
-            SizeEstimate.requireWithin(SizeEstimate.digitsOfPower(p, q.n()), q.maxDigits(), MAX_DIGITS_OPTION);
+            SizeEstimate.requireWithin(SizeEstimate.digitsOfPower(p, q.n()), q.maxDigits(), MAX_DIGITS_OR_CERTIFIED);
             return;
         }
         int from = model.state("--from", q.from().get());
         q.to().ifPresent(t -> model.state("--to", t));
         // one entry is computed through its whole row, so the row's size bounds both
-        SizeEstimate.requireWithin(SizeEstimate.digitsOfRow(p, from, q.n()), q.maxDigits(), MAX_DIGITS_OPTION);
+        SizeEstimate.requireWithin(SizeEstimate.digitsOfRow(p, from, q.n()), q.maxDigits(),
+            q.paths().isPresent() ? MAX_DIGITS_OPTION : MAX_DIGITS_OR_CERTIFIED);
         if (q.paths().isPresent()) {
             if (q.n() > Integer.MAX_VALUE) {
                 throw new QchainException(ErrorKey.BAD_ARGUMENT, "-n", q.n(),
@@ -79,6 +92,38 @@ final class NumericEngine {
 
     private static StepResult.Header header(LoadedModel model, long n, List<String> warnings) {
         return new StepResult.Header(model.source(), model.model().kind().word(), n, warnings);
+    }
+
+    /**
+     * Certified decimals of P^n, a row or an entry, on the sparse matrix (a row or an entry never needs the dense
+     * one). The work is estimated before it starts and refused past {@link StepQuery#maxWork()}.
+     */
+    static CertifiedStepResult certifiedStep(LoadedModel model, StepQuery q, Progress progress) {
+        SparseRationalMatrix p = model.sparseMatrix();
+        CertifiedPowers.Settings settings = new CertifiedPowers.Settings(q.digits(), CertifiedPowers.DEFAULT_MAX_BITS,
+            q.maxDigits(), q.maxWork(), MAX_WORK_OPTION);
+        StepResult.Header header = new StepResult.Header(model.source(), model.model().kind().word(), q.n(),
+            List.of());
+        List<String> states = model.states();
+        if (q.from().isEmpty()) {
+            CertifiedDecimal[][] all = CertifiedPowers.power(p, q.n(), settings, progress);
+            List<List<CertifiedDecimal>> rows = new ArrayList<>();
+            for (CertifiedDecimal[] row : all) {
+                rows.add(List.of(row));
+            }
+            return new CertifiedStepResult(header, Optional.empty(), Optional.empty(), states, states, rows,
+                q.digits());
+        }
+        int from = model.state("--from", q.from().get());
+        if (q.to().isEmpty()) {
+            CertifiedDecimal[] row = CertifiedPowers.row(p, from, q.n(), settings, progress);
+            return new CertifiedStepResult(header, q.from(), Optional.empty(), List.of(q.from().get()), states,
+                List.of(List.of(row)), q.digits());
+        }
+        int to = model.state("--to", q.to().get());
+        CertifiedDecimal d = CertifiedPowers.entry(p, from, to, q.n(), settings, progress);
+        return new CertifiedStepResult(header, q.from(), q.to(), List.of(q.from().get()), List.of(q.to().get()),
+            List.of(List.of(d)), q.digits());
     }
 
     private static List<StepResult.PathLine> paths(LoadedModel model, int from, int to, Rational total, StepQuery q,

@@ -3,6 +3,7 @@ package org.qchain.analysis;
 import java.util.Optional;
 import java.util.OptionalInt;
 import org.qchain.exact.SizeEstimate;
+import org.qchain.exact.certified.CertifiedPowers;
 import org.qchain.symbolic.SymbolicLimits;
 
 /**
@@ -17,11 +18,39 @@ import org.qchain.symbolic.SymbolicLimits;
  * @param symbolic      keep every parameter symbolic, even those with values
  * @param factor        symbolic results: factored formulas
  * @param maxTerms      symbolic results: refuse powers estimated to need more polynomial terms
+ * @param certified     numeric results: correctly rounded decimals proven by enclosures, without the exact
+ *                      fractions ({@link org.qchain.exact.certified.CertifiedPowers}); no size limit on digits
+ * @param digits        the significant digits that {@code certified} proves
+ * @param maxWork       {@code certified}: refuse computations estimated to need more fixed-point multiplications
  */
 public record StepQuery(long n, Optional<String> from, Optional<String> to, OptionalInt paths, long maxDigits,
-                        long maxPathDigits, boolean symbolic, boolean factor, long maxTerms) implements Query {
+                        long maxPathDigits, boolean symbolic, boolean factor, long maxTerms, boolean certified,
+                        int digits, long maxWork) implements Query {
     /** Default limit on polynomial terms (the symbolic module's; a constant, so reading it loads no class). */
     public static final long DEFAULT_MAX_TERMS = SymbolicLimits.DEFAULT_MAX_TERMS;
+    /** Default limit on the work of a certified result (the exact module's). */
+    public static final long DEFAULT_MAX_WORK = CertifiedPowers.DEFAULT_MAX_WORK;
+    /** Default significant digits. */
+    public static final int DEFAULT_DIGITS = 12;
+
+    /**
+     * An exact query (not certified), as before certified decimals existed.
+     *
+     * @param n             the number of steps
+     * @param from          the starting state
+     * @param to            the final state
+     * @param paths         how many most probable paths
+     * @param maxDigits     the digit limit
+     * @param maxPathDigits the path-search limit
+     * @param symbolic      keep parameters symbolic
+     * @param factor        factored formulas
+     * @param maxTerms      the symbolic term limit
+     */
+    public StepQuery(long n, Optional<String> from, Optional<String> to, OptionalInt paths, long maxDigits,
+                     long maxPathDigits, boolean symbolic, boolean factor, long maxTerms) {
+        this(n, from, to, paths, maxDigits, maxPathDigits, symbolic, factor, maxTerms, false, DEFAULT_DIGITS,
+            DEFAULT_MAX_WORK);
+    }
 
     /**
      * Checks the shape.
@@ -37,6 +66,9 @@ public record StepQuery(long n, Optional<String> from, Optional<String> to, Opti
         }
         if (paths.isPresent() && to.isEmpty()) {
             throw new IllegalArgumentException("paths need an entry (from and to)");
+        }
+        if (certified && (paths.isPresent() || symbolic || digits < 1)) {
+            throw new IllegalArgumentException("certified decimals are numeric, without paths, with digits >= 1");
         }
     }
 
@@ -63,10 +95,18 @@ public record StepQuery(long n, Optional<String> from, Optional<String> to, Opti
 
     /** This query with the parameters kept symbolic. */
     public StepQuery withSymbolic(boolean keepSymbolic) {
-        return new StepQuery(n, from, to, paths, maxDigits, maxPathDigits, keepSymbolic, factor, maxTerms);
+        return new StepQuery(n, from, to, paths, maxDigits, maxPathDigits, keepSymbolic, factor, maxTerms, certified,
+            digits, maxWork);
+    }
+
+    /** This query as certified decimals of {@code d} significant digits. */
+    public StepQuery withCertified(int d) {
+        return new StepQuery(n, from, to, paths, maxDigits, maxPathDigits, symbolic, factor, maxTerms, true, d,
+            maxWork);
     }
 
     private StepQuery with(Optional<String> f, Optional<String> t, OptionalInt k) {
-        return new StepQuery(n, f, t, k, maxDigits, maxPathDigits, symbolic, factor, maxTerms);
+        return new StepQuery(n, f, t, k, maxDigits, maxPathDigits, symbolic, factor, maxTerms, certified, digits,
+            maxWork);
     }
 }

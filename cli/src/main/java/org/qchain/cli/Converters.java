@@ -69,6 +69,14 @@ final class Converters {
         }
     }
 
+    /** A limit on multiplications (the work of a certified result): an integer {@code >= 1}. */
+    static final class WorkLimit implements ITypeConverter<Long> {
+        @Override
+        public Long convert(String value) {
+            return whole(value, "multiplications", 1, Long.MAX_VALUE, "must be at least 1");
+        }
+    }
+
     /** Significant digits of decimals: 1 to {@value #MAX}. */
     static final class Digits implements ITypeConverter<Integer> {
         static final int MAX = 100_000;

@@ -27,6 +27,9 @@ import picocli.CommandLine.Spec;
         "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function"
             + " of the parameters (--factor: factored), with its value at the nominal or --at point when every"
             + " parameter has one.",
+        "--certified gives correctly rounded decimals (--digits) whose every digit is proven by an enclosure of the"
+            + " exact value, without the exact fractions: for n too large for exact numbers, and for large sparse"
+            + " models.",
         "Continuous chains: -t T (several: -t 1,2,5 or a range -t 0..10:2) gives P(t) = exp(Qt) as certified"
             + " decimals: every printed digit is proven, and the bound (widest enclosure) is printed."})
 final class StepCommand implements Callable<Integer> {
@@ -70,6 +73,17 @@ final class StepCommand implements Callable<Integer> {
             + " with the square of n (default: ${DEFAULT-VALUE}).")
     long maxPathDigits = org.qchain.exact.SizeEstimate.DEFAULT_MAX_PATH_DIGITS;
 
+    @Option(names = "--certified",
+        description = "Certified decimals instead of exact fractions: every printed digit proven by interval"
+            + " arithmetic, with the width of each enclosure. No digit limit applies; the work is estimated first.")
+    boolean certified;
+
+    @Option(names = "--max-work", paramLabel = "W", converter = Converters.WorkLimit.class,
+        defaultValue = "" + org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_WORK,
+        description = "With --certified: refuse computations estimated to need more than W multiplications of"
+            + " fixed-point numbers (default: ${DEFAULT-VALUE}).")
+    long maxWork = org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_WORK;
+
     @Option(names = "--symbolic",
         description = "Keep every parameter symbolic, even those with nominal values (formulas, and values at the"
             + " nominal or --at point). Models with a parameter without a value are symbolic anyway.")
@@ -100,6 +114,18 @@ final class StepCommand implements Callable<Integer> {
         if (paths != null && (from == null || to == null)) {
             throw new ParameterException(spec.commandLine(), "--paths needs both --from and --to");
         }
+        if (certified && paths != null) {
+            throw new ParameterException(spec.commandLine(), "--paths lists exact path probabilities; it does not"
+                + " combine with --certified");
+        }
+        if (certified && symbolic) {
+            throw new ParameterException(spec.commandLine(), "--certified gives decimals of numbers; it does not"
+                + " combine with --symbolic");
+        }
+        if (certified && doubles) {
+            throw new ParameterException(spec.commandLine(), "--double gives the binary64 of exact values; it does not"
+                + " combine with --certified");
+        }
         if (doubles && output.format != OutputFormat.CSV && output.format != OutputFormat.JSON) {
             throw new ParameterException(spec.commandLine(), "--double needs --format csv or --format json");
         }
@@ -107,7 +133,7 @@ final class StepCommand implements Callable<Integer> {
         LoadedModel loaded = model.load();
         StepQuery q = new StepQuery(n, Optional.ofNullable(from), Optional.ofNullable(to),
             paths == null ? OptionalInt.empty() : OptionalInt.of(paths), digitLimit.maxDigits, maxPathDigits, symbolic,
-            symbolicOptions.factor, symbolicOptions.maxTerms());
+            symbolicOptions.factor, symbolicOptions.maxTerms(), certified, output.digits(), maxWork);
         if (Analysis.route(loaded, q) == Route.SYMBOLIC) {
             if (paths != null) {
                 throw new ParameterException(spec.commandLine(), "--paths needs numeric values for every parameter"

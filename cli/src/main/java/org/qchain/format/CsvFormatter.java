@@ -2,9 +2,12 @@ package org.qchain.format;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.qchain.exact.DecimalText;
 import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.exact.reference.EntryCheck;
 import org.qchain.result.AvailabilityResult;
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
@@ -48,7 +51,7 @@ final class CsvFormatter extends Layout {
         }
         Text.csvRecord(sb, m.states());
         for (List<Rational> row : m.entries()) {
-            Text.csvRecord(sb, row.stream().map(Rational::toString).toList());
+            Text.csvRecord(sb, List.of(DecimalText.toStrings(row.toArray(new Rational[0]))));
         }
         return sb.toString();
     }
@@ -97,6 +100,20 @@ final class CsvFormatter extends Layout {
             rec.add(hex(e));
         }
         return rec;
+    }
+
+    @Override
+    public String certifiedStep(CertifiedStepResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("n", "from", "to", "decimal", "status", "enclosure_width"));
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.columns().size(); j++) {
+                CertifiedDecimal d = r.values().get(i).get(j);
+                Text.csvRecord(sb, List.of(String.valueOf(r.header().n()), r.rows().get(i), r.columns().get(j),
+                    d.text(), CertifiedStepResult.statusWord(d), CertifiedStepResult.widthText(d.enclosure().width())));
+            }
+        }
+        return sb.toString();
     }
 
     @Override

@@ -1,6 +1,7 @@
 package org.qchain.format;
 
 import org.qchain.result.AvailabilityResult;
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.ClosedResult;
@@ -33,6 +34,9 @@ public interface Formatter {
         }
         if (result instanceof StepResult.Single s) {
             return stepSingle(s);
+        }
+        if (result instanceof CertifiedStepResult c) {
+            return certifiedStep(c);
         }
         if (result instanceof SymbolicStepResult s) {
             return symbolicStep(s);
@@ -75,6 +79,9 @@ public interface Formatter {
 
     /** One entry of P^n, with its paths if present. */
     String stepSingle(StepResult.Single s);
+
+    /** P^n, a row or an entry as certified decimals. */
+    String certifiedStep(CertifiedStepResult r);
 
     /** P^n, a row or an entry as formulas in the parameters. */
     String symbolicStep(SymbolicStepResult r);

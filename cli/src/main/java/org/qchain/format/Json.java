@@ -113,6 +113,11 @@ public final class Json {
      */
     static void quote(StringBuilder sb, String s) {
         sb.append('"');
+        if (plain(s)) {
+            // the common case (numbers, names): nothing to escape, one bulk copy
+            sb.append(s).append('"');
+            return;
+        }
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);
             switch (c) {
@@ -146,6 +151,17 @@ public final class Json {
             }
         }
         sb.append('"');
+    }
+
+    /** Whether {@code s} is printable ASCII without a quotation mark or reverse solidus. */
+    private static boolean plain(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            if (c < 0x20 || c > 0x7e || c == '"' || c == '\\') {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** {@code s} as a JSON string literal. */

@@ -3,11 +3,14 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.qchain.exact.DecimalText;
 import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.exact.floats.FloatText;
 import org.qchain.exact.reference.Target;
 import org.qchain.exact.reference.VerifyReport;
 import org.qchain.result.AvailabilityResult;
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
@@ -33,7 +36,8 @@ final class JsonFormatter extends Layout {
     }
 
     private List<String> exact(List<Rational> row) {
-        return row.stream().map(Rational::toString).toList();
+        // exact values of big powers have thousands of digits: the fast conversion, on all cores
+        return List.of(DecimalText.toStrings(row.toArray(new Rational[0])));
     }
 
     private List<String> decimals(List<Rational> row) {
@@ -82,7 +86,7 @@ final class JsonFormatter extends Layout {
             .number("n", h.n())
             .string("from", s.from())
             .string("to", s.to())
-            .string("value", s.value().toString())
+            .string("value", DecimalText.toString(s.value()))
             .string("decimal", dec(s.value()))
             .string("kind", h.kind());
         if (doubles) {
@@ -99,6 +103,42 @@ final class JsonFormatter extends Layout {
 
     private Json common(Json j, StepResult.Header h) {
         return j.number("digits", digits).string("model", h.source()).strings("warnings", h.warnings());
+    }
+
+    // --- certified step ----------------------------------------------------------------------------------------
+
+    @Override
+    public String certifiedStep(CertifiedStepResult r) {
+        StepResult.Header h = r.header();
+        Json j = Json.object().string("kind", h.kind()).number("n", h.n());
+        r.from().ifPresent(f -> j.string("from", f));
+        r.to().ifPresent(t -> j.string("to", t));
+        j.bool("certified", true);
+        if (r.to().isPresent()) {
+            CertifiedDecimal d = r.values().get(0).get(0);
+            j.string("decimal", d.text())
+                .string("status", CertifiedStepResult.statusWord(d))
+                .string("enclosure_width", CertifiedStepResult.widthText(d.enclosure().width()));
+        } else {
+            j.strings("states", r.columns());
+            List<List<String>> texts = new ArrayList<>();
+            List<List<String>> status = new ArrayList<>();
+            List<List<String>> widths = new ArrayList<>();
+            for (List<CertifiedDecimal> row : r.values()) {
+                texts.add(row.stream().map(CertifiedDecimal::text).toList());
+                status.add(row.stream().map(CertifiedStepResult::statusWord).toList());
+                widths.add(row.stream().map(d -> CertifiedStepResult.widthText(d.enclosure().width())).toList());
+            }
+            if (r.from().isPresent()) {
+                j.strings("decimals", texts.get(0)).strings("status", status.get(0))
+                    .strings("enclosure_widths", widths.get(0));
+            } else {
+                j.stringRows("decimals", texts).stringRows("status", status).stringRows("enclosure_widths", widths);
+            }
+        }
+        j.string("max_enclosure_width", CertifiedStepResult.widthText(r.maxWidth()));
+        return j.number("digits", r.digits()).string("model", h.source()).strings("warnings", h.warnings()).close()
+            + "\n";
     }
 
     // --- symbolic step -----------------------------------------------------------------------------------------

@@ -3,9 +3,11 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.exact.reference.EntryCheck;
 import org.qchain.exact.reference.VerifyReport;
 import org.qchain.result.AvailabilityResult;
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
@@ -108,6 +110,29 @@ final class LatexFormatter extends Layout {
     }
 
     // --- symbolic step -----------------------------------------------------------------------------------------
+
+    @Override
+    public String certifiedStep(CertifiedStepResult r) {
+        StepResult.Header h = r.header();
+        StringBuilder sb = new StringBuilder();
+        sb.append("% ").append(Text.power(h.n())).append(" for ").append(Text.comment(h.source())).append(" (")
+            .append(h.kind()).append(" chain); certified decimals: ").append(Text.digits(r.digits()))
+            .append(", every digit proven; largest enclosure width ")
+            .append(CertifiedStepResult.widthText(r.maxWidth())).append('\n');
+        sb.append("\\begin{tabular}{ll|rll}\n");
+        sb.append("from & to & decimal & certified & enclosure width \\\\ \\hline\n");
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.columns().size(); j++) {
+                CertifiedDecimal d = r.values().get(i).get(j);
+                sb.append(Text.latex(r.rows().get(i))).append(" & ").append(Text.latex(r.columns().get(j)))
+                    .append(" & $").append(Text.latex(d.text())).append("$ & ")
+                    .append(CertifiedStepResult.statusWord(d)).append(" & $")
+                    .append(CertifiedStepResult.widthText(d.enclosure().width())).append("$ \\\\\n");
+            }
+        }
+        sb.append("\\end{tabular}\n");
+        return caution(sb);
+    }
 
     @Override
     public String symbolicStep(SymbolicStepResult r) {

@@ -3,9 +3,11 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.exact.reference.EntryCheck;
 import org.qchain.exact.reference.VerifyReport;
 import org.qchain.result.AvailabilityResult;
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
@@ -114,6 +116,28 @@ final class MarkdownFormatter extends Layout {
     }
 
     // --- symbolic step -----------------------------------------------------------------------------------------
+
+    @Override
+    public String certifiedStep(CertifiedStepResult r) {
+        StepResult.Header h = r.header();
+        StringBuilder sb = new StringBuilder();
+        sb.append("**").append(Text.power(h.n())).append("** for `").append(Text.code(h.source())).append("` (")
+            .append(h.kind()).append(" chain): certified decimals, every digit proven by an enclosure of the exact"
+                + " value.\n\n");
+        line(sb, List.of("from", "to", "decimal", "certified", "enclosure width"));
+        line(sb, separator(5));
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.columns().size(); j++) {
+                CertifiedDecimal d = r.values().get(i).get(j);
+                line(sb, List.of(Text.markdown(r.rows().get(i)), Text.markdown(r.columns().get(j)),
+                    Text.markdown(d.text()), CertifiedStepResult.statusWord(d),
+                    CertifiedStepResult.widthText(d.enclosure().width())));
+            }
+        }
+        sb.append("\nDecimals: ").append(Text.digits(r.digits())).append("; largest enclosure width ")
+            .append(CertifiedStepResult.widthText(r.maxWidth())).append(".\n");
+        return caution(sb);
+    }
 
     @Override
     public String symbolicStep(SymbolicStepResult r) {

@@ -2,10 +2,13 @@ package org.qchain.format;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.qchain.exact.DecimalText;
 import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.exact.reference.EntryCheck;
 import org.qchain.exact.reference.VerifyReport;
 import org.qchain.result.AvailabilityResult;
+import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
@@ -48,35 +51,40 @@ final class TextFormatter extends Layout {
         for (List<Rational> row : m.entries()) {
             decimals.add(row.stream().map(this::dec).toList());
         }
-        List<int[]> blocks = columnBlocks(m.states(), decimals);
-        for (int[] block : blocks) {
-            if (blocks.size() > 1) {
-                sb.append("columns ").append(block[0] + 1).append(" to ").append(block[1]).append(" of ")
-                    .append(m.states().size()).append(":\n");
-            }
-            TextTable overview = new TextTable();
-            List<String> head = new ArrayList<>();
-            head.add("from\\to");
-            head.addAll(m.states().subList(block[0], block[1]));
-            overview.addRow(head);
-            for (int i = 0; i < m.states().size(); i++) {
-                List<String> line = new ArrayList<>();
-                line.add(m.states().get(i));
-                line.addAll(decimals.get(i).subList(block[0], block[1]));
-                overview.addRow(line);
-            }
-            sb.append(overview.render()).append('\n');
-        }
+        overview(sb, m.states(), decimals);
         sb.append("Exact values:\n");
         TextTable list = new TextTable().addRow("from", "to", "decimal", "exact");
         for (int i = 0; i < m.states().size(); i++) {
             for (int j = 0; j < m.states().size(); j++) {
                 list.addRow(m.states().get(i), m.states().get(j), decimals.get(i).get(j),
-                    m.entries().get(i).get(j).toString());
+                    DecimalText.toString(m.entries().get(i).get(j)));
             }
         }
         sb.append(list.render());
         return end(sb);
+    }
+
+    /** The square overview of a matrix of texts, split into column blocks that fit the width. */
+    private static void overview(StringBuilder sb, List<String> states, List<List<String>> texts) {
+        List<int[]> blocks = columnBlocks(states, texts);
+        for (int[] block : blocks) {
+            if (blocks.size() > 1) {
+                sb.append("columns ").append(block[0] + 1).append(" to ").append(block[1]).append(" of ")
+                    .append(states.size()).append(":\n");
+            }
+            TextTable overview = new TextTable();
+            List<String> head = new ArrayList<>();
+            head.add("from\\to");
+            head.addAll(states.subList(block[0], block[1]));
+            overview.addRow(head);
+            for (int i = 0; i < states.size(); i++) {
+                List<String> line = new ArrayList<>();
+                line.add(states.get(i));
+                line.addAll(texts.get(i).subList(block[0], block[1]));
+                overview.addRow(line);
+            }
+            sb.append(overview.render()).append('\n');
+        }
     }
 
     /**
@@ -119,7 +127,7 @@ final class TextFormatter extends Layout {
         TextTable t = new TextTable().addRow("to", "decimal", "exact");
         for (int j = 0; j < r.states().size(); j++) {
             Rational e = r.entries().get(j);
-            t.addRow(r.states().get(j), dec(e), e.toString());
+            t.addRow(r.states().get(j), dec(e), DecimalText.toString(e));
         }
         sb.append(t.render());
         return end(sb);
@@ -134,7 +142,7 @@ final class TextFormatter extends Layout {
         sb.append("Probability of being in ").append(s.to()).append(" after ").append(Text.steps(h.n()))
             .append(", starting in ").append(s.from()).append(":\n");
         // not a table: a long exact value must not push the decimal's note to the right
-        sb.append("  exact    ").append(s.value()).append('\n');
+        sb.append("  exact    ").append(DecimalText.toString(s.value())).append('\n');
         sb.append("  decimal  ").append(dec(s.value())).append("  (").append(Text.digits(digits)).append(")\n");
         s.paths().ifPresent(paths -> appendPaths(sb, s, name, paths));
         return end(sb);
@@ -170,6 +178,61 @@ final class TextFormatter extends Layout {
             e.addRow(String.valueOf(k + 1), p.share().toString(), p.probability().toString());
         }
         sb.append(e.render());
+    }
+
+    // --- certified step ----------------------------------------------------------------------------------------
+
+    @Override
+    public String certifiedStep(CertifiedStepResult r) {
+        StepResult.Header h = r.header();
+        StringBuilder sb = new StringBuilder();
+        String proven = "Certified decimals to " + Text.digits(r.digits()) + ", every digit proven";
+        if (r.from().isEmpty()) {
+            sb.append(Text.power(h.n())).append(" for ").append(h.source()).append(" (").append(h.kind())
+                .append(" chain, ").append(r.columns().size()).append(r.columns().size() == 1 ? " state)" : " states)")
+                .append('\n');
+            sb.append("Row i, column j: probability of being in state j after ").append(Text.steps(h.n()))
+                .append(", starting in state i.\n").append(proven).append(".\n\n");
+            List<List<String>> texts = new ArrayList<>();
+            for (List<CertifiedDecimal> row : r.values()) {
+                texts.add(row.stream().map(CertifiedDecimal::text).toList());
+            }
+            overview(sb, r.columns(), texts);
+        } else if (r.to().isEmpty()) {
+            sb.append("Row ").append(r.from().get()).append(" of ").append(Text.power(h.n())).append(" for ")
+                .append(h.source()).append(" (").append(h.kind()).append(" chain)\n");
+            sb.append("Probability of being in each state after ").append(Text.steps(h.n())).append(", starting in ")
+                .append(r.from().get()).append(".\n").append(proven).append(".\n\n");
+            TextTable t = new TextTable().addRow("to", "decimal", "certified", "enclosure width");
+            for (int j = 0; j < r.columns().size(); j++) {
+                CertifiedDecimal d = r.values().get(0).get(j);
+                t.addRow(r.columns().get(j), d.text(), CertifiedStepResult.statusWord(d),
+                    CertifiedStepResult.widthText(d.enclosure().width()));
+            }
+            sb.append(t.render()).append('\n');
+        } else {
+            CertifiedDecimal d = r.values().get(0).get(0);
+            sb.append(Text.power(h.n())).append('(').append(r.from().get()).append(" -> ").append(r.to().get())
+                .append(") for ").append(h.source()).append(" (").append(h.kind()).append(" chain)\n");
+            sb.append("Probability of being in ").append(r.to().get()).append(" after ").append(Text.steps(h.n()))
+                .append(", starting in ").append(r.from().get()).append(":\n");
+            sb.append("  ").append(CertifiedStepResult.statusWord(d)).append("  ").append(d.text()).append("  (")
+                .append(Text.digits(r.digits())).append(d.isProven() ? ", every digit proven)\n" : ")\n");
+            sb.append("  enclosure width  ").append(CertifiedStepResult.widthText(d.enclosure().width()))
+                .append('\n');
+            sb.append("The exact value lies in an interval (enclosure) this wide, and every value in it rounds to"
+                + " the digits shown.\n");
+        }
+        if (r.from().isEmpty() || r.to().isEmpty()) {
+            sb.append("Largest enclosure width: ").append(CertifiedStepResult.widthText(r.maxWidth()))
+                .append(". Each exact value lies in an interval (enclosure) of\nat most this width, and every value"
+                    + " in it rounds to the digits shown.\n");
+        }
+        if (r.anyUnresolved()) {
+            sb.append("Values marked 'not resolved' lie next to a rounding boundary and were too large to compute"
+                + " exactly: they are shown as an interval [lower, upper] that contains the value.\n");
+        }
+        return end(sb);
     }
 
     // --- symbolic step -----------------------------------------------------------------------------------------

@@ -110,7 +110,8 @@ class BadInputTest {
         assertEquals("", r.out());
         // the estimate itself comes from the engine's SizeEstimate; here: it is in the message, over the limit
         java.util.regex.Matcher m = java.util.regex.Pattern.compile("qchain: the result would have about (\\d+)"
-            + " digits in total, more than the limit 1000; raise it with --max-digits\n").matcher(r.err());
+            + " digits in total, more than the limit 1000; raise it with --max-digits, or ask for certified decimals"
+            + " without the exact fractions with --certified\n").matcher(r.err());
         assertEquals(true, m.matches(), r::toString);
         assertEquals(true, Long.parseLong(m.group(1)) > 1000, r::toString);
     }

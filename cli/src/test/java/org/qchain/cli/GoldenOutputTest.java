@@ -44,6 +44,10 @@ class GoldenOutputTest {
             out.add(new Case("step-entry." + ext, List.of("--from", "Up", "--to", "Down", "--format", f)));
             out.add(new Case("step-paths." + ext, List.of("--from", "Up", "--to", "Down", "--paths", "3",
                 "--format", f)));
+            out.add(new Case("step-certified-matrix." + ext, List.of("--certified", "--format", f)));
+            out.add(new Case("step-certified-row." + ext, List.of("--from", "Worn", "--certified", "--format", f)));
+            out.add(new Case("step-certified-entry." + ext, List.of("--from", "Up", "--to", "Down", "--certified",
+                "--format", f)));
         }
         out.add(new Case("step-matrix-digits5.txt", List.of("--digits", "5")));
         // --double: each value's correctly rounded binary64, as shortest decimal and hex float

@@ -102,6 +102,7 @@ class NoSymjaOnNumericPathTest {
             "--format", "markdown", "--at", "w=1/10"));
         assertNoForbidden(classesRequestedBy("step", m, "-n", "6", "--format", "json"));
         assertNoForbidden(classesRequestedBy("step", m, "-n", "6", "--format", "csv"));
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "600", "--from", "Up", "--certified", "--format", "json"));
     }
 
     @Test

@@ -157,6 +157,10 @@ public enum ErrorKey implements MessageKey {
     /** {0}: what is degenerate. */
     DEGENERATE_AVAILABILITY("{0}"),
 
+    // --- certified decimals (issue 13) -------------------------------------------------------------------------
+    /** {0}: estimated multiplications, {1}: their operand size in bits, {2}: the limit, {3}: the option that raises it. */
+    CERTIFIED_TOO_LARGE("the certified computation would take about {0} multiplications of {1}-bit numbers, more than the limit {2}; raise it with {3}, or ask for one row of the power"),
+
     // --- long run and absorption (appended) ---
     /** {0}: what cannot be computed, {1}: why. */
     NOT_APPLICABLE("{0}: {1}");

@@ -3,7 +3,6 @@ package org.qchain.exact;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -19,7 +18,8 @@ import java.util.Map;
  * probable-prime test is treated as a prime (error probability below {@code 2^-200}); a composite leftover (all of
  * its factors above the trial limit) falls back to {@link BigInteger#gcd} for its part.
  *
- * <p>Not thread-safe (it caches the reduced denominators it has built); use one instance per computation.
+ * <p>Thread-safe: the reduced denominators it has built are cached in a concurrent map, so the entries of one
+ * result may be reduced on several threads.
  */
 final class KnownDenominator {
     static final int TRIAL_LIMIT = 1 << 20;
@@ -30,8 +30,8 @@ final class KnownDenominator {
     private final long[] caps;
     /** A composite cofactor of {@code d} with no factor below the trial limit, or {@code null}. */
     private final BigInteger composite;
-    private final Map<List<Long>, BigInteger> reducedDenominators = new HashMap<>();
-    private BigInteger full;
+    private final Map<List<Long>, BigInteger> reducedDenominators = new java.util.concurrent.ConcurrentHashMap<>();
+    private volatile BigInteger full;
     /**
      * For each odd prime below 2^62 the window {@code p^c} ({@code c} the largest exponent with {@code p^c < 2^62},
      * at most the cap), else {@code null}; {@link #window} is their product, or zero if there is none.

@@ -70,13 +70,23 @@ public final class MatrixPowers {
         KnownDenominator den = KnownDenominator.power(f.d, n);
         Rational[][] out = new Rational[s][s];
         Thread caller = Thread.currentThread();
-        for (int i = 0; i < s; i++) {
-            checkInterrupt(caller);
-            for (int j = 0; j < s; j++) {
-                out[i][j] = den.reduce(an.e[i][j]);
-            }
-            progress.update("reducing", i + 1, s);
+        java.util.concurrent.atomic.AtomicInteger done = new java.util.concurrent.atomic.AtomicInteger();
+        java.util.stream.IntStream rows = java.util.stream.IntStream.range(0, s);
+        if (s >= 8 && Runtime.getRuntime().availableProcessors() > 1) {
+            rows = rows.parallel();
         }
+        rows.forEach(i -> {
+            checkInterrupt(caller);
+            Rational[] row = new Rational[s];
+            for (int j = 0; j < s; j++) {
+                row[j] = den.reduce(an.e[i][j]);
+            }
+            out[i] = row;
+            int d = done.incrementAndGet();
+            if (Thread.currentThread() == caller) {
+                progress.update("reducing", d, s);
+            }
+        });
         return RationalMatrix.wrap(out);
     }
 
@@ -228,10 +238,13 @@ public final class MatrixPowers {
      * {@code A^n}, {@code n >= 1}, left to right over the bits of {@code n}. Short non-negative entries are
      * multiplied on limb arrays ({@link LimbMatrix}); past {@link LimbMatrix#MAX_LIMBS} limbs on {@link BigInteger}
      * ({@link IntMatrix}); past {@link BigMath#matrixApintBits} bits the remaining squarings run on apfloat (one
-     * conversion in, one out).
+     * conversion in, one out). Large dense powers go the multi-modular way instead ({@link ModularPower#applies}).
      */
     static IntMatrix integerPower(IntMatrix a, long n, Progress progress) {
         Thread caller = Thread.currentThread();
+        if (n > 1 && ModularPower.applies(a, n)) {
+            return ModularPower.power(a, n, progress, caller);
+        }
         int top = 63 - Long.numberOfLeadingZeros(n);
         long total = top + Long.bitCount(n) - 1L;
         long done = 0;
@@ -308,6 +321,11 @@ public final class MatrixPowers {
 
     /** Bits one multiplication by {@code A} can add: the bit length of the largest absolute row sum. */
     static int growthBits(IntMatrix a) {
+        return maxAbsRowSum(a).bitLength();
+    }
+
+    /** The largest absolute row sum of {@code A}: every entry of {@code A^n} is at most its {@code n}-th power. */
+    static BigInteger maxAbsRowSum(IntMatrix a) {
         BigInteger max = BigInteger.ZERO;
         for (int i = 0; i < a.n; i++) {
             BigInteger sum = BigInteger.ZERO;
@@ -316,7 +334,7 @@ public final class MatrixPowers {
             }
             max = max.max(sum);
         }
-        return max.bitLength();
+        return max;
     }
 
     static void checkInterrupt(Thread caller) {

@@ -26,6 +26,11 @@ import org.qchain.exact.SparseRationalMatrix;
 public final class CertifiedPowers {
     /** The default largest working precision, in bits. */
     public static final int DEFAULT_MAX_BITS = 4096;
+    /**
+     * The default limit on the estimated multiplications of fixed-point numbers (at the first working precision):
+     * about 20 s on one core of a 2026 server at 128 bits.
+     */
+    public static final long DEFAULT_MAX_WORK = 500_000_000L;
     /** The exact fall-back is considered only up to this many states (it needs the dense matrix). */
     static final int MAX_DENSE_FALLBACK_STATES = 2000;
 
@@ -39,13 +44,28 @@ public final class CertifiedPowers {
      * @param maxBits        the largest working precision, in bits, at least 64
      * @param maxExactDigits the largest exact result (estimated total digits, as
      *                       {@link SizeEstimate#digitsOfRow(RationalMatrix, int, long)}) the fall-back may compute
+     * @param maxWork        the largest estimated number of fixed-point multiplications; past it the computation is
+     *                       refused before it starts ({@link org.qchain.exact.ErrorKey#CERTIFIED_TOO_LARGE}), and
+     *                       the precision is not raised beyond what it allows
+     * @param workOption     how the user raises {@code maxWork}, for the refusal's message
      */
-    public record Settings(int digits, int maxBits, long maxExactDigits) {
+    public record Settings(int digits, int maxBits, long maxExactDigits, long maxWork, String workOption) {
         /** Checks the ranges. */
         public Settings {
-            if (digits < 1 || maxBits < 64 || maxExactDigits < 0) {
-                throw new IllegalArgumentException("need digits >= 1, maxBits >= 64, maxExactDigits >= 0");
+            if (digits < 1 || maxBits < 64 || maxExactDigits < 0 || maxWork < 1) {
+                throw new IllegalArgumentException("need digits >= 1, maxBits >= 64, maxExactDigits >= 0, maxWork >= 1");
             }
+        }
+
+        /**
+         * Settings with the default work limit.
+         *
+         * @param digits         significant digits
+         * @param maxBits        the largest working precision
+         * @param maxExactDigits the largest exact fall-back
+         */
+        public Settings(int digits, int maxBits, long maxExactDigits) {
+            this(digits, maxBits, maxExactDigits, DEFAULT_MAX_WORK, "a larger work limit");
         }
 
         /**
@@ -56,6 +76,17 @@ public final class CertifiedPowers {
          */
         public static Settings of(int digits) {
             return new Settings(digits, DEFAULT_MAX_BITS, SizeEstimate.DEFAULT_MAX_DIGITS);
+        }
+
+        /**
+         * These settings with another work limit.
+         *
+         * @param limit  the largest estimated number of multiplications
+         * @param option how the user raises it
+         * @return the settings
+         */
+        public Settings withMaxWork(long limit, String option) {
+            return new Settings(digits, maxBits, maxExactDigits, limit, option);
         }
     }
 
@@ -80,8 +111,9 @@ public final class CertifiedPowers {
             return exactRow(p, from, n, settings.digits());
         }
         Plan plan = Plan.of(p, from, n);
-        return Ziv.round(bits -> plan.enclose(bits, progress), settings.digits(),
-            startBits(p.size(), n, settings), settings.maxBits(),
+        int start = startBits(p.size(), n, settings);
+        return Ziv.round(bits -> plan.enclose(bits, progress), settings.digits(), start,
+            affordableBits(plan::work, start, settings),
             () -> exactFallback(p, n, settings).map(d -> MatrixPowers.rowOfPower(d, from, n)));
     }
 
@@ -107,8 +139,9 @@ public final class CertifiedPowers {
             return exactRow(p, from, n, settings.digits())[to];
         }
         Plan plan = Plan.of(p, from, n);
-        return Ziv.round(bits -> new Enclosure[] {plan.enclose(bits, progress)[to]}, settings.digits(),
-            startBits(p.size(), n, settings), settings.maxBits(),
+        int start = startBits(p.size(), n, settings);
+        return Ziv.round(bits -> new Enclosure[] {plan.enclose(bits, progress)[to]}, settings.digits(), start,
+            affordableBits(plan::work, start, settings),
             () -> exactFallback(p, n, settings).map(d -> new Rational[] {MatrixPowers.entryOfPower(d, from, to, n)}))[0];
     }
 
@@ -132,8 +165,9 @@ public final class CertifiedPowers {
                 System.arraycopy(exactRow(p, i, n, settings.digits()), 0, flat, i * s, s);
             }
         } else {
-            flat = Ziv.round(bits -> flatten(powerBounds(p, n, bits, progress)), settings.digits(),
-                startBits(s, n, settings), settings.maxBits(),
+            int start = startBits(s, n, settings);
+            flat = Ziv.round(bits -> flatten(powerBounds(p, n, bits, progress)), settings.digits(), start,
+                affordableBits(bits -> squaringWork(p, n) * weight(bits), start, settings),
                 () -> exactFallbackPower(p, n, settings).map(CertifiedPowers::flatten));
         }
         CertifiedDecimal[][] out = new CertifiedDecimal[s][s];
@@ -174,7 +208,7 @@ public final class CertifiedPowers {
         /** Contraction is tried when {@code n} is this many times the number of states or more. */
         static final int CONTRACTION_MIN_STEPS_PER_STATE = 32;
         /** ... and the states are at most this many (its bound needs all rows of {@code P^k}, dense). */
-        static final int CONTRACTION_MAX_STATES = 4000;
+        static final int CONTRACTION_MAX_STATES = 2000;
         /** The work of the bound's floating-point steps, in multiply-adds, at most. */
         static final double CONTRACTION_WORK = 4e8;
 
@@ -192,6 +226,21 @@ public final class CertifiedPowers {
                 }
             }
             return new Plan(p, from, n, Optional.empty(), Optional.empty());
+        }
+
+        /** Estimated multiplications (weighted by the operand size in 64-bit words) at {@code bits}. */
+        double work(int bits) {
+            double nnz = p.nonZeroCount();
+            double steps;
+            if (bound.isPresent()) {
+                Contraction.Bound b = bound.get();
+                // steps until d^(T/k) passes 2^-(bits + 24), plus two blocks, at most n
+                double blocks = Math.ceil((bits + 24) * Math.log(2) / -Math.log(b.d()));
+                steps = Math.min(n, b.k() * (blocks + 2));
+                return 2 * steps * nnz * weight(bits);
+            }
+            double vector = 2.0 * n * nnz;
+            return Math.min(vector, squaringWork(p, n)) * weight(bits);
         }
 
         Enclosure[] enclose(int bits, Progress progress) {
@@ -252,6 +301,45 @@ public final class CertifiedPowers {
             }
         }
         return r;
+    }
+
+    /** Multiplications of repeated squaring: both bounds, about {@code log2 n} products of up to {@code s^3}. */
+    static double squaringWork(SparseRationalMatrix p, long n) {
+        double s = p.size();
+        return 2.0 * (64 - Long.numberOfLeadingZeros(n) + Long.bitCount(n)) * s * s * s;
+    }
+
+    /** The cost of one multiplication of {@code bits}-bit numbers against one of 64 bits (Karatsuba-like growth). */
+    static double weight(int bits) {
+        return Math.max(1, Math.pow(bits / 64.0, 1.6));
+    }
+
+    /** {@code x} to two significant digits in e-notation without a plus sign, e.g. {@code 6.0e12}. */
+    static String roughly(double x) {
+        return String.format(java.util.Locale.ROOT, "%.1e", x).replace("e+0", "e").replace("e+", "e");
+    }
+
+    /**
+     * The largest precision on the doubling ladder from {@code start} whose estimated work stays within the limit.
+     *
+     * @throws org.qchain.exact.QchainException {@code CERTIFIED_TOO_LARGE} if even {@code start} is over it
+     */
+    static int affordableBits(java.util.function.IntToDoubleFunction work, int start, Settings settings) {
+        double w0 = work.applyAsDouble(start);
+        double count = w0 / weight(start);
+        if (count > settings.maxWork()) {
+            throw new org.qchain.exact.QchainException(org.qchain.exact.ErrorKey.CERTIFIED_TOO_LARGE,
+                roughly(count), start, settings.maxWork(), settings.workOption());
+        }
+        int bits = start;
+        while (bits < settings.maxBits()) {
+            int next = (int) Math.min(settings.maxBits(), 2L * bits);
+            if (work.applyAsDouble(next) / weight(start) > settings.maxWork()) {
+                break;
+            }
+            bits = next;
+        }
+        return bits;
     }
 
     /**

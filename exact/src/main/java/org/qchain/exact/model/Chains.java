@@ -1,7 +1,7 @@
 package org.qchain.exact.model;
 
 import java.util.ArrayList;
-import java.util.Arrays;
+import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -11,6 +11,7 @@ import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.SourcePos;
+import org.qchain.exact.SparseRationalMatrix;
 
 /**
  * From a parsed {@link Model} and parameter values to an exact, validated matrix: the one-step transition matrix of
@@ -54,15 +55,24 @@ public final class Chains {
      */
     public static RationalMatrix transitionMatrix(Model m, Map<String, Rational> values) {
         requireDense(m);
+        return sparseTransitionMatrix(m, values).toDense();
+    }
+
+    /**
+     * The exact matrix of the model, as {@link #transitionMatrix(Model, Map)} gives it, stored sparse: memory in
+     * proportion to the listed transitions, so a large model with a few transitions per state needs no dense
+     * {@code n x n} array. The same checks, in the same order, with the same errors.
+     *
+     * @param m      the model
+     * @param values values that override the nominal ones; every parameter used must end with a value
+     * @return the validated matrix
+     * @throws QchainException as {@link #transitionMatrix(Model, Map)}
+     */
+    public static SparseRationalMatrix sparseTransitionMatrix(Model m, Map<String, Rational> values) {
         Map<String, Rational> env = effectiveValues(m, values);
         int n = m.size();
-        Rational[][] a = new Rational[n][n];
-        for (Rational[] row : a) {
-            Arrays.fill(row, Rational.ZERO);
-        }
-        Rational[] offDiagonal = new Rational[n];
-        Arrays.fill(offDiagonal, Rational.ZERO);
         boolean discrete = m.kind() == ChainKind.DISCRETE;
+        Map<Transition, Rational> value = new IdentityHashMap<>();
         for (Transition t : m.transitions()) {
             Rational v = t.expr().evaluate(env::get);
             String from = m.states().get(t.from());
@@ -73,30 +83,61 @@ public final class Chains {
             if (!discrete && v.signum() < 0) {
                 throw new QchainException(t.exprPos(), ErrorKey.NEGATIVE_RATE, from, to, v);
             }
-            a[t.from()][t.to()] = v;
-            if (t.from() != t.to()) {
-                offDiagonal[t.from()] = offDiagonal[t.from()].add(v);
-            }
+            value.put(t, v);
         }
+        int[][] cols = new int[n][];
+        Rational[][] vals = new Rational[n][];
         for (int i = 0; i < n; i++) {
+            List<Transition> out = new ArrayList<>(m.outgoing(i));
+            out.sort(java.util.Comparator.comparingInt(Transition::to));
+            Rational offDiagonal = Rational.ZERO;
+            Rational self = null;
+            for (Transition t : out) {
+                if (t.to() != i) {
+                    offDiagonal = offDiagonal.add(value.get(t));
+                } else {
+                    self = value.get(t);
+                }
+            }
             String state = m.states().get(i);
             SourcePos at = m.lastListed(i).map(Transition::pos).orElse(null);
+            Rational diagonal;
             if (!discrete) {
-                a[i][i] = offDiagonal[i].negate();
-            } else if (m.listed(i, i).isPresent()) {
-                Rational sum = offDiagonal[i].add(a[i][i]);
+                diagonal = offDiagonal.negate();
+            } else if (self != null) {
+                Rational sum = offDiagonal.add(self);
                 if (!sum.isOne()) {
                     throw new QchainException(at, ErrorKey.ROW_SUM, state, sum);
                 }
+                diagonal = self;
             } else {
-                Rational rest = Rational.ONE.subtract(offDiagonal[i]);
-                if (rest.signum() < 0) {
-                    throw new QchainException(at, ErrorKey.NEGATIVE_REMAINDER, state, rest);
+                diagonal = Rational.ONE.subtract(offDiagonal);
+                if (diagonal.signum() < 0) {
+                    throw new QchainException(at, ErrorKey.NEGATIVE_REMAINDER, state, diagonal);
                 }
-                a[i][i] = rest;
             }
+            List<Integer> c = new ArrayList<>();
+            List<Rational> v = new ArrayList<>();
+            boolean placed = false;
+            for (Transition t : out) {
+                if (!placed && t.to() >= i) {
+                    c.add(i);
+                    v.add(diagonal);
+                    placed = true;
+                }
+                if (t.to() != i) {
+                    c.add(t.to());
+                    v.add(value.get(t));
+                }
+            }
+            if (!placed) {
+                c.add(i);
+                v.add(diagonal);
+            }
+            cols[i] = c.stream().mapToInt(Integer::intValue).toArray();
+            vals[i] = v.toArray(new Rational[0]);
         }
-        return RationalMatrix.of(a);
+        return SparseRationalMatrix.ofRows(n, cols, vals);
     }
 
     /**

@@ -188,6 +188,26 @@ class CertifiedPowersTest {
         }
     }
 
+    // derived by hand: a ring of 3000 states is periodic (no contraction), so n = 10^9 needs 10^9 vector steps of
+    // 3000 transitions or squarings of a dense 3000 x 3000 matrix: refused up front, with the estimate
+    @Test
+    void hugeWorkIsRefusedWithTheEstimate() {
+        int s = 3000;
+        int[][] cols = new int[s][];
+        Rational[][] vals = new Rational[s][];
+        for (int i = 0; i < s; i++) {
+            cols[i] = new int[] {(i + 1) % s};
+            vals[i] = new Rational[] {Rational.ONE};
+        }
+        SparseRationalMatrix ring = SparseRationalMatrix.ofRows(s, cols, vals);
+        org.qchain.exact.QchainException e = assertThrows(org.qchain.exact.QchainException.class,
+            () -> CertifiedPowers.row(ring, 0, 1_000_000_000L,
+                CertifiedPowers.Settings.of(12).withMaxWork(1_000_000, "--max-work"), Progress.NONE));
+        assertEquals(org.qchain.exact.ErrorKey.CERTIFIED_TOO_LARGE, e.key());
+        assertEquals("2.3e12", e.args().get(0)); // squaring: 2 (30 + 13) 3000^3 multiplications
+        assertEquals("--max-work", e.args().get(3));
+    }
+
     // common practice, no source: the monotone bounds need non-negative entries
     @Test
     void negativeEntriesAreRefused() {

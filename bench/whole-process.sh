@@ -1,0 +1,38 @@
+#!/usr/bin/env bash
+# Whole-process timings of the speed issue's rows (`qchain step` from a cold JVM, output to a file), the new jar
+# against an old one in the same run, interleaved. Usage, from the repository root:
+#   OLD=/path/to/old/qchain.jar RUNS=5 bench/whole-process.sh > bench/target/whole-process.txt
+# Needs the bench jar (mvn -B -q -o -Pbench -pl bench -am package -DskipTests) for the chain files and the CLI jar
+# (./qchain builds it). Prints one line per run: case, jar, wall seconds, user+system CPU seconds, peak RSS.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+NEW=${NEW:-cli/target/qchain.jar}
+OLD=${OLD:-$NEW}
+RUNS=${RUNS:-5}
+D=bench/target/chains
+mkdir -p "$D" bench/target/out
+java -cp bench/target/benchmarks.jar org.qchain.bench.Issue13Chains "$D"
+L=-Dlog4j2.loggerContextFactory=org.apache.logging.log4j.simple.SimpleLoggerContextFactory
+cases=(
+  "row1|step $D/dense20.chain -n 256 --format json --max-digits 1000000000"
+  "row2|step $D/dense50.chain -n 64 --format json --max-digits 1000000000"
+  "row3|step $D/sparse100.chain -n 1000000 --from S0 --to S1 --certified"
+  "row3-exact|step $D/sparse100.chain -n 1000000 --from S0 --to S1"
+  "sparse1000|step $D/sparse1000.chain -n 1000000 --from S0 --certified --format json"
+)
+echo "# $(date -u +%FT%TZ) $(nproc) cores, load: $(cut -d' ' -f1-3 /proc/loadavg)"
+for ((r = 1; r <= RUNS; r++)); do
+  for c in "${cases[@]}"; do
+    name=${c%%|*}; args=${c#*|}
+    for jar in "$NEW" "$OLD"; do
+      [ "$jar" = "$OLD" ] && [ "$OLD" = "$NEW" ] && continue
+      tag=$([ "$jar" = "$NEW" ] && echo new || echo old)
+      # shellcheck disable=SC2086
+      /usr/bin/time -f "$name $tag %e %U %S %M" -o bench/target/out/time.txt \
+        java $L -XX:+UseSerialGC -jar "$jar" $args > bench/target/out/$name-$tag.out 2>/dev/null || true
+      read -r n t wall user sys rss < <(tail -n 1 bench/target/out/time.txt)
+      printf '%s %s wall %.2f s cpu %.2f s rss %d MB\n' "$n" "$t" "$wall" "$(echo "$user + $sys" | bc)" $((rss / 1024))
+    done
+  done
+done
+echo "# end $(date -u +%FT%TZ) load: $(cut -d' ' -f1-3 /proc/loadavg)"

@@ -1,0 +1,82 @@
+package org.qchain.exact;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.math.BigInteger;
+import java.util.Random;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.IntRange;
+import org.junit.jupiter.api.Test;
+
+/** Multi-modular powers equal the BigInteger engine's (the reference: plain repeated squaring on BigInteger). */
+class ModularPowerTest {
+
+    private static void assertSame(IntMatrix expected, IntMatrix actual) {
+        for (int i = 0; i < expected.n; i++) {
+            assertArrayEquals(expected.e[i], actual.e[i], "row " + i);
+        }
+    }
+
+    // reference: MatrixPowers' BigInteger engine with the limb path (itself checked against Hipparchus)
+    @Property(tries = 40, seed = "5150")
+    void stochasticChainsAgree(@ForAll @IntRange(min = 0, max = 1_000_000) int seed,
+                               @ForAll @IntRange(min = 2, max = 90) int n) {
+        Random rnd = new Random(seed);
+        RationalMatrix p = RandomChains.stochastic(rnd, 1 + rnd.nextInt(9), 300, rnd.nextDouble() * 0.8);
+        IntMatrix a = CommonDenominatorForm.of(p).a;
+        assertSame(MatrixPowers.integerPower(a, n, Progress.NONE), ModularPower.power(a, n, Thread.currentThread()));
+    }
+
+    // reference: as above, on matrices with negative entries (the symmetric residue)
+    @Property(tries = 40, seed = "8086")
+    void signedMatricesAgree(@ForAll @IntRange(min = 0, max = 1_000_000) int seed,
+                             @ForAll @IntRange(min = 1, max = 40) int n) {
+        Random rnd = new Random(seed);
+        RationalMatrix p = RandomChains.signed(rnd, 1 + rnd.nextInt(7), 1000, 30);
+        IntMatrix a = CommonDenominatorForm.of(p).a;
+        assertSame(MatrixPowers.integerPower(a, n, Progress.NONE), ModularPower.power(a, n, Thread.currentThread()));
+    }
+
+    // reference: the BigInteger engine with the modular route switched off; chains large enough to take the route
+    @Property(tries = 6, seed = "1999")
+    void theRoutedEngineEqualsTheDirectOne(@ForAll @IntRange(min = 0, max = 1_000_000) int seed) {
+        Random rnd = new Random(seed);
+        int size = ModularPower.MIN_STATES + rnd.nextInt(6);
+        RationalMatrix p = RandomChains.stochastic(rnd, size, 240, 0.1);
+        int n = 400 + rnd.nextInt(100);
+        assertTrue(ModularPower.applies(CommonDenominatorForm.of(p).a, n), "the case takes the modular route");
+        RationalMatrix routed = MatrixPowers.power(p, n);
+        Rational[] row = MatrixPowers.rowOfPower(p, 1, n);
+        ModularPower.enabled = false;
+        try {
+            assertEquals(MatrixPowers.power(p, n), routed);
+            assertArrayEquals(MatrixPowers.rowOfPower(p, 1, n), row);
+        } finally {
+            ModularPower.enabled = true;
+        }
+    }
+
+    // reference: BigInteger.isProbablePrime (Java SE) on the sieve's output
+    @Test
+    void thePrimesArePrimeDistinctAndBelowTheLimit() {
+        int[] ps = ModularPower.primes(3000);
+        assertEquals(3000, ps.length);
+        for (int i = 0; i < ps.length; i++) {
+            assertTrue(BigInteger.valueOf(ps[i]).isProbablePrime(50), ps[i] + " is prime");
+            assertTrue(ps[i] < (1 << ModularPower.PRIME_BITS));
+            assertTrue(i == 0 || ps[i] < ps[i - 1]);
+        }
+    }
+
+    // derived by hand: a zero matrix stays zero, a single entry is its power
+    @Test
+    void smallCases() {
+        IntMatrix z = IntMatrix.of(new BigInteger[][] {{BigInteger.ZERO}});
+        assertSame(z, ModularPower.power(z, 5, Thread.currentThread()));
+        IntMatrix m = IntMatrix.of(new BigInteger[][] {{BigInteger.valueOf(-3)}});
+        assertEquals(BigInteger.valueOf(-3).pow(41), ModularPower.power(m, 41, Thread.currentThread()).e[0][0]);
+    }
+}
