@@ -357,7 +357,9 @@ final class SymbolicEngine {
         List<RootPolynomial> named = List.of();
         if (pt.isPresent()) {
             try {
-                cf.evaluate(0, pt.get().values()); // checks every condition at the point
+                if (!cf.parameters().isEmpty()) {
+                    cf.evaluate(0, pt.get().values()); // checks every condition at the point (none without parameters)
+                }
                 rateValue = Optional.of(cf.rate(pt.get().values(), q.digits()));
                 named = cf.rootPolynomials(pt.get().values(), q.digits());
             } catch (QchainException e) {

@@ -111,9 +111,15 @@ final class RationalRoute {
         this.qx = new GenPolynomialRing<>(BigRational.ZERO, new String[] {"x"});
     }
 
-    /** Whether the matrix has no free parameter, so that this route applies. */
+    /**
+     * The system property that, set to {@code true}, sends parameter-free chains down the general ({@code Quotient})
+     * route too: the baseline of the benchmarks and of the cross-check tests.
+     */
+    static final String GENERAL_ROUTE_PROPERTY = "qchain.closed.generalRoute";
+
+    /** Whether the matrix has no free parameter, so that this route applies (unless the property says otherwise). */
     static boolean applies(ParamField field) {
-        return field.names.isEmpty();
+        return field.names.isEmpty() && !Boolean.getBoolean(GENERAL_ROUTE_PROPERTY);
     }
 
     /** The integer forms of the powers, characteristic polynomial and adjugate of a parameter-free matrix. */
@@ -146,6 +152,24 @@ final class RationalRoute {
             out.add(scaled(adjugate.get(k), dPowers.get(k)));
         }
         return List.copyOf(out);
+    }
+
+    /**
+     * The factorisation of chi (constant coefficients) over Q, by JAS's univariate factoriser over {@code BigRational}
+     * rather than over the quotient field: the same monic irreducible factors, in the same (sorted) order.
+     */
+    java.util.SortedMap<GenPolynomial<Quotient<BigRational>>, Long> factors(GenPolynomial<Quotient<BigRational>> chi) {
+        java.util.SortedMap<GenPolynomial<BigRational>, Long> fq =
+            edu.jas.ufd.FactorFactory.getImplementation(BigRational.ZERO).factors(overQ(chi));
+        java.util.SortedMap<GenPolynomial<Quotient<BigRational>>, Long> out = new java.util.TreeMap<>();
+        for (Map.Entry<GenPolynomial<BigRational>, Long> t : fq.entrySet()) {
+            GenPolynomial<Quotient<BigRational>> g = field.univariate.getZERO();
+            for (Map.Entry<ExpVector, BigRational> c : t.getKey().monic().getMap().entrySet()) {
+                g = g.sum(constant(c.getValue().numerator(), c.getValue().denominator()), c.getKey());
+            }
+            out.merge(g, t.getValue(), Long::sum);
+        }
+        return out;
     }
 
     /** The parts of a simple factor: {@code C_0 .. C_(e-1)} and the projector. */
@@ -204,7 +228,7 @@ final class RationalRoute {
             m[k] = scaled[k].numerator().multiply(l.divide(scaled[k].denominator()));
         }
         BigInteger[][] sum = new BigInteger[s][s];
-        for (int i = 0; i < s; i++) {
+        java.util.stream.IntStream.range(0, s).parallel().forEach(i -> {
             for (int j = 0; j < s; j++) {
                 BigInteger v = BigInteger.ZERO;
                 for (int k = 0; k < s; k++) {
@@ -215,8 +239,22 @@ final class RationalRoute {
                 }
                 sum[i][j] = v;
             }
+        });
+        // the common factor of every entry and the denominator first: the entries' own gcds then run on smaller numbers
+        BigInteger g = l;
+        for (int i = 0; i < s && !g.equals(BigInteger.ONE); i++) {
+            for (int j = 0; j < s && !g.equals(BigInteger.ONE); j++) {
+                g = g.gcd(sum[i][j]);
+            }
         }
-        return scaled(sum, l);
+        if (!g.equals(BigInteger.ONE)) {
+            for (int i = 0; i < s; i++) {
+                for (int j = 0; j < s; j++) {
+                    sum[i][j] = sum[i][j].divide(g);
+                }
+            }
+        }
+        return scaled(sum, l.divide(g));
     }
 
     /**
@@ -305,11 +343,11 @@ final class RationalRoute {
     private Quotient<BigRational>[][] scaled(BigInteger[][] m, BigInteger den) {
         int s = m.length;
         Quotient<BigRational>[][] r = Mat.create(s);
-        for (int i = 0; i < s; i++) {
+        java.util.stream.IntStream.range(0, s).parallel().forEach(i -> {
             for (int j = 0; j < s; j++) {
                 r[i][j] = constant(m[i][j], den);
             }
-        }
+        });
         return r;
     }
 

@@ -83,7 +83,8 @@ final class Series {
         this.adjugate = numeric != null ? numeric.adjugate() : List.copyOf(adj);
         Steps.report(progress, "factoring", 0, 1);
         FactorAbstract<Quotient<BigRational>> factorizer = FactorFactory.getImplementation(f.field);
-        SortedMap<GenPolynomial<Quotient<BigRational>>, Long> fm = factorizer.factors(chi);
+        SortedMap<GenPolynomial<Quotient<BigRational>>, Long> fm = numeric != null ? numeric.factors(chi)
+            : factorizer.factors(chi);
         List<GenPolynomial<Quotient<BigRational>>> fs = new ArrayList<>();
         List<Integer> ms = new ArrayList<>();
         GenPolynomial<Quotient<BigRational>> product = f.univariate.getONE();
