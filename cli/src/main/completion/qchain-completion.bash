@@ -349,7 +349,7 @@ function _picocli_qchain_closed() {
 
   local commands=""
   local flag_opts="'-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--from' '--to' '--start' '--form' '--format' '--digits' '-o' '--output' '--max-terms'"
+  local arg_opts="'--at' '--from' '--to' '--start' '--form' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
   local FORM_option_args=("MATRIX" "GF" "RECURRENCE") # --form values
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
@@ -388,6 +388,9 @@ function _picocli_qchain_closed() {
       return $?
       ;;
     '--max-terms')
+      return
+      ;;
+    '--max-digits')
       return
       ;;
   esac

@@ -288,7 +288,7 @@ final class SymbolicEngine {
         Checked ctx = checked(model);
         Optional<Integer> row = q.from().map(s -> model.state(q.fromName(), s));
         Optional<Integer> col = q.to().map(s -> model.state("--to", s));
-        SymbolicLimits limits = new SymbolicLimits(q.maxTerms());
+        SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
         return q.form() == ClosedResult.Form.MATRIX
             ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), row, col, ctx)
             : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), row, col);

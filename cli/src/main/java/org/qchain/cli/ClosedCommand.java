@@ -79,6 +79,12 @@ final class ClosedCommand implements Callable<Integer> {
             + " to need more than T polynomial terms (default: ${DEFAULT-VALUE}).")
     long maxTerms = SymbolicOptions.DEFAULT_MAX_TERMS;
 
+    @Option(names = "--max-digits", paramLabel = "M", converter = Converters.DigitLimit.class,
+        defaultValue = "" + ClosedQuery.DEFAULT_MAX_DIGITS,
+        description = "Refuse closed forms of chains without free parameters estimated to print more than M digits"
+            + " in their coefficients (default: ${DEFAULT-VALUE}).")
+    long maxDigits = ClosedQuery.DEFAULT_MAX_DIGITS;
+
     @Override
     public Integer call() {
         if (to != null && from == null) {
@@ -94,7 +100,7 @@ final class ClosedCommand implements Callable<Integer> {
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         ClosedQuery q = new ClosedQuery(form, Optional.ofNullable(start != null ? start : from),
-            start != null ? "--start" : "--from", Optional.ofNullable(to), maxTerms, output.digits);
+            start != null ? "--start" : "--from", Optional.ofNullable(to), maxTerms, output.digits, maxDigits);
         ClosedResult result = root.run(spec, progress -> Analysis.closed(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

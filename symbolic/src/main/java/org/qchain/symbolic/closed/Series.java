@@ -15,6 +15,7 @@ import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.symbolic.ParamRing;
 import org.qchain.symbolic.RatFunMatrix;
+import org.qchain.symbolic.SymbolicLimits;
 
 /**
  * What every chain has, before any eigenvalue is named: the powers P^0 .. P^s, the characteristic polynomial
@@ -39,7 +40,8 @@ final class Series {
     /** The integer forms for a matrix with no free parameter (else null: the general route). */
     final RationalRoute numeric;
 
-    private Series(ParamField field, ParamRing ring, Quotient<BigRational>[][] matrix, Progress progress) {
+    private Series(ParamField field, ParamRing ring, Quotient<BigRational>[][] matrix, SymbolicLimits limits,
+                   Progress progress) {
         this.field = field;
         this.ring = ring;
         this.matrix = matrix;
@@ -47,7 +49,7 @@ final class Series {
         int s = matrix.length;
         this.size = s;
         // no free parameter: integer arithmetic over a common denominator (RationalRoute), same results
-        this.numeric = RationalRoute.applies(f) ? RationalRoute.of(f, matrix, progress) : null;
+        this.numeric = RationalRoute.applies(f) ? RationalRoute.of(f, matrix, limits, progress) : null;
         List<Quotient<BigRational>[][]> pw = new ArrayList<>();
         pw.add(Mat.identity(f, s));
         for (int k = 1; k <= s && numeric == null; k++) {
@@ -106,6 +108,11 @@ final class Series {
 
     /** From a matrix of the symbolic module, in the variables that occur in it. */
     static Series of(RatFunMatrix p, Progress progress) {
+        return of(p, SymbolicLimits.DEFAULT, progress);
+    }
+
+    /** As {@link #of(RatFunMatrix, Progress)}; the limit bounds the printed digits (parameter-free chains). */
+    static Series of(RatFunMatrix p, SymbolicLimits limits, Progress progress) {
         List<String> names = p.occurringVariables();
         ParamField f = new ParamField(names, "x");
         int s = p.size();
@@ -115,6 +122,6 @@ final class Series {
                 q[i][j] = Bridge.toField(f, p.get(i, j));
             }
         }
-        return new Series(f, p.ring(), q, progress);
+        return new Series(f, p.ring(), q, limits, progress);
     }
 }

@@ -165,6 +165,21 @@ class RationalRouteTest {
     }
 
     @Test
+    void aClosedFormPastTheDigitLimitIsRefusedWithTheEstimate() {
+        Model m = dense(new Random(3L), 8);
+        org.qchain.exact.QchainException e = org.junit.jupiter.api.Assertions.assertThrows(
+            org.qchain.exact.QchainException.class,
+            () -> ClosedForms.of(m, Map.of(), new org.qchain.symbolic.SymbolicLimits(1_000_000, 1000)));
+        assertEquals(org.qchain.exact.ErrorKey.RESULT_TOO_LARGE, e.key());
+        assertTrue(e.getMessage().contains("more than the limit 1000; raise it with --max-digits"), e::getMessage);
+        // the estimate bounds what is printed: the digits of every coefficient of the formulas
+        long printed = ClosedForms.of(m).matrix().stream().flatMap(List::stream)
+            .mapToLong(f -> f.chars().filter(Character::isDigit).count()).sum();
+        long estimate = Long.parseLong(e.getMessage().replaceAll(".*about (\\d+) digits.*", "$1"));
+        assertTrue(estimate >= printed / 2 && estimate <= 4 * printed, estimate + " estimated, " + printed + " printed");
+    }
+
+    @Test
     void aDenseEightStateChainAgrees() {
         // an irreducible factor of degree 7 (generic for a dense random chain): the case the route is for
         Model m = dense(new Random(3L), 8);
