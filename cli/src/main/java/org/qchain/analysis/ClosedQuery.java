@@ -16,9 +16,9 @@ import org.qchain.result.ClosedResult;
  * @param maxDigits refuse closed forms of parameter-free chains estimated to print more digits
  */
 public record ClosedQuery(ClosedResult.Form form, Optional<String> from, String fromName, Optional<String> to,
-                          long maxTerms, int digits, long maxDigits) {
-    /** The default of {@code maxDigits}: the closed-form package's own. */
-    public static final long DEFAULT_MAX_DIGITS = org.qchain.symbolic.closed.ClosedForms.DEFAULT_MAX_DIGITS;
+                          long maxTerms, int digits, long maxDigits) implements Query {
+    /** The default of {@code maxDigits}, as for every command's {@code --max-digits}. */
+    public static final long DEFAULT_MAX_DIGITS = org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS;
 
     /** With the default digit limit. */
     public ClosedQuery(ClosedResult.Form form, Optional<String> from, String fromName, Optional<String> to,

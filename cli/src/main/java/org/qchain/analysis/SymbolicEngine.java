@@ -349,7 +349,8 @@ final class SymbolicEngine {
         }
         List<ClosedResult.Eigen> eig = new ArrayList<>();
         for (Eigenvalue e : cf.eigenvalues()) {
-            eig.add(new ClosedResult.Eigen(e.factor(), e.multiplicity(), e.jordanIndex(), e.kind(), e.values()));
+            eig.add(new ClosedResult.Eigen(Formula.of(e.factor(), e.factorLatex()), e.multiplicity(), e.jordanIndex(),
+                e.kind(), e.values()));
         }
         List<String> warnings = new ArrayList<>();
         Optional<Point> pt = point(model, cf.parameters());
@@ -373,12 +374,12 @@ final class SymbolicEngine {
         if (named.isEmpty()) {
             for (Eigenvalue e : cf.eigenvalues()) {
                 if (e.kind().equals("roots")) {
-                    roots.add(new ClosedResult.Roots(e.name(), e.factor(), List.of()));
+                    roots.add(new ClosedResult.Roots(e.name(), Formula.of(e.factor(), e.factorLatex()), List.of()));
                 }
             }
         } else {
             for (RootPolynomial r : named) {
-                roots.add(new ClosedResult.Roots(r.name(), r.polynomial(), r.roots()));
+                roots.add(new ClosedResult.Roots(r.name(), Formula.of(r.polynomial(), r.latex()), r.roots()));
             }
         }
         LongRun lr = cf.longRun();
@@ -401,7 +402,8 @@ final class SymbolicEngine {
         return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, cf.conditions(),
             cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),
             names(m, ci), cells, List.of(), eig,
-            Optional.of(new ClosedResult.LongRun(lr.period(), limits, lr.rate(), rateValue)), roots,
+            Optional.of(new ClosedResult.LongRun(lr.period(), limits, Formula.of(lr.rate(), lr.rateLatex()),
+                rateValue)), roots,
             pt.filter(p -> !p.isEmpty()), q.digits(), warnings);
     }
 

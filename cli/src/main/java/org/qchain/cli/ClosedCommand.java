@@ -73,17 +73,12 @@ final class ClosedCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
-    @Option(names = "--max-terms", paramLabel = "T", converter = Converters.TermLimit.class,
-        defaultValue = "" + SymbolicOptions.DEFAULT_MAX_TERMS,
-        description = "Refuse chains whose powers up to P^s (s states, all the method multiplies out) are estimated"
-            + " to need more than T polynomial terms (default: ${DEFAULT-VALUE}).")
-    long maxTerms = SymbolicOptions.DEFAULT_MAX_TERMS;
+    @Mixin
+    LimitOptions.Terms terms;
 
-    @Option(names = "--max-digits", paramLabel = "M", converter = Converters.DigitLimit.class,
-        defaultValue = "" + ClosedQuery.DEFAULT_MAX_DIGITS,
-        description = "Refuse closed forms of chains without free parameters estimated to print more than M digits"
-            + " in their coefficients (default: ${DEFAULT-VALUE}).")
-    long maxDigits = ClosedQuery.DEFAULT_MAX_DIGITS;
+    /** Chains without free parameters: the printed digits of the closed form's coefficients, estimated first. */
+    @Mixin
+    LimitOptions.Digits digitLimit;
 
     @Override
     public Integer call() {
@@ -100,7 +95,8 @@ final class ClosedCommand implements Callable<Integer> {
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         ClosedQuery q = new ClosedQuery(form, Optional.ofNullable(start != null ? start : from),
-            start != null ? "--start" : "--from", Optional.ofNullable(to), maxTerms, output.digits, maxDigits);
+            start != null ? "--start" : "--from", Optional.ofNullable(to), terms.maxTerms, output.digits(),
+            digitLimit.maxDigits);
         ClosedResult result = root.run(spec, progress -> Analysis.closed(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

@@ -3,11 +3,14 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.exact.reference.EntryCheck;
+import org.qchain.exact.reference.VerifyReport;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * Human-readable layout: for numbers, an overview matrix of decimals, then every entry with its decimal beside the
@@ -272,7 +275,7 @@ final class TextFormatter extends Layout {
             List<String> facts = new ArrayList<>();
             List<String> vals = new ArrayList<>();
             for (ClosedResult.Eigen e : r.eigenvalues()) {
-                facts.add(e.factor() + ":");
+                facts.add(e.factor().plain() + ":");
                 String extra = e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() : "";
                 extra += e.jordanIndex() > 1 ? ", Jordan block of size " + e.jordanIndex() : "";
                 vals.add(String.join(", ", e.values()) + (extra.isEmpty() ? "" : extra + ")"));
@@ -280,7 +283,7 @@ final class TextFormatter extends Layout {
             aligned(sb, facts, " ", vals, "  ");
         }
         for (ClosedResult.Roots rt : r.roots()) {
-            sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial());
+            sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial().plain());
             if (!rt.roots().isEmpty()) {
                 sb.append("; roots ").append(String.join(", ", rt.roots()));
             }
@@ -309,7 +312,7 @@ final class TextFormatter extends Layout {
             }
             aligned(sb, labels, "  ", values, "  ");
         }
-        sb.append("Convergence rate (second-largest eigenvalue modulus): ").append(lr.rate()).append('\n');
+        sb.append("Convergence rate (second-largest eigenvalue modulus): ").append(lr.rate().plain()).append('\n');
         lr.rateValue().ifPresent(v -> sb.append("  = ").append(v)
             .append(r.point().map(p -> " at " + p.text()).orElse("")).append(" (").append(r.digits())
             .append(" significant digits)\n"));
@@ -366,5 +369,30 @@ final class TextFormatter extends Layout {
                     + " on the parameters (above)")
             .append('\n');
         return sb.toString();
+    }
+
+    // --- verify --------------------------------------------------------------------------------------------------
+
+    @Override
+    public String verify(VerifyResult r) {
+        VerifyReport rep = r.report();
+        StringBuilder sb = new StringBuilder();
+        sb.append(Checks.quantity(r)).append(" of ").append(r.source()).append(" checked against ").append(r.against())
+            .append(" (").append(rep.form().description()).append(")\n");
+        sb.append("Tolerance: ").append(Checks.tolerance(rep.tolerance())).append('\n');
+        sb.append("Result: ").append(rep.passed() ? "PASS, " : "FAIL, ").append(Checks.verdict(rep)).append("\n\n");
+        if (!rep.worst().isEmpty()) {
+            sb.append(rep.worst().size() == rep.checked() ? "Every value, worst first:\n"
+                : "The " + rep.worst().size() + " worst values:\n");
+            TextTable t = new TextTable().addRow("entry", "given", "exact (" + digits + " digits)", "error",
+                "relative error", "ulps", "at", "status");
+            for (EntryCheck c : rep.worst()) {
+                t.addRow(c.label(), c.given(), dec(c.truth()), Checks.error(c.error()), Checks.error(c.relativeError()),
+                    Checks.ulpsCell(c), Checks.place(c), Checks.status(c));
+            }
+            sb.append(t.render()).append('\n');
+        }
+        sb.append(Checks.summary(rep)).append(".\n");
+        return end(sb);
     }
 }

@@ -8,8 +8,9 @@ import java.util.Optional;
  * generating functions or recurrences, with the validity range, the parameter conditions, the eigenvalues and the
  * long run ({@code closed}).
  *
- * <p>The closed-form engine prints its formulas itself (plain and LaTeX); the eigenvalues, limits and the rate are
- * its plain formulas, and the rate's and roots' values are its certified-digit decimals at {@link #digits()}.
+ * <p>The closed-form engine prints its formulas itself (plain and LaTeX: the cells, the factors, the rate); the
+ * eigenvalues and limits are its plain formulas, and the rate's and roots' values are its decimals at
+ * {@link #digits()} (numeric roots of the characteristic polynomial, not exact values).
  *
  * @param source      the model file name as the user gave it
  * @param form        which form is printed
@@ -107,13 +108,13 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
     /**
      * A factor of {@code det(xI - P)} and its eigenvalues.
      *
-     * @param factor       the monic irreducible factor, plain syntax
+     * @param factor       the monic irreducible factor in x
      * @param multiplicity its multiplicity
      * @param jordanIndex  the size of the largest Jordan block of each eigenvalue of the factor (1: none)
      * @param kind         {@code rational}, {@code quadratic} or {@code roots}
      * @param values       the eigenvalues as formulas
      */
-    public record Eigen(String factor, int multiplicity, int jordanIndex, String kind, List<String> values) {
+    public record Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<String> values) {
         /** Copies the list. */
         public Eigen {
             values = List.copyOf(values);
@@ -128,7 +129,7 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param rate      the second-largest eigenvalue modulus as a formula
      * @param rateValue its value at the point, to {@code digits}, when the point is known
      */
-    public record LongRun(int period, List<List<List<String>>> limits, String rate, Optional<String> rateValue) {
+    public record LongRun(int period, List<List<List<String>>> limits, Formula rate, Optional<String> rateValue) {
         /** Copies the lists. */
         public LongRun {
             limits = limits.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
@@ -139,10 +140,10 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * A named factor of degree 3 or more.
      *
      * @param name       its name in formulas
-     * @param polynomial the factor, plain syntax
+     * @param polynomial the factor in x
      * @param roots      numeric roots at the point, empty if the point is not known
      */
-    public record Roots(String name, String polynomial, List<String> roots) {
+    public record Roots(String name, Formula polynomial, List<String> roots) {
         /** Copies the list. */
         public Roots {
             roots = List.copyOf(roots);

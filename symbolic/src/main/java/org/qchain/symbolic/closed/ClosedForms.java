@@ -36,13 +36,6 @@ public final class ClosedForms {
     }
 
     /**
-     * The command line's default limit on the digits a closed form of a parameter-free chain prints (its
-     * coefficients), estimated before the parts of a factor are multiplied out: a dense 20-state chain prints about
-     * 6.4 million digits in a few seconds, a dense 30-state one about 45 million in many times that.
-     */
-    public static final long DEFAULT_MAX_DIGITS = 10_000_000L;
-
-    /**
      * The closed form of P^n for a discrete-time model, with the given parameter values substituted and every
      * other parameter that the matrix uses kept symbolic; default size limit.
      *
