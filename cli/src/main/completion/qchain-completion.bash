@@ -212,13 +212,19 @@ function _picocli_qchain_step() {
 
   local commands=""
   local flag_opts="'--symbolic' '--factor' '--double' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-terms'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '-n'|'--steps')
@@ -282,13 +288,19 @@ function _picocli_qchain_sens() {
 
   local commands=""
   local flag_opts="'--factor' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '-n'|'--steps')
@@ -352,14 +364,20 @@ function _picocli_qchain_closed() {
 
   local commands=""
   local flag_opts="'-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--from' '--to' '--start' '--form' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--digits' '-o' '--output' '--max-terms' '--max-digits' '--format'"
   local FORM_option_args=("MATRIX" "GF" "RECURRENCE") # --form values
-  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+  local FORMAT_option_args=("text" "json" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--from')
@@ -376,11 +394,6 @@ function _picocli_qchain_closed() {
       COMPREPLY=( $( compReplyArray "${FORM_option_args[@]}" ) )
       return $?
       ;;
-    '--format')
-      local IFS=$'\n'
-      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
-      return $?
-      ;;
     '--digits')
       return
       ;;
@@ -395,6 +408,11 @@ function _picocli_qchain_closed() {
       ;;
     '--max-digits')
       return
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
       ;;
   esac
 
@@ -422,12 +440,18 @@ function _picocli_qchain_check() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--digits'"
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--digits')
@@ -459,7 +483,7 @@ function _picocli_qchain_verify() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--against' '-n' '--steps' '-t' '--time' '--what' '--from' '--to' '--tol' '--abs-tol' '--ulps' '--show' '--format' '--digits' '-o' '--output' '--max-digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--against' '-n' '--steps' '-t' '--time' '--what' '--from' '--to' '--tol' '--abs-tol' '--ulps' '--show' '--format' '--digits' '-o' '--output' '--max-digits'"
   local WHAT_option_args=("matrix" "row" "entry" "stationary" "absorption" "expected-steps" "availability" "mttf") # --what values
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
@@ -467,6 +491,12 @@ function _picocli_qchain_verify() {
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--against')

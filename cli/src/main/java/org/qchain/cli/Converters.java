@@ -97,6 +97,22 @@ final class Converters {
         }
     }
 
+    /** A limit on the digits of one input number: 1 to {@link Integer#MAX_VALUE}. */
+    static final class InputDigits implements ITypeConverter<Integer> {
+        @Override
+        public Integer convert(String value) {
+            return (int) whole(value, "digits", 1, Integer.MAX_VALUE, "must be at least 1");
+        }
+    }
+
+    /** A limit on the states of a dense matrix: 1 to 3037000499 (its square is the largest long). */
+    static final class DenseStates implements ITypeConverter<Long> {
+        @Override
+        public Long convert(String value) {
+            return whole(value, "states", 1, 3_037_000_499L, "must be at least 1");
+        }
+    }
+
     /** The word given to {@code --format}; a bad word is a usage error naming it. */
     static final class Format implements ITypeConverter<OutputFormat> {
         @Override

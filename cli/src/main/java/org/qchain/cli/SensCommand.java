@@ -19,9 +19,10 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "sens", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
-        "Sensitivity of the n-step probability P^n(FROM -> TO) to a parameter: P and its exact derivative dP/dp as",
-        "formulas in the parameters, their values and the elasticity (p/P) dP/dp at the nominal values (or --at),",
-        "and with --sweep a table of P and dP/dp over an exact range of the parameter, exact and decimal."})
+        "Sensitivity of the n-step probability P^n(FROM -> TO) to a parameter: its exact derivative and elasticity.",
+        "P and dP/dp are printed as formulas in the parameters, with their values and the elasticity (p/P) dP/dp at"
+            + " the nominal values (or --at).",
+        "With --sweep: a table of P and dP/dp over exact values of the parameter, exact and decimal."})
 final class SensCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -46,9 +47,10 @@ final class SensCommand implements Callable<Integer> {
         description = "The parameter p of the derivative dP/dp.")
     String wrt;
 
-    @Option(names = "--sweep", paramLabel = "NAME=START:STEP:END",
-        description = "A table of P and dP/dp for NAME = START, START+STEP, ... up to END (exact rationals, e.g."
-            + " p=0:1/100:1/10; at most 10001 points); the other parameters at their nominal or --at values.")
+    @Option(names = "--sweep", paramLabel = "\"NAME in [LOW, HIGH] by STEP\"",
+        description = "A table of P and dP/dp over exact values of NAME, in the model file's interval syntax:"
+            + " \"p in [0, 1/10] by 1/100\" or \"p in [0, 1/10] with 11 points\" (an open end such as (0 is left"
+            + " out; at most 10001 points); the other parameters at their nominal or --at values.")
     String sweep;
 
     @Mixin

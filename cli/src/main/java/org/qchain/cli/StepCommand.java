@@ -23,9 +23,9 @@ import picocli.CommandLine.Spec;
         "Exact n-step transition probabilities P^n of a discrete chain, as fractions with decimals beside them.",
         "Without --from: the whole matrix. With --from: that row (where the chain may be after n steps).",
         "With --from and --to: one probability; add --paths K for its K most probable paths.",
-        "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function",
-        "of the parameters (--factor: factored), with its value at the nominal or --at point when every parameter",
-        "has one."})
+        "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function"
+            + " of the parameters (--factor: factored), with its value at the nominal or --at point when every"
+            + " parameter has one."})
 final class StepCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;

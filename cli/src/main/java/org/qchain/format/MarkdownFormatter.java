@@ -121,7 +121,7 @@ final class MarkdownFormatter extends Layout {
         boolean values = r.values().isPresent();
         if (values) {
             sb.append("Values at ").append(r.point().orElseThrow().text())
-                .append(" (nominal values, overridden by --at); decimals: ").append(Text.digits(digits))
+                .append(" (").append(r.point().orElseThrow().origin()).append("); decimals: ").append(Text.digits(digits))
                 .append(".\n\n");
         }
         sb.append(values ? "| from | to | formula | exact | decimal |\n| --- | --- | --- | --- | --- |\n"

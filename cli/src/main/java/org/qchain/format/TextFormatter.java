@@ -184,7 +184,7 @@ final class TextFormatter extends Layout {
         sb.append(table.render());
         if (r.values().isPresent()) {
             sb.append("\nAt ").append(r.point().orElseThrow().text())
-                .append(" (nominal values, overridden by --at):\n");
+                .append(" (").append(r.point().orElseThrow().origin()).append("):\n");
             TextTable vt = new TextTable().addRow("from", "to", "decimal", "exact");
             Symbolic.forEachCell(r, (i, j) -> {
                 Rational e = r.values().get().get(i).get(j);
@@ -208,7 +208,7 @@ final class TextFormatter extends Layout {
             .addRow("dP/d" + s.wrt(), "= " + s.derivative().plain()).render());
         if (s.at().isPresent()) {
             SensResult.AtPoint a = s.at().get();
-            sb.append("\nAt ").append(a.point().text()).append(" (nominal values, overridden by --at):\n");
+            sb.append("\nAt ").append(a.point().text()).append(" (").append(a.point().origin()).append("):\n");
             TextTable t = new TextTable().addRow("", "decimal", "exact");
             t.addRow("P", dec(a.probability()), a.probability().toString());
             t.addRow("dP/d" + s.wrt(), dec(a.derivative()), a.derivative().toString());

@@ -133,8 +133,8 @@ public enum ErrorKey implements MessageKey {
     NESTING_TOO_DEEP("parentheses nested more than {0} deep"),
     /** {0}: line of the first transition. */
     PARAM_AFTER_TRANSITIONS("a ''param'' line after the transitions: declare parameters before the first transition (line {0}); move this line up"),
-    /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries. */
-    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries"),
+    /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries, {4}: the most states it allows. */
+    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries ({4} states)"),
 
     // --- verify (issue 11, appended) ----------------------------------------------------------------------------
     /** {0}: the quantity, {1}: the analysis it needs. */

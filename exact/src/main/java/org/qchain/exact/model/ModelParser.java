@@ -1,6 +1,7 @@
 package org.qchain.exact.model;
 
 import java.io.IOException;
+import java.math.BigInteger;
 import java.nio.ByteBuffer;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
@@ -191,6 +192,77 @@ public final class ModelParser {
         }
         return new ExprParser(Lexer.tokens(sourceName, 1, text, cols, 0, text.length(), limits.maxNumberDigits()), 0)
             .parseAll();
+    }
+
+    /** The form {@code NAME=START:STEP:END}, which reads as {@code NAME in [START, END] by STEP}. */
+    private static final java.util.regex.Pattern OLD_SWEEP =
+        java.util.regex.Pattern.compile("\\s*(\\w+)\\s*=([^:]+):([^:]+):([^:]+)");
+
+    /**
+     * Reads a sweep in the model file's interval syntax: {@code NAME in INTERVAL by STEP} or
+     * {@code NAME in INTERVAL with COUNT points}, e.g. {@code p in [0, 1/10] by 1/100}; the ends and the step are
+     * constants as in a {@code param} line. The name is not checked against a model.
+     *
+     * @param sourceName the name used in messages (the text is line 1)
+     * @param text       the sweep
+     * @return the points, counted but not listed (the caller checks the count against its limit first)
+     * @throws QchainException SYNTAX, BAD_DOMAIN or MALFORMED_NUMBER at the column at fault; SWEEP for a step that
+     *                         is not positive, an infinite upper end, or no point in the interval
+     */
+    public static SweepSpec parseSweep(String sourceName, String text) {
+        java.util.regex.Matcher old = OLD_SWEEP.matcher(text);
+        if (old.matches()) {
+            throw new QchainException(ErrorKey.SWEEP, text.strip(), "write it as '"
+                + old.group(1) + " in [" + old.group(2).strip() + ", " + old.group(4).strip() + "] by "
+                + old.group(3).strip() + "'");
+        }
+        Columns cols = Columns.of(text);
+        List<Token> toks = Lexer.tokens(sourceName, 1, text, cols, 0, text.length(),
+            InputLimits.DEFAULT_MAX_NUMBER_DIGITS);
+        ExprParser p = new ExprParser(toks, 0);
+        String example = " (a sweep is NAME in [LOW, HIGH] by STEP, or NAME in [LOW, HIGH] with COUNT points)";
+        Token name = p.next();
+        if (name.kind() != Kind.NAME || RESERVED.contains(name.text())) {
+            throw new QchainException(name.pos(), ErrorKey.SYNTAX, "expected a parameter name, found "
+                + name.describe() + example);
+        }
+        Token in = p.next();
+        if (in.kind() != Kind.NAME || !in.text().equals("in")) {
+            throw new QchainException(in.pos(), ErrorKey.SYNTAX, "expected 'in' after the parameter name, found "
+                + in.describe() + example);
+        }
+        Domain d = LineParser.domain(p, text);
+        if (d.upper().isEmpty()) {
+            throw new QchainException(in.pos(), ErrorKey.SWEEP, text.strip(), "a sweep needs a finite upper end");
+        }
+        Token form = p.next();
+        String word = form.kind() == Kind.NAME ? form.text() : "";
+        if (word.equals("by")) {
+            if (p.peek().kind() == Kind.END) {
+                throw new QchainException(p.peek().pos(), ErrorKey.SYNTAX, "missing the step after 'by'");
+            }
+            Rational step = ExprParser.constant(p.parseExpr(), "a step");
+            p.expectEnd("the step");
+            return SweepSpec.byStep(text.strip(), name.text(), d, step);
+        }
+        if (word.equals("with")) {
+            Token k = p.next();
+            if (!k.isIntegerLiteral()) {
+                throw new QchainException(k.pos(), ErrorKey.SYNTAX, "expected a whole number of points after 'with',"
+                    + " found " + k.describe());
+            }
+            Token points = p.next();
+            if (points.kind() != Kind.NAME || !(points.text().equals("points") || points.text().equals("point"))) {
+                throw new QchainException(points.pos(), ErrorKey.SYNTAX, "expected 'points' after the count, found "
+                    + points.describe());
+            }
+            p.expectEnd("'points'");
+            BigInteger count = k.value().numerator();
+            return SweepSpec.withPoints(text.strip(), name.text(), d,
+                count.bitLength() > 62 ? Long.MAX_VALUE : count.longValueExact());
+        }
+        throw new QchainException(form.pos(), ErrorKey.SYNTAX, "expected 'by STEP' or 'with COUNT points' after the"
+            + " interval, found " + form.describe());
     }
 
     /** The parameter-name nodes of a tree, left to right. */
@@ -436,7 +508,7 @@ public final class ModelParser {
             params.put(name, new ParamDecl(name, domain, nominal, namePos));
         }
 
-        private Domain domain(ExprParser p, String line) {
+        static Domain domain(ExprParser p, String line) {
             Token open = p.next();
             if (!open.is("(") && !open.is("[")) {
                 throw new QchainException(open.pos(), ErrorKey.SYNTAX,
@@ -504,7 +576,7 @@ public final class ModelParser {
             p.next();
         }
 
-        private QchainException badDomain(Token open, String line, SourcePos at, String why) {
+        private static QchainException badDomain(Token open, String line, SourcePos at, String why) {
             int close = line.indexOf(')', open.index());
             int close2 = line.indexOf(']', open.index());
             int end = close < 0 ? close2 : (close2 < 0 ? close : Math.min(close, close2));
