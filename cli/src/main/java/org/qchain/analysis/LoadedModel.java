@@ -278,6 +278,21 @@ public final class LoadedModel {
     }
 
     /**
+     * The exact generator (rate matrix) of a continuous chain at the point.
+     *
+     * @param what the command or figure, for the message when the model is not continuous
+     * @return the generator, validated (no negative rate, no division by zero)
+     * @throws QchainException {@link ErrorKey#WRONG_KIND} for a discrete model; {@link ErrorKey#FREE_PARAMETERS} if a
+     *                         used parameter has no value; the located errors of {@link Chains#transitionMatrix}
+     */
+    public RationalMatrix generator(String what) {
+        if (model.kind() != ChainKind.CONTINUOUS) {
+            throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(), what + " needs a continuous chain");
+        }
+        return Chains.transitionMatrix(model, given);
+    }
+
+    /**
      * Refuses a model that is not a discrete chain.
      *
      * @param why the reason, as the message's second part

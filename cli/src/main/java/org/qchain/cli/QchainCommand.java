@@ -31,7 +31,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "qchain", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     description = "Exact n-step transition probabilities of Markov chains: exact fractions, with correctly rounded"
         + " decimals beside them.",
-    subcommands = {StepCommand.class, SensCommand.class, ClosedCommand.class, CheckCommand.class, VerifyCommand.class, DemoCommand.class, CompletionCommand.class,
+    subcommands = {StepCommand.class, SensCommand.class, ClosedCommand.class, CheckCommand.class, VerifyCommand.class,
+        AvailCommand.class, ConvertCommand.class, DemoCommand.class, CompletionCommand.class,
         HelpCommand.class})
 public final class QchainCommand implements Callable<Integer> {
     /** Milliseconds the Ctrl-C hook waits for the work to stop and clean up before the JVM halts. */

@@ -10,6 +10,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
@@ -33,14 +34,20 @@ final class SensCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Option(names = {"-n", "--steps"}, required = true, paramLabel = "N", converter = Converters.Steps.class,
-        description = "Number of steps (0 or more).")
-    long n;
+    @Option(names = "--of", paramLabel = "FIGURE", defaultValue = "entry",
+        description = "What is differentiated: entry (P^n(FROM -> TO), the default), or for a continuous chain with"
+            + " an 'up' line availability, unavailability, mttf (from --from, default the first up state) or"
+            + " failure-frequency, exactly at the nominal or --at point.")
+    String of = "entry";
 
-    @Option(names = "--from", required = true, paramLabel = "STATE", description = "Starting state.")
+    @Option(names = {"-n", "--steps"}, paramLabel = "N", converter = Converters.Steps.class,
+        description = "Number of steps (0 or more); for --of entry.")
+    Long n;
+
+    @Option(names = "--from", paramLabel = "STATE", description = "Starting state.")
     String from;
 
-    @Option(names = "--to", required = true, paramLabel = "STATE", description = "State after n steps.")
+    @Option(names = "--to", paramLabel = "STATE", description = "State after n steps; for --of entry.")
     String to;
 
     @Option(names = "--wrt", required = true, paramLabel = "PARAM",
@@ -64,11 +71,34 @@ final class SensCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (!of.equals("entry")) {
+            return figure();
+        }
+        if (n == null || from == null || to == null) {
+            throw new ParameterException(spec.commandLine(), "--of entry needs -n N, --from STATE and --to STATE");
+        }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         SensQuery q = new SensQuery(n, from, to, wrt, Optional.ofNullable(sweep), symbolicOptions.factor,
             symbolicOptions.maxTerms(), digitLimit.maxDigits);
         SensResult result = root.run(spec, progress -> Analysis.sens(loaded, q, progress));
+        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
+        return ExitCodes.OK;
+    }
+
+    /** {@code --of FIGURE}: the exact derivative of a figure of merit of a continuous chain. */
+    private Integer figure() {
+        org.qchain.exact.ctmc.RateSensitivity.Figure f = org.qchain.analysis.Figures.of(of).orElseThrow(() ->
+            new ParameterException(spec.commandLine(), "--of '" + of + "': expected entry, availability,"
+                + " unavailability, mttf or failure-frequency"));
+        if (n != null || to != null || sweep != null || symbolicOptions.factor) {
+            throw new ParameterException(spec.commandLine(), "--of " + of + " takes --wrt, --from, --at, --digits,"
+                + " --format and --output (-n, --to, --sweep and --factor are for --of entry)");
+        }
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
+        LoadedModel loaded = model.load();
+        org.qchain.analysis.RateSensQuery q = new org.qchain.analysis.RateSensQuery(f, wrt, Optional.ofNullable(from));
+        org.qchain.result.Result result = root.run(spec, progress -> Analysis.rateSens(loaded, q));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }

@@ -66,7 +66,8 @@ class UsageErrorsTest {
 
     @Test
     void missingStepsNamesTheOption() {
-        assertUsageError(Cli.run("step", MODEL), "qchain: Missing required option: '--steps=N'", "qchain step");
+        assertUsageError(Cli.run("step", MODEL),
+            "qchain: give the number of steps -n N (discrete chain) or the time -t T (continuous chain)", "qchain step");
     }
 
     @Test

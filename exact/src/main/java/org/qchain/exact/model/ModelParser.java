@@ -358,6 +358,8 @@ public final class ModelParser {
         private List<String> states;
         private final Map<String, Integer> stateIndex = new HashMap<>();
         private int statesLine;
+        private List<Integer> up;
+        private int upLine;
         private final List<Transition> transitions = new ArrayList<>();
         private final Map<Long, Transition> seen = new HashMap<>();
 
@@ -407,6 +409,14 @@ public final class ModelParser {
                         markDeclaration(ln);
                         statesLine(ln, line, w);
                         break;
+                    case "up":
+                        if (stateIndex.containsKey("up")) {
+                            otherLine(ln, line, w); // a state named "up": its transitions keep their meaning
+                            break;
+                        }
+                        markDeclaration(ln);
+                        upLine(ln, line, w);
+                        break;
                     default:
                         markDeclaration(ln);
                         otherLine(ln, line, w);
@@ -415,7 +425,41 @@ public final class ModelParser {
             if (states == null) {
                 throw new QchainException(new SourcePos(file, 1, 1), ErrorKey.MISSING_STATES, "the end of the file");
             }
-            return Model.of(file, kind(), List.copyOf(params.values()), states, transitions, limits);
+            Model m = Model.of(file, kind(), List.copyOf(params.values()), states, transitions, limits);
+            return up == null ? m : m.withUpStates(up);
+        }
+
+        /** {@code up STATE STATE ...}: the operating states, after {@code states} and before the transitions. */
+        private void upLine(int ln, String line, List<Word> w) {
+            SourcePos at = pos(ln, w.get(0).start());
+            if (states == null) {
+                throw new QchainException(at, ErrorKey.MISSING_STATES, "the 'up' line");
+            }
+            if (upLine != 0) {
+                throw new QchainException(at, ErrorKey.DUPLICATE_LINE, "up", upLine);
+            }
+            if (!transitions.isEmpty()) {
+                throw new QchainException(at, ErrorKey.SYNTAX,
+                    "the 'up' line must come before the transitions (line " + transitions.get(0).pos().line()
+                        + " is a transition)");
+            }
+            if (w.size() == 1) {
+                throw new QchainException(pos(ln, line.length()), ErrorKey.SYNTAX,
+                    "missing the operating states after 'up', e.g. 'up " + states.get(0) + "'");
+            }
+            List<Integer> idx = new ArrayList<>();
+            for (Word s : w.subList(1, w.size())) {
+                Integer i = stateIndex.get(s.text());
+                if (i == null) {
+                    throw new QchainException(pos(ln, s.start()), ErrorKey.UNKNOWN_STATE, s.text());
+                }
+                if (idx.contains(i)) {
+                    throw new QchainException(pos(ln, s.start()), ErrorKey.UP_STATE_TWICE, s.text());
+                }
+                idx.add(i);
+            }
+            up = idx;
+            upLine = ln;
         }
 
         private void markDeclaration(int ln) {
