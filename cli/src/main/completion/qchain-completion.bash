@@ -388,7 +388,7 @@ function _picocli_qchain_closed() {
 
   local commands=""
   local flag_opts="'-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--digits' '-o' '--output' '--max-terms' '--format'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--digits' '-o' '--output' '--max-terms' '--max-digits' '--format'"
   local FORM_option_args=("MATRIX" "GF" "RECURRENCE") # --form values
   local FORMAT_option_args=("text" "json" "markdown" "latex") # --format values
 
@@ -428,6 +428,9 @@ function _picocli_qchain_closed() {
       return $?
       ;;
     '--max-terms')
+      return
+      ;;
+    '--max-digits')
       return
       ;;
     '--format')

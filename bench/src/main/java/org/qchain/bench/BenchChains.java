@@ -35,6 +35,28 @@ public final class BenchChains {
         return RationalMatrix.of(e);
     }
 
+    /** The model text of a numeric chain (states S0, S1, ...; one line per non-zero off-diagonal entry). */
+    public static String modelText(RationalMatrix p) {
+        StringBuilder b = new StringBuilder("chain discrete\nstates");
+        for (int i = 0; i < p.rows(); i++) {
+            b.append(" S").append(i);
+        }
+        b.append('\n');
+        for (int i = 0; i < p.rows(); i++) {
+            for (int j = 0; j < p.rows(); j++) {
+                if (i != j && p.get(i, j).signum() != 0) {
+                    b.append('S').append(i).append(" S").append(j).append(' ').append(p.get(i, j)).append('\n');
+                }
+            }
+        }
+        return b.toString();
+    }
+
+    /** The dense numeric chains of the closed-form benchmarks: 12 and 20 states, row denominators 60, 120 or 240. */
+    public static final int[] CLOSED_DENOMINATORS = {60, 120, 240};
+    public static final long CLOSED_12_SEED = 12L;
+    public static final long CLOSED_20_SEED = 20L;
+
     /** Row denominators drawn uniformly from {@code [lo, hi]}. */
     public static int[] range(int lo, int hi) {
         int[] r = new int[hi - lo + 1];

@@ -13,9 +13,19 @@ import org.qchain.result.ClosedResult;
  * @param to        the final state, for an entry
  * @param maxTerms  refuse chains whose powers are estimated to need more polynomial terms
  * @param digits    significant digits of numeric values (rate, roots)
+ * @param maxDigits refuse closed forms of parameter-free chains estimated to print more digits
  */
 public record ClosedQuery(ClosedResult.Form form, Optional<String> from, String fromName, Optional<String> to,
-                          long maxTerms, int digits) implements Query {
+                          long maxTerms, int digits, long maxDigits) implements Query {
+    /** The default of {@code maxDigits}, as for every command's {@code --max-digits}. */
+    public static final long DEFAULT_MAX_DIGITS = org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS;
+
+    /** With the default digit limit. */
+    public ClosedQuery(ClosedResult.Form form, Optional<String> from, String fromName, Optional<String> to,
+                       long maxTerms, int digits) {
+        this(form, from, fromName, to, maxTerms, digits, DEFAULT_MAX_DIGITS);
+    }
+
     /**
      * Checks the shape.
      *

@@ -289,7 +289,7 @@ final class SymbolicEngine {
         Checked ctx = checked(model);
         Optional<Integer> row = q.from().map(s -> model.state(q.fromName(), s));
         Optional<Integer> col = q.to().map(s -> model.state("--to", s));
-        SymbolicLimits limits = new SymbolicLimits(q.maxTerms());
+        SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
         return q.form() == ClosedResult.Form.MATRIX
             ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), row, col, ctx)
             : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), row, col);
@@ -359,7 +359,9 @@ final class SymbolicEngine {
         List<RootPolynomial> named = List.of();
         if (pt.isPresent()) {
             try {
-                cf.evaluate(0, pt.get().values()); // checks every condition at the point
+                if (!cf.parameters().isEmpty()) {
+                    cf.evaluate(0, pt.get().values()); // checks every condition at the point (none without parameters)
+                }
                 rateValue = Optional.of(cf.rate(pt.get().values(), q.digits()));
                 named = cf.rootPolynomials(pt.get().values(), q.digits());
             } catch (QchainException e) {

@@ -76,6 +76,10 @@ final class ClosedCommand implements Callable<Integer> {
     @Mixin
     LimitOptions.Terms terms;
 
+    /** Chains without free parameters: the printed digits of the closed form's coefficients, estimated first. */
+    @Mixin
+    LimitOptions.Digits digitLimit;
+
     @Override
     public Integer call() {
         if (to != null && from == null) {
@@ -91,7 +95,8 @@ final class ClosedCommand implements Callable<Integer> {
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         ClosedQuery q = new ClosedQuery(form, Optional.ofNullable(start != null ? start : from),
-            start != null ? "--start" : "--from", Optional.ofNullable(to), terms.maxTerms, output.digits());
+            start != null ? "--start" : "--from", Optional.ofNullable(to), terms.maxTerms, output.digits(),
+            digitLimit.maxDigits);
         ClosedResult result = root.run(spec, progress -> Analysis.closed(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

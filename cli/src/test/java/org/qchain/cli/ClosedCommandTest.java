@@ -118,4 +118,13 @@ class ClosedCommandTest {
         assertUsage("the symbolic P^2 would have up to about 24 polynomial terms in total (entries of degree up to 2),"
             + " more than the limit 3; raise it with --max-terms", "closed", BEACON, "--max-terms", "3");
     }
+
+    @Test
+    void aParameterFreeClosedFormPastTheDigitLimitIsRefusedWithTheEstimate() {
+        // chi = (x - 1)(x^3 - x^2/12 + 7x/24 + 1/4): the parts of both factors, 4 x 4^2 entries, estimated at 1040
+        // digits before any of them is multiplied out
+        assertUsage("the result would have about 1040 digits in total, more than the limit 10; raise it with"
+            + " --max-digits", "closed", Cli.model("closed-cubic.chain"), "--max-digits", "10");
+        assertEquals(0, Cli.run("closed", Cli.model("closed-cubic.chain"), "--max-digits", "1040").code());
+    }
 }

@@ -101,7 +101,8 @@ public final class ClosedForms {
      *                                  limit
      */
     public static ClosedForm of(RatFunMatrix p, List<String> states, SymbolicLimits limits, Progress progress) {
-        return interruptible(() -> new ClosedForm(Series.of(guarded(p, states, limits), progress), states, progress));
+        return interruptible(() -> new ClosedForm(Series.of(guarded(p, states, limits), limits, progress), states,
+            progress));
     }
 
     /**

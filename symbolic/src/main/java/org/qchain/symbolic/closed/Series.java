@@ -15,6 +15,7 @@ import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.symbolic.ParamRing;
 import org.qchain.symbolic.RatFunMatrix;
+import org.qchain.symbolic.SymbolicLimits;
 
 /**
  * What every chain has, before any eigenvalue is named: the powers P^0 .. P^s, the characteristic polynomial
@@ -36,49 +37,56 @@ final class Series {
     /** Monic irreducible factors of chi and their multiplicities. */
     final List<GenPolynomial<Quotient<BigRational>>> factors;
     final List<Integer> multiplicities;
+    /** The integer forms for a matrix with no free parameter (else null: the general route). */
+    final RationalRoute numeric;
 
-    private Series(ParamField field, ParamRing ring, Quotient<BigRational>[][] matrix, Progress progress) {
+    private Series(ParamField field, ParamRing ring, Quotient<BigRational>[][] matrix, SymbolicLimits limits,
+                   Progress progress) {
         this.field = field;
         this.ring = ring;
         this.matrix = matrix;
         ParamField f = field;
         int s = matrix.length;
         this.size = s;
+        // no free parameter: integer arithmetic over a common denominator (RationalRoute), same results
+        this.numeric = RationalRoute.applies(f) ? RationalRoute.of(f, matrix, limits, progress) : null;
         List<Quotient<BigRational>[][]> pw = new ArrayList<>();
         pw.add(Mat.identity(f, s));
-        for (int k = 1; k <= s; k++) {
+        for (int k = 1; k <= s && numeric == null; k++) {
             Steps.report(progress, "powers", k - 1, s);
             pw.add(Mat.multiply(f, pw.get(k - 1), matrix));
         }
-        this.powers = List.copyOf(pw);
+        this.powers = numeric != null ? numeric.powers() : List.copyOf(pw);
         // Newton's identities: k c_k = -(c_{k-1} p_1 + ... + c_0 p_k), p_j = trace(P^j)
         List<Quotient<BigRational>> c = new ArrayList<>();
         c.add(f.one());
-        for (int k = 1; k <= s; k++) {
+        for (int k = 1; k <= s && numeric == null; k++) {
             Quotient<BigRational> acc = f.zero();
             for (int j = 1; j <= k; j++) {
                 acc = acc.sum(c.get(k - j).multiply(Mat.trace(pw.get(j))));
             }
             c.add(acc.negate().divide(f.of(k)));
         }
-        this.charCoeffs = List.copyOf(c);
+        this.charCoeffs = numeric != null ? numeric.charCoeffs() : List.copyOf(c);
+        c = charCoeffs;
         GenPolynomial<Quotient<BigRational>> x = f.univariate.getZERO();
         for (int k = 0; k <= s; k++) {
             x = x.sum(c.get(k), ExpVector.create(1, 0, s - k));
         }
         this.chi = x;
         List<Quotient<BigRational>[][]> adj = new ArrayList<>();
-        for (int k = 0; k < s; k++) {
+        for (int k = 0; k < s && numeric == null; k++) {
             Quotient<BigRational>[][] b = Mat.zero(f, s);
             for (int m = 0; m <= k; m++) {
                 b = Mat.addScaled(b, c.get(m), pw.get(k - m));
             }
             adj.add(b);
         }
-        this.adjugate = List.copyOf(adj);
+        this.adjugate = numeric != null ? numeric.adjugate() : List.copyOf(adj);
         Steps.report(progress, "factoring", 0, 1);
         FactorAbstract<Quotient<BigRational>> factorizer = FactorFactory.getImplementation(f.field);
-        SortedMap<GenPolynomial<Quotient<BigRational>>, Long> fm = factorizer.factors(chi);
+        SortedMap<GenPolynomial<Quotient<BigRational>>, Long> fm = numeric != null ? numeric.factors(chi)
+            : factorizer.factors(chi);
         List<GenPolynomial<Quotient<BigRational>>> fs = new ArrayList<>();
         List<Integer> ms = new ArrayList<>();
         GenPolynomial<Quotient<BigRational>> product = f.univariate.getONE();
@@ -100,6 +108,11 @@ final class Series {
 
     /** From a matrix of the symbolic module, in the variables that occur in it. */
     static Series of(RatFunMatrix p, Progress progress) {
+        return of(p, SymbolicLimits.DEFAULT, progress);
+    }
+
+    /** As {@link #of(RatFunMatrix, Progress)}; the limit bounds the printed digits (parameter-free chains). */
+    static Series of(RatFunMatrix p, SymbolicLimits limits, Progress progress) {
         List<String> names = p.occurringVariables();
         ParamField f = new ParamField(names, "x");
         int s = p.size();
@@ -109,6 +122,6 @@ final class Series {
                 q[i][j] = Bridge.toField(f, p.get(i, j));
             }
         }
-        return new Series(f, p.ring(), q, progress);
+        return new Series(f, p.ring(), q, limits, progress);
     }
 }

@@ -107,7 +107,7 @@ final class Spectral {
 
     static Spectral of(Series sr, Progress progress) {
         List<Group> groups = decompose(sr.field, sr.matrix, sr.powers, sr.chi, sr.adjugate, sr.factors, sr.multiplicities,
-            progress);
+            sr.numeric, progress);
         return new Spectral(sr, groups);
     }
 
@@ -136,7 +136,7 @@ final class Spectral {
                                          List<Quotient<BigRational>[][]> powers, GenPolynomial<Quotient<BigRational>> chi,
                                          List<Quotient<BigRational>[][]> adj,
                                          List<GenPolynomial<Quotient<BigRational>>> fs, List<Integer> ms,
-                                         Progress progress) {
+                                         RationalRoute numeric, Progress progress) {
         int s = p.length;
         List<Group> groups = new ArrayList<>();
         Quotient<BigRational>[][] total = Mat.zero(f, s);
@@ -146,7 +146,7 @@ final class Spectral {
             GenPolynomial<Quotient<BigRational>> g = fs.get(i);
             int m = ms.get(i);
             if (m == 1) {
-                Group gr = simple(f, g, chiDeriv, adj);
+                Group gr = simple(f, g, chiDeriv, adj, numeric);
                 total = Mat.addScaled(total, f.one(), gr.projector);
                 gr.unitOrder = unitOrder(f, g, s);
                 groups.add(gr);
@@ -294,10 +294,18 @@ final class Spectral {
      * with no projector and no matrix product.
      */
     private static Group simple(ParamField f, GenPolynomial<Quotient<BigRational>> g,
-                                GenPolynomial<Quotient<BigRational>> chiDeriv, List<Quotient<BigRational>[][]> adj) {
+                                GenPolynomial<Quotient<BigRational>> chiDeriv, List<Quotient<BigRational>[][]> adj,
+                                RationalRoute numeric) {
         int s = adj.size();
         int e = (int) g.degree(0);
         Quotient<BigRational>[] a = coefficients(f, g, e);
+        Kind kind = e == 1 ? Kind.LINEAR : (e == 2 ? Kind.QUADRATIC : Kind.ROOTS);
+        if (numeric != null) {
+            // no free parameter: the same parts in integer arithmetic
+            List<Quotient<BigRational>> ps = new Evaluator<>(f.field, q -> q).powerSums(new Group(g, 1, kind, null, a), e - 1);
+            RationalRoute.Parts parts = numeric.simple(g, chiDeriv, ps);
+            return simpleGroup(f, g, kind, a, parts.c(), parts.projector());
+        }
         GenPolynomial<Quotient<BigRational>> w = chiDeriv.remainder(g).modInverse(g);
         List<Quotient<BigRational>[][]> c = new ArrayList<>();
         for (int t = 0; t < e; t++) {
@@ -312,13 +320,18 @@ final class Spectral {
             xk = xk.multiply(f.univariate.univariate(0)).remainder(g);
         }
         // E_f = sum_t C_t p_t with p_t the power sums of the roots of f
-        Kind kind = e == 1 ? Kind.LINEAR : (e == 2 ? Kind.QUADRATIC : Kind.ROOTS);
         Group probe = new Group(g, 1, kind, null, a);
         List<Quotient<BigRational>> ps = new Evaluator<>(f.field, q -> q).powerSums(probe, e - 1);
         Quotient<BigRational>[][] proj = Mat.zero(f, s);
         for (int t = 0; t < e; t++) {
             proj = Mat.addScaled(proj, ps.get(t), c.get(t));
         }
+        return simpleGroup(f, g, kind, a, c, proj);
+    }
+
+    private static Group simpleGroup(ParamField f, GenPolynomial<Quotient<BigRational>> g, Kind kind,
+                                     Quotient<BigRational>[] a, List<Quotient<BigRational>[][]> c,
+                                     Quotient<BigRational>[][] proj) {
         Group gr = new Group(g, 1, kind, proj, a);
         if (kind == Kind.LINEAR) {
             gr.lambda = a[0].negate();

@@ -41,7 +41,14 @@
  *       period d and the limits of the d subsequences; the others give the convergence rate, the largest modulus
  *       among them, as a formula and numerically at a point.</li>
  * </ol>
- * Every result is checked in the tests against exact P^n (the symbolic module's powers with parameters free, the
+ * A chain with no free parameter takes {@link org.qchain.symbolic.closed.RationalRoute} for the steps that cost the
+ * most: powers, characteristic polynomial and adjugate of the integer matrix {@code A = dP} over the common
+ * denominator d, factorisation over Q, and the parts of each simple factor from integer combinations of the adjugate
+ * coefficients with {@code chi'^-1} modulo the factor (fraction-free elimination), reduced once per entry. It hands
+ * back the same values as constants of Q(parameters), so every later step and every printed form is shared with the
+ * general route; the tests check both routes against each other and against exact powers.
+ *
+ * <p>Every result is checked in the tests against exact P^n (the symbolic module's powers with parameters free, the
  * exact module's products with them substituted), and {@code evaluate} uses exact arithmetic throughout: square-root
  * pairs in {@code x + y sqrt(D)} form over Q(parameters) or Q, root sums by Newton's identities.
  *
