@@ -31,7 +31,7 @@ import org.qchain.symbolic.RatFunMatrix;
  * every entry of {@link #conditions()} holds; {@link #evaluate(long, Map)} checks both.
  */
 public final class ClosedForm {
-    /** The symbol of the step count in every formula. */
+    /** The usual symbol of the step count; {@link #symbols()} has the one a closed form uses. */
     public static final String N_SYMBOL = "n";
 
     private final ParamField field;
@@ -47,11 +47,22 @@ public final class ClosedForm {
     private final List<GenPolynomial<BigRational>> conditionPolys;
     private final List<String> conditions;
     private final List<Eigenvalue> eigenvalues;
+    private final Symbols symbols;
+    /** The step count as a formula. */
+    private final Fml n;
 
     ClosedForm(Series series, List<String> states, Progress progress) {
         this.field = series.field;
         this.ring = series.ring;
+        this.symbols = Symbols.avoiding(series.field.names);
+        this.n = Fml.name(symbols.step());
         this.spectral = Spectral.of(series, progress);
+        int named = 1;
+        for (Spectral.Group g : spectral.groups) {
+            if (g.kind == Spectral.Kind.ROOTS) {
+                g.name = symbols.factor(named++);
+            }
+        }
         this.seriesForm = new SeriesForm(series, states);
         this.states = List.copyOf(states);
         this.size = spectral.series.size;
@@ -91,8 +102,6 @@ public final class ClosedForm {
 
     // --- the formulas ------------------------------------------------------------------------------------------
 
-    private static final Fml N = Fml.name(N_SYMBOL);
-
     private Fml buildFormula(int i, int j) {
         List<Fml> terms = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
@@ -117,7 +126,7 @@ public final class ClosedForm {
                     // lambda^n and the coefficient N_k / lambda^k; a parametric one keeps lambda^(n-k), which
                     // needs no condition lambda != 0
                     boolean constant = ParamField.isConstant(g.lambda);
-                    Fml exponent = constant ? N : shifted(-k);
+                    Fml exponent = constant ? n : shifted(-k);
                     Quotient<BigRational> coef = constant && k > 0 ? c.divide(ParamField.power(g.lambda, k)) : c;
                     Fml power = g.lambda.isONE() ? Fml.ONE : Fml.pow(field.formula(g.lambda), exponent);
                     terms.add(Fml.prod(List.of(field.formula(coef), binom, power)));
@@ -157,13 +166,13 @@ public final class ClosedForm {
     }
 
     /** {@code binomial(n, k)}, written 1 for k = 0 and n for k = 1. */
-    private static Fml binomial(int k) {
-        return k == 0 ? Fml.ONE : (k == 1 ? N : Fml.call("binomial", N, Fml.integer(k)));
+    private Fml binomial(int k) {
+        return k == 0 ? Fml.ONE : (k == 1 ? n : Fml.call("binomial", n, Fml.integer(k)));
     }
 
     /** {@code n + d}. */
-    private static Fml shifted(int d) {
-        return d == 0 ? N : Fml.sum(N, Fml.integer(d));
+    private Fml shifted(int d) {
+        return d == 0 ? n : Fml.sum(n, Fml.integer(d));
     }
 
     // --- conditions --------------------------------------------------------------------------------------------
@@ -231,7 +240,8 @@ public final class ClosedForm {
         for (Spectral.Group g : spectral.groups) {
             // a linear factor reads x - (lambda), the way its eigenvalue is printed
             Fml f = g.kind == Spectral.Kind.LINEAR && !g.lambda.isZERO()
-                ? Fml.sum(Fml.name("x"), Fml.neg(field.formula(g.lambda))) : field.formula(g.factor, "x");
+                ? Fml.sum(Fml.name(symbols.variable()), Fml.neg(field.formula(g.lambda)))
+                : field.formula(g.factor, symbols.variable());
             List<String> values = new ArrayList<>();
             String kind;
             if (g.kind == Spectral.Kind.LINEAR) {
@@ -263,9 +273,14 @@ public final class ClosedForm {
 
     // --- public API --------------------------------------------------------------------------------------------
 
-    /** The symbol of the step count, {@code n}. */
+    /** The symbol of the step count: {@code n} unless a parameter has that name (see {@link #symbols()}). */
     public String nSymbol() {
-        return N_SYMBOL;
+        return symbols.step();
+    }
+
+    /** The names the formulas use for their own quantities, none of them a parameter's name. */
+    public Symbols symbols() {
+        return symbols;
     }
 
     /** The state names; their order fixes rows and columns. */
@@ -616,7 +631,7 @@ public final class ClosedForm {
         List<RootPolynomial> out = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g.kind == Spectral.Kind.ROOTS) {
-                Fml f = field.formula(g.factor, "x");
+                Fml f = field.formula(g.factor, symbols.variable());
                 List<String> roots = new ArrayList<>();
                 for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
                     roots.add(NumericRoots.format(z, digits));
