@@ -564,8 +564,12 @@ public final class ClosedForm {
     // --- long run ----------------------------------------------------------------------------------------------
 
     /**
-     * The long-run behaviour: period, limits of the subsequences, and the convergence rate. It assumes parameter
-     * values inside their domains, where the zero pattern of P (and so every period) is that of generic values.
+     * The long-run behaviour: period, limits of the subsequences, the convergence rate, and the conditions on the
+     * parameters under which this behaviour holds. The period and limits are those of generic parameter values: at
+     * a special point where an eigenvalue that is generically inside the unit circle becomes a root of unity (for
+     * example 1 - p - r = -1 at p = r = 1), the chain is periodic there, or its limit differs; {@link
+     * LongRun#conditions()} excludes these points and {@link #longRunNotProved(Map)} tells whether any lies inside
+     * the domains.
      */
     public LongRun longRun() {
         int d = 1;
@@ -595,7 +599,154 @@ public final class ClosedForm {
             limits.add(plainMatrix(m));
         }
         Fml rate = moduli.isEmpty() ? Fml.ZERO : (moduli.size() == 1 ? moduli.get(0) : new Fml.Call("max", List.copyOf(moduli)));
-        return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate));
+        List<String> conds = new ArrayList<>();
+        for (LongRunCondition c : longRunConditions()) {
+            conds.add(c.text);
+        }
+        return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate), conds, moduli.isEmpty(), validFrom);
+    }
+
+    /** A condition of the long run: {@code poly != 0} (poly empty: not decidable here, never proved). */
+    private record LongRunCondition(String text, java.util.Optional<GenPolynomial<BigRational>> poly) {
+    }
+
+    private List<LongRunCondition> longRunConditionCache;
+
+    /**
+     * No eigenvalue outside the roots of unity of the generic chain becomes a root of unity: for a rational
+     * eigenvalue l, l != 1 and l != -1 (a real number is no other root of unity); for a factor f of degree 2 or
+     * more, the resultant of f and the k-th cyclotomic polynomial is not 0 for k = 1 .. s (at a parameter point
+     * where P is stochastic, an eigenvalue of modulus 1 is a k-th root of unity with k at most s: Perron-Frobenius,
+     * see Seneta, Non-negative Matrices and Markov Chains, ch. 1; from memory).
+     */
+    private synchronized List<LongRunCondition> longRunConditions() {
+        if (longRunConditionCache != null) {
+            return longRunConditionCache;
+        }
+        List<LongRunCondition> out = new ArrayList<>();
+        // a factor the formulas' conditions already exclude is not stated twice
+        java.util.Set<String> seen = new java.util.HashSet<>();
+        for (GenPolynomial<BigRational> c : conditionPolys) {
+            seen.add(key(c));
+        }
+        for (Spectral.Group g : spectral.groups) {
+            if (g.unitOrder > 0 || g == zero || allConstant(g.coeffs)) {
+                continue;
+            }
+            if (g.kind == Spectral.Kind.LINEAR) {
+                for (int v : new int[] {1, -1}) {
+                    Quotient<BigRational> diff = g.lambda.subtract(field.of(v));
+                    if (ParamField.isConstant(diff)) {
+                        continue;
+                    }
+                    List<GenPolynomial<BigRational>> fs = field.irreducibleFactors(diff.num);
+                    if (fs.size() == 1) {
+                        if (seen.add(key(fs.get(0)))) {
+                            out.add(new LongRunCondition(Fml.plain(field.formula(g.lambda)) + " != " + v,
+                                java.util.Optional.of(fs.get(0))));
+                        }
+                    } else {
+                        addFactors(out, seen, fs);
+                    }
+                }
+                continue;
+            }
+            for (int k = 1; k <= size; k++) {
+                Quotient<BigRational> res = Cyclotomic.resultant(field, g.factor, k);
+                if (!ParamField.isConstant(res)) {
+                    addFactors(out, seen, field.irreducibleFactors(res.num));
+                }
+                // a nonzero constant: never a k-th root of unity (0 is impossible for a non-unit factor)
+            }
+        }
+        longRunConditionCache = List.copyOf(out);
+        return longRunConditionCache;
+    }
+
+    private void addFactors(List<LongRunCondition> out, java.util.Set<String> seen, List<GenPolynomial<BigRational>> fs) {
+        for (GenPolynomial<BigRational> p : fs) {
+            if (seen.add(key(p))) {
+                out.add(new LongRunCondition(key(p) + " != 0", java.util.Optional.of(p)));
+            }
+        }
+    }
+
+    private static boolean allConstant(Quotient<BigRational>[] a) {
+        for (Quotient<BigRational> q : a) {
+            if (!ParamField.isConstant(q)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * The conditions of {@link LongRun#conditions()} not shown to hold throughout the domains (as for
+     * {@link #conditionsNotProved(Map)}).
+     *
+     * @param domains the domain of each parameter
+     * @return the conditions not shown to hold, in order
+     */
+    public List<String> longRunNotProved(Map<String, Domain> domains) {
+        List<String> out = new ArrayList<>();
+        for (LongRunCondition c : longRunConditions()) {
+            if (c.poly.isEmpty() || !DomainCheck.holdsThroughout(field, c.poly.get(), domains)) {
+                out.add(c.text);
+            }
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The corners of the parameters' box (every parameter at a closed end of its domain) at which a condition of
+     * the formulas or of the long run fails: the special points to state beside the results.
+     *
+     * @param domains the domain of each parameter (a parameter without a closed bounded end gives no corners)
+     * @return each point as a map from parameter to value, in parameter order
+     */
+    public List<Map<String, Rational>> specialCorners(Map<String, Domain> domains) {
+        List<List<Rational>> ends = new ArrayList<>();
+        for (String p : field.names) {
+            Domain d = domains.get(p);
+            List<Rational> e = new ArrayList<>();
+            if (d != null && d.lowerClosed()) {
+                e.add(d.lower());
+            }
+            if (d != null && d.upper().isPresent() && d.upperClosed()) {
+                e.add(d.upper().get());
+            }
+            if (e.isEmpty()) {
+                return List.of();
+            }
+            ends.add(e);
+        }
+        List<GenPolynomial<BigRational>> polys = new ArrayList<>(conditionPolys);
+        for (LongRunCondition c : longRunConditions()) {
+            c.poly.ifPresent(polys::add);
+        }
+        List<Map<String, Rational>> out = new ArrayList<>();
+        int[] at = new int[ends.size()];
+        while (!ends.isEmpty()) {
+            Map<String, Rational> pt = new LinkedHashMap<>();
+            for (int i = 0; i < at.length; i++) {
+                pt.put(field.names.get(i), ends.get(i).get(at[i]));
+            }
+            for (GenPolynomial<BigRational> c : polys) {
+                if (field.evaluate(c, pt).isZERO()) {
+                    out.add(java.util.Collections.unmodifiableMap(pt));
+                    break;
+                }
+            }
+            int i = 0;
+            while (i < at.length && ++at[i] == ends.get(i).size()) {
+                at[i] = 0;
+                i++;
+            }
+            if (i == at.length) {
+                break;
+            }
+        }
+        return List.copyOf(out);
     }
 
     private Fml modulus(Spectral.Group g) {
