@@ -1,18 +1,12 @@
 package org.qchain.cli;
 
-import java.util.List;
 import java.util.Optional;
-import java.util.OptionalInt;
 import java.util.concurrent.Callable;
-import org.qchain.cli.format.OutputFormat;
-import org.qchain.cli.result.StepResult;
-import org.qchain.exact.ErrorKey;
-import org.qchain.exact.Progress;
-import org.qchain.exact.QchainException;
-import org.qchain.exact.Rational;
-import org.qchain.exact.RationalMatrix;
-import org.qchain.exact.model.Model;
-import org.qchain.exact.model.ModelParser;
+import org.qchain.analysis.Analysis;
+import org.qchain.analysis.CheckQuery;
+import org.qchain.analysis.LoadedModel;
+import org.qchain.format.OutputFormat;
+import org.qchain.result.CheckResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -44,39 +38,9 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Model parsed = ModelParser.parseFile(model.model);
-        if (SymbolicRoute.appliesToCheck(parsed, symbolic, model.at())) {
-            return SymbolicRoute.check(this, parsed);
-        }
-        LoadedChain chain = LoadedChain.load(parsed, model, spec.name());
-        RationalMatrix p = chain.p();
-        verifyStochastic(chain, p);
-        // one step needs no size guard: the result is the model itself
-        StepResult.Matrix m = (StepResult.Matrix) Stepper.compute(chain,
-            new Stepper.Query(1, Optional.empty(), Optional.empty(), OptionalInt.empty(), digits, Long.MAX_VALUE),
-            Progress.NONE);
-        int size = chain.states().size();
-        String ok = "OK: " + size + (size == 1 ? " state" : " states") + ", " + chain.model().kind().word()
-            + ", rows sum to 1\n";
-        Emitter.emit(spec, OutputFormat.TEXT.formatter().format(m) + ok, List.of(), Optional.empty());
+        LoadedModel loaded = model.load();
+        CheckResult result = Analysis.check(loaded, new CheckQuery(symbolic));
+        Emitter.emit(spec, OutputFormat.TEXT.formatter(digits).format(result), result.warnings(), Optional.empty());
         return ExitCodes.OK;
-    }
-
-    /** A second, independent look at the evaluated matrix: entries in [0, 1], every row summing to exactly 1. */
-    private static void verifyStochastic(LoadedChain chain, RationalMatrix p) {
-        for (int i = 0; i < p.rows(); i++) {
-            Rational sum = Rational.ZERO;
-            for (int j = 0; j < p.cols(); j++) {
-                Rational x = p.get(i, j);
-                if (x.signum() < 0 || x.compareTo(Rational.ONE) > 0) {
-                    throw new QchainException(ErrorKey.PROBABILITY_RANGE, chain.states().get(i),
-                        chain.states().get(j), x);
-                }
-                sum = sum.add(x);
-            }
-            if (!sum.isOne()) {
-                throw new QchainException(ErrorKey.ROW_SUM, chain.states().get(i), sum);
-            }
-        }
     }
 }

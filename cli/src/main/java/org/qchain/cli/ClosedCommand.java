@@ -2,9 +2,11 @@ package org.qchain.cli;
 
 import java.util.Optional;
 import java.util.concurrent.Callable;
-import org.qchain.cli.format.ClosedFormatter;
-import org.qchain.cli.format.OutputFormat;
-import org.qchain.cli.result.ClosedResult;
+import org.qchain.analysis.Analysis;
+import org.qchain.analysis.ClosedQuery;
+import org.qchain.analysis.LoadedModel;
+import org.qchain.format.OutputFormat;
+import org.qchain.result.ClosedResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.Mixin;
@@ -16,9 +18,8 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.TypeConversionException;
 
 /**
- * {@code qchain closed}: P^n as formulas in a symbolic n and the free parameters. This class only declares the
- * options; the work is in {@link ClosedRun}, so that building the command tree (picocli reflects over this class)
- * loads no symbolic class.
+ * {@code qchain closed}: P^n as formulas in a symbolic n and the free parameters. The options become a
+ * {@link ClosedQuery}; {@link Analysis#closed} does the work.
  */
 @Command(name = "closed", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
@@ -31,28 +32,12 @@ import picocli.CommandLine.TypeConversionException;
             + " rate, roots of named factors) use --at and the nominal values."})
 final class ClosedCommand implements Callable<Integer> {
 
-    /** The values of {@code --form}. */
-    enum Form {
-        /** The closed form in n. */
-        MATRIX("matrix"),
-        /** The generating function in z. */
-        GF("gf"),
-        /** The linear recurrence in n. */
-        RECURRENCE("recurrence");
-
-        final String word;
-
-        Form(String word) {
-            this.word = word;
-        }
-    }
-
     /** Converts {@code --form}; a bad word is a usage error naming it. */
-    static final class FormConverter implements ITypeConverter<Form> {
+    static final class FormConverter implements ITypeConverter<ClosedResult.Form> {
         @Override
-        public Form convert(String value) {
-            for (Form f : Form.values()) {
-                if (f.word.equalsIgnoreCase(value.strip())) {
+        public ClosedResult.Form convert(String value) {
+            for (ClosedResult.Form f : ClosedResult.Form.values()) {
+                if (f.word().equalsIgnoreCase(value.strip())) {
                     return f;
                 }
             }
@@ -83,7 +68,7 @@ final class ClosedCommand implements Callable<Integer> {
     @Option(names = "--form", paramLabel = "FORM", converter = FormConverter.class, defaultValue = "matrix",
         description = "What to print: matrix (closed form in n, the default), gf (generating function in z) or"
             + " recurrence (linear recurrence in n with initial values).")
-    Form form = Form.MATRIX;
+    ClosedResult.Form form = ClosedResult.Form.MATRIX;
 
     @Mixin
     OutputOptions output;
@@ -107,8 +92,11 @@ final class ClosedCommand implements Callable<Integer> {
                 "--format csv is not available for closed forms; use text, json, latex or markdown");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
-        ClosedResult result = ClosedRun.compute(this);
-        Emitter.emit(spec, ClosedFormatter.format(result, output.format), result.warnings(), output.output());
+        LoadedModel loaded = model.load();
+        ClosedQuery q = new ClosedQuery(form, Optional.ofNullable(start != null ? start : from),
+            start != null ? "--start" : "--from", Optional.ofNullable(to), maxTerms, output.digits);
+        ClosedResult result = root.run(spec, progress -> Analysis.closed(loaded, q, progress));
+        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }
 }

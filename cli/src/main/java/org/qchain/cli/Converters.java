@@ -1,5 +1,8 @@
 package org.qchain.cli;
 
+import java.util.Arrays;
+import java.util.Iterator;
+import org.qchain.format.OutputFormat;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
 
@@ -69,6 +72,23 @@ final class Converters {
         @Override
         public Long convert(String value) {
             return whole(value, "terms", 1, Long.MAX_VALUE, "must be at least 1");
+        }
+    }
+
+    /** The word given to {@code --format}; a bad word is a usage error naming it. */
+    static final class Format implements ITypeConverter<OutputFormat> {
+        @Override
+        public OutputFormat convert(String value) {
+            return OutputFormat.of(value).orElseThrow(() -> new TypeConversionException("unknown format '" + value
+                + "' (expected one of: " + OutputFormat.words() + ")"));
+        }
+    }
+
+    /** The words of {@code --format}, for help texts and shell completion. */
+    static final class FormatWords implements Iterable<String> {
+        @Override
+        public Iterator<String> iterator() {
+            return Arrays.stream(OutputFormat.values()).map(OutputFormat::word).iterator();
         }
     }
 }

@@ -5,12 +5,13 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Optional;
-import java.util.OptionalInt;
 import java.util.concurrent.Callable;
-import org.qchain.cli.format.OutputFormat;
+import org.qchain.analysis.Analysis;
+import org.qchain.analysis.LoadedModel;
+import org.qchain.analysis.StepQuery;
 import org.qchain.cli.io.AtomicFiles;
-import org.qchain.cli.result.StepResult;
+import org.qchain.format.OutputFormat;
+import org.qchain.result.Result;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import picocli.CommandLine.Command;
@@ -44,7 +45,7 @@ final class DemoCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        String text = LoadedChain.resource("examples/" + EXAMPLE);
+        String text = resource("examples/" + EXAMPLE);
         if (saveModel != null) {
             if (Files.exists(saveModel)) {
                 // the user may have edited an earlier copy: never overwrite it
@@ -55,7 +56,7 @@ final class DemoCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("qchain: wrote the example model to " + saveModel);
             return ExitCodes.OK;
         }
-        LoadedChain chain = LoadedChain.fromText(EXAMPLE, text, spec.name());
+        LoadedModel chain = LoadedModel.fromText(EXAMPLE, text);
         List<String> states = chain.states();
         String from = states.get(0);
         String to = states.get(states.size() - 1);
@@ -69,29 +70,28 @@ final class DemoCommand implements Callable<Integer> {
         for (String line : text.strip().split("\n")) {
             out.println("  " + line.stripTrailing());
         }
-        TerminalProgress progress = root.progress(spec.commandLine().getErr());
-        run(out, chain, progress, "qchain step " + EXAMPLE + " -n " + N,
-            new Stepper.Query(N, Optional.empty(), Optional.empty(), OptionalInt.empty(),
-                OutputOptions.DEFAULT_DIGITS, StepCommand.DEFAULT_MAX_DIGITS));
-        run(out, chain, progress, "qchain step " + EXAMPLE + " -n " + N + " --from " + from + " --to " + to
-                + " --paths " + PATHS,
-            new Stepper.Query(N, Optional.of(from), Optional.of(to), OptionalInt.of(PATHS),
-                OutputOptions.DEFAULT_DIGITS, StepCommand.DEFAULT_MAX_DIGITS));
+        run(out, chain, "qchain step " + EXAMPLE + " -n " + N, StepQuery.matrix(N));
+        run(out, chain, "qchain step " + EXAMPLE + " -n " + N + " --from " + from + " --to " + to + " --paths "
+            + PATHS, StepQuery.entry(N, from, to).withPaths(PATHS));
         out.flush();
         return ExitCodes.OK;
     }
 
-    private static void run(PrintWriter out, LoadedChain chain, TerminalProgress progress, String command,
-                            Stepper.Query q) {
-        StepResult r;
-        try {
-            r = Stepper.compute(chain, q, progress);
-        } finally {
-            progress.clear();
-        }
+    private void run(PrintWriter out, LoadedModel chain, String command, StepQuery q) {
+        Result r = root.run(spec, progress -> Analysis.step(chain, q, progress));
         out.println();
         out.println("$ " + command);
-        out.print(OutputFormat.TEXT.formatter().format(r));
+        out.print(OutputFormat.TEXT.formatter(OutputOptions.DEFAULT_DIGITS).format(r));
+    }
+
+    /** A checked read of a classpath resource as UTF-8 text. */
+    static String resource(String name) throws IOException {
+        try (var in = DemoCommand.class.getResourceAsStream(name)) {
+            if (in == null) {
+                throw new QchainException(ErrorKey.INTERNAL, "resource " + name + " is missing from the jar");
+            }
+            return new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        }
     }
 
     /** The example's path in the repository, absolute when the launcher told us where the repository is. */

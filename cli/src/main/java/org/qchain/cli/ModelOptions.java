@@ -2,6 +2,7 @@ package org.qchain.cli;
 
 import java.nio.file.Path;
 import java.util.Optional;
+import org.qchain.analysis.LoadedModel;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -16,6 +17,11 @@ final class ModelOptions {
         description = "Exact parameter values, e.g. p=1/20,r=0.25 (decimals are read exactly); they override the"
             + " nominal values in the model.")
     String at;
+
+    /** Parses, resolves and validates the model once, for any query. */
+    LoadedModel load() {
+        return LoadedModel.load(model, at());
+    }
 
     /** The {@code --at} text, if given. */
     Optional<String> at() {

@@ -10,7 +10,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
-import org.qchain.cli.format.Caution;
+import org.qchain.format.Caution;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.HelpCommand;
@@ -58,6 +58,27 @@ public final class QchainCommand implements Callable<Integer> {
         TerminalProgress p = new TerminalProgress(err, progressAllowed);
         current = p;
         return p;
+    }
+
+    /** Work that reports progress and yields a value. */
+    interface Work<T> {
+        T run(org.qchain.exact.Progress progress);
+    }
+
+    /**
+     * Runs work with a progress line on stderr (shown only at a terminal, after a second) and clears it after.
+     *
+     * @param spec the subcommand, for its stderr
+     * @param work the work
+     * @return what the work returned
+     */
+    <T> T run(CommandSpec spec, Work<T> work) {
+        TerminalProgress p = progress(spec.commandLine().getErr());
+        try {
+            return work.run(p);
+        } finally {
+            p.clear();
+        }
     }
 
     /** Clears the progress line, if one is shown. */

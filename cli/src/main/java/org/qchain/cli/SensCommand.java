@@ -1,6 +1,11 @@
 package org.qchain.cli;
 
+import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.qchain.analysis.Analysis;
+import org.qchain.analysis.LoadedModel;
+import org.qchain.analysis.SensQuery;
+import org.qchain.result.SensResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -9,9 +14,8 @@ import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code qchain sens}: the sensitivity of one n-step probability to a parameter. The fields are plain option values
- * and the work is in {@link SensRun}, so that building the command tree (picocli reflects over this class) loads no
- * symbolic class.
+ * {@code qchain sens}: the sensitivity of one n-step probability to a parameter. The options become a
+ * {@link SensQuery}; {@link Analysis#sens} does the work.
  */
 @Command(name = "sens", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
@@ -61,7 +65,12 @@ final class SensCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Emitter.checkTarget(output.output(), java.util.Optional.of(model.model));
-        return SensRun.run(this);
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
+        LoadedModel loaded = model.load();
+        SensQuery q = new SensQuery(n, from, to, wrt, Optional.ofNullable(sweep), symbolicOptions.factor,
+            symbolicOptions.maxTerms, maxDigits);
+        SensResult result = root.run(spec, progress -> Analysis.sens(loaded, q, progress));
+        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
+        return ExitCodes.OK;
     }
 }

@@ -3,9 +3,11 @@ package org.qchain.cli;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
-import org.qchain.cli.result.StepResult;
-import org.qchain.exact.model.Model;
-import org.qchain.exact.model.ModelParser;
+import org.qchain.analysis.Analysis;
+import org.qchain.analysis.LoadedModel;
+import org.qchain.analysis.Route;
+import org.qchain.analysis.StepQuery;
+import org.qchain.result.Result;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -82,30 +84,22 @@ final class StepCommand implements Callable<Integer> {
         if (paths != null && (from == null || to == null)) {
             throw new ParameterException(spec.commandLine(), "--paths needs both --from and --to");
         }
-        Model parsed = ModelParser.parseFile(model.model);
         Emitter.checkTarget(output.output(), Optional.of(model.model));
-        if (SymbolicRoute.applies(parsed, symbolic)) {
+        LoadedModel loaded = model.load();
+        StepQuery q = new StepQuery(n, Optional.ofNullable(from), Optional.ofNullable(to),
+            paths == null ? OptionalInt.empty() : OptionalInt.of(paths), maxDigits, maxPathDigits, symbolic,
+            symbolicOptions.factor, symbolicOptions.maxTerms);
+        if (Analysis.route(loaded, q) == Route.SYMBOLIC) {
             if (paths != null) {
                 throw new ParameterException(spec.commandLine(), "--paths needs numeric values for every parameter"
                     + " (the most probable paths of a symbolic chain depend on the parameters)");
             }
-            return SymbolicRoute.step(this, parsed);
-        }
-        if (symbolicOptions.factor) {
+        } else if (symbolicOptions.factor) {
             throw new ParameterException(spec.commandLine(), "--factor applies to symbolic results: the model has"
                 + " values for all its parameters (use --symbolic to keep them symbolic)");
         }
-        LoadedChain chain = LoadedChain.load(parsed, model, spec.name());
-        Stepper.Query q = new Stepper.Query(n, Optional.ofNullable(from), Optional.ofNullable(to),
-            paths == null ? OptionalInt.empty() : OptionalInt.of(paths), output.digits, maxDigits, maxPathDigits);
-        TerminalProgress progress = root.progress(spec.commandLine().getErr());
-        StepResult result;
-        try {
-            result = Stepper.compute(chain, q, progress);
-        } finally {
-            progress.clear();
-        }
-        Emitter.emit(spec, output.format.formatter().format(result), result.header().warnings(), output.output());
+        Result result = root.run(spec, progress -> Analysis.step(loaded, q, progress));
+        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }
 }

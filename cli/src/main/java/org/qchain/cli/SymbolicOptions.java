@@ -11,7 +11,7 @@ final class SymbolicOptions {
      * Default limit on the estimated number of polynomial terms of a symbolic power: the library's own. A constant
      * expression, so javac copies the value here and reading it loads no symbolic class (JLS 13.1).
      */
-    static final long DEFAULT_MAX_TERMS = org.qchain.symbolic.SymbolicLimits.DEFAULT_MAX_TERMS;
+    static final long DEFAULT_MAX_TERMS = org.qchain.analysis.StepQuery.DEFAULT_MAX_TERMS;
 
     @Option(names = "--factor",
         description = "Symbolic results: print each formula factored over the rationals instead of expanded.")

@@ -47,7 +47,7 @@ class CheckAndDemoTest {
     @Test
     void bundledExampleIsTheDocumentedOne() throws IOException {
         assertEquals(Files.readString(EXAMPLE, StandardCharsets.UTF_8),
-            LoadedChain.resource("examples/" + DemoCommand.EXAMPLE));
+            DemoCommand.resource("examples/" + DemoCommand.EXAMPLE));
     }
 
     @Test

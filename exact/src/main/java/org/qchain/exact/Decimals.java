@@ -1,6 +1,7 @@
 package org.qchain.exact;
 
 import java.math.BigInteger;
+import java.math.RoundingMode;
 
 /**
  * Decimal display of exact rationals, correctly rounded to a number of significant digits.
@@ -33,6 +34,22 @@ public final class Decimals {
      * @throws IllegalArgumentException if {@code significantDigits < 1}
      */
     public static String format(Rational r, int significantDigits) {
+        return format(r, significantDigits, RoundingMode.HALF_EVEN);
+    }
+
+    /**
+     * {@code r} rounded to {@code significantDigits} significant digits in the given direction, laid out by the rules
+     * in the class description. {@link RoundingMode#FLOOR} and {@link RoundingMode#CEILING} give decimal lower and
+     * upper bounds, as interval endpoints need.
+     *
+     * @param r                 the value
+     * @param significantDigits at least 1
+     * @param mode              {@link RoundingMode#HALF_EVEN}, {@link RoundingMode#FLOOR}, {@link RoundingMode#CEILING},
+     *                          {@link RoundingMode#DOWN} or {@link RoundingMode#UP}
+     * @return the decimal text
+     * @throws IllegalArgumentException if {@code significantDigits < 1} or the mode is not one of these
+     */
+    public static String format(Rational r, int significantDigits, RoundingMode mode) {
         if (significantDigits < 1) {
             throw new IllegalArgumentException("significant digits must be at least 1: " + significantDigits);
         }
@@ -46,7 +63,7 @@ public final class Decimals {
         if (r.isInteger() && p.bitLength() <= 4L * digits && digitCount(p) <= digits) {
             return sign + p;
         }
-        Rounded x = round(p, q, digits);
+        Rounded x = round(p, q, digits, magnitudeMode(mode, r.signum() < 0));
         String m = x.mantissa.toString();
         long e = x.exponent;
         StringBuilder sb = new StringBuilder(sign);
@@ -78,10 +95,34 @@ public final class Decimals {
     record Rounded(BigInteger mantissa, long exponent) {
     }
 
+    /** The rounding of the magnitude that gives {@code mode} on a value of the given sign. */
+    private static RoundingMode magnitudeMode(RoundingMode mode, boolean negative) {
+        switch (mode) {
+            case HALF_EVEN:
+            case DOWN:
+            case UP:
+                return mode;
+            case FLOOR:
+                return negative ? RoundingMode.UP : RoundingMode.DOWN;
+            case CEILING:
+                return negative ? RoundingMode.DOWN : RoundingMode.UP;
+            default:
+                throw new IllegalArgumentException("unsupported rounding mode: " + mode);
+        }
+    }
+
     /**
      * {@code p/q} ({@code p, q > 0}) rounded half-even to {@code digits} significant digits.
      */
     static Rounded round(BigInteger p, BigInteger q, int digits) {
+        return round(p, q, digits, RoundingMode.HALF_EVEN);
+    }
+
+    /**
+     * {@code p/q} ({@code p, q > 0}) rounded to {@code digits} significant digits: half-even, toward zero
+     * ({@link RoundingMode#DOWN}) or away from zero ({@link RoundingMode#UP}).
+     */
+    static Rounded round(BigInteger p, BigInteger q, int digits, RoundingMode mode) {
         BigInteger low = BigInteger.TEN.pow(digits - 1);
         BigInteger high = low.multiply(BigInteger.TEN);
         // first guess of floor(log10(p/q)) from bit lengths; off by at most one or two, corrected below
@@ -105,8 +146,16 @@ public final class Decimals {
                 e++;
                 continue;
             }
-            int c = qr[1].shiftLeft(1).compareTo(den);
-            if (c > 0 || c == 0 && m.testBit(0)) {
+            boolean up;
+            if (mode == RoundingMode.DOWN) {
+                up = false;
+            } else if (mode == RoundingMode.UP) {
+                up = qr[1].signum() != 0;
+            } else {
+                int c = qr[1].shiftLeft(1).compareTo(den);
+                up = c > 0 || c == 0 && m.testBit(0);
+            }
+            if (up) {
                 m = m.add(BigInteger.ONE);
                 if (m.equals(high)) {
                     m = low;

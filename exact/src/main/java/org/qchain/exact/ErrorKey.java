@@ -104,7 +104,36 @@ public enum ErrorKey {
     /** {0}: the condition that fails, {1}: the parameter values. */
     CLOSED_FORM_CONDITION("the closed form needs {0}, which fails at {1}; compute it with these values given (--at) instead"),
     /** {0}: estimated digits processed, {1}: limit, {2}: option that raises it. */
-    PATH_SEARCH_TOO_LARGE("the path search would process about {0} digits in all, more than the limit {1}; raise it with {2}, or ask for fewer steps or paths");
+    PATH_SEARCH_TOO_LARGE("the path search would process about {0} digits in all, more than the limit {1}; raise it with {2}, or ask for fewer steps or paths"),
+
+    // --- reference files for verify (issue 11) -----------------------------------------------------------------
+    /** {0}: values found, {1}: what was expected ("the model has 6 states"). */
+    REF_VALUE_COUNT("{0} values, {1}"),
+    /** {0}: rows found, {1}: what was expected. */
+    REF_ROW_COUNT("{0} rows of values, {1}"),
+    /** {0}: the label, {1}: the labels allowed. */
+    REF_UNKNOWN_STATE("unknown state ''{0}''; expected one of {1}"),
+    /** {0}: the entry, {1}: line of the first value. */
+    REF_DUPLICATE("a second value for {0} (the first is on line {1})"),
+    /** {0}: what is missing. */
+    REF_MISSING("no value for {0}"),
+    /** {0}: the text, {1}: a detail (empty, or starting with a colon). */
+    REF_NOT_A_NUMBER("''{0}'' is not a number{1}; expected a decimal such as 0.25 or 1.5e-3, a hexadecimal"
+        + " float such as 0x1.8p-3, inf or nan"),
+    /** {0}: what was expected. */
+    REF_EMPTY("the file has no values; expected {0}"),
+    /** {0}: what was expected and found. */
+    REF_SHAPE("{0}"),
+
+    // --- input robustness: number sizes, nesting, declaration order, dense size (appended) ----------------------
+    /** {0}: the number as written (shortened), {1}: its digits, {2}: the limit. */
+    NUMBER_TOO_LONG("the number ''{0}'' has {1} digits, more than the limit of {2} digits for one number"),
+    /** {0}: the limit of nested parentheses. */
+    NESTING_TOO_DEEP("parentheses nested more than {0} deep"),
+    /** {0}: line of the first transition. */
+    PARAM_AFTER_TRANSITIONS("a ''param'' line after the transitions: declare parameters before the first transition (line {0}); move this line up"),
+    /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries. */
+    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries");
 
     private final String pattern;
 

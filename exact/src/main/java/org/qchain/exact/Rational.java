@@ -109,31 +109,32 @@ public final class Rational implements Comparable<Rational> {
     }
 
     /**
-     * Parses {@code p}, {@code p/q}, or an exact decimal such as {@code 0.25}, {@code -1.5e-3} or {@code .5}.
-     * Decimals are read exactly ({@code 0.1} is {@code 1/10}); surrounding spaces are allowed.
+     * Parses a constant in the model file's number grammar ({@link NumberGrammar}): {@code p}, {@code -p/q}, or an
+     * exact decimal such as {@code 0.25}, {@code -1.5e-3} or {@code .5}, with the default limits
+     * ({@link InputLimits#DEFAULT}). Decimals are read exactly ({@code 0.1} is {@code 1/10}); surrounding spaces are
+     * allowed.
      *
      * @param text the text
      * @return the value
-     * @throws NumberFormatException if the text is not such a number
-     * @throws ArithmeticException   if the denominator is zero
+     * @throws QchainException {@link ErrorKey#MALFORMED_NUMBER} if the text is not such a number,
+     *                         {@link ErrorKey#DIVISION_BY_ZERO} if the denominator is zero, {@link ErrorKey#SYNTAX}
+     *                         for an exponent beyond {@link NumberGrammar#MAX_DECIMAL_EXPONENT},
+     *                         {@link ErrorKey#NUMBER_TOO_LONG} past the digit limit
      */
     public static Rational parse(String text) {
-        String t = text.strip();
-        int slash = t.indexOf('/');
-        if (slash >= 0) {
-            Rational p = parseDecimal(t.substring(0, slash).strip(), text);
-            Rational q = parseDecimal(t.substring(slash + 1).strip(), text);
-            return p.divide(q);
-        }
-        return parseDecimal(t, text);
+        return parse(text, InputLimits.DEFAULT);
     }
 
-    private static Rational parseDecimal(String t, String whole) {
-        if (t.isEmpty() || !t.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
-            throw new NumberFormatException("malformed number '" + whole.strip() + "'");
-        }
-        BigDecimal d = new BigDecimal(t);
-        return of(d);
+    /**
+     * As {@link #parse(String)}, with the given limits.
+     *
+     * @param text   the text
+     * @param limits the digit limit of each number
+     * @return the value
+     * @throws QchainException as {@link #parse(String)}
+     */
+    public static Rational parse(String text, InputLimits limits) {
+        return NumberGrammar.constant(text, null, limits.maxNumberDigits());
     }
 
     /**

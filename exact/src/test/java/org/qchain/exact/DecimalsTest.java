@@ -113,6 +113,23 @@ class DecimalsTest {
         assertMatchesReference(Rational.of(p, q), digits);
     }
 
+    // reference library: Java SE BigDecimal with MathContext(digits, FLOOR / CEILING) on random signed fractions
+    @Property(seed = "2718", tries = 300)
+    void directedRoundingAgreesWithBigDecimal(@ForAll @LongRange(min = 0, max = Long.MAX_VALUE) long seed,
+            @ForAll @IntRange(min = 1, max = 30) int digits) {
+        Random rnd = new Random(seed);
+        BigInteger p = new BigInteger(1 + rnd.nextInt(150), rnd).add(BigInteger.ONE);
+        BigInteger q = rnd.nextInt(4) == 0 ? BigInteger.TEN.pow(rnd.nextInt(20))
+            : new BigInteger(1 + rnd.nextInt(150), rnd).add(BigInteger.ONE);
+        Rational r = Rational.of(rnd.nextBoolean() ? p.negate() : p, q);
+        for (RoundingMode mode : new RoundingMode[] {RoundingMode.FLOOR, RoundingMode.CEILING}) {
+            BigDecimal ref = new BigDecimal(r.numerator()).divide(new BigDecimal(r.denominator()),
+                new MathContext(digits, mode));
+            BigDecimal ours = new BigDecimal(Decimals.format(r, digits, mode));
+            assertEquals(0, ours.compareTo(ref), r + " " + mode + " at " + digits);
+        }
+    }
+
     // common practice, no source: at least one significant digit
     @Test
     void rejectsNonPositiveDigits() {

@@ -10,6 +10,7 @@ import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.model.Chains;
 import org.qchain.exact.model.Model;
 
 /**
@@ -85,6 +86,7 @@ public final class RatFunMatrix {
         if (n == 0) {
             throw new QchainException(ErrorKey.EMPTY_CHAIN);
         }
+        Chains.requireDense(model);
         RatFun[][] e = new RatFun[n][n];
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < n; j++) {

@@ -45,12 +45,15 @@ public final class Chains {
      * @param m      the model
      * @param values values that override the nominal ones; every parameter used must end with a value
      * @return the validated matrix
-     * @throws QchainException FREE_PARAMETERS naming the parameters used without a value; BAD_ARGUMENT for a name
+     * @throws QchainException DENSE_TOO_LARGE before any work if the dense matrix exceeds the model's limit
+     *                         ({@link #requireDense}); FREE_PARAMETERS naming the parameters used without a value;
+     *                         BAD_ARGUMENT for a name
      *                         the model does not declare; VALUE_OUTSIDE_DOMAIN; and, at the position of the
      *                         offending text, DIVISION_BY_ZERO, PROBABILITY_RANGE, NEGATIVE_RATE, ROW_SUM (at the
      *                         row's last listed transition) or NEGATIVE_REMAINDER (likewise)
      */
     public static RationalMatrix transitionMatrix(Model m, Map<String, Rational> values) {
+        requireDense(m);
         Map<String, Rational> env = effectiveValues(m, values);
         int n = m.size();
         Rational[][] a = new Rational[n][n];
@@ -94,6 +97,17 @@ public final class Chains {
             }
         }
         return RationalMatrix.of(a);
+    }
+
+    /**
+     * Refuses, before any work, a model whose dense {@code n x n} matrix would exceed the dense-size limit it was
+     * read under ({@link Model#limits()}); every builder of a dense matrix from a model calls it first.
+     *
+     * @param m the model
+     * @throws QchainException {@link ErrorKey#DENSE_TOO_LARGE} with the entries and a lower bound of the memory
+     */
+    public static void requireDense(Model m) {
+        m.limits().requireDense(m.size());
     }
 
     /**
@@ -167,7 +181,7 @@ public final class Chains {
             }
             Rational v;
             try {
-                v = Lexer.constant(value, null);
+                v = Lexer.constant(value, null, m.limits().maxNumberDigits());
             } catch (QchainException e) {
                 throw new QchainException(ErrorKey.BAD_ARGUMENT, "parameter value", item,
                     value.isEmpty() ? "missing the value after '='" : e.detail());

@@ -5,6 +5,8 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.InputLimits;
+import org.qchain.exact.NumberGrammar;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.SourcePos;
@@ -30,7 +32,8 @@ final class CsvReader {
         }
     }
 
-    static Model read(String file, String text) {
+    static Model read(String file, String text, InputLimits limits) {
+        int maxDigits = limits.maxNumberDigits();
         List<Row> rows = records(file, text);
         if (rows.isEmpty()) {
             throw new QchainException(new SourcePos(file, 1, 1), ErrorKey.EMPTY_CHAIN);
@@ -38,7 +41,7 @@ final class CsvReader {
         Row first = rows.get(0);
         // a header has a quoted field or no number at all; a row mixing numbers and words is data with a typo in it
         boolean header = first.fields().stream().anyMatch(Field::quoted)
-            || first.fields().stream().noneMatch(f -> Lexer.isConstant(f.text()));
+            || first.fields().stream().noneMatch(f -> NumberGrammar.isConstant(f.text()));
         boolean labels = header && first.fields().get(0).text().isEmpty();
         List<String> names = new ArrayList<>();
         if (header) {
@@ -67,6 +70,7 @@ final class CsvReader {
         }
         List<Row> data = rows.subList(header ? 1 : 0, rows.size());
         int n = names.size();
+        limits.requireDense(n);
         int width = n + (labels ? 1 : 0);
         List<Transition> transitions = new ArrayList<>();
         for (int i = 0; i < data.size(); i++) {
@@ -89,7 +93,7 @@ final class CsvReader {
                 if (f.text().isEmpty()) {
                     throw new QchainException(f.pos(), ErrorKey.SYNTAX, "empty entry (write 0 for no transition)");
                 }
-                Rational v = Lexer.constant(f.text(), f.pos());
+                Rational v = Lexer.constant(f.text(), f.pos(), maxDigits);
                 if (!v.isZero() || i == j) {
                     transitions.add(new Transition(i, j, new Expr.Num(v, f.pos()), f.pos(), f.pos()));
                 }
@@ -99,18 +103,19 @@ final class CsvReader {
             Row last = rows.get(rows.size() - 1);
             throw new QchainException(last.pos(), ErrorKey.CSV_NOT_SQUARE, data.size(), n);
         }
-        return Model.of(file, ChainKind.DISCRETE, List.of(), names, transitions);
+        return Model.of(file, ChainKind.DISCRETE, List.of(), names, transitions, limits);
     }
 
     /** The records of the text, blank lines left out. */
     static List<Row> records(String file, String text) {
         List<Row> rows = new ArrayList<>();
+        Columns cols = Columns.of(text);
         int line = 1;
         int lineStart = 0;
         int i = 0;
         int len = text.length();
         while (i < len) {
-            SourcePos rowPos = new SourcePos(file, line, i - lineStart + 1);
+            SourcePos rowPos = new SourcePos(file, line, cols.column(lineStart, i));
             List<Field> fields = new ArrayList<>();
             while (true) {
                 int s = i;
@@ -118,7 +123,7 @@ final class CsvReader {
                     i++;
                 }
                 if (i < len && text.charAt(i) == '"') {
-                    SourcePos fp = new SourcePos(file, line, i - lineStart + 1);
+                    SourcePos fp = new SourcePos(file, line, cols.column(lineStart, i));
                     StringBuilder sb = new StringBuilder();
                     i++;
                     while (true) {
@@ -146,7 +151,7 @@ final class CsvReader {
                         i++;
                     }
                     if (i < len && text.charAt(i) != ',' && text.charAt(i) != '\n' && text.charAt(i) != '\r') {
-                        throw new QchainException(new SourcePos(file, line, i - lineStart + 1), ErrorKey.SYNTAX,
+                        throw new QchainException(new SourcePos(file, line, cols.column(lineStart, i)), ErrorKey.SYNTAX,
                             "unexpected text after the closing quote of a field");
                     }
                     fields.add(new Field(sb.toString(), true, fp));
@@ -154,7 +159,7 @@ final class CsvReader {
                     int e = i;
                     while (e < len && text.charAt(e) != ',' && text.charAt(e) != '\n' && text.charAt(e) != '\r') {
                         if (text.charAt(e) == '"') {
-                            throw new QchainException(new SourcePos(file, line, e - lineStart + 1), ErrorKey.SYNTAX,
+                            throw new QchainException(new SourcePos(file, line, cols.column(lineStart, e)), ErrorKey.SYNTAX,
                                 "a quote inside an unquoted field: quote the whole field and double the quote");
                         }
                         e++;
@@ -164,7 +169,7 @@ final class CsvReader {
                     while (first < e && Character.isWhitespace(text.charAt(first))) {
                         first++;
                     }
-                    fields.add(new Field(raw, false, new SourcePos(file, line, first - lineStart + 1)));
+                    fields.add(new Field(raw, false, new SourcePos(file, line, cols.column(lineStart, first))));
                     i = e;
                 }
                 if (i < len && text.charAt(i) == ',') {

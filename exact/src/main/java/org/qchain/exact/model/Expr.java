@@ -119,48 +119,24 @@ public sealed interface Expr {
     }
 
     /**
-     * Folds this tree bottom-up, left operand before right.
+     * Folds this tree bottom-up, left operand before right, in linear time and without recursion (a tree of any
+     * depth folds).
      *
      * @param f   what each kind of node becomes
      * @param <T> the result type
      * @return the folded value of the root
      */
     default <T> T fold(Folder<T> f) {
-        if (this instanceof Num n) {
-            return f.num(n);
-        }
-        if (this instanceof Var v) {
-            return f.var(v);
-        }
-        if (this instanceof Neg g) {
-            return f.neg(g, g.operand().fold(f));
-        }
-        if (this instanceof Bin b) {
-            T l = b.left().fold(f);
-            return f.bin(b, l, b.right().fold(f));
-        }
-        Pow p = (Pow) this;
-        return f.pow(p, p.base().fold(f));
+        return Folding.fold(this, f);
     }
 
     /** The parameter names used, in order of first appearance. */
     default Set<String> variables() {
         Set<String> out = new LinkedHashSet<>();
-        collect(this, out);
-        return out;
-    }
-
-    private static void collect(Expr e, Set<String> out) {
-        if (e instanceof Var v) {
+        for (Var v : Folding.varNodes(this)) {
             out.add(v.name());
-        } else if (e instanceof Neg g) {
-            collect(g.operand(), out);
-        } else if (e instanceof Bin b) {
-            collect(b.left(), out);
-            collect(b.right(), out);
-        } else if (e instanceof Pow p) {
-            collect(p.base(), out);
         }
+        return out;
     }
 
     /** Plain syntax that the model parser reads back to an equal value, with minimal parentheses. */

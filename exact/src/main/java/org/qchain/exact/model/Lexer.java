@@ -1,23 +1,22 @@
 package org.qchain.exact.model;
 
-import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.regex.Pattern;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.InputLimits;
+import org.qchain.exact.NumberGrammar;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.SourcePos;
 
 /**
- * Splits one line of expression text into tokens: numbers (read exactly), names, and the symbols
- * {@code + - * / ^ ( ) [ ] , =}. Columns are 1-based indexes into the line.
+ * Splits one line of expression text into tokens: numbers (read exactly, in the grammar of {@link NumberGrammar}),
+ * names, and the symbols {@code + - * / ^ ( ) [ ] , =}. Columns count characters (code points), 1-based.
  */
 final class Lexer {
     /** Largest decimal exponent accepted in a number such as {@code 1e-3}; larger ones would need huge powers of 10. */
-    static final int MAX_DECIMAL_EXPONENT = 10_000;
+    static final int MAX_DECIMAL_EXPONENT = NumberGrammar.MAX_DECIMAL_EXPONENT;
 
-    private static final Pattern NUMBER = Pattern.compile("(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final String SYMBOLS = "+-*/^()[],=";
 
     /** Token kinds. */
@@ -32,8 +31,9 @@ final class Lexer {
      * @param text  the text as written (empty for END)
      * @param pos   where it starts
      * @param value the exact value of a NUMBER, else {@code null}
+     * @param index the index in the line of its first char (the line's length for END)
      */
-    record Token(Kind kind, String text, SourcePos pos, Rational value) {
+    record Token(Kind kind, String text, SourcePos pos, Rational value, int index) {
         boolean is(String symbol) {
             return kind == Kind.SYMBOL && text.equals(symbol);
         }
@@ -52,11 +52,21 @@ final class Lexer {
     }
 
     /**
-     * Tokens of {@code line.substring(start, end)}, ending with one END token at column {@code end + 1}.
-     *
-     * @throws QchainException MALFORMED_NUMBER or SYNTAX at the offending character
+     * Tokens of {@code line.substring(start, end)}, ending with one END token just after {@code end}, with the
+     * default digit limit.
      */
     static List<Token> tokens(String file, int lineNo, String line, int start, int end) {
+        return tokens(file, lineNo, line, Columns.of(line), start, end, InputLimits.DEFAULT_MAX_NUMBER_DIGITS);
+    }
+
+    /**
+     * Tokens of {@code line.substring(start, end)}, ending with one END token just after {@code end}.
+     *
+     * @param cols      the columns of {@code line}
+     * @param maxDigits the digit limit of one number
+     * @throws QchainException MALFORMED_NUMBER, NUMBER_TOO_LONG or SYNTAX at the offending character
+     */
+    static List<Token> tokens(String file, int lineNo, String line, Columns cols, int start, int end, int maxDigits) {
         List<Token> out = new ArrayList<>();
         int i = start;
         while (i < end) {
@@ -65,27 +75,28 @@ final class Lexer {
                 i++;
                 continue;
             }
-            SourcePos pos = new SourcePos(file, lineNo, i + 1);
+            SourcePos pos = new SourcePos(file, lineNo, cols.column(i));
             if (isDigit(c) || (c == '.' && i + 1 < end && isDigit(line.charAt(i + 1)))) {
                 int j = scanNumber(line, i, end);
                 String text = line.substring(i, j);
-                out.add(new Token(Kind.NUMBER, text, pos, number(text, pos)));
+                out.add(new Token(Kind.NUMBER, text, pos, NumberGrammar.unsigned(text, pos, maxDigits), i));
                 i = j;
             } else if (isNameStart(c)) {
                 int j = i + 1;
                 while (j < end && isNamePart(line.charAt(j))) {
                     j++;
                 }
-                out.add(new Token(Kind.NAME, line.substring(i, j), pos, null));
+                out.add(new Token(Kind.NAME, line.substring(i, j), pos, null, i));
                 i = j;
             } else if (SYMBOLS.indexOf(c) >= 0) {
-                out.add(new Token(Kind.SYMBOL, String.valueOf(c), pos, null));
+                out.add(new Token(Kind.SYMBOL, String.valueOf(c), pos, null, i));
                 i++;
             } else {
-                throw new QchainException(pos, ErrorKey.SYNTAX, "unexpected character " + describeChar(c));
+                throw new QchainException(pos, ErrorKey.SYNTAX, "unexpected character " + describeChar(line.codePointAt(i)));
             }
         }
-        out.add(new Token(Kind.END, "", new SourcePos(file, lineNo, end + 1), null));
+        out.add(new Token(Kind.END, "", new SourcePos(file, lineNo, cols.column(end)),
+            null, end));
         return out;
     }
 
@@ -121,52 +132,13 @@ final class Lexer {
     }
 
     /**
-     * The exact value of an unsigned number {@code 12}, {@code 0.25}, {@code .5}, {@code 1e-3}.
-     *
-     * @throws QchainException MALFORMED_NUMBER if it is not one, SYNTAX if its exponent is beyond
-     *                         {@link #MAX_DECIMAL_EXPONENT}
-     */
-    static Rational number(String text, SourcePos pos) {
-        if (!NUMBER.matcher(text).matches()) {
-            throw new QchainException(pos, ErrorKey.MALFORMED_NUMBER, text);
-        }
-        BigDecimal d = new BigDecimal(text);
-        if (Math.abs((long) d.scale()) > MAX_DECIMAL_EXPONENT + (long) text.length()) {
-            throw new QchainException(pos, ErrorKey.SYNTAX, "the number '" + text
-                + "' has an exponent beyond +-" + MAX_DECIMAL_EXPONENT + "; write it as a fraction or a power");
-        }
-        return Rational.of(d);
-    }
-
-    private static final Pattern CONSTANT = Pattern.compile(
-        "([+-]?)\\s*((?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][+-]?\\d+)?)(?:\\s*/\\s*((?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][+-]?\\d+)?))?");
-
-    /** Whether {@code text} (stripped) is a constant as read by {@link #constant}. */
-    static boolean isConstant(String text) {
-        return CONSTANT.matcher(text.strip()).matches();
-    }
-
-    /**
      * A signed constant: a number or a quotient {@code p/q} of two numbers, e.g. {@code -3}, {@code 1/20},
      * {@code 0.25}, {@code 1e-3}; surrounding spaces are ignored. Used for CSV entries and {@code --at} values.
      *
-     * @throws QchainException MALFORMED_NUMBER if the text is not such a constant, DIVISION_BY_ZERO for
-     *                         {@code p/0}
+     * @throws QchainException as {@link NumberGrammar#constant}
      */
-    static Rational constant(String text, SourcePos pos) {
-        java.util.regex.Matcher m = CONSTANT.matcher(text.strip());
-        if (!m.matches()) {
-            throw new QchainException(pos, ErrorKey.MALFORMED_NUMBER, text.strip());
-        }
-        Rational v = number(m.group(2), pos);
-        if (m.group(3) != null) {
-            Rational d = number(m.group(3), pos);
-            if (d.isZero()) {
-                throw new QchainException(pos, ErrorKey.DIVISION_BY_ZERO, " in '" + text.strip() + "'");
-            }
-            v = v.divide(d);
-        }
-        return m.group(1).equals("-") ? v.negate() : v;
+    static Rational constant(String text, SourcePos pos, int maxDigits) {
+        return NumberGrammar.constant(text, pos, maxDigits);
     }
 
     static boolean isDigit(char c) {
@@ -181,11 +153,20 @@ final class Lexer {
         return Character.isLetterOrDigit(c) || c == '_';
     }
 
-    /** {@code 'x'}, with the code point for characters outside ASCII (a pasted minus sign U+2212, say). */
-    static String describeChar(char c) {
-        String s = "'" + c + "'";
-        if (c > 126 || c < 32) {
-            s += String.format(" (U+%04X)", (int) c);
+    /**
+     * {@code 'x'}, with the code point for characters outside ASCII (a pasted minus sign U+2212, say); a control
+     * character or an unusual space is named by its code point only, since printing it would hide it.
+     */
+    static String describeChar(int c) {
+        if (Character.isISOControl(c) || (Character.isSpaceChar(c) && c != ' ') || Character.getType(c) == Character.FORMAT) {
+            String what = c == 0 ? "a NUL byte" : c == 0x00a0 || c == 0x202f || c == 0x2007 ? "a no-break space; write a plain space"
+                : Character.isSpaceChar(c) ? "a space character other than ' '; write a plain space"
+                : Character.isISOControl(c) ? "a control character" : "an invisible formatting character";
+            return String.format("U+%04X (%s)", c, what);
+        }
+        String s = "'" + new String(Character.toChars(c)) + "'";
+        if (c > 126) {
+            s += String.format(" (U+%04X)", c);
             if (c == '\u2212' || c == '\u2013' || c == '\u2014') {
                 s += "; write '-' for minus";
             } else if (c == '\u00d7' || c == '\u22c5' || c == '\u00b7') {

@@ -1,6 +1,7 @@
 package org.qchain.exact.model;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -8,6 +9,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.Set;
+import org.qchain.exact.InputLimits;
 import org.qchain.exact.Rational;
 
 /**
@@ -20,19 +22,27 @@ public final class Model {
     private final List<ParamDecl> params;
     private final List<String> states;
     private final List<Transition> transitions;
-    private final Transition[][] grid;
+    // sparse: a model of 100,000 states on one line must not cost states squared
+    private final Map<Long, Transition> byPair;
+    private final Map<String, Integer> index;
     private final List<List<Transition>> rows;
     private final List<String> used;
+    private final InputLimits limits;
 
     private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
-                  List<Transition> transitions) {
+                  List<Transition> transitions, InputLimits limits) {
         this.source = source;
         this.kind = kind;
         this.params = List.copyOf(params);
         this.states = List.copyOf(states);
         this.transitions = List.copyOf(transitions);
+        this.limits = limits;
         int n = states.size();
-        this.grid = new Transition[n][n];
+        this.byPair = new HashMap<>();
+        this.index = new HashMap<>();
+        for (int i = 0; i < n; i++) {
+            index.putIfAbsent(this.states.get(i), i);
+        }
         List<List<Transition>> byRow = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             byRow.add(new ArrayList<>());
@@ -42,10 +52,9 @@ public final class Model {
             if (t.from() < 0 || t.from() >= n || t.to() < 0 || t.to() >= n) {
                 throw new IllegalArgumentException("state index out of range in " + t);
             }
-            if (grid[t.from()][t.to()] != null) {
+            if (byPair.putIfAbsent(pair(t.from(), t.to()), t) != null) {
                 throw new IllegalArgumentException("duplicate transition " + states.get(t.from()) + " -> " + states.get(t.to()));
             }
-            grid[t.from()][t.to()] = t;
             byRow.get(t.from()).add(t);
             names.addAll(t.expr().variables());
         }
@@ -74,7 +83,34 @@ public final class Model {
      */
     public static Model of(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
                            List<Transition> transitions) {
-        return new Model(source, kind, params, states, transitions);
+        return new Model(source, kind, params, states, transitions, InputLimits.DEFAULT);
+    }
+
+    /**
+     * As {@link #of(String, ChainKind, List, List, List)}, with the input limits the model was read under (its
+     * dense matrix is checked against them).
+     *
+     * @param source      the file name as given, for messages
+     * @param kind        discrete or continuous
+     * @param params      the parameter declarations, in file order
+     * @param states      the state names, in file order
+     * @param transitions the listed transitions
+     * @param limits      the input limits
+     * @return the model
+     * @throws IllegalArgumentException if a transition is given twice or an index is out of range
+     */
+    public static Model of(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
+                           List<Transition> transitions, InputLimits limits) {
+        return new Model(source, kind, params, states, transitions, limits);
+    }
+
+    private static long pair(int from, int to) {
+        return ((long) from << 32) | (to & 0xffffffffL);
+    }
+
+    /** The input limits the model was read under. */
+    public InputLimits limits() {
+        return limits;
     }
 
     /** The file name as given, for messages. */
@@ -129,8 +165,8 @@ public final class Model {
 
     /** The index of a state name. */
     public OptionalInt indexOf(String state) {
-        int i = states.indexOf(state);
-        return i < 0 ? OptionalInt.empty() : OptionalInt.of(i);
+        Integer i = index.get(state);
+        return i == null ? OptionalInt.empty() : OptionalInt.of(i);
     }
 
     /** The transitions as listed, in file order. */
@@ -140,7 +176,7 @@ public final class Model {
 
     /** The listed transition from {@code i} to {@code j}, if any. */
     public Optional<Transition> listed(int i, int j) {
-        return Optional.ofNullable(grid[i][j]);
+        return Optional.ofNullable(byPair.get(pair(i, j)));
     }
 
     /** The listed transitions out of state {@code i}, in file order (an unmodifiable list). */
@@ -177,7 +213,7 @@ public final class Model {
      * @return the entry's expression
      */
     public Expr entry(int i, int j) {
-        Transition t = grid[i][j];
+        Transition t = byPair.get(pair(i, j));
         if (i != j || (t != null && kind == ChainKind.DISCRETE)) {
             return t == null ? Expr.num(Rational.ZERO) : t.expr();
         }

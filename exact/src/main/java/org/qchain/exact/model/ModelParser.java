@@ -19,6 +19,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.InputLimits;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.SourcePos;
@@ -52,11 +53,23 @@ public final class ModelParser {
      * @throws QchainException CANNOT_READ if the file cannot be read or is not UTF-8, or any parse error
      */
     public static Model parseFile(Path file) {
+        return parseFile(file, InputLimits.DEFAULT);
+    }
+
+    /**
+     * As {@link #parseFile(Path)}, with the given input limits (kept by the model for its dense-size check).
+     *
+     * @param file   the file; {@code file.toString()} names it in messages
+     * @param limits the digit limit of one number and the dense-size limit
+     * @return the model
+     * @throws QchainException as {@link #parseFile(Path)}
+     */
+    public static Model parseFile(Path file, InputLimits limits) {
         String name = file.toString();
         String text = read(file, name);
         Path fn = file.getFileName();
         boolean csv = fn != null && fn.toString().toLowerCase(Locale.ROOT).endsWith(".csv");
-        return csv ? parseCsv(name, text) : parse(name, text);
+        return csv ? parseCsv(name, text, limits) : parse(name, text, limits);
     }
 
     private static String read(Path file, String name) {
@@ -95,7 +108,22 @@ public final class ModelParser {
      * @throws QchainException for any error in the text, at its line and column
      */
     public static Model parse(String sourceName, String text) {
-        return new LineParser(sourceName, splitLines(text)).run();
+        return parse(sourceName, text, InputLimits.DEFAULT);
+    }
+
+    /**
+     * Parses the model format with the given input limits. Time and memory are linear in the text: nothing is
+     * sized by the square of the states (the dense matrix is checked against {@code limits} only when one is
+     * built, see {@link Chains#requireDense}).
+     *
+     * @param sourceName the name used in messages
+     * @param text       the whole file
+     * @param limits     the digit limit of one number and the dense-size limit
+     * @return the model, not yet evaluated
+     * @throws QchainException for any error in the text, at its line and column
+     */
+    public static Model parse(String sourceName, String text, InputLimits limits) {
+        return new LineParser(sourceName, splitLines(text), limits).run();
     }
 
     /**
@@ -111,7 +139,21 @@ public final class ModelParser {
      * @throws QchainException for any error, at its line and column
      */
     public static Model parseCsv(String sourceName, String text) {
-        Model m = CsvReader.read(sourceName, stripBom(text));
+        return parseCsv(sourceName, text, InputLimits.DEFAULT);
+    }
+
+    /**
+     * As {@link #parseCsv(String, String)}, with the given input limits; a header (or first row) wider than the
+     * dense-size limit allows is refused before the rows are read.
+     *
+     * @param sourceName the name used in messages
+     * @param text       the whole file
+     * @param limits     the digit limit of one number and the dense-size limit
+     * @return the model
+     * @throws QchainException for any error, at its line and column; DENSE_TOO_LARGE
+     */
+    public static Model parseCsv(String sourceName, String text, InputLimits limits) {
+        Model m = CsvReader.read(sourceName, stripBom(text), limits);
         Chains.transitionMatrix(m, Map.of());
         return m;
     }
@@ -126,34 +168,34 @@ public final class ModelParser {
      * @throws QchainException for a syntax error, at its column
      */
     public static Expr parseExpression(String sourceName, String text) {
+        return parseExpression(sourceName, text, InputLimits.DEFAULT);
+    }
+
+    /**
+     * As {@link #parseExpression(String, String)}, with the given digit limit of one number.
+     *
+     * @param sourceName the name used in messages (the text is line 1)
+     * @param text       the expression, on one line
+     * @param limits     the input limits
+     * @return the tree
+     * @throws QchainException for a syntax error, at its column
+     */
+    public static Expr parseExpression(String sourceName, String text, InputLimits limits) {
+        Columns cols = Columns.of(text);
         for (int i = 0; i < text.length(); i++) {
             char c = text.charAt(i);
             if (c == '\n' || c == '\r') {
-                throw new QchainException(new SourcePos(sourceName, 1, i + 1), ErrorKey.SYNTAX,
+                throw new QchainException(new SourcePos(sourceName, 1, cols.column(i)), ErrorKey.SYNTAX,
                     "an expression must be on one line");
             }
         }
-        return new ExprParser(Lexer.tokens(sourceName, 1, text, 0, text.length()), 0).parseAll();
+        return new ExprParser(Lexer.tokens(sourceName, 1, text, cols, 0, text.length(), limits.maxNumberDigits()), 0)
+            .parseAll();
     }
 
     /** The parameter-name nodes of a tree, left to right. */
     static List<Expr.Var> varNodes(Expr e) {
-        List<Expr.Var> out = new ArrayList<>();
-        collectVars(e, out);
-        return out;
-    }
-
-    private static void collectVars(Expr e, List<Expr.Var> out) {
-        if (e instanceof Expr.Var v) {
-            out.add(v);
-        } else if (e instanceof Expr.Neg g) {
-            collectVars(g.operand(), out);
-        } else if (e instanceof Expr.Bin b) {
-            collectVars(b.left(), out);
-            collectVars(b.right(), out);
-        } else if (e instanceof Expr.Pow p) {
-            collectVars(p.base(), out);
-        }
+        return Folding.varNodes(e);
     }
 
     static String stripBom(String text) {
@@ -235,6 +277,8 @@ public final class ModelParser {
     private static final class LineParser {
         private final String file;
         private final List<String> lines;
+        private final InputLimits limits;
+        private Columns cols;
         private ChainKind kind;
         private int chainLine;
         private int firstDeclLine;
@@ -245,13 +289,19 @@ public final class ModelParser {
         private final List<Transition> transitions = new ArrayList<>();
         private final Map<Long, Transition> seen = new HashMap<>();
 
-        LineParser(String file, List<String> lines) {
+        LineParser(String file, List<String> lines, InputLimits limits) {
             this.file = file;
             this.lines = lines;
+            this.limits = limits;
         }
 
+        /** The position of the char at {@code index} on line {@code line}, the one being read. */
         private SourcePos pos(int line, int index) {
-            return new SourcePos(file, line, index + 1);
+            return new SourcePos(file, line, cols.column(index));
+        }
+
+        private List<Token> tokens(int ln, String line, int start) {
+            return Lexer.tokens(file, ln, line, cols, start, line.length(), limits.maxNumberDigits());
         }
 
         private ChainKind kind() {
@@ -268,11 +318,16 @@ public final class ModelParser {
                     continue;
                 }
                 int ln = k + 1;
+                cols = Columns.of(line);
                 switch (w.get(0).text()) {
                     case "chain":
                         chainLine(ln, line, w);
                         break;
                     case "param":
+                        if (!transitions.isEmpty()) {
+                            throw new QchainException(pos(ln, w.get(0).start()), ErrorKey.PARAM_AFTER_TRANSITIONS,
+                                transitions.get(0).pos().line());
+                        }
                         markDeclaration(ln);
                         paramLine(ln, line, w.get(0));
                         break;
@@ -286,9 +341,9 @@ public final class ModelParser {
                 }
             }
             if (states == null) {
-                throw new QchainException(pos(1, 0), ErrorKey.MISSING_STATES, "the end of the file");
+                throw new QchainException(new SourcePos(file, 1, 1), ErrorKey.MISSING_STATES, "the end of the file");
             }
-            return Model.of(file, kind(), List.copyOf(params.values()), states, transitions);
+            return Model.of(file, kind(), List.copyOf(params.values()), states, transitions, limits);
         }
 
         private void markDeclaration(int ln) {
@@ -349,7 +404,7 @@ public final class ModelParser {
             if (params.containsKey(name)) {
                 throw new QchainException(namePos, ErrorKey.DUPLICATE_PARAMETER, name);
             }
-            List<Token> toks = Lexer.tokens(file, ln, line, e, line.length());
+            List<Token> toks = tokens(ln, line, e);
             ExprParser p = new ExprParser(toks, 0);
             Domain domain = Domain.defaultFor(kind());
             Token t = p.peek();
@@ -368,7 +423,7 @@ public final class ModelParser {
                 Rational v = ExprParser.constant(p.parseExpr(), "a nominal value");
                 if (!domain.contains(v)) {
                     // name the value as written (0.6 rather than 3/5)
-                    String written = line.substring(first.pos().column() - 1, p.peek().pos().column() - 1).strip();
+                    String written = line.substring(first.index(), p.peek().index()).strip();
                     throw new QchainException(first.pos(), ErrorKey.VALUE_OUTSIDE_DOMAIN, name, written, domain);
                 }
                 nominal = Optional.of(v);
@@ -413,7 +468,7 @@ public final class ModelParser {
                 throw new QchainException(close.pos(), ErrorKey.SYNTAX,
                     "expected ')' or ']' to close the domain, found " + close.describe());
             }
-            String text = line.substring(open.pos().column() - 1, close.pos().column());
+            String text = line.substring(open.index(), close.index() + 1);
             boolean lowerClosed = open.is("[");
             boolean upperClosed = close.is("]");
             if (upper.isEmpty() && upperClosed) {
@@ -450,11 +505,10 @@ public final class ModelParser {
         }
 
         private QchainException badDomain(Token open, String line, SourcePos at, String why) {
-            int close = line.indexOf(')', open.pos().column() - 1);
-            int close2 = line.indexOf(']', open.pos().column() - 1);
+            int close = line.indexOf(')', open.index());
+            int close2 = line.indexOf(']', open.index());
             int end = close < 0 ? close2 : (close2 < 0 ? close : Math.min(close, close2));
-            String text = end < 0 ? line.substring(open.pos().column() - 1).strip()
-                : line.substring(open.pos().column() - 1, end + 1);
+            String text = end < 0 ? line.substring(open.index()).strip() : line.substring(open.index(), end + 1);
             return new QchainException(at, ErrorKey.BAD_DOMAIN, text, why);
         }
 
@@ -540,7 +594,7 @@ public final class ModelParser {
                 throw new QchainException(linePos, ErrorKey.DUPLICATE_TRANSITION, fromW.text(), toW.text(),
                     first.pos().line());
             }
-            List<Token> toks = Lexer.tokens(file, ln, line, toW.end(), line.length());
+            List<Token> toks = tokens(ln, line, toW.end());
             Token start = toks.get(0);
             if (start.kind() == Kind.END) {
                 throw new QchainException(start.pos(), ErrorKey.SYNTAX,

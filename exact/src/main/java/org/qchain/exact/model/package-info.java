@@ -27,5 +27,12 @@
  * <p>Every error is a {@link org.qchain.exact.QchainException} with an {@link org.qchain.exact.ErrorKey} and, for
  * errors in a file, a {@link org.qchain.exact.SourcePos} printed as {@code file:line:column}. The lexer, the
  * expression parser, the CSV reader and the printer are package-private helpers.
+ *
+ * <p>Robustness: reading is linear in the text (the model stores its transitions sparsely); numbers follow the one
+ * grammar of {@link org.qchain.exact.NumberGrammar} with its limits; sums, products, signs, folds
+ * ({@link org.qchain.exact.model.Expr#fold}) and printing use explicit stacks, so no expression depth overflows the
+ * call stack, and only parentheses nest (at most 200 deep). The {@link org.qchain.exact.InputLimits} a model was
+ * read under travel with it; {@link org.qchain.exact.model.Chains#requireDense} refuses, before any work, a dense
+ * matrix past their size limit.
  */
 package org.qchain.exact.model;

@@ -66,7 +66,7 @@ public record SweepRange(String parameter, Rational start, Rational step, Ration
         for (int i = 0; i < 3; i++) {
             try {
                 v[i] = Rational.parse(parts[i]);
-            } catch (NumberFormatException | ArithmeticException e) {
+            } catch (QchainException e) {
                 throw new QchainException(ErrorKey.SWEEP, text, "'" + parts[i].strip() + "' is not a number");
             }
         }

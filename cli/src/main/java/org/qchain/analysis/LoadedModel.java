@@ -1,0 +1,267 @@
+package org.qchain.analysis;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.Rational;
+import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.model.ChainKind;
+import org.qchain.exact.model.Chains;
+import org.qchain.exact.model.Model;
+import org.qchain.exact.model.ModelParser;
+import org.qchain.exact.model.ParamDecl;
+import org.qchain.result.Point;
+
+/**
+ * A model parsed once, its parameter point resolved once (nominal values, overridden by the given ones) and
+ * validated once, whatever analysis runs on it next. Every query reads the same loaded model, so every command
+ * accepts and refuses the same models with the same message at the same {@code file:line:col}.
+ *
+ * <p>Validation: a discrete model whose used parameters all have a value is evaluated exactly at that point through
+ * {@link Chains#transitionMatrix(Model, Map)} (entries in [0, 1], rows summing to exactly 1). A model with a
+ * parameter without a value is checked with its parameters symbolic (rows summing to 1 identically, ranges over the
+ * parameter domains); that check sits behind {@link SymbolicValidation}, so loading a model with values for every
+ * parameter loads no JAS or Symja class. Continuous models are parsed and resolved; the queries that need a discrete
+ * chain refuse them.
+ *
+ * <p>Immutable once loaded (the symbolic check, when asked for, is computed once and kept).
+ */
+public final class LoadedModel {
+    private final Model model;
+    private final Optional<Path> file;
+    private final Map<String, Rational> given;
+    private final Map<String, Rational> known;
+    private final Optional<RationalMatrix> matrix;
+    private volatile SymbolicValidation symbolic;
+
+    private LoadedModel(Model model, Optional<Path> file, Map<String, Rational> given) {
+        this.model = model;
+        this.file = file;
+        this.given = given;
+        Map<String, Rational> k = new LinkedHashMap<>();
+        for (ParamDecl d : model.params()) {
+            Rational v = given.containsKey(d.name()) ? given.get(d.name()) : d.nominal().orElse(null);
+            if (v != null) {
+                k.put(d.name(), v);
+            }
+        }
+        this.known = java.util.Collections.unmodifiableMap(k);
+        if (model.kind() == ChainKind.DISCRETE && complete()) {
+            // the numeric check: throws, located, for an entry outside [0, 1] or a row not summing to 1
+            this.matrix = Optional.of(Chains.transitionMatrix(model, given));
+        } else {
+            this.matrix = Optional.empty();
+            if (model.kind() == ChainKind.DISCRETE) {
+                symbolic();
+            }
+        }
+    }
+
+    /**
+     * Reads a model file (a name ending in {@code .csv} is read as a plain CSV matrix) and loads it.
+     *
+     * @param file   the model file
+     * @param values parameter values that override the nominal ones, by name
+     * @return the loaded model
+     * @throws QchainException for an unreadable file, a bad model (with file:line:col), an unknown parameter or a
+     *                         value outside its domain
+     */
+    public static LoadedModel load(Path file, Map<String, Rational> values) {
+        return of(ModelParser.parseFile(file), Optional.of(file), values);
+    }
+
+    /**
+     * Reads a model file and loads it with parameter values in the text form {@code p=1/20, r=0.25}.
+     *
+     * @param file the model file
+     * @param at   the values, if any
+     * @return the loaded model
+     * @throws QchainException as {@link #load(Path, Map)}; {@link ErrorKey#BAD_ARGUMENT} naming {@code --at} for a
+     *                         malformed value list
+     */
+    public static LoadedModel load(Path file, Optional<String> at) {
+        Model m = ModelParser.parseFile(file);
+        return of(m, Optional.of(file), at.map(t -> assignments(m, t)).orElse(Map.of()));
+    }
+
+    /**
+     * Loads a model read from text (a bundled example).
+     *
+     * @param name the name for messages
+     * @param text the model text
+     * @return the loaded model, with the nominal values
+     */
+    public static LoadedModel fromText(String name, String text) {
+        return of(ModelParser.parse(name, text), Optional.empty(), Map.of());
+    }
+
+    /**
+     * Loads a parsed model.
+     *
+     * @param model  the model
+     * @param file   the file it came from, if any (an output file must not replace it)
+     * @param values parameter values that override the nominal ones
+     * @return the loaded model
+     */
+    public static LoadedModel of(Model model, Optional<Path> file, Map<String, Rational> values) {
+        for (Map.Entry<String, Rational> e : values.entrySet()) {
+            ParamDecl d = model.param(e.getKey()).orElseThrow(() -> new QchainException(ErrorKey.BAD_ARGUMENT,
+                "parameter", e.getKey(), "the model declares no such parameter"));
+            if (!d.domain().contains(e.getValue())) {
+                throw new QchainException(ErrorKey.VALUE_OUTSIDE_DOMAIN, e.getKey(), e.getValue(), d.domain());
+            }
+        }
+        return new LoadedModel(model, file, Map.copyOf(values));
+    }
+
+    /**
+     * Reads parameter values such as {@code p=1/20, r=0.25} for a model.
+     *
+     * @param model the model whose parameters are named
+     * @param text  the text
+     * @return the values, by name, in the order given
+     * @throws QchainException {@link ErrorKey#BAD_ARGUMENT} naming {@code --at} and the text, with the reason
+     */
+    public static Map<String, Rational> assignments(Model model, String text) {
+        try {
+            return Chains.parseAssignments(model, text);
+        } catch (QchainException e) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--at", text, e.detail());
+        }
+    }
+
+    /** The parsed model. */
+    public Model model() {
+        return model;
+    }
+
+    /** The name used in output headers: the file name as the user gave it. */
+    public String source() {
+        return model.source();
+    }
+
+    /** The model file, if the model came from one. */
+    public Optional<Path> file() {
+        return file;
+    }
+
+    /** The state names. */
+    public List<String> states() {
+        return model.states();
+    }
+
+    /** The values given explicitly (the {@code --at} values), by name. */
+    public Map<String, Rational> given() {
+        return given;
+    }
+
+    /** Every value known: nominal values overridden by the given ones, in declaration order. */
+    public Map<String, Rational> known() {
+        return known;
+    }
+
+    /** Whether every parameter that a transition uses has a value (nominal or given). */
+    public boolean complete() {
+        return free().isEmpty();
+    }
+
+    /** The used parameters without a value, in declaration order. */
+    public List<String> free() {
+        List<String> out = new ArrayList<>();
+        for (String name : model.usedParameters()) {
+            if (!known.containsKey(name)) {
+                out.add(name);
+            }
+        }
+        return out;
+    }
+
+    /** Whether some used parameter has no nominal value (a value given explicitly does not count). */
+    public boolean hasParameterWithoutNominal() {
+        for (String name : model.usedParameters()) {
+            if (model.param(name).flatMap(ParamDecl::nominal).isEmpty()) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The values of the used parameters, if every one has a value.
+     *
+     * @return the point, in declaration order; empty if a used parameter has no value
+     */
+    public Optional<Point> point() {
+        if (!complete()) {
+            return Optional.empty();
+        }
+        Map<String, Rational> p = new LinkedHashMap<>();
+        for (String name : model.usedParameters()) {
+            p.put(name, known.get(name));
+        }
+        return Optional.of(new Point(p));
+    }
+
+    /**
+     * The exact one-step matrix at the point.
+     *
+     * @return the matrix, validated
+     * @throws QchainException {@link ErrorKey#FREE_PARAMETERS} if a used parameter has no value;
+     *                         {@link ErrorKey#WRONG_KIND} for a continuous model
+     */
+    public RationalMatrix matrix() {
+        if (matrix.isPresent()) {
+            return matrix.get();
+        }
+        if (model.kind() != ChainKind.DISCRETE) {
+            throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(), "it has no one-step matrix");
+        }
+        throw new QchainException(ErrorKey.FREE_PARAMETERS, String.join(", ", free()));
+    }
+
+    /**
+     * The index of a state named in a query.
+     *
+     * @param option the option or field that names it, for the message
+     * @param name   the state name
+     * @return its index
+     * @throws QchainException {@link ErrorKey#BAD_ARGUMENT} listing the states if there is no such state
+     */
+    public int state(String option, String name) {
+        return model.indexOf(name).orElseThrow(() -> new QchainException(ErrorKey.BAD_ARGUMENT, option, name,
+            "not a state of " + model.source() + " (states: " + String.join(", ", model.states()) + ")"));
+    }
+
+    /**
+     * Refuses a model that is not a discrete chain.
+     *
+     * @param why the reason, as the message's second part
+     * @throws QchainException {@link ErrorKey#WRONG_KIND}
+     */
+    void requireDiscrete(String why) {
+        if (model.kind() != ChainKind.DISCRETE) {
+            throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(), why);
+        }
+    }
+
+    /** The symbolic check of the model (rows sum to 1 identically; range conditions), computed once. */
+    SymbolicValidation symbolic() {
+        SymbolicValidation s = symbolic;
+        if (s == null) {
+            synchronized (this) {
+                s = symbolic;
+                if (s == null) {
+                    // the only reference to the symbolic side: numeric runs never reach it
+                    s = SymbolicEngine.validate(model);
+                    symbolic = s;
+                }
+            }
+        }
+        return s;
+    }
+}

@@ -1,0 +1,132 @@
+package org.qchain.analysis;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.MatrixPowers;
+import org.qchain.exact.Progress;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.Rational;
+import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.SizeEstimate;
+import org.qchain.exact.TopPaths;
+import org.qchain.exact.WeightedPath;
+import org.qchain.result.CheckResult;
+import org.qchain.result.StepResult;
+
+/** The numeric route: the exact module's engines on the evaluated matrix. References no symbolic class. */
+final class NumericEngine {
+    /** The option that raises the size limit, named in the refusal. */
+    static final String MAX_DIGITS_OPTION = "--max-digits";
+    /** The option that raises the limit on the work of a path search. */
+    static final String MAX_PATH_DIGITS_OPTION = "--max-path-digits";
+
+    private NumericEngine() {
+    }
+
+    /** The size guard of a numeric step query: every estimate checked before any engine runs. */
+    static void guard(LoadedModel model, StepQuery q) {
+        RationalMatrix p = model.matrix();
+        if (q.from().isEmpty()) {
+            SizeEstimate.requireWithin(SizeEstimate.digitsOfPower(p, q.n()), q.maxDigits(), MAX_DIGITS_OPTION);
+            return;
+        }
+        int from = model.state("--from", q.from().get());
+        q.to().ifPresent(t -> model.state("--to", t));
+        // one entry is computed through its whole row, so the row's size bounds both
+        SizeEstimate.requireWithin(SizeEstimate.digitsOfRow(p, from, q.n()), q.maxDigits(), MAX_DIGITS_OPTION);
+        if (q.paths().isPresent()) {
+            if (q.n() > Integer.MAX_VALUE) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "-n", q.n(),
+                    "--paths needs n at most " + Integer.MAX_VALUE);
+            }
+            long work = SizeEstimate.digitsOfPathSearch(p, q.n(), q.paths().getAsInt());
+            if (work > q.maxPathDigits()) {
+                throw new QchainException(ErrorKey.PATH_SEARCH_TOO_LARGE, work, q.maxPathDigits(),
+                    MAX_PATH_DIGITS_OPTION);
+            }
+        }
+    }
+
+    static StepResult step(LoadedModel model, StepQuery q, Progress progress) {
+        guard(model, q);
+        RationalMatrix p = model.matrix();
+        List<String> warnings = new ArrayList<>();
+        StepResult.Header header = new StepResult.Header(model.source(), model.model().kind().word(), q.n(),
+            warnings);
+        if (q.from().isEmpty()) {
+            RationalMatrix pn = MatrixPowers.power(p, q.n(), progress);
+            List<List<Rational>> rows = new ArrayList<>();
+            for (int i = 0; i < pn.rows(); i++) {
+                rows.add(List.of(pn.row(i)));
+            }
+            return new StepResult.Matrix(header, model.states(), rows);
+        }
+        int from = model.state("--from", q.from().get());
+        if (q.to().isEmpty()) {
+            return new StepResult.Row(header, q.from().get(), model.states(),
+                List.of(MatrixPowers.rowOfPower(p, from, q.n(), progress)));
+        }
+        int to = model.state("--to", q.to().get());
+        Rational total = MatrixPowers.entryOfPower(p, from, to, q.n(), progress);
+        Optional<List<StepResult.PathLine>> paths = Optional.empty();
+        if (q.paths().isPresent()) {
+            paths = Optional.of(paths(model, from, to, total, q, warnings, progress));
+        }
+        // the header is built after the path search, which may add warnings
+        header = new StepResult.Header(model.source(), model.model().kind().word(), q.n(), warnings);
+        return new StepResult.Single(header, q.from().get(), q.to().get(), total, paths);
+    }
+
+    private static List<StepResult.PathLine> paths(LoadedModel model, int from, int to, Rational total, StepQuery q,
+                                                   List<String> warnings, Progress progress) {
+        int k = q.paths().getAsInt();
+        List<StepResult.PathLine> out = new ArrayList<>();
+        String fromName = q.from().get();
+        String toName = q.to().get();
+        if (total.isZero()) {
+            warnings.add("no path of " + q.n() + " steps leads from " + fromName + " to " + toName);
+            return out;
+        }
+        List<WeightedPath> top = TopPaths.mostProbable(model.matrix(), from, to, (int) q.n(), k, progress);
+        for (WeightedPath w : top) {
+            List<String> names = new ArrayList<>();
+            for (int s : w.states()) {
+                names.add(model.states().get(s));
+            }
+            out.add(new StepResult.PathLine(names, w.probability(), w.probability().divide(total)));
+        }
+        if (top.size() < k) {
+            warnings.add("only " + top.size() + (top.size() == 1 ? " path" : " paths") + " of " + q.n()
+                + " steps " + (top.size() == 1 ? "leads" : "lead") + " from " + fromName + " to " + toName
+                + "; --paths asked for " + k);
+        }
+        return out;
+    }
+
+    /** The one-step matrix, looked at a second, independent time: entries in [0, 1], rows summing to exactly 1. */
+    static CheckResult check(LoadedModel model) {
+        RationalMatrix p = model.matrix();
+        List<String> states = model.states();
+        for (int i = 0; i < p.rows(); i++) {
+            Rational sum = Rational.ZERO;
+            for (int j = 0; j < p.cols(); j++) {
+                Rational x = p.get(i, j);
+                if (x.signum() < 0 || x.compareTo(Rational.ONE) > 0) {
+                    throw new QchainException(ErrorKey.PROBABILITY_RANGE, states.get(i), states.get(j), x);
+                }
+                sum = sum.add(x);
+            }
+            if (!sum.isOne()) {
+                throw new QchainException(ErrorKey.ROW_SUM, states.get(i), sum);
+            }
+        }
+        List<List<Rational>> rows = new ArrayList<>();
+        for (int i = 0; i < p.rows(); i++) {
+            rows.add(List.of(p.row(i)));
+        }
+        StepResult.Header h = new StepResult.Header(model.source(), model.model().kind().word(), 1, List.of());
+        return new CheckResult.Numeric(new StepResult.Matrix(h, states, rows));
+    }
+}

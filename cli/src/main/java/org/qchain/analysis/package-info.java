@@ -1,0 +1,21 @@
+/**
+ * The analysis layer: the one way from a model and a question to a typed result, without the command line (no
+ * picocli here; a test scans the sources).
+ *
+ * <p>{@link org.qchain.analysis.LoadedModel} parses a model once, resolves its parameter point once (nominal values,
+ * overridden by given ones) and validates it once: numerically at the point through the exact module when every used
+ * parameter has a value, else with the parameters symbolic behind {@code SymbolicValidation}, so that numeric runs
+ * load no JAS or Symja class. A typed query ({@link org.qchain.analysis.StepQuery},
+ * {@link org.qchain.analysis.SensQuery}, {@link org.qchain.analysis.ClosedQuery},
+ * {@link org.qchain.analysis.CheckQuery}) goes to {@link org.qchain.analysis.Analysis}, which picks the
+ * {@link org.qchain.analysis.Route}, runs the query's size guard before any engine and returns a result of
+ * {@code org.qchain.result}. {@code NumericEngine} calls the exact module only; {@code SymbolicEngine} is the one
+ * class that names symbolic types.
+ *
+ * <pre>{@code
+ * LoadedModel m = LoadedModel.load(Path.of("pump.chain"), Optional.of("p=1/20"));
+ * Result r = Analysis.step(m, StepQuery.entry(12, "Up", "Down"), Progress.NONE);
+ * String text = OutputFormat.TEXT.formatter(12).format(r);
+ * }</pre>
+ */
+package org.qchain.analysis;

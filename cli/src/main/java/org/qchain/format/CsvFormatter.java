@@ -1,0 +1,128 @@
+package org.qchain.format;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.qchain.exact.Rational;
+import org.qchain.result.CheckResult;
+import org.qchain.result.ClosedResult;
+import org.qchain.result.SensResult;
+import org.qchain.result.StepResult;
+import org.qchain.result.SymbolicStepResult;
+
+/**
+ * Comma-separated values as RFC 4180 defines them: CRLF after every record, a header row, fields quoted when they hold
+ * a comma, a quotation mark or a line break, quotation marks doubled.
+ *
+ * <p>The full matrix is written as a header row of state names and one row of exact values per state, which is the
+ * plain CSV matrix form that the model parser reads back: the output of {@code step -n N --format csv} is itself a
+ * valid model (the N-step chain).
+ */
+final class CsvFormatter extends Layout {
+    CsvFormatter(int digits) {
+        super(digits);
+    }
+
+    @Override
+    public String stepMatrix(StepResult.Matrix m) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, m.states());
+        for (List<Rational> row : m.entries()) {
+            Text.csvRecord(sb, row.stream().map(Rational::toString).toList());
+        }
+        return sb.toString();
+    }
+
+    @Override
+    public String stepRow(StepResult.Row r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("n", "from", "to", "value", "decimal"));
+        for (int j = 0; j < r.states().size(); j++) {
+            Rational e = r.entries().get(j);
+            Text.csvRecord(sb, List.of(String.valueOf(r.header().n()), r.from(), r.states().get(j), e.toString(),
+                dec(e)));
+        }
+        return sb.toString();
+    }
+
+    @Override
+    public String stepSingle(StepResult.Single s) {
+        StringBuilder sb = new StringBuilder();
+        if (s.paths().isPresent()) {
+            Text.csvRecord(sb, List.of("rank", "probability", "decimal", "share", "percent", "path"));
+            List<StepResult.PathLine> paths = s.paths().get();
+            for (int k = 0; k < paths.size(); k++) {
+                StepResult.PathLine p = paths.get(k);
+                Text.csvRecord(sb, List.of(String.valueOf(k + 1), p.probability().toString(), dec(p.probability()),
+                    p.share().toString(), Text.percent(p.share(), digits), String.join(" ", p.states())));
+            }
+            return sb.toString();
+        }
+        Text.csvRecord(sb, List.of("n", "from", "to", "value", "decimal"));
+        Text.csvRecord(sb, List.of(String.valueOf(s.header().n()), s.from(), s.to(), s.value().toString(),
+            dec(s.value())));
+        return sb.toString();
+    }
+
+    @Override
+    public String symbolicStep(SymbolicStepResult r) {
+        StringBuilder sb = new StringBuilder();
+        boolean values = r.values().isPresent();
+        Text.csvRecord(sb, values ? List.of("n", "from", "to", "value", "decimal", "formula")
+            : List.of("n", "from", "to", "formula"));
+        Symbolic.forEachCell(r, (i, j) -> {
+            List<String> rec = new ArrayList<>(List.of(String.valueOf(r.n()), r.rows().get(i), r.columns().get(j)));
+            if (values) {
+                Rational e = r.values().get().get(i).get(j);
+                rec.add(e.toString());
+                rec.add(dec(e));
+            }
+            rec.add(r.formulas().get(i).get(j).plain());
+            Text.csvRecord(sb, rec);
+        });
+        return sb.toString();
+    }
+
+    @Override
+    public String sens(SensResult s) {
+        StringBuilder sb = new StringBuilder();
+        if (s.sweep().isPresent()) {
+            SensResult.Sweep w = s.sweep().get();
+            Text.csvRecord(sb, List.of(w.parameter(), "value", "decimal", "derivative", "derivative_decimal"));
+            for (SensResult.SweepLine l : w.lines()) {
+                Text.csvRecord(sb, List.of(l.value().toString(), l.probability().toString(), dec(l.probability()),
+                    l.derivative().toString(), dec(l.derivative())));
+            }
+            return sb.toString();
+        }
+        Text.csvRecord(sb, List.of("quantity", "formula", "value", "decimal"));
+        if (s.at().isEmpty()) {
+            Text.csvRecord(sb, List.of("P", s.probability().plain(), "", ""));
+            Text.csvRecord(sb, List.of("dP/d" + s.wrt(), s.derivative().plain(), "", ""));
+            return sb.toString();
+        }
+        SensResult.AtPoint a = s.at().get();
+        Text.csvRecord(sb, List.of("P", s.probability().plain(), a.probability().toString(), dec(a.probability())));
+        Text.csvRecord(sb, List.of("dP/d" + s.wrt(), s.derivative().plain(), a.derivative().toString(),
+            dec(a.derivative())));
+        a.elasticity().ifPresent(e -> Text.csvRecord(sb, List.of("elasticity", "", e.toString(), dec(e))));
+        return sb.toString();
+    }
+
+    /** No CSV layout for closed forms: the command refuses {@code --format csv} before any work. */
+    @Override
+    public String closed(ClosedResult r) {
+        throw new UnsupportedOperationException("no CSV layout for closed forms");
+    }
+
+    @Override
+    String symbolicCheck(CheckResult.Symbolic s) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("from", "to", "formula"));
+        for (int i = 0; i < s.states().size(); i++) {
+            for (int j = 0; j < s.states().size(); j++) {
+                Text.csvRecord(sb, List.of(s.states().get(i), s.states().get(j), s.entries().get(i).get(j).plain()));
+            }
+        }
+        return sb.toString();
+    }
+}

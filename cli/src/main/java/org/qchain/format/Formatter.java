@@ -1,0 +1,65 @@
+package org.qchain.format;
+
+import org.qchain.result.CheckResult;
+import org.qchain.result.ClosedResult;
+import org.qchain.result.Result;
+import org.qchain.result.SensResult;
+import org.qchain.result.StepResult;
+import org.qchain.result.SymbolicStepResult;
+
+/**
+ * Lays out any result as text of one format: one method per result type. Formatters never compute beyond rounding
+ * an exact value to the digits they were made with ({@link OutputFormat#formatter(int)}).
+ */
+public interface Formatter {
+
+    /**
+     * The full text for stdout or an output file, ending with a line break.
+     *
+     * @param result what to print
+     * @return the formatted text
+     * @throws UnsupportedOperationException if this format has no layout for the result (CSV for closed forms)
+     */
+    default String format(Result result) {
+        if (result instanceof StepResult.Matrix m) {
+            return stepMatrix(m);
+        }
+        if (result instanceof StepResult.Row r) {
+            return stepRow(r);
+        }
+        if (result instanceof StepResult.Single s) {
+            return stepSingle(s);
+        }
+        if (result instanceof SymbolicStepResult s) {
+            return symbolicStep(s);
+        }
+        if (result instanceof SensResult s) {
+            return sens(s);
+        }
+        if (result instanceof ClosedResult c) {
+            return closed(c);
+        }
+        return check((CheckResult) result);
+    }
+
+    /** The full matrix P^n. */
+    String stepMatrix(StepResult.Matrix m);
+
+    /** One row of P^n. */
+    String stepRow(StepResult.Row r);
+
+    /** One entry of P^n, with its paths if present. */
+    String stepSingle(StepResult.Single s);
+
+    /** P^n, a row or an entry as formulas in the parameters. */
+    String symbolicStep(SymbolicStepResult r);
+
+    /** A sensitivity. */
+    String sens(SensResult s);
+
+    /** Closed forms in n. */
+    String closed(ClosedResult r);
+
+    /** A checked model. */
+    String check(CheckResult c);
+}

@@ -1,0 +1,150 @@
+package org.qchain.format;
+
+import java.util.List;
+import java.util.function.Function;
+
+/**
+ * A small writer of compact JSON text (RFC 8259), keys in the order they are added. Written by hand so that the CLI
+ * needs no JSON library; mutable, one per document.
+ */
+public final class Json {
+    private final StringBuilder sb = new StringBuilder();
+    private boolean first = true;
+
+    /** A writer positioned inside a new top-level object. */
+    public static Json object() {
+        Json j = new Json();
+        j.sb.append('{');
+        return j;
+    }
+
+    /** Appends a string member (mutates). */
+    public Json string(String key, String value) {
+        key(key);
+        quote(sb, value);
+        return this;
+    }
+
+    /** Appends an integer member (mutates). */
+    public Json number(String key, long value) {
+        key(key);
+        sb.append(value);
+        return this;
+    }
+
+    /** Appends an array of strings (mutates). */
+    public Json strings(String key, List<String> values) {
+        key(key);
+        stringArray(sb, values);
+        return this;
+    }
+
+    /** Appends an array of arrays of strings (mutates). */
+    public Json stringRows(String key, List<? extends List<String>> rows) {
+        key(key);
+        sb.append('[');
+        for (int i = 0; i < rows.size(); i++) {
+            if (i > 0) {
+                sb.append(',');
+            }
+            stringArray(sb, rows.get(i));
+        }
+        sb.append(']');
+        return this;
+    }
+
+    /** Appends an array of objects, each written by {@code body} into a fresh writer (mutates). */
+    public <T> Json objects(String key, List<T> items, Function<T, Json> body) {
+        key(key);
+        sb.append('[');
+        for (int i = 0; i < items.size(); i++) {
+            if (i > 0) {
+                sb.append(',');
+            }
+            sb.append(body.apply(items.get(i)).close());
+        }
+        sb.append(']');
+        return this;
+    }
+
+    /** Appends a nested object written into a fresh writer by the caller (mutates). */
+    public Json object(String key, Json inner) {
+        key(key);
+        sb.append(inner.close());
+        return this;
+    }
+
+    /** Closes the object and returns its text. */
+    public String close() {
+        return sb.append('}').toString();
+    }
+
+    private void key(String key) {
+        if (!first) {
+            sb.append(',');
+        }
+        first = false;
+        quote(sb, key);
+        sb.append(':');
+    }
+
+    private static void stringArray(StringBuilder sb, List<String> values) {
+        sb.append('[');
+        for (int i = 0; i < values.size(); i++) {
+            if (i > 0) {
+                sb.append(',');
+            }
+            quote(sb, values.get(i));
+        }
+        sb.append(']');
+    }
+
+    /**
+     * Appends {@code s} as a JSON string: quotation mark, reverse solidus and control characters escaped as RFC 8259
+     * section 7 requires; characters outside ASCII as {@code \}{@code uXXXX} (UTF-16 units), so the output is plain
+     * ASCII whatever the platform's encoding.
+     */
+    static void quote(StringBuilder sb, String s) {
+        sb.append('"');
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            switch (c) {
+                case '"':
+                    sb.append("\\\"");
+                    break;
+                case '\\':
+                    sb.append("\\\\");
+                    break;
+                case '\n':
+                    sb.append("\\n");
+                    break;
+                case '\r':
+                    sb.append("\\r");
+                    break;
+                case '\t':
+                    sb.append("\\t");
+                    break;
+                case '\b':
+                    sb.append("\\b");
+                    break;
+                case '\f':
+                    sb.append("\\f");
+                    break;
+                default:
+                    if (c < 0x20 || c > 0x7e) {
+                        sb.append(String.format("\\u%04x", (int) c));
+                    } else {
+                        sb.append(c);
+                    }
+            }
+        }
+        sb.append('"');
+    }
+
+    /** {@code s} as a JSON string literal. */
+    public static String quote(String s) {
+        StringBuilder sb = new StringBuilder();
+        quote(sb, s);
+        return sb.toString();
+    }
+}

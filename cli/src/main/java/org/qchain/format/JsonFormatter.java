@@ -1,0 +1,248 @@
+package org.qchain.format;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.qchain.exact.Rational;
+import org.qchain.result.CheckResult;
+import org.qchain.result.ClosedResult;
+import org.qchain.result.Point;
+import org.qchain.result.SensResult;
+import org.qchain.result.StepResult;
+import org.qchain.result.SymbolicStepResult;
+
+/**
+ * One compact JSON object per result, then a line break. The keys the issues name come first, in their order; fields
+ * added since come after them and are never renamed or dropped (docs/commands.md and docs/symbolic.md have the
+ * schemas).
+ */
+final class JsonFormatter extends Layout {
+    JsonFormatter(int digits) {
+        super(digits);
+    }
+
+    private List<String> exact(List<Rational> row) {
+        return row.stream().map(Rational::toString).toList();
+    }
+
+    private List<String> decimals(List<Rational> row) {
+        return row.stream().map(this::dec).toList();
+    }
+
+    // --- step ----------------------------------------------------------------------------------------------------
+
+    @Override
+    public String stepMatrix(StepResult.Matrix m) {
+        StepResult.Header h = m.header();
+        Json j = Json.object()
+            .string("kind", h.kind())
+            .number("n", h.n())
+            .strings("states", m.states())
+            .stringRows("matrix", m.entries().stream().map(this::exact).toList())
+            .stringRows("decimals", m.entries().stream().map(this::decimals).toList());
+        return common(j, h).close() + "\n";
+    }
+
+    @Override
+    public String stepRow(StepResult.Row r) {
+        StepResult.Header h = r.header();
+        Json j = Json.object()
+            .number("n", h.n())
+            .string("from", r.from())
+            .strings("states", r.states())
+            .strings("row", exact(r.entries()))
+            .strings("decimals", decimals(r.entries()))
+            .string("kind", h.kind());
+        return common(j, h).close() + "\n";
+    }
+
+    @Override
+    public String stepSingle(StepResult.Single s) {
+        StepResult.Header h = s.header();
+        Json j = Json.object()
+            .number("n", h.n())
+            .string("from", s.from())
+            .string("to", s.to())
+            .string("value", s.value().toString())
+            .string("decimal", dec(s.value()))
+            .string("kind", h.kind());
+        s.paths().ifPresent(paths -> j.objects("paths", paths, p -> Json.object()
+            .strings("states", p.states())
+            .string("probability", p.probability().toString())
+            .string("decimal", dec(p.probability()))
+            .string("share", p.share().toString())
+            .string("percent", Text.percent(p.share(), digits))));
+        return common(j, h).close() + "\n";
+    }
+
+    private Json common(Json j, StepResult.Header h) {
+        return j.number("digits", digits).string("model", h.source()).strings("warnings", h.warnings());
+    }
+
+    // --- symbolic step -----------------------------------------------------------------------------------------
+
+    @Override
+    public String symbolicStep(SymbolicStepResult r) {
+        Json j = Json.object();
+        String form = r.factored() ? "factored" : "expanded";
+        List<List<String>> plain = Symbolic.plain(r.formulas());
+        if (r.isSingle()) {
+            j.number("n", r.n()).string("from", r.from().get()).string("to", r.to().get())
+                .strings("parameters", r.parameters()).string("form", form).string("formula", plain.get(0).get(0));
+            if (r.values().isPresent()) {
+                Rational e = r.values().get().get(0).get(0);
+                j.object("at", point(r.point().orElseThrow())).string("value", e.toString())
+                    .string("decimal", dec(e));
+            }
+        } else if (r.isMatrix()) {
+            j.string("kind", r.kind()).number("n", r.n()).strings("parameters", r.parameters())
+                .strings("states", r.states()).string("form", form).stringRows("matrix", plain);
+            if (r.values().isPresent()) {
+                j.object("at", point(r.point().orElseThrow()))
+                    .stringRows("values", r.values().get().stream().map(this::exact).toList())
+                    .stringRows("decimals", r.values().get().stream().map(this::decimals).toList());
+            }
+        } else {
+            j.number("n", r.n()).string("from", r.from().get()).strings("parameters", r.parameters())
+                .strings("states", r.states()).string("form", form).strings("row", plain.get(0));
+            if (r.values().isPresent()) {
+                j.object("at", point(r.point().orElseThrow())).strings("values", exact(r.values().get().get(0)))
+                    .strings("decimals", decimals(r.values().get().get(0)));
+            }
+        }
+        if (!r.isMatrix()) {
+            j.string("kind", r.kind());
+        }
+        return j.number("digits", digits).string("model", r.source()).strings("warnings", r.warnings()).close()
+            + "\n";
+    }
+
+    private static Json point(Point pt) {
+        Json j = Json.object();
+        for (Map.Entry<String, Rational> e : pt.values().entrySet()) {
+            j.string(e.getKey(), e.getValue().toString());
+        }
+        return j;
+    }
+
+    // --- sens --------------------------------------------------------------------------------------------------
+
+    @Override
+    public String sens(SensResult s) {
+        Json j = Json.object().number("n", s.n()).string("from", s.from()).string("to", s.to()).string("wrt", s.wrt())
+            .strings("parameters", s.parameters()).string("formula", s.probability().plain())
+            .string("derivative", s.derivative().plain());
+        if (s.at().isPresent()) {
+            SensResult.AtPoint a = s.at().get();
+            j.object("at", point(a.point())).string("value", a.probability().toString())
+                .string("decimal", dec(a.probability()))
+                .string("derivative_value", a.derivative().toString())
+                .string("derivative_decimal", dec(a.derivative()));
+            if (a.elasticity().isPresent()) {
+                j.string("elasticity", a.elasticity().get().toString())
+                    .string("elasticity_decimal", dec(a.elasticity().get()));
+            }
+        }
+        if (s.sweep().isPresent()) {
+            SensResult.Sweep w = s.sweep().get();
+            Json sw = Json.object().string("parameter", w.parameter()).string("start", w.start().toString())
+                .string("step", w.step().toString()).string("end", w.end().toString())
+                .object("others", point(w.others()))
+                .objects("rows", w.lines(), l -> Json.object().string(w.parameter(), l.value().toString())
+                    .string("value", l.probability().toString())
+                    .string("decimal", dec(l.probability()))
+                    .string("derivative", l.derivative().toString())
+                    .string("derivative_decimal", dec(l.derivative())));
+            j.object("sweep", sw);
+        }
+        return j.string("kind", s.kind()).number("digits", digits).string("model", s.source())
+            .strings("warnings", s.warnings()).close() + "\n";
+    }
+
+    // --- closed ------------------------------------------------------------------------------------------------
+
+    @Override
+    public String closed(ClosedResult r) {
+        List<List<String>> cells = Symbolic.plain(r.cells());
+        Json j = Json.object()
+            .string("n_symbol", r.nSymbol())
+            .number("valid_from", r.validFrom())
+            .strings("conditions", r.conditions())
+            .strings("states", r.states());
+        switch (r.selection()) {
+            case ENTRY:
+                j.string("from", r.rows().get(0)).string("to", r.cols().get(0)).string("formula", cells.get(0).get(0));
+                break;
+            case ROW:
+                j.string("start", r.rows().get(0)).strings("row", cells.get(0));
+                break;
+            default:
+                j.stringRows("matrix", cells);
+        }
+        j.string("form", r.form().word()).strings("parameters", r.parameters());
+        if (!r.isSeries()) {
+            j.strings("conditions_not_proved", r.notProved());
+        }
+        if (r.form() == ClosedResult.Form.GF) {
+            j.string("variable", "z");
+        }
+        if (r.form() == ClosedResult.Form.RECURRENCE) {
+            List<Object[]> items = new ArrayList<>();
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int k = 0; k < r.cols().size(); k++) {
+                    items.add(new Object[] {r.rows().get(i), r.cols().get(k), r.recurrences().get(i).get(k)});
+                }
+            }
+            j.objects("recurrences", items, c -> {
+                ClosedResult.Recurrence rec = (ClosedResult.Recurrence) c[2];
+                return Json.object().string("from", (String) c[0]).string("to", (String) c[1])
+                    .strings("coefficients", rec.coefficients()).number("valid_from", rec.validFrom())
+                    .strings("initial", rec.initial());
+            });
+        }
+        if (!r.isSeries()) {
+            j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor())
+                .number("multiplicity", e.multiplicity()).number("jordan_index", e.jordanIndex())
+                .string("kind", e.kind()).strings("values", e.values()));
+            j.objects("root_polynomials", r.roots(), rt -> Json.object().string("name", rt.name())
+                .string("polynomial", rt.polynomial()).strings("roots", rt.roots()));
+            r.longRun().ifPresent(lr -> {
+                List<Integer> rs = new ArrayList<>();
+                for (int k = 0; k < lr.limits().size(); k++) {
+                    rs.add(k);
+                }
+                Json l = Json.object().number("period", lr.period())
+                    .objects("limits", rs, k -> limitJson(r, k, lr.limits().get(k)))
+                    .string("rate", lr.rate());
+                lr.rateValue().ifPresent(v -> l.string("rate_value", v));
+                j.object("long_run", l);
+            });
+            r.point().ifPresent(p -> j.string("at", p.text()));
+        }
+        j.string("kind", "discrete").string("model", r.source()).number("digits", r.digits())
+            .strings("warnings", r.warnings());
+        return j.close() + "\n";
+    }
+
+    private static Json limitJson(ClosedResult r, int k, List<List<String>> grid) {
+        Json l = Json.object().number("r", k);
+        switch (r.selection()) {
+            case ENTRY:
+                return l.string("formula", grid.get(0).get(0));
+            case ROW:
+                return l.strings("row", grid.get(0));
+            default:
+                return l.stringRows("matrix", grid);
+        }
+    }
+
+    // --- check -------------------------------------------------------------------------------------------------
+
+    @Override
+    String symbolicCheck(CheckResult.Symbolic s) {
+        return Json.object().string("kind", s.kind()).strings("states", s.states())
+            .strings("parameters", s.parameters()).stringRows("matrix", Symbolic.plain(s.entries()))
+            .strings("conditions", s.warnings()).string("model", s.source()).strings("warnings", s.warnings())
+            .close() + "\n";
+    }
+}

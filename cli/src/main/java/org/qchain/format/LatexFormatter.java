@@ -1,0 +1,225 @@
+package org.qchain.format;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.qchain.exact.Rational;
+import org.qchain.result.CheckResult;
+import org.qchain.result.ClosedResult;
+import org.qchain.result.SensResult;
+import org.qchain.result.StepResult;
+import org.qchain.result.SymbolicStepResult;
+
+/**
+ * LaTeX for reports: tabulars with {@code \frac} entries and state names as text (special characters escaped),
+ * formulas in {@code align*}, the caution as a comment. Needs no package beyond standard LaTeX and amsmath.
+ */
+final class LatexFormatter extends Layout {
+    LatexFormatter(int digits) {
+        super(digits);
+    }
+
+    private static String caution(StringBuilder sb) {
+        return sb.append("% ").append(Caution.TEXT).append('\n').toString();
+    }
+
+    // --- step ----------------------------------------------------------------------------------------------------
+
+    @Override
+    public String stepMatrix(StepResult.Matrix m) {
+        StepResult.Header h = m.header();
+        StringBuilder sb = new StringBuilder();
+        sb.append("% ").append(Text.power(h.n())).append(" for ").append(Text.comment(h.source())).append(" (")
+            .append(h.kind()).append(" chain): row = state at the start, column = state after ")
+            .append(Text.steps(h.n())).append('\n');
+        grid(sb, m, true);
+        sb.append("% decimals: ").append(Text.digits(digits)).append('\n');
+        grid(sb, m, false);
+        return caution(sb);
+    }
+
+    private void grid(StringBuilder sb, StepResult.Matrix m, boolean exact) {
+        int n = m.states().size();
+        sb.append("\\begin{tabular}{l|").append("r".repeat(n)).append("}\n");
+        sb.append("$P^{").append(m.header().n()).append("}$");
+        for (String s : m.states()) {
+            sb.append(" & ").append(Text.latex(s));
+        }
+        sb.append(" \\\\ \\hline\n");
+        for (int i = 0; i < n; i++) {
+            sb.append(Text.latex(m.states().get(i)));
+            for (Rational e : m.entries().get(i)) {
+                sb.append(" & ").append(cell(e, exact));
+            }
+            sb.append(" \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+    }
+
+    private String cell(Rational e, boolean exact) {
+        return "$" + (exact ? Text.frac(e) : dec(e)) + "$";
+    }
+
+    @Override
+    public String stepRow(StepResult.Row r) {
+        StepResult.Header h = r.header();
+        StringBuilder sb = new StringBuilder();
+        sb.append("% row ").append(Text.comment(r.from())).append(" of ").append(Text.power(h.n())).append(" for ")
+            .append(Text.comment(h.source())).append(" (").append(h.kind()).append(" chain); decimals: ")
+            .append(Text.digits(digits)).append('\n');
+        sb.append("\\begin{tabular}{l|rr}\n");
+        sb.append("to & exact & decimal \\\\ \\hline\n");
+        for (int j = 0; j < r.states().size(); j++) {
+            Rational e = r.entries().get(j);
+            sb.append(Text.latex(r.states().get(j))).append(" & ").append(cell(e, true)).append(" & ")
+                .append(cell(e, false)).append(" \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+        return caution(sb);
+    }
+
+    @Override
+    public String stepSingle(StepResult.Single s) {
+        StepResult.Header h = s.header();
+        StringBuilder sb = new StringBuilder();
+        sb.append("% ").append(Text.comment(h.source())).append(" (").append(h.kind()).append(" chain); decimals: ")
+            .append(Text.digits(digits)).append('\n');
+        sb.append("$P^{").append(h.n()).append("}(\\text{").append(Text.latex(s.from())).append("}, \\text{")
+            .append(Text.latex(s.to())).append("}) = ").append(Text.frac(s.value())).append(" \\approx ")
+            .append(dec(s.value())).append("$\n");
+        s.paths().ifPresent(paths -> {
+            sb.append("\n\\begin{tabular}{rlrr}\n");
+            sb.append("rank & path & probability & share \\\\ \\hline\n");
+            for (int k = 0; k < paths.size(); k++) {
+                StepResult.PathLine p = paths.get(k);
+                sb.append(k + 1).append(" & ").append(Text.latex(Paths.compact(p.states())).replace(">", "$\\to$"))
+                    .append(" & $").append(Text.frac(p.probability())).append("$ & $")
+                    .append(Text.frac(p.share())).append("$ ($").append(Text.percent(p.share(), digits))
+                    .append("\\,\\%$) \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+        });
+        return caution(sb);
+    }
+
+    // --- symbolic step -----------------------------------------------------------------------------------------
+
+    @Override
+    public String symbolicStep(SymbolicStepResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% ").append(Symbolic.what(r)).append(" for ").append(Text.comment(r.source())).append(" (")
+            .append(r.kind()).append(" chain): ").append(Symbolic.functionsOf(r)).append(", ")
+            .append(Symbolic.formText(r.factored()));
+        if (r.values().isPresent()) {
+            sb.append("; values at ").append(r.point().orElseThrow().text()).append(", decimals: ")
+                .append(Text.digits(digits));
+        }
+        sb.append("\n\\begin{align*}\n");
+        List<String> lines = new ArrayList<>();
+        Symbolic.forEachCell(r, (i, j) -> {
+            StringBuilder l = new StringBuilder();
+            l.append("P^{").append(r.n()).append("}(\\text{").append(Text.latex(r.rows().get(i)))
+                .append("}, \\text{").append(Text.latex(r.columns().get(j))).append("}) &= ")
+                .append(r.formulas().get(i).get(j).latex());
+            if (r.values().isPresent()) {
+                Rational e = r.values().get().get(i).get(j);
+                l.append(" = ").append(Text.frac(e)).append(" \\approx ").append(dec(e));
+            }
+            lines.add(l.toString());
+        });
+        sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
+        return caution(sb);
+    }
+
+    // --- sens --------------------------------------------------------------------------------------------------
+
+    @Override
+    public String sens(SensResult s) {
+        StringBuilder sb = new StringBuilder();
+        String p = "P^{" + s.n() + "}(\\text{" + Text.latex(s.from()) + "}, \\text{" + Text.latex(s.to()) + "})";
+        String w = s.wrtLatex();
+        sb.append("% sensitivity to ").append(s.wrt()).append(" for ").append(Text.comment(s.source())).append(" (")
+            .append(s.kind()).append(" chain)\n\\begin{align*}\n");
+        List<String> lines = new ArrayList<>();
+        lines.add(p + " &= " + s.probability().latex());
+        lines.add("\\frac{\\partial " + p + "}{\\partial " + w + "} &= " + s.derivative().latex());
+        if (s.at().isPresent()) {
+            SensResult.AtPoint a = s.at().get();
+            lines.add("\\text{at } " + Text.latex(a.point().text()) + ": \\quad P &= "
+                + Text.frac(a.probability()) + " \\approx " + dec(a.probability()));
+            lines.add("\\frac{\\partial P}{\\partial " + w + "} &= " + Text.frac(a.derivative()) + " \\approx "
+                + dec(a.derivative()));
+            a.elasticity().ifPresent(e -> lines.add("\\frac{" + w + "}{P}\\frac{\\partial P}{\\partial " + w
+                + "} &= " + Text.frac(e) + " \\approx " + dec(e)));
+        }
+        sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
+        if (s.sweep().isPresent()) {
+            SensResult.Sweep sw = s.sweep().get();
+            sb.append("\\begin{tabular}{r|rr}\n$").append(w).append("$ & $P$ & $\\partial P/\\partial ").append(w)
+                .append("$ \\\\ \\hline\n");
+            for (SensResult.SweepLine l : sw.lines()) {
+                sb.append('$').append(Text.frac(l.value())).append("$ & $").append(dec(l.probability()))
+                    .append("$ & $").append(dec(l.derivative())).append("$ \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+        }
+        return caution(sb);
+    }
+
+    // --- closed ------------------------------------------------------------------------------------------------
+
+    @Override
+    public String closed(ClosedResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% P^n for ").append(Text.comment(r.source())).append(" (discrete chain): ").append(Closed.what(r))
+            .append('\n');
+        if (!r.isSeries()) {
+            sb.append("% valid for n >= ").append(r.validFrom());
+            if (!r.conditions().isEmpty()) {
+                sb.append(" where ").append(String.join(", ", r.conditions())).append('.');
+            }
+            sb.append(Closed.domainNote(r)).append('\n');
+        }
+        sb.append("\\begin{align*}\n");
+        List<String> lines = new ArrayList<>();
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.cols().size(); j++) {
+                String idx = "\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.cols().get(j)) + "}";
+                String lhs = r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(z)" : "P^{n}_{" + idx + "}";
+                String rhs = r.cells().get(i).get(j).latex();
+                lines.add(r.form() == ClosedResult.Form.RECURRENCE ? "&" + lhs + ":\\; " + rhs : lhs + " &= " + rhs);
+            }
+        }
+        sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
+        for (ClosedResult.Eigen e : r.eigenvalues()) {
+            sb.append("% eigenvalue ").append(String.join(", ", e.values())).append(" from ").append(e.factor());
+            if (e.multiplicity() > 1) {
+                sb.append(", multiplicity ").append(e.multiplicity());
+            }
+            sb.append('\n');
+        }
+        r.longRun().ifPresent(lr -> sb.append("% long run: period ").append(lr.period()).append("; rate ")
+            .append(lr.rate()).append(lr.rateValue().map(v -> " = " + v).orElse("")).append('\n'));
+        return caution(sb);
+    }
+
+    // --- check -------------------------------------------------------------------------------------------------
+
+    @Override
+    String symbolicCheck(CheckResult.Symbolic s) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% one-step matrix of ").append(Text.comment(s.source())).append(" (").append(s.kind())
+            .append(" chain)\n\\begin{align*}\n");
+        List<String> lines = new ArrayList<>();
+        for (int i = 0; i < s.states().size(); i++) {
+            for (int j = 0; j < s.states().size(); j++) {
+                lines.add("P(\\text{" + Text.latex(s.states().get(i)) + "}, \\text{" + Text.latex(s.states().get(j))
+                    + "}) &= " + s.entries().get(i).get(j).latex());
+            }
+        }
+        sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
+        for (String w : s.warnings()) {
+            sb.append("% condition: ").append(Text.comment(w)).append('\n');
+        }
+        return caution(sb);
+    }
+}

@@ -1,0 +1,274 @@
+package org.qchain.format;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.qchain.exact.Rational;
+import org.qchain.result.CheckResult;
+import org.qchain.result.ClosedResult;
+import org.qchain.result.SensResult;
+import org.qchain.result.StepResult;
+import org.qchain.result.SymbolicStepResult;
+
+/** Markdown (pipe tables) for pasting into reports: exact values and decimals in tables, then the caution. */
+final class MarkdownFormatter extends Layout {
+    MarkdownFormatter(int digits) {
+        super(digits);
+    }
+
+    private static String caution(StringBuilder sb) {
+        return sb.append("\n*").append(Caution.TEXT).append("*\n").toString();
+    }
+
+    private static List<String> separator(int n) {
+        List<String> out = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            out.add("---");
+        }
+        return out;
+    }
+
+    private static void line(StringBuilder sb, List<String> cells) {
+        sb.append("| ").append(String.join(" | ", cells)).append(" |\n");
+    }
+
+    // --- step ----------------------------------------------------------------------------------------------------
+
+    @Override
+    public String stepMatrix(StepResult.Matrix m) {
+        StepResult.Header h = m.header();
+        StringBuilder sb = new StringBuilder();
+        sb.append("**").append(Text.power(h.n())).append("** for `").append(Text.code(h.source())).append("` (")
+            .append(h.kind()).append(" chain): row = state at the start, column = state after ")
+            .append(Text.steps(h.n())).append(".\n\n");
+        sb.append("Exact:\n\n");
+        grid(sb, m, true);
+        sb.append("\nDecimal (").append(Text.digits(digits)).append("):\n\n");
+        grid(sb, m, false);
+        return caution(sb);
+    }
+
+    private void grid(StringBuilder sb, StepResult.Matrix m, boolean exact) {
+        List<String> head = new ArrayList<>();
+        head.add("from \\ to");
+        for (String s : m.states()) {
+            head.add(Text.markdown(s));
+        }
+        line(sb, head);
+        line(sb, separator(head.size()));
+        for (int i = 0; i < m.states().size(); i++) {
+            List<String> cells = new ArrayList<>();
+            cells.add("**" + Text.markdown(m.states().get(i)) + "**");
+            for (Rational e : m.entries().get(i)) {
+                cells.add(exact ? Text.markdown(e.toString()) : dec(e));
+            }
+            line(sb, cells);
+        }
+    }
+
+    @Override
+    public String stepRow(StepResult.Row r) {
+        StepResult.Header h = r.header();
+        StringBuilder sb = new StringBuilder();
+        sb.append("Row **").append(Text.markdown(r.from())).append("** of **").append(Text.power(h.n()))
+            .append("** for `").append(Text.code(h.source())).append("` (").append(h.kind())
+            .append(" chain): probability of each state after ").append(Text.steps(h.n()))
+            .append(".\n\n");
+        line(sb, List.of("to", "exact", "decimal"));
+        line(sb, separator(3));
+        for (int j = 0; j < r.states().size(); j++) {
+            Rational e = r.entries().get(j);
+            line(sb, List.of(Text.markdown(r.states().get(j)), Text.markdown(e.toString()), dec(e)));
+        }
+        sb.append("\nDecimals: ").append(Text.digits(digits)).append(".\n");
+        return caution(sb);
+    }
+
+    @Override
+    public String stepSingle(StepResult.Single s) {
+        StepResult.Header h = s.header();
+        StringBuilder sb = new StringBuilder();
+        line(sb, List.of("model", "n", "from", "to", "exact", "decimal"));
+        line(sb, separator(6));
+        line(sb, List.of("`" + Text.code(h.source()) + "`", String.valueOf(h.n()), Text.markdown(s.from()),
+            Text.markdown(s.to()), Text.markdown(s.value().toString()), dec(s.value())));
+        s.paths().ifPresent(paths -> {
+            sb.append("\nMost probable paths of ").append(Text.steps(h.n())).append(" from ")
+                .append(Text.markdown(s.from())).append(" to ").append(Text.markdown(s.to())).append(":\n\n");
+            line(sb, List.of("rank", "path", "probability", "decimal", "share", "percent"));
+            line(sb, separator(6));
+            for (int k = 0; k < paths.size(); k++) {
+                StepResult.PathLine p = paths.get(k);
+                line(sb, List.of(String.valueOf(k + 1), Text.markdown(String.join(" \u2192 ", p.states())),
+                    Text.markdown(p.probability().toString()), dec(p.probability()),
+                    Text.markdown(p.share().toString()), Text.percent(p.share(), digits) + " %"));
+            }
+        });
+        sb.append("\nDecimals: ").append(Text.digits(digits)).append(".\n");
+        return caution(sb);
+    }
+
+    // --- symbolic step -----------------------------------------------------------------------------------------
+
+    @Override
+    public String symbolicStep(SymbolicStepResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**").append(Symbolic.what(r)).append("** for `").append(Text.code(r.source())).append("` (")
+            .append(r.kind()).append(" chain) as ").append(Symbolic.functionsOf(r)).append(", ")
+            .append(Symbolic.formText(r.factored())).append(".\n\n");
+        boolean values = r.values().isPresent();
+        if (values) {
+            sb.append("Values at ").append(r.point().orElseThrow().text())
+                .append(" (nominal values, overridden by --at); decimals: ").append(Text.digits(digits))
+                .append(".\n\n");
+        }
+        sb.append(values ? "| from | to | formula | exact | decimal |\n| --- | --- | --- | --- | --- |\n"
+            : "| from | to | formula |\n| --- | --- | --- |\n");
+        Symbolic.forEachCell(r, (i, j) -> {
+            sb.append("| ").append(Text.markdown(r.rows().get(i))).append(" | ")
+                .append(Text.markdown(r.columns().get(j))).append(" | `")
+                .append(Text.code(r.formulas().get(i).get(j).plain())).append("` |");
+            if (values) {
+                Rational e = r.values().get().get(i).get(j);
+                sb.append(' ').append(e).append(" | ").append(dec(e)).append(" |");
+            }
+            sb.append('\n');
+        });
+        return caution(sb);
+    }
+
+    // --- sens --------------------------------------------------------------------------------------------------
+
+    @Override
+    public String sens(SensResult s) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Sensitivity of **").append(Symbolic.entryName(s)).append("** to `").append(Text.code(s.wrt()))
+            .append("` for `").append(Text.code(s.source())).append("` (").append(s.kind()).append(" chain).\n\n");
+        sb.append("| quantity | formula |\n| --- | --- |\n");
+        sb.append("| P | `").append(Text.code(s.probability().plain())).append("` |\n");
+        sb.append("| dP/d").append(s.wrt()).append(" | `").append(Text.code(s.derivative().plain())).append("` |\n");
+        if (s.at().isPresent()) {
+            SensResult.AtPoint a = s.at().get();
+            sb.append("\nAt ").append(a.point().text()).append(":\n\n");
+            sb.append("| quantity | exact | decimal |\n| --- | --- | --- |\n");
+            sb.append("| P | ").append(a.probability()).append(" | ").append(dec(a.probability())).append(" |\n");
+            sb.append("| dP/d").append(s.wrt()).append(" | ").append(a.derivative()).append(" | ")
+                .append(dec(a.derivative())).append(" |\n");
+            a.elasticity().ifPresent(e -> sb.append("| elasticity | ").append(e).append(" | ").append(dec(e))
+                .append(" |\n"));
+        }
+        if (s.sweep().isPresent()) {
+            SensResult.Sweep w = s.sweep().get();
+            sb.append("\nSweep ").append(w.range()).append(":\n\n| ").append(w.parameter()).append(" | P | dP/d")
+                .append(s.wrt()).append(" | P exact | dP/d").append(s.wrt())
+                .append(" exact |\n| --- | --- | --- | --- | --- |\n");
+            for (SensResult.SweepLine l : w.lines()) {
+                sb.append("| ").append(l.value()).append(" | ").append(dec(l.probability())).append(" | ")
+                    .append(dec(l.derivative())).append(" | ").append(l.probability())
+                    .append(" | ").append(l.derivative()).append(" |\n");
+            }
+        }
+        if (s.at().isPresent() || s.sweep().isPresent()) {
+            sb.append("\nDecimals: ").append(Text.digits(digits)).append(".\n");
+        }
+        return caution(sb);
+    }
+
+    // --- closed ------------------------------------------------------------------------------------------------
+
+    @Override
+    public String closed(ClosedResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**P^n** for `").append(Text.code(r.source())).append("` (discrete chain): ").append(Closed.what(r));
+        if (!r.isSeries()) {
+            sb.append("; valid for n ≥ ").append(r.validFrom());
+            if (!r.conditions().isEmpty()) {
+                List<String> c = new ArrayList<>();
+                for (String s : r.conditions()) {
+                    c.add("`" + Text.code(s) + "`");
+                }
+                sb.append(" where ").append(String.join(", ", c));
+            }
+        }
+        sb.append('.').append(Closed.domainNote(r)).append("\n\n");
+        sb.append("| from | to | ").append(r.form() == ClosedResult.Form.GF ? "G(z)"
+                : (r.form() == ClosedResult.Form.RECURRENCE ? "recurrence" : "P^n"))
+            .append(" |\n| --- | --- | --- |\n");
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.cols().size(); j++) {
+                sb.append("| ").append(Text.markdown(r.rows().get(i))).append(" | ")
+                    .append(Text.markdown(r.cols().get(j))).append(" | `")
+                    .append(Text.code(r.cells().get(i).get(j).plain())).append("` |\n");
+            }
+        }
+        if (!r.eigenvalues().isEmpty()) {
+            sb.append("\nEigenvalues:\n\n");
+            for (ClosedResult.Eigen e : r.eigenvalues()) {
+                sb.append("- `").append(Text.code(String.join(", ", e.values()))).append("` from `")
+                    .append(Text.code(e.factor())).append('`');
+                if (e.multiplicity() > 1) {
+                    sb.append(", multiplicity ").append(e.multiplicity());
+                }
+                if (e.jordanIndex() > 1) {
+                    sb.append(", Jordan block of size ").append(e.jordanIndex());
+                }
+                sb.append('\n');
+            }
+            for (ClosedResult.Roots rt : r.roots()) {
+                sb.append("- `").append(rt.name()).append(" = ").append(Text.code(rt.polynomial())).append('`');
+                if (!rt.roots().isEmpty()) {
+                    sb.append(": roots ").append(String.join(", ", rt.roots()));
+                }
+                sb.append('\n');
+            }
+        }
+        r.longRun().ifPresent(lr -> {
+            boolean periodic = lr.period() > 1;
+            sb.append("\nLong run: ").append(periodic
+                ? "periodic with period " + lr.period() + "; the limits of P^(" + lr.period() + "m + r)"
+                : "P^n converges as n grows; its limit:");
+            sb.append(periodic ? ":\n\n| " : "\n\n| ").append(periodic ? "r | " : "")
+                .append("from | to | limit |\n| ").append(periodic ? "--- | " : "").append("--- | --- | --- |\n");
+            for (int k = 0; k < lr.limits().size(); k++) {
+                for (int i = 0; i < r.rows().size(); i++) {
+                    for (int j = 0; j < r.cols().size(); j++) {
+                        sb.append("| ").append(periodic ? k + " | " : "")
+                            .append(Text.markdown(r.rows().get(i))).append(" | ")
+                            .append(Text.markdown(r.cols().get(j))).append(" | `")
+                            .append(Text.code(lr.limits().get(k).get(i).get(j))).append("` |\n");
+                    }
+                }
+            }
+            sb.append("\nConvergence rate (second-largest eigenvalue modulus): `").append(Text.code(lr.rate()))
+                .append('`');
+            lr.rateValue().ifPresent(v -> sb.append(" = ").append(v)
+                .append(r.point().map(p -> " at " + p.text()).orElse("")));
+            sb.append(".\n");
+        });
+        return caution(sb);
+    }
+
+    // --- check -------------------------------------------------------------------------------------------------
+
+    @Override
+    String symbolicCheck(CheckResult.Symbolic s) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("One-step matrix of `").append(Text.code(s.source())).append("` (").append(s.kind())
+            .append(" chain) as exact rational functions of ")
+            .append(s.parameters().isEmpty() ? "(no parameters)" : String.join(", ", s.parameters()))
+            .append(".\n\n| from | to | entry |\n| --- | --- | --- |\n");
+        for (int i = 0; i < s.states().size(); i++) {
+            for (int j = 0; j < s.states().size(); j++) {
+                sb.append("| ").append(Text.markdown(s.states().get(i))).append(" | ")
+                    .append(Text.markdown(s.states().get(j))).append(" | `")
+                    .append(Text.code(s.entries().get(i).get(j).plain())).append("` |\n");
+            }
+        }
+        if (!s.warnings().isEmpty()) {
+            sb.append("\nConditions:\n\n");
+            for (String w : s.warnings()) {
+                sb.append("- ").append(Text.markdown(w)).append('\n');
+            }
+        }
+        return caution(sb);
+    }
+}

@@ -1,0 +1,370 @@
+package org.qchain.format;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.qchain.exact.Rational;
+import org.qchain.result.CheckResult;
+import org.qchain.result.ClosedResult;
+import org.qchain.result.SensResult;
+import org.qchain.result.StepResult;
+import org.qchain.result.SymbolicStepResult;
+
+/**
+ * Human-readable layout: for numbers, an overview matrix of decimals, then every entry with its decimal beside the
+ * exact fraction (exact last, so long fractions do not push other columns apart); for formulas, aligned tables; then
+ * the caution.
+ */
+final class TextFormatter extends Layout {
+    /** Lines of the decimal overview stay within this many characters where they can. */
+    static final int WIDTH = 100;
+
+    TextFormatter(int digits) {
+        super(digits);
+    }
+
+    private static String end(StringBuilder sb) {
+        return sb.append('\n').append(Caution.wrapped(WIDTH)).append('\n').toString();
+    }
+
+    // --- step ----------------------------------------------------------------------------------------------------
+
+    @Override
+    public String stepMatrix(StepResult.Matrix m) {
+        StepResult.Header h = m.header();
+        StringBuilder sb = new StringBuilder();
+        sb.append(Text.power(h.n())).append(" for ").append(h.source()).append(" (").append(h.kind())
+            .append(" chain, ").append(m.states().size()).append(m.states().size() == 1 ? " state)" : " states)")
+            .append('\n');
+        sb.append("Row i, column j: probability of being in state j after ").append(Text.steps(h.n()))
+            .append(", starting in state i.\n\n");
+        sb.append("Decimals (").append(Text.digits(digits)).append("):\n");
+        List<List<String>> decimals = new ArrayList<>();
+        for (List<Rational> row : m.entries()) {
+            decimals.add(row.stream().map(this::dec).toList());
+        }
+        List<int[]> blocks = columnBlocks(m.states(), decimals);
+        for (int[] block : blocks) {
+            if (blocks.size() > 1) {
+                sb.append("columns ").append(block[0] + 1).append(" to ").append(block[1]).append(" of ")
+                    .append(m.states().size()).append(":\n");
+            }
+            TextTable overview = new TextTable();
+            List<String> head = new ArrayList<>();
+            head.add("from\\to");
+            head.addAll(m.states().subList(block[0], block[1]));
+            overview.addRow(head);
+            for (int i = 0; i < m.states().size(); i++) {
+                List<String> line = new ArrayList<>();
+                line.add(m.states().get(i));
+                line.addAll(decimals.get(i).subList(block[0], block[1]));
+                overview.addRow(line);
+            }
+            sb.append(overview.render()).append('\n');
+        }
+        sb.append("Exact values:\n");
+        TextTable list = new TextTable().addRow("from", "to", "decimal", "exact");
+        for (int i = 0; i < m.states().size(); i++) {
+            for (int j = 0; j < m.states().size(); j++) {
+                list.addRow(m.states().get(i), m.states().get(j), decimals.get(i).get(j),
+                    m.entries().get(i).get(j).toString());
+            }
+        }
+        sb.append(list.render());
+        return end(sb);
+    }
+
+    /**
+     * Splits the overview's columns into blocks [start, end) whose lines stay within {@link #WIDTH} characters (at
+     * least one column a block), so that a matrix of many states stays readable in a terminal.
+     */
+    private static List<int[]> columnBlocks(List<String> states, List<List<String>> decimals) {
+        int n = states.size();
+        int label = "from\\to".length();
+        for (String s : states) {
+            label = Math.max(label, s.length());
+        }
+        List<int[]> out = new ArrayList<>();
+        int start = 0;
+        int used = label;
+        for (int j = 0; j < n; j++) {
+            int w = states.get(j).length();
+            for (List<String> row : decimals) {
+                w = Math.max(w, row.get(j).length());
+            }
+            if (j > start && used + 2 + w > WIDTH) {
+                out.add(new int[] {start, j});
+                start = j;
+                used = label;
+            }
+            used += 2 + w;
+        }
+        out.add(new int[] {start, n});
+        return out;
+    }
+
+    @Override
+    public String stepRow(StepResult.Row r) {
+        StepResult.Header h = r.header();
+        StringBuilder sb = new StringBuilder();
+        sb.append("Row ").append(r.from()).append(" of ").append(Text.power(h.n())).append(" for ").append(h.source())
+            .append(" (").append(h.kind()).append(" chain)\n");
+        sb.append("Probability of being in each state after ").append(Text.steps(h.n())).append(", starting in ")
+            .append(r.from()).append("; decimals to ").append(Text.digits(digits)).append(".\n\n");
+        TextTable t = new TextTable().addRow("to", "decimal", "exact");
+        for (int j = 0; j < r.states().size(); j++) {
+            Rational e = r.entries().get(j);
+            t.addRow(r.states().get(j), dec(e), e.toString());
+        }
+        sb.append(t.render());
+        return end(sb);
+    }
+
+    @Override
+    public String stepSingle(StepResult.Single s) {
+        StepResult.Header h = s.header();
+        StringBuilder sb = new StringBuilder();
+        String name = Text.power(h.n()) + "(" + s.from() + " -> " + s.to() + ")";
+        sb.append(name).append(" for ").append(h.source()).append(" (").append(h.kind()).append(" chain)\n");
+        sb.append("Probability of being in ").append(s.to()).append(" after ").append(Text.steps(h.n()))
+            .append(", starting in ").append(s.from()).append(":\n");
+        // not a table: a long exact value must not push the decimal's note to the right
+        sb.append("  exact    ").append(s.value()).append('\n');
+        sb.append("  decimal  ").append(dec(s.value())).append("  (").append(Text.digits(digits)).append(")\n");
+        s.paths().ifPresent(paths -> appendPaths(sb, s, name, paths));
+        return end(sb);
+    }
+
+    private void appendPaths(StringBuilder sb, StepResult.Single s, String name, List<StepResult.PathLine> paths) {
+        long n = s.header().n();
+        sb.append('\n');
+        if (paths.isEmpty()) {
+            sb.append("No path of ").append(Text.steps(n)).append(" leads from ").append(s.from()).append(" to ")
+                .append(s.to()).append(".\n");
+            return;
+        }
+        sb.append(paths.size() == 1 ? "The most probable path" : "The " + paths.size() + " most probable paths")
+            .append(" of ").append(Text.steps(n)).append(" from ").append(s.from()).append(" to ").append(s.to())
+            .append(", with their share of ").append(name).append(":\n");
+        TextTable t = new TextTable().addRow("rank", "share", "probability", "path");
+        boolean runs = false;
+        for (int k = 0; k < paths.size(); k++) {
+            StepResult.PathLine p = paths.get(k);
+            t.addRow(String.valueOf(k + 1), Text.percent(p.share(), digits) + "%", dec(p.probability()),
+                Paths.compact(p.states()));
+            runs |= Paths.hasRun(p.states());
+        }
+        sb.append(t.render());
+        if (runs) {
+            sb.append("(\"A x3\" stands for 3 consecutive time points in state A.)\n");
+        }
+        sb.append("\nExact values of the paths:\n");
+        TextTable e = new TextTable().addRow("rank", "share", "probability");
+        for (int k = 0; k < paths.size(); k++) {
+            StepResult.PathLine p = paths.get(k);
+            e.addRow(String.valueOf(k + 1), p.share().toString(), p.probability().toString());
+        }
+        sb.append(e.render());
+    }
+
+    // --- symbolic step -----------------------------------------------------------------------------------------
+
+    @Override
+    public String symbolicStep(SymbolicStepResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append(Symbolic.what(r)).append(" for ").append(r.source()).append(" (").append(r.kind())
+            .append(" chain, ").append(r.states().size()).append(" states) as ").append(Symbolic.functionsOf(r))
+            .append('\n');
+        sb.append("Each formula is ").append(Symbolic.formText(r.factored())).append(".\n\n");
+        TextTable table = new TextTable().addRow("from", "to", "P^" + r.n());
+        Symbolic.forEachCell(r, (i, j) -> table.addRow(r.rows().get(i), r.columns().get(j),
+            r.formulas().get(i).get(j).plain()));
+        sb.append(table.render());
+        if (r.values().isPresent()) {
+            sb.append("\nAt ").append(r.point().orElseThrow().text())
+                .append(" (nominal values, overridden by --at):\n");
+            TextTable vt = new TextTable().addRow("from", "to", "decimal", "exact");
+            Symbolic.forEachCell(r, (i, j) -> {
+                Rational e = r.values().get().get(i).get(j);
+                vt.addRow(r.rows().get(i), r.columns().get(j), dec(e), e.toString());
+            });
+            sb.append(vt.render());
+            sb.append("Decimals: ").append(Text.digits(digits)).append(".\n");
+        }
+        return sb.append('\n').append(Caution.TEXT).append('\n').toString();
+    }
+
+    // --- sens --------------------------------------------------------------------------------------------------
+
+    @Override
+    public String sens(SensResult s) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Sensitivity of ").append(Symbolic.entryName(s)).append(" to ").append(s.wrt()).append(" for ")
+            .append(s.source()).append(" (").append(s.kind()).append(" chain), parameters ")
+            .append(String.join(", ", s.parameters())).append('\n');
+        sb.append(new TextTable().addRow("P", "= " + s.probability().plain())
+            .addRow("dP/d" + s.wrt(), "= " + s.derivative().plain()).render());
+        if (s.at().isPresent()) {
+            SensResult.AtPoint a = s.at().get();
+            sb.append("\nAt ").append(a.point().text()).append(" (nominal values, overridden by --at):\n");
+            TextTable t = new TextTable().addRow("", "decimal", "exact");
+            t.addRow("P", dec(a.probability()), a.probability().toString());
+            t.addRow("dP/d" + s.wrt(), dec(a.derivative()), a.derivative().toString());
+            if (a.elasticity().isPresent()) {
+                t.addRow("elasticity", dec(a.elasticity().get()), a.elasticity().get().toString());
+            } else {
+                t.addRow("elasticity", "undefined (P = 0)", "");
+            }
+            sb.append(t.render());
+            sb.append("Elasticity: (").append(s.wrt()).append("/P) dP/d").append(s.wrt())
+                .append(", the relative change of P per relative change of ").append(s.wrt()).append(".\n");
+        }
+        if (s.sweep().isPresent()) {
+            SensResult.Sweep w = s.sweep().get();
+            sb.append("\nSweep ").append(w.range()).append(w.others().isEmpty() ? ""
+                : " (" + w.others().text() + ")").append(":\n");
+            TextTable t = new TextTable();
+            t.addRow(w.parameter(), "P", "dP/d" + s.wrt(), "P exact", "dP/d" + s.wrt() + " exact");
+            for (SensResult.SweepLine l : w.lines()) {
+                t.addRow(l.value().toString(), dec(l.probability()), dec(l.derivative()),
+                    l.probability().toString(), l.derivative().toString());
+            }
+            sb.append(t.render());
+        }
+        if (s.at().isPresent() || s.sweep().isPresent()) {
+            sb.append("Decimals: ").append(Text.digits(digits)).append(".\n");
+        }
+        return sb.append('\n').append(Caution.TEXT).append('\n').toString();
+    }
+
+    // --- closed ------------------------------------------------------------------------------------------------
+
+    @Override
+    public String closed(ClosedResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("P^n for ").append(r.source()).append(" (discrete chain): ").append(Closed.what(r)).append('\n');
+        if (!r.isSeries()) {
+            sb.append("Valid for n >= ").append(r.validFrom());
+            if (!r.conditions().isEmpty()) {
+                sb.append(" where ").append(String.join(", ", r.conditions()));
+            }
+            sb.append('.');
+            sb.append(Closed.domainNote(r));
+            if (r.validFrom() > 0) {
+                sb.append(" For smaller n (eigenvalue 0), qchain step gives P^n exactly.");
+            }
+            sb.append('\n');
+        }
+        if (!r.parameters().isEmpty()) {
+            sb.append("Parameters (symbolic): ").append(String.join(", ", r.parameters())).append('\n');
+        }
+        sb.append('\n');
+        List<String> labels = new ArrayList<>();
+        List<String> values = new ArrayList<>();
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.cols().size(); j++) {
+                labels.add(Closed.label(r, r.rows().get(i), r.cols().get(j)));
+                values.add(r.cells().get(i).get(j).plain());
+            }
+        }
+        aligned(sb, labels, r.form() == ClosedResult.Form.RECURRENCE ? ": " : " = ", values, "");
+        if (!r.eigenvalues().isEmpty()) {
+            sb.append("\nEigenvalues, by irreducible factor of det(xI - P):\n");
+            List<String> facts = new ArrayList<>();
+            List<String> vals = new ArrayList<>();
+            for (ClosedResult.Eigen e : r.eigenvalues()) {
+                facts.add(e.factor() + ":");
+                String extra = e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() : "";
+                extra += e.jordanIndex() > 1 ? ", Jordan block of size " + e.jordanIndex() : "";
+                vals.add(String.join(", ", e.values()) + (extra.isEmpty() ? "" : extra + ")"));
+            }
+            aligned(sb, facts, " ", vals, "  ");
+        }
+        for (ClosedResult.Roots rt : r.roots()) {
+            sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial());
+            if (!rt.roots().isEmpty()) {
+                sb.append("; roots ").append(String.join(", ", rt.roots()));
+            }
+            sb.append('\n');
+        }
+        r.longRun().ifPresent(lr -> longRun(sb, r, lr));
+        return end(sb);
+    }
+
+    private static void longRun(StringBuilder sb, ClosedResult r, ClosedResult.LongRun lr) {
+        sb.append('\n');
+        if (lr.period() == 1) {
+            sb.append("Long run: P^n converges as n grows; the limit:\n");
+        } else {
+            sb.append("Long run: periodic with period ").append(lr.period())
+                .append("; the limits of P^(").append(lr.period()).append("m + r) as m grows:\n");
+        }
+        for (int k = 0; k < lr.limits().size(); k++) {
+            List<String> labels = new ArrayList<>();
+            List<String> values = new ArrayList<>();
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.cols().size(); j++) {
+                    labels.add((lr.period() > 1 ? "r = " + k + ": " : "") + r.rows().get(i) + " -> " + r.cols().get(j));
+                    values.add(lr.limits().get(k).get(i).get(j));
+                }
+            }
+            aligned(sb, labels, "  ", values, "  ");
+        }
+        sb.append("Convergence rate (second-largest eigenvalue modulus): ").append(lr.rate()).append('\n');
+        lr.rateValue().ifPresent(v -> sb.append("  = ").append(v)
+            .append(r.point().map(p -> " at " + p.text()).orElse("")).append(" (").append(r.digits())
+            .append(" significant digits)\n"));
+    }
+
+    private static void aligned(StringBuilder sb, List<String> left, String sep, List<String> right, String indent) {
+        int w = 0;
+        for (String l : left) {
+            w = Math.max(w, l.length());
+        }
+        for (int i = 0; i < left.size(); i++) {
+            sb.append(indent).append(left.get(i)).append(" ".repeat(w - left.get(i).length())).append(sep)
+                .append(right.get(i)).append('\n');
+        }
+    }
+
+    // --- check -------------------------------------------------------------------------------------------------
+
+    @Override
+    String numericCheck(CheckResult.Numeric n) {
+        int size = n.matrix().states().size();
+        return stepMatrix(n.matrix()) + "OK: " + size + (size == 1 ? " state" : " states") + ", "
+            + n.matrix().header().kind() + ", rows sum to 1\n";
+    }
+
+    @Override
+    String symbolicCheck(CheckResult.Symbolic s) {
+        StringBuilder sb = new StringBuilder();
+        int size = s.states().size();
+        sb.append("One-step matrix of ").append(s.source()).append(" (").append(s.kind()).append(" chain, ")
+            .append(size).append(" states) as exact rational functions of ")
+            .append(s.parameters().isEmpty() ? "(no parameters)" : String.join(", ", s.parameters()))
+            .append(":\n");
+        List<String> labels = new ArrayList<>();
+        List<String> values = new ArrayList<>();
+        for (int i = 0; i < size; i++) {
+            for (int j = 0; j < size; j++) {
+                labels.add(s.states().get(i) + " -> " + s.states().get(j));
+                values.add(s.entries().get(i).get(j).plain());
+            }
+        }
+        aligned(sb, labels, "  ", values, "  ");
+        if (!s.warnings().isEmpty()) {
+            sb.append("\nConditions (each entry must lie in [0, 1] for the results to be probabilities):\n");
+            for (String w : s.warnings()) {
+                sb.append("  ").append(w).append('\n');
+            }
+        }
+        sb.append('\n').append(Caution.TEXT).append("\n\n");
+        sb.append("OK: ").append(size).append(size == 1 ? " state" : " states").append(", ").append(s.kind())
+            .append(", rows sum to 1 identically; ")
+            .append(s.warnings().isEmpty() ? "entries in [0, 1] on the whole parameter domain"
+                : s.warnings().size() + (s.warnings().size() == 1 ? " condition" : " conditions")
+                    + " on the parameters (above)")
+            .append('\n');
+        return sb.toString();
+    }
+}

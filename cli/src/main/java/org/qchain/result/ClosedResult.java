@@ -1,0 +1,151 @@
+package org.qchain.result;
+
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * P^n (the whole matrix, one row or one entry) as formulas in a symbolic n and the free parameters, or their
+ * generating functions or recurrences, with the validity range, the parameter conditions, the eigenvalues and the
+ * long run ({@code closed}).
+ *
+ * <p>The closed-form engine prints its formulas itself (plain and LaTeX); the eigenvalues, limits and the rate are
+ * its plain formulas, and the rate's and roots' values are its certified-digit decimals at {@link #digits()}.
+ *
+ * @param source      the model file name as the user gave it
+ * @param form        which form is printed
+ * @param nSymbol     the symbol of the step count, {@code n}
+ * @param validFrom   the least n from which every printed formula holds
+ * @param conditions  parameter conditions, each {@code "POLY != 0"}
+ * @param notProved   the conditions not shown to hold for every value inside the parameters' domains
+ * @param states      all state names, in model order
+ * @param parameters  the free parameters the formulas use
+ * @param selection   which part of P^n is printed
+ * @param rows        the row states of {@code cells}
+ * @param cols        the column states of {@code cells}
+ * @param cells       {@code cells.get(i).get(j)} for rows(i) to cols(j)
+ * @param recurrences for form {@code recurrence}: the structured recurrence of each cell, same shape; else empty
+ * @param eigenvalues the factors of the characteristic polynomial and their eigenvalues
+ * @param longRun     period, limits and rate; empty for the series forms
+ * @param roots       the named factors of degree 3 or more, with numeric roots when the point is known
+ * @param point       the parameter values used for numeric values, if complete and not empty
+ * @param digits      significant digits of numeric values
+ * @param warnings    warnings
+ */
+public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
+                           List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+                           List<String> rows, List<String> cols, List<List<Formula>> cells,
+                           List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
+                           List<Roots> roots, Optional<Point> point, int digits, List<String> warnings)
+    implements Result {
+
+    /** Copies the lists. */
+    public ClosedResult {
+        conditions = List.copyOf(conditions);
+        notProved = List.copyOf(notProved);
+        states = List.copyOf(states);
+        parameters = List.copyOf(parameters);
+        rows = List.copyOf(rows);
+        cols = List.copyOf(cols);
+        cells = cells.stream().map(List::copyOf).toList();
+        recurrences = recurrences.stream().map(List::copyOf).toList();
+        eigenvalues = List.copyOf(eigenvalues);
+        roots = List.copyOf(roots);
+        warnings = List.copyOf(warnings);
+    }
+
+    /** Whether a series form (generating function or recurrence) is printed. */
+    public boolean isSeries() {
+        return form != Form.MATRIX;
+    }
+
+    /** The forms of P^n. */
+    public enum Form {
+        /** The closed form in n. */
+        MATRIX("matrix"),
+        /** The generating function in z. */
+        GF("gf"),
+        /** The linear recurrence in n. */
+        RECURRENCE("recurrence");
+
+        private final String word;
+
+        Form(String word) {
+            this.word = word;
+        }
+
+        /** The word of {@code --form} and of the JSON field {@code form}. */
+        public String word() {
+            return word;
+        }
+    }
+
+    /** Which part of P^n is printed. */
+    public enum Selection {
+        /** The whole matrix. */
+        MATRIX,
+        /** One row: the start state's distribution after n steps. */
+        ROW,
+        /** One entry. */
+        ENTRY
+    }
+
+    /**
+     * One recurrence {@code u(n) = sum_k c_k u(n - k)} for {@code n >= validFrom}.
+     *
+     * @param coefficients c_1 .. c_d, plain syntax
+     * @param validFrom    the first n for which it holds
+     * @param initial      u(0) .. u(validFrom - 1)
+     */
+    public record Recurrence(List<String> coefficients, int validFrom, List<String> initial) {
+        /** Copies the lists. */
+        public Recurrence {
+            coefficients = List.copyOf(coefficients);
+            initial = List.copyOf(initial);
+        }
+    }
+
+    /**
+     * A factor of {@code det(xI - P)} and its eigenvalues.
+     *
+     * @param factor       the monic irreducible factor, plain syntax
+     * @param multiplicity its multiplicity
+     * @param jordanIndex  the size of the largest Jordan block of each eigenvalue of the factor (1: none)
+     * @param kind         {@code rational}, {@code quadratic} or {@code roots}
+     * @param values       the eigenvalues as formulas
+     */
+    public record Eigen(String factor, int multiplicity, int jordanIndex, String kind, List<String> values) {
+        /** Copies the list. */
+        public Eigen {
+            values = List.copyOf(values);
+        }
+    }
+
+    /**
+     * The long run, restricted to the printed cells.
+     *
+     * @param period    d; 1 when P^n converges
+     * @param limits    d grids shaped like {@code cells}: the limit of P^(dm + r) for r = 0 .. d - 1
+     * @param rate      the second-largest eigenvalue modulus as a formula
+     * @param rateValue its value at the point, to {@code digits}, when the point is known
+     */
+    public record LongRun(int period, List<List<List<String>>> limits, String rate, Optional<String> rateValue) {
+        /** Copies the lists. */
+        public LongRun {
+            limits = limits.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
+        }
+    }
+
+    /**
+     * A named factor of degree 3 or more.
+     *
+     * @param name       its name in formulas
+     * @param polynomial the factor, plain syntax
+     * @param roots      numeric roots at the point, empty if the point is not known
+     */
+    public record Roots(String name, String polynomial, List<String> roots) {
+        /** Copies the list. */
+        public Roots {
+            roots = List.copyOf(roots);
+        }
+    }
+}

@@ -1,0 +1,77 @@
+package org.qchain.result;
+
+import java.util.List;
+import java.util.Optional;
+import org.qchain.exact.Rational;
+
+/**
+ * The sensitivity of one n-step probability P = P^n(from, to) to a parameter: P and dP/dp as formulas, their exact
+ * values and the elasticity at a point, and a sweep table.
+ *
+ * @param source      the model file name
+ * @param kind        the chain kind word
+ * @param n           steps
+ * @param from        start state
+ * @param to          end state
+ * @param wrt         the parameter of the derivative
+ * @param wrtLatex    its LaTeX name, as formulas print it
+ * @param parameters  the parameters the formulas are in
+ * @param probability P^n(from, to) as a formula
+ * @param derivative  its derivative
+ * @param at          values at the point, if every parameter has a value
+ * @param sweep       the sweep table, if asked for
+ * @param warnings    warnings
+ */
+public record SensResult(String source, String kind, long n, String from, String to, String wrt, String wrtLatex,
+                         List<String> parameters, Formula probability, Formula derivative, Optional<AtPoint> at,
+                         Optional<Sweep> sweep, List<String> warnings) implements Result {
+    /** Copies the lists. */
+    public SensResult {
+        parameters = List.copyOf(parameters);
+        warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * Values at a point.
+     *
+     * @param point       the parameter values
+     * @param probability P there
+     * @param derivative  dP/dp there
+     * @param elasticity  (p/P) dP/dp there; empty where P = 0
+     */
+    public record AtPoint(Point point, Rational probability, Rational derivative, Optional<Rational> elasticity) {
+    }
+
+    /**
+     * One line of a sweep.
+     *
+     * @param value       the swept parameter's value
+     * @param probability P there
+     * @param derivative  dP/dp there
+     */
+    public record SweepLine(Rational value, Rational probability, Rational derivative) {
+    }
+
+    /**
+     * A sweep table.
+     *
+     * @param parameter the swept parameter
+     * @param start     first value
+     * @param step      increment
+     * @param end       last value allowed
+     * @param others    the values of the other parameters
+     * @param lines     one line per point
+     */
+    public record Sweep(String parameter, Rational start, Rational step, Rational end, Point others,
+                        List<SweepLine> lines) {
+        /** Copies the list. */
+        public Sweep {
+            lines = List.copyOf(lines);
+        }
+
+        /** {@code p = 0 : 1/100 : 1/10}. */
+        public String range() {
+            return parameter + " = " + start + " : " + step + " : " + end;
+        }
+    }
+}

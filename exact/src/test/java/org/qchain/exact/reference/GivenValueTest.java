@@ -1,0 +1,46 @@
+package org.qchain.exact.reference;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+import org.qchain.exact.Rational;
+import org.qchain.exact.floats.Binary64;
+
+/** Reading one given number exactly, and the double it stands for. */
+class GivenValueTest {
+
+    // IEEE 754-2019 roundTiesToEven: the double a text stands for is the correctly rounded double of its exact value,
+    // whichever way it is found (Double.parseDouble for decimals; exact rounding for fractions and hex floats)
+    @Test
+    void doubleIsTheCorrectlyRoundedExactValue() {
+        Random rnd = new Random(99);
+        for (int k = 0; k < 5000; k++) {
+            String s = (rnd.nextBoolean() ? "-" : "") + rnd.nextInt(1000) + "." + Math.abs(rnd.nextLong())
+                + (rnd.nextBoolean() ? "e" + (rnd.nextInt(700) - 350) : "");
+            GivenValue.Finite f = (GivenValue.Finite) GivenValue.parse(s);
+            assertEquals(Binary64.round(f.value()), f.asDouble(), s);
+        }
+        GivenValue.Finite third = (GivenValue.Finite) GivenValue.parse("1/3");
+        assertEquals(1.0 / 3, third.asDouble());
+        assertEquals(Rational.of(1, 3), third.value());
+    }
+
+    // IEEE 754-2019 clause 6 (infinity and NaN), in the spellings C, Python, JavaScript and JSON writers use
+    @Test
+    void nonFiniteSpellings() {
+        for (String s : new String[] {"inf", "+inf", "-INF", "Infinity", "-Infinity", "nan", "NaN", "-nan", "null"}) {
+            GivenValue v = GivenValue.parse(s);
+            assertFalse(v.isFinite(), s);
+        }
+        assertEquals(Double.NEGATIVE_INFINITY, GivenValue.parse("-inf").asDouble());
+        assertTrue(Double.isNaN(GivenValue.parse("null").asDouble()));
+        assertThrows(NumberFormatException.class, () -> GivenValue.parse("-null"));
+        assertThrows(NumberFormatException.class, () -> GivenValue.parse("infinite"));
+        assertThrows(NumberFormatException.class, () -> GivenValue.parse("1,5"));
+        assertThrows(NumberFormatException.class, () -> GivenValue.parse("0x1.8"));
+    }
+}
