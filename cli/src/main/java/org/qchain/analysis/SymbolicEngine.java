@@ -213,7 +213,17 @@ final class SymbolicEngine {
         if (range.isPresent()) {
             SweepRange r = range.get();
             List<SensResult.SweepLine> lines = new ArrayList<>();
-            for (SweepRow row : s.sweep(r, others)) {
+            List<SweepRow> rows;
+            try {
+                rows = s.sweep(r, others, q.maxDigits(), progress);
+            } catch (QchainException e) {
+                if (e.key() != ErrorKey.SWEEP_TOO_LARGE) {
+                    throw e;
+                }
+                throw new QchainException(ErrorKey.SWEEP_TOO_LARGE, e.args().get(0), e.args().get(1), e.args().get(2),
+                    "; raise it with " + NumericEngine.MAX_DIGITS_OPTION + ", or sweep fewer points");
+            }
+            for (SweepRow row : rows) {
                 lines.add(new SensResult.SweepLine(row.value(), row.probability(), row.derivative()));
             }
             sweep = Optional.of(new SensResult.Sweep(r.parameter(), r.start(), r.step(), r.end(), new Point(others),

@@ -133,7 +133,11 @@ public enum ErrorKey {
     /** {0}: line of the first transition. */
     PARAM_AFTER_TRANSITIONS("a ''param'' line after the transitions: declare parameters before the first transition (line {0}); move this line up"),
     /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries. */
-    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries");
+    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries"),
+
+    // --- closed forms and sweeps: guards (issue 8) -------------------------------------------------------------
+    /** {0}: estimated digits of the exact values, {1}: points, {2}: the limit, {3}: how to raise it (may be empty). */
+    SWEEP_TOO_LARGE("the sweep would compute about {0} digits of exact values at {1} points, more than the limit {2}{3}");
 
     private final String pattern;
 
