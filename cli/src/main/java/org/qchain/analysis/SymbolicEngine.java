@@ -406,11 +406,20 @@ final class SymbolicEngine {
         for (String name : cf.parameters()) {
             m.param(name).ifPresent(d -> domains.put(name, d.domain()));
         }
+        List<Point> special = new ArrayList<>();
+        for (Map<String, Rational> c : cf.specialCorners(domains)) {
+            special.add(new Point(c));
+        }
+        ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits, lr.rate(), rateValue,
+            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(), lr.exactFrom());
         return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, cf.conditions(),
             cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),
-            names(m, ci), cells, List.of(), eig,
-            Optional.of(new ClosedResult.LongRun(lr.period(), limits, lr.rate(), rateValue)), roots,
-            pt.filter(p -> !p.isEmpty()), q.digits(), warnings);
+            names(m, ci), cells, List.of(), eig, Optional.of(longRun), roots,
+            pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()));
+    }
+
+    private static ClosedResult.Names names(org.qchain.symbolic.closed.Symbols s) {
+        return new ClosedResult.Names(s.step(), s.period(), s.variable(), s.series(), s.sequence());
     }
 
     private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Optional<Integer> row,
@@ -439,8 +448,8 @@ final class SymbolicEngine {
                 recs.add(rr);
             }
         }
-        return new ClosedResult(m.source(), q.form(), ClosedForm.N_SYMBOL, validFrom, List.of(), List.of(),
+        return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(), List.of(),
             m.states(), sf.parameters(), selection(row, col), names(m, ri), names(m, ci), cells, recs, List.of(),
-            Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of());
+            Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of(), names(sf.symbols()));
     }
 }

@@ -32,6 +32,13 @@ public final class Json {
         return this;
     }
 
+    /** Appends {@code true} or {@code false} (mutates). */
+    public Json bool(String key, boolean value) {
+        key(key);
+        sb.append(value);
+        return this;
+    }
+
     /** Appends an array of strings (mutates). */
     public Json strings(String key, List<String> values) {
         key(key);

@@ -184,7 +184,7 @@ final class JsonFormatter extends Layout {
             j.strings("conditions_not_proved", r.notProved());
         }
         if (r.form() == ClosedResult.Form.GF) {
-            j.string("variable", "z");
+            j.string("variable", r.names().series());
         }
         if (r.form() == ClosedResult.Form.RECURRENCE) {
             List<Object[]> items = new ArrayList<>();
@@ -215,12 +215,23 @@ final class JsonFormatter extends Layout {
                     .objects("limits", rs, k -> limitJson(r, k, lr.limits().get(k)))
                     .string("rate", lr.rate());
                 lr.rateValue().ifPresent(v -> l.string("rate_value", v));
+                List<String> special = new ArrayList<>();
+                for (org.qchain.result.Point p : lr.special()) {
+                    special.add(p.text());
+                }
+                l.string("rate_of", lr.periodic() ? "subsequences" : "powers").bool("exact", lr.exact())
+                    .number("exact_from", lr.exactFrom()).strings("conditions", lr.conditions())
+                    .strings("conditions_not_proved", lr.notProved()).strings("special_points", special);
                 j.object("long_run", l);
             });
             r.point().ifPresent(p -> j.string("at", p.text()));
         }
+        ClosedResult.Names names = r.names();
         j.string("kind", "discrete").string("model", r.source()).number("digits", r.digits())
-            .strings("warnings", r.warnings());
+            .strings("warnings", r.warnings())
+            .object("symbols", Json.object().string("step", names.step()).string("period", names.period())
+                .string("variable", names.variable()).string("series", names.series())
+                .string("sequence", names.sequence()));
         return j.close() + "\n";
     }
 

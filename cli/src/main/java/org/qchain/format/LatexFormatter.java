@@ -170,21 +170,25 @@ final class LatexFormatter extends Layout {
     @Override
     public String closed(ClosedResult r) {
         StringBuilder sb = new StringBuilder();
-        sb.append("% P^n for ").append(Text.comment(r.source())).append(" (discrete chain): ").append(Closed.what(r))
+        sb.append("% ").append(Closed.pn(r)).append(" for ").append(Text.comment(r.source())).append(" (discrete chain): ").append(Closed.what(r))
             .append('\n');
         if (!r.isSeries()) {
-            sb.append("% valid for n >= ").append(r.validFrom());
+            sb.append("% valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
                 sb.append(" where ").append(String.join(", ", r.conditions())).append('.');
             }
             sb.append(Closed.domainNote(r)).append('\n');
+        }
+        if (!Closed.symbolsNote(r).isEmpty()) {
+            sb.append("% ").append(Closed.symbolsNote(r)).append('\n');
         }
         sb.append("\\begin{align*}\n");
         List<String> lines = new ArrayList<>();
         for (int i = 0; i < r.rows().size(); i++) {
             for (int j = 0; j < r.cols().size(); j++) {
                 String idx = "\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.cols().get(j)) + "}";
-                String lhs = r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(z)" : "P^{n}_{" + idx + "}";
+                String lhs = r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(" + r.names().series() + ")"
+                    : "P^{" + r.names().step() + "}_{" + idx + "}";
                 String rhs = r.cells().get(i).get(j).latex();
                 lines.add(r.form() == ClosedResult.Form.RECURRENCE ? "&" + lhs + ":\\; " + rhs : lhs + " &= " + rhs);
             }
@@ -197,8 +201,15 @@ final class LatexFormatter extends Layout {
             }
             sb.append('\n');
         }
-        r.longRun().ifPresent(lr -> sb.append("% long run: period ").append(lr.period()).append("; rate ")
-            .append(lr.rate()).append(lr.rateValue().map(v -> " = " + v).orElse("")).append('\n'));
+        r.longRun().ifPresent(lr -> {
+            sb.append("% long run: ").append(Text.comment(Closed.longRunHeading(r, lr))).append('\n');
+            String note = Closed.longRunNote(lr);
+            if (!note.isEmpty()) {
+                sb.append("% ").append(Text.comment(note)).append('\n');
+            }
+            sb.append("% ").append(Text.comment(Closed.rateLine(r, lr)))
+                .append(lr.exact() ? "" : lr.rateValue().map(v -> " = " + v).orElse("")).append('\n');
+        });
         return caution(sb);
     }
 

@@ -241,21 +241,26 @@ final class TextFormatter extends Layout {
     @Override
     public String closed(ClosedResult r) {
         StringBuilder sb = new StringBuilder();
-        sb.append("P^n for ").append(r.source()).append(" (discrete chain): ").append(Closed.what(r)).append('\n');
+        sb.append(Closed.pn(r)).append(" for ").append(r.source()).append(" (discrete chain): ").append(Closed.what(r))
+            .append('\n');
         if (!r.isSeries()) {
-            sb.append("Valid for n >= ").append(r.validFrom());
+            sb.append("Valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
                 sb.append(" where ").append(String.join(", ", r.conditions()));
             }
             sb.append('.');
             sb.append(Closed.domainNote(r));
             if (r.validFrom() > 0) {
-                sb.append(" For smaller n (eigenvalue 0), qchain step gives P^n exactly.");
+                sb.append(" For smaller ").append(r.names().step()).append(" (eigenvalue 0), qchain step gives ")
+                    .append(Closed.pn(r)).append(" exactly.");
             }
             sb.append('\n');
         }
         if (!r.parameters().isEmpty()) {
             sb.append("Parameters (symbolic): ").append(String.join(", ", r.parameters())).append('\n');
+        }
+        if (!Closed.symbolsNote(r).isEmpty()) {
+            sb.append(Closed.symbolsNote(r)).append('\n');
         }
         sb.append('\n');
         List<String> labels = new ArrayList<>();
@@ -268,7 +273,7 @@ final class TextFormatter extends Layout {
         }
         aligned(sb, labels, r.form() == ClosedResult.Form.RECURRENCE ? ": " : " = ", values, "");
         if (!r.eigenvalues().isEmpty()) {
-            sb.append("\nEigenvalues, by irreducible factor of det(xI - P):\n");
+            sb.append("\nEigenvalues, by irreducible factor of det(").append(r.names().variable()).append("I - P):\n");
             List<String> facts = new ArrayList<>();
             List<String> vals = new ArrayList<>();
             for (ClosedResult.Eigen e : r.eigenvalues()) {
@@ -291,28 +296,29 @@ final class TextFormatter extends Layout {
     }
 
     private static void longRun(StringBuilder sb, ClosedResult r, ClosedResult.LongRun lr) {
-        sb.append('\n');
-        if (lr.period() == 1) {
-            sb.append("Long run: P^n converges as n grows; the limit:\n");
-        } else {
-            sb.append("Long run: periodic with period ").append(lr.period())
-                .append("; the limits of P^(").append(lr.period()).append("m + r) as m grows:\n");
-        }
+        sb.append('\n').append("Long run: ").append(Closed.longRunHeading(r, lr)).append(":\n");
         for (int k = 0; k < lr.limits().size(); k++) {
             List<String> labels = new ArrayList<>();
             List<String> values = new ArrayList<>();
             for (int i = 0; i < r.rows().size(); i++) {
                 for (int j = 0; j < r.cols().size(); j++) {
-                    labels.add((lr.period() > 1 ? "r = " + k + ": " : "") + r.rows().get(i) + " -> " + r.cols().get(j));
+                    labels.add((lr.periodic() ? Closed.subsequence(r, lr, k) + ": " : "") + r.rows().get(i) + " -> "
+                        + r.cols().get(j));
                     values.add(lr.limits().get(k).get(i).get(j));
                 }
             }
             aligned(sb, labels, "  ", values, "  ");
         }
-        sb.append("Convergence rate (second-largest eigenvalue modulus): ").append(lr.rate()).append('\n');
-        lr.rateValue().ifPresent(v -> sb.append("  = ").append(v)
-            .append(r.point().map(p -> " at " + p.text()).orElse("")).append(" (").append(r.digits())
-            .append(" significant digits)\n"));
+        String note = Closed.longRunNote(lr);
+        if (!note.isEmpty()) {
+            sb.append(note).append('\n');
+        }
+        sb.append(Closed.rateLine(r, lr)).append('\n');
+        if (!lr.exact()) {
+            lr.rateValue().ifPresent(v -> sb.append("  = ").append(v)
+                .append(r.point().map(p -> " at " + p.text()).orElse("")).append(" (").append(r.digits())
+                .append(" significant digits)\n"));
+        }
     }
 
     private static void aligned(StringBuilder sb, List<String> left, String sep, List<String> right, String indent) {
