@@ -357,25 +357,31 @@ final class SymbolicEngine {
             }
             cells.add(line);
         }
-        List<ClosedResult.Eigen> eig = new ArrayList<>();
-        for (Eigenvalue e : cf.eigenvalues()) {
-            eig.add(new ClosedResult.Eigen(e.factor(), e.multiplicity(), e.jordanIndex(), e.kind(), e.values()));
-        }
         List<String> warnings = new ArrayList<>();
         Optional<Point> pt = point(model, cf.parameters());
         Optional<String> rateValue = Optional.empty();
         List<RootPolynomial> named = List.of();
+        List<List<String>> eigenDecimals = List.of();
+        List<RationalMatrix> limitValues = List.of();
         if (pt.isPresent()) {
             try {
                 cf.evaluate(0, pt.get().values()); // checks every condition at the point
                 rateValue = Optional.of(cf.rate(pt.get().values(), q.digits()));
                 named = cf.rootPolynomials(pt.get().values(), q.digits());
+                eigenDecimals = cf.eigenvalueDecimals(pt.get().values(), q.digits());
+                limitValues = cf.longRunAt(pt.get().values());
             } catch (QchainException e) {
                 if (e.key() != ErrorKey.CLOSED_FORM_CONDITION) {
                     throw e;
                 }
                 warnings.add(e.detail());
             }
+        }
+        List<ClosedResult.Eigen> eig = new ArrayList<>();
+        for (int k = 0; k < cf.eigenvalues().size(); k++) {
+            Eigenvalue e = cf.eigenvalues().get(k);
+            eig.add(new ClosedResult.Eigen(e.factor(), e.multiplicity(), e.jordanIndex(), e.kind(), e.values(),
+                eigenDecimals.isEmpty() ? List.of() : eigenDecimals.get(k)));
         }
         List<ClosedResult.Roots> roots = new ArrayList<>();
         if (named.isEmpty()) {
@@ -402,6 +408,18 @@ final class SymbolicEngine {
             }
             limits.add(picked);
         }
+        List<List<List<Rational>>> values = new ArrayList<>();
+        for (RationalMatrix full : limitValues) {
+            List<List<Rational>> picked = new ArrayList<>();
+            for (int i : ri) {
+                List<Rational> r = new ArrayList<>();
+                for (int j : ci) {
+                    r.add(full.get(i, j));
+                }
+                picked.add(r);
+            }
+            values.add(picked);
+        }
         Map<String, Domain> domains = new LinkedHashMap<>();
         for (String name : cf.parameters()) {
             m.param(name).ifPresent(d -> domains.put(name, d.domain()));
@@ -411,7 +429,7 @@ final class SymbolicEngine {
             special.add(new Point(c));
         }
         ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits, lr.rate(), rateValue,
-            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(), lr.exactFrom());
+            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(), lr.exactFrom(), values);
         return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, cf.conditions(),
             cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),
             names(m, ci), cells, List.of(), eig, Optional.of(longRun), roots,

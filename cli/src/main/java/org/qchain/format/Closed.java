@@ -103,6 +103,36 @@ final class Closed {
         return sb.toString();
     }
 
+    /** The limits at the point as decimals, shaped like the limits; empty without a point. */
+    static List<List<List<String>>> limitDecimals(ClosedResult r, ClosedResult.LongRun lr) {
+        List<List<List<String>>> out = new ArrayList<>();
+        for (List<List<org.qchain.exact.Rational>> grid : lr.values()) {
+            List<List<String>> g = new ArrayList<>();
+            for (List<org.qchain.exact.Rational> row : grid) {
+                List<String> rr = new ArrayList<>();
+                for (org.qchain.exact.Rational v : row) {
+                    rr.add(Text.decimal(v, r.digits()));
+                }
+                g.add(rr);
+            }
+            out.add(g);
+        }
+        return out;
+    }
+
+    /** The eigenvalues' decimals when they add something to the exact values; empty otherwise. */
+    static String eigenDecimals(ClosedResult.Eigen e) {
+        if (e.decimals().isEmpty() || e.decimals().equals(e.values())) {
+            return "";
+        }
+        return String.join(", ", e.decimals());
+    }
+
+    /** Where the decimals are taken: {@code " at p=1/20, r=1/4"} or empty for a chain without parameters. */
+    static String pointNote(ClosedResult r) {
+        return r.point().map(p -> " at " + p.text()).orElse("");
+    }
+
     /** The rate sentence: what the number means, or that the long run is reached exactly. */
     static String rateLine(ClosedResult r, ClosedResult.LongRun lr) {
         String n = r.names().step();

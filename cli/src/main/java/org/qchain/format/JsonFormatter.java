@@ -203,7 +203,7 @@ final class JsonFormatter extends Layout {
         if (!r.isSeries()) {
             j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor())
                 .number("multiplicity", e.multiplicity()).number("jordan_index", e.jordanIndex())
-                .string("kind", e.kind()).strings("values", e.values()));
+                .string("kind", e.kind()).strings("values", e.values()).strings("decimals", e.decimals()));
             j.objects("root_polynomials", r.roots(), rt -> Json.object().string("name", rt.name())
                 .string("polynomial", rt.polynomial()).strings("roots", rt.roots()));
             r.longRun().ifPresent(lr -> {
@@ -212,7 +212,7 @@ final class JsonFormatter extends Layout {
                     rs.add(k);
                 }
                 Json l = Json.object().number("period", lr.period())
-                    .objects("limits", rs, k -> limitJson(r, k, lr.limits().get(k)))
+                    .objects("limits", rs, k -> limitJson(r, k, lr.limits().get(k), Closed.limitDecimals(r, lr)))
                     .string("rate", lr.rate());
                 lr.rateValue().ifPresent(v -> l.string("rate_value", v));
                 List<String> special = new ArrayList<>();
@@ -235,15 +235,27 @@ final class JsonFormatter extends Layout {
         return j.close() + "\n";
     }
 
-    private static Json limitJson(ClosedResult r, int k, List<List<String>> grid) {
+    private static Json limitJson(ClosedResult r, int k, List<List<String>> grid, List<List<List<String>>> dec) {
         Json l = Json.object().number("r", k);
         switch (r.selection()) {
             case ENTRY:
-                return l.string("formula", grid.get(0).get(0));
+                l.string("formula", grid.get(0).get(0));
+                if (!dec.isEmpty()) {
+                    l.string("decimal", dec.get(k).get(0).get(0));
+                }
+                return l;
             case ROW:
-                return l.strings("row", grid.get(0));
+                l.strings("row", grid.get(0));
+                if (!dec.isEmpty()) {
+                    l.strings("decimals", dec.get(k).get(0));
+                }
+                return l;
             default:
-                return l.stringRows("matrix", grid);
+                l.stringRows("matrix", grid);
+                if (!dec.isEmpty()) {
+                    l.stringRows("decimals", dec.get(k));
+                }
+                return l;
         }
     }
 

@@ -276,13 +276,21 @@ final class TextFormatter extends Layout {
             sb.append("\nEigenvalues, by irreducible factor of det(").append(r.names().variable()).append("I - P):\n");
             List<String> facts = new ArrayList<>();
             List<String> vals = new ArrayList<>();
+            boolean decimals = false;
             for (ClosedResult.Eigen e : r.eigenvalues()) {
                 facts.add(e.factor() + ":");
                 String extra = e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() : "";
                 extra += e.jordanIndex() > 1 ? ", Jordan block of size " + e.jordanIndex() : "";
-                vals.add(String.join(", ", e.values()) + (extra.isEmpty() ? "" : extra + ")"));
+                String dec = Closed.eigenDecimals(e);
+                decimals |= !dec.isEmpty();
+                vals.add(String.join(", ", e.values()) + (extra.isEmpty() ? "" : extra + ")")
+                    + (dec.isEmpty() ? "" : "  ≈ " + dec));
             }
             aligned(sb, facts, " ", vals, "  ");
+            if (decimals) {
+                sb.append("  (≈: decimals").append(Closed.pointNote(r)).append(", ").append(r.digits())
+                    .append(" significant digits)\n");
+            }
         }
         for (ClosedResult.Roots rt : r.roots()) {
             sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial());
@@ -295,19 +303,46 @@ final class TextFormatter extends Layout {
         return end(sb);
     }
 
+    /** The widest label that is still padded to align the column after it. */
+    private static final int MAX_PAD = 40;
+
     private static void longRun(StringBuilder sb, ClosedResult r, ClosedResult.LongRun lr) {
         sb.append('\n').append("Long run: ").append(Closed.longRunHeading(r, lr)).append(":\n");
+        List<List<List<String>>> dec = Closed.limitDecimals(r, lr);
+        boolean shown = false;
         for (int k = 0; k < lr.limits().size(); k++) {
             List<String> labels = new ArrayList<>();
             List<String> values = new ArrayList<>();
+            List<String> approx = new ArrayList<>();
             for (int i = 0; i < r.rows().size(); i++) {
                 for (int j = 0; j < r.cols().size(); j++) {
                     labels.add((lr.periodic() ? Closed.subsequence(r, lr, k) + ": " : "") + r.rows().get(i) + " -> "
                         + r.cols().get(j));
-                    values.add(lr.limits().get(k).get(i).get(j));
+                    String exact = lr.limits().get(k).get(i).get(j);
+                    values.add(exact);
+                    String d = dec.isEmpty() ? "" : dec.get(k).get(i).get(j);
+                    approx.add(d.isEmpty() || d.equals(exact) ? "" : "  ≈ " + d);
+                    shown |= !approx.get(approx.size() - 1).isEmpty();
                 }
             }
-            aligned(sb, labels, "  ", values, "  ");
+            if (approx.stream().allMatch(String::isEmpty)) {
+                aligned(sb, labels, "  ", values, "  ");
+            } else {
+                List<String> padded = new ArrayList<>();
+                int w = 0;
+                for (String v : values) {
+                    w = Math.max(w, v.length());
+                }
+                for (int t = 0; t < values.size(); t++) {
+                    String v = values.get(t);
+                    padded.add(approx.get(t).isEmpty() ? v : v + " ".repeat(w - v.length()) + approx.get(t));
+                }
+                aligned(sb, labels, "  ", padded, "  ");
+            }
+        }
+        if (shown) {
+            sb.append("  (≈: decimals").append(Closed.pointNote(r)).append(", ").append(r.digits())
+                .append(" significant digits)\n");
         }
         String note = Closed.longRunNote(lr);
         if (!note.isEmpty()) {
@@ -321,13 +356,17 @@ final class TextFormatter extends Layout {
         }
     }
 
+    /** Labels padded to one width, unless one is longer than {@link #MAX_PAD}: then a single separator each. */
     private static void aligned(StringBuilder sb, List<String> left, String sep, List<String> right, String indent) {
         int w = 0;
         for (String l : left) {
             w = Math.max(w, l.length());
         }
+        if (w > MAX_PAD) {
+            w = 0;
+        }
         for (int i = 0; i < left.size(); i++) {
-            sb.append(indent).append(left.get(i)).append(" ".repeat(w - left.get(i).length())).append(sep)
+            sb.append(indent).append(left.get(i)).append(" ".repeat(Math.max(0, w - left.get(i).length()))).append(sep)
                 .append(right.get(i)).append('\n');
         }
     }

@@ -2,6 +2,7 @@ package org.qchain.result;
 
 import java.util.List;
 import java.util.Optional;
+import org.qchain.exact.Rational;
 
 /**
  * P^n (the whole matrix, one row or one entry) as formulas in a symbolic n and the free parameters, or their
@@ -133,11 +134,14 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param jordanIndex  the size of the largest Jordan block of each eigenvalue of the factor (1: none)
      * @param kind         {@code rational}, {@code quadratic} or {@code roots}
      * @param values       the eigenvalues as formulas
+     * @param decimals     the eigenvalues at the point, as decimals to {@code digits}; empty without a point
      */
-    public record Eigen(String factor, int multiplicity, int jordanIndex, String kind, List<String> values) {
-        /** Copies the list. */
+    public record Eigen(String factor, int multiplicity, int jordanIndex, String kind, List<String> values,
+                        List<String> decimals) {
+        /** Copies the lists. */
         public Eigen {
             values = List.copyOf(values);
+            decimals = List.copyOf(decimals);
         }
     }
 
@@ -157,13 +161,15 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param exact      whether no other eigenvalue than roots of unity and 0 exists: P^n (or each subsequence) equals
      *                   its limit from n = {@code exactFrom} on
      * @param exactFrom  see {@code exact}
+     * @param values     the limits at the point, exactly, shaped like {@code limits}; empty without a point
      */
     public record LongRun(int period, List<List<List<String>>> limits, String rate, Optional<String> rateValue,
                           List<String> conditions, List<String> notProved, List<Point> special, boolean exact,
-                          int exactFrom) {
+                          int exactFrom, List<List<List<Rational>>> values) {
         /** Copies the lists. */
         public LongRun {
             limits = limits.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
+            values = values.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
             conditions = List.copyOf(conditions);
             notProved = List.copyOf(notProved);
             special = List.copyOf(special);

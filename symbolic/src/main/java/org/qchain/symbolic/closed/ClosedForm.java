@@ -606,6 +606,74 @@ public final class ClosedForm {
         return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate), conds, moduli.isEmpty(), validFrom);
     }
 
+    /**
+     * The limits of {@link #longRun()} at a parameter point, exactly: the limit of P^(dm + r) for r = 0 .. d - 1.
+     *
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return d exact matrices
+     * @throws QchainException as {@link #evaluate(long, Map)}
+     */
+    public List<RationalMatrix> longRunAt(Map<String, Rational> at) {
+        checkPoint(at);
+        int d = longRun().period();
+        Evaluator<BigRational> ev = new Evaluator<>(BigRational.ZERO, q -> substitute(q, at));
+        List<RationalMatrix> out = new ArrayList<>();
+        for (int r = 0; r < d; r++) {
+            Rational[][] m = new Rational[size][size];
+            for (int i = 0; i < size; i++) {
+                for (int j = 0; j < size; j++) {
+                    BigRational s = BigRational.ZERO;
+                    for (Spectral.Group g : spectral.groups) {
+                        if (g.unitOrder > 0) {
+                            s = s.sum(ev.entry(g, r, i, j));
+                        }
+                    }
+                    m[i][j] = ParamField.rational(s);
+                }
+            }
+            out.add(RationalMatrix.of(m));
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The eigenvalues of each factor of {@link #eigenvalues()} at a point, as decimals (complex ones as
+     * {@code a + b i}), correctly rounded as the roots of named factors are.
+     *
+     * @param at     a value for every parameter
+     * @param digits significant digits, at least 1
+     * @return per factor, its roots in the order of the numeric root finder
+     * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
+     */
+    public List<List<String>> eigenvalueDecimals(Map<String, Rational> at, int digits) {
+        List<List<String>> out = new ArrayList<>();
+        for (Spectral.Group g : spectral.groups) {
+            List<String> v = new ArrayList<>();
+            if (g.kind == Spectral.Kind.QUADRATIC) {
+                // in the printed order: u/2 + (s/2) sqrt(D), then u/2 - (s/2) sqrt(D)
+                long prec = digits + 20L;
+                Quotient<BigRational> half = field.of(2).inverse();
+                org.apfloat.Apfloat mid = apfloat(substitute(g.u.multiply(half), at), prec);
+                org.apfloat.Apfloat w = apfloat(substitute(g.scale.multiply(half), at), prec);
+                BigRational dv = substitute(g.delta, at);
+                org.apfloat.Apfloat root = org.apfloat.ApfloatMath.sqrt(apfloat(dv.abs(), prec));
+                for (int sign : new int[] {1, -1}) {
+                    org.apfloat.Apfloat t = w.multiply(root).multiply(new org.apfloat.Apfloat(sign, prec));
+                    v.add(dv.signum() >= 0 ? NumericRoots.format(mid.add(t), digits)
+                        : NumericRoots.format(new org.apfloat.Apcomplex(mid, t), digits));
+                }
+            } else if (g.kind == Spectral.Kind.LINEAR) {
+                v.add(org.qchain.exact.Decimals.format(ParamField.rational(substitute(g.lambda, at)), digits));
+            } else {
+                for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
+                    v.add(NumericRoots.format(z, digits));
+                }
+            }
+            out.add(List.copyOf(v));
+        }
+        return List.copyOf(out);
+    }
+
     /** A condition of the long run: {@code poly != 0} (poly empty: not decidable here, never proved). */
     private record LongRunCondition(String text, java.util.Optional<GenPolynomial<BigRational>> poly) {
     }
@@ -830,6 +898,10 @@ public final class ClosedForm {
             a[k] = substitute(g.coeffs[k], at);
         }
         return a;
+    }
+
+    private static org.apfloat.Apfloat apfloat(BigRational r, long prec) {
+        return new org.apfloat.Apfloat(r.numerator(), prec).divide(new org.apfloat.Apfloat(r.denominator(), prec));
     }
 
     private static int lcm(int a, int b) {
