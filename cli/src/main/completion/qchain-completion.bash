@@ -158,6 +158,7 @@ function _complete_qchain() {
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} sens" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} closed" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} check" ];    then _picocli_qchain; return $?; fi
+  if [ "${COMP_LINE}" = "${COMP_WORDS[0]} verify" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} demo" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} completion" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} help" ];    then _picocli_qchain; return $?; fi
@@ -167,13 +168,15 @@ function _complete_qchain() {
   local cmds1=(sens)
   local cmds2=(closed)
   local cmds3=(check)
-  local cmds4=(demo)
-  local cmds5=(completion)
-  local cmds6=(help)
+  local cmds4=(verify)
+  local cmds5=(demo)
+  local cmds6=(completion)
+  local cmds7=(help)
 
-  if CompWordsContainsArray "${cmds6[@]}"; then _picocli_qchain_help; return $?; fi
-  if CompWordsContainsArray "${cmds5[@]}"; then _picocli_qchain_completion; return $?; fi
-  if CompWordsContainsArray "${cmds4[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds7[@]}"; then _picocli_qchain_help; return $?; fi
+  if CompWordsContainsArray "${cmds6[@]}"; then _picocli_qchain_completion; return $?; fi
+  if CompWordsContainsArray "${cmds5[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds4[@]}"; then _picocli_qchain_verify; return $?; fi
   if CompWordsContainsArray "${cmds3[@]}"; then _picocli_qchain_check; return $?; fi
   if CompWordsContainsArray "${cmds2[@]}"; then _picocli_qchain_closed; return $?; fi
   if CompWordsContainsArray "${cmds1[@]}"; then _picocli_qchain_sens; return $?; fi
@@ -188,7 +191,7 @@ function _picocli_qchain() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens closed check demo completion help"
+  local commands="step sens closed check verify demo completion help"
   local flag_opts="'-h' '--help' '-V' '--version'"
   local arg_opts=""
 
@@ -208,7 +211,7 @@ function _picocli_qchain_step() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'--symbolic' '--factor' '-h' '--help' '-V' '--version'"
+  local flag_opts="'--symbolic' '--factor' '--double' '-h' '--help' '-V' '--version'"
   local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
@@ -445,6 +448,94 @@ function _picocli_qchain_check() {
   fi
 }
 
+# Generates completions for the options and subcommands of the `verify` subcommand.
+function _picocli_qchain_verify() {
+  # Get completion data
+  local curr_word=${COMP_WORDS[COMP_CWORD]}
+  local prev_word=${COMP_WORDS[COMP_CWORD-1]}
+
+  local commands=""
+  local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--against' '-n' '--steps' '-t' '--time' '--what' '--from' '--to' '--tol' '--abs-tol' '--ulps' '--show' '--format' '--digits' '-o' '--output' '--max-digits'"
+  local WHAT_option_args=("matrix" "row" "entry" "stationary" "absorption" "expected-steps" "availability" "mttf") # --what values
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+
+  type compopt &>/dev/null && compopt +o default
+
+  case ${prev_word} in
+    '--at')
+      return
+      ;;
+    '--against')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+    '-n'|'--steps')
+      return
+      ;;
+    '-t'|'--time')
+      return
+      ;;
+    '--what')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${WHAT_option_args[@]}" ) )
+      return $?
+      ;;
+    '--from')
+      return
+      ;;
+    '--to')
+      return
+      ;;
+    '--tol')
+      return
+      ;;
+    '--abs-tol')
+      return
+      ;;
+    '--ulps')
+      return
+      ;;
+    '--show')
+      return
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
+    '--digits')
+      return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+    '--max-digits')
+      return
+      ;;
+  esac
+
+  if [[ "${curr_word}" == -* ]]; then
+    COMPREPLY=( $(compgen -W "${flag_opts} ${arg_opts}" -- "${curr_word}") )
+  else
+    local positionals=""
+    local currIndex
+    currIndex=$(currentPositionalIndex "verify" "${arg_opts}" "${flag_opts}")
+    if (( currIndex >= 0 && currIndex <= 0 )); then
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      positionals=$( compgen -f -- "${curr_word}" ) # files
+    fi
+    local IFS=$'\n'
+    COMPREPLY=( $(compgen -W "${commands// /$'\n'}${IFS}${positionals}" -- "${curr_word}") )
+  fi
+}
+
 # Generates completions for the options and subcommands of the `demo` subcommand.
 function _picocli_qchain_demo() {
   # Get completion data
@@ -498,7 +589,7 @@ function _picocli_qchain_help() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens closed check demo completion"
+  local commands="step sens closed check verify demo completion"
   local flag_opts="'-h' '--help'"
   local arg_opts=""
 

@@ -1,5 +1,7 @@
 package org.qchain.analysis;
 
+import java.util.Optional;
+import java.util.OptionalInt;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
@@ -7,6 +9,7 @@ import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Result;
 import org.qchain.result.SensResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * Runs queries on loaded models: the one way from a query to a typed result, for the command line and for Java
@@ -16,10 +19,33 @@ import org.qchain.result.SensResult;
  * <p>Routes: {@code step} is numeric when every used parameter has a nominal value and symbolic is not asked for
  * (values given for parameters without a nominal value are the point where a symbolic result is evaluated);
  * {@code check} is numeric when every used parameter has a value (nominal or given); {@code sens} and
- * {@code closed} are symbolic. Only the symbolic route loads JAS and Symja.
+ * {@code closed} are symbolic. Only the symbolic route loads JAS and Symja. An interruption (the thread's interrupt
+ * flag, JAS's preemption) ends every query with {@link ErrorKey#INTERRUPTED}.
  */
 public final class Analysis {
     private Analysis() {
+    }
+
+    /**
+     * Runs any query: the one entry point a report (a list of queries) needs.
+     *
+     * @param model    the loaded model
+     * @param query    the query
+     * @param progress told about long work
+     * @return the query's result
+     * @throws QchainException as the query's own method
+     */
+    public static Result run(LoadedModel model, Query query, Progress progress) {
+        if (query instanceof StepQuery q) {
+            return step(model, q, progress);
+        }
+        if (query instanceof SensQuery q) {
+            return sens(model, q, progress);
+        }
+        if (query instanceof ClosedQuery q) {
+            return closed(model, q, progress);
+        }
+        return check(model, (CheckQuery) query);
     }
 
     /** The route a step query takes on a model. */
@@ -47,11 +73,13 @@ public final class Analysis {
         model.requireDiscrete("qchain step needs a discrete chain (continuous chains are not supported yet)");
         if (route(model, q) == Route.SYMBOLIC) {
             if (q.paths().isPresent()) {
-                throw new QchainException(ErrorKey.BAD_ARGUMENT, "--paths", q.paths().getAsInt(), "needs numeric"
-                    + " values for every parameter (the most probable paths of a symbolic chain depend on the"
-                    + " parameters)");
+                throw new QchainException(AnalysisKey.PATHS_NEED_VALUES, q.paths().getAsInt());
             }
-            return SymbolicEngine.step(model, q, progress);
+            if (model.complete()) {
+                // the values at the point come from the exact engine too: its estimate first
+                NumericEngine.guard(model, q);
+            }
+            return Interrupts.guarded(() -> SymbolicEngine.step(model, q, progress));
         }
         return NumericEngine.step(model, q, progress);
     }
@@ -67,7 +95,12 @@ public final class Analysis {
      */
     public static SensResult sens(LoadedModel model, SensQuery q, Progress progress) {
         model.requireDiscrete("qchain sens needs a discrete chain (continuous chains are not supported yet)");
-        return SymbolicEngine.sens(model, q, progress);
+        if (model.complete()) {
+            // the value at the point is checked against the exact engine's entry: its estimate first
+            NumericEngine.guard(model, new StepQuery(q.n(), Optional.of(q.from()), Optional.of(q.to()),
+                OptionalInt.empty(), q.maxDigits(), Long.MAX_VALUE, true, q.factor(), q.maxTerms()));
+        }
+        return Interrupts.guarded(() -> SymbolicEngine.sens(model, q, progress));
     }
 
     /**
@@ -81,7 +114,22 @@ public final class Analysis {
      */
     public static ClosedResult closed(LoadedModel model, ClosedQuery q, Progress progress) {
         model.requireDiscrete("closed forms in n are for discrete-time chains");
-        return SymbolicEngine.closed(model, q, progress);
+        return Interrupts.guarded(() -> SymbolicEngine.closed(model, q, progress));
+    }
+
+    /**
+     * Another tool's floating-point results checked exactly against the exact values.
+     *
+     * @param model    the loaded model (every used parameter needs a value)
+     * @param q        the query
+     * @param progress told about long work (the exact values, then the checking)
+     * @return the result: counts, the worst entries, whether every value meets the tolerance
+     * @throws QchainException for a quantity whose analysis this build lacks, a continuous chain, free parameters,
+     *                         an unknown state, exact values past the size limit, a file of the wrong shape or with
+     *                         unknown state names (at its file:line:col), an interruption
+     */
+    public static VerifyResult verify(LoadedModel model, VerifyQuery q, Progress progress) {
+        return Verification.run(model, q, progress);
     }
 
     /**
@@ -94,7 +142,7 @@ public final class Analysis {
     public static CheckResult check(LoadedModel model, CheckQuery q) {
         model.requireDiscrete("qchain check needs a discrete chain (continuous chains are not supported yet)");
         if (route(model, q) == Route.SYMBOLIC) {
-            return SymbolicEngine.check(model);
+            return Interrupts.guarded(() -> SymbolicEngine.check(model));
         }
         return NumericEngine.check(model);
     }

@@ -6,5 +6,5 @@ package org.qchain.analysis;
  * @param symbolic keep the parameters symbolic (formulas, identities and range conditions) even where every
  *                 parameter has a value
  */
-public record CheckQuery(boolean symbolic) {
+public record CheckQuery(boolean symbolic) implements Query {
 }

@@ -15,7 +15,7 @@ import org.qchain.result.ClosedResult;
  * @param digits    significant digits of numeric values (rate, roots)
  */
 public record ClosedQuery(ClosedResult.Form form, Optional<String> from, String fromName, Optional<String> to,
-                          long maxTerms, int digits) {
+                          long maxTerms, int digits) implements Query {
     /**
      * Checks the shape.
      *

@@ -109,11 +109,12 @@ public final class LoadedModel {
      * @return the loaded model
      */
     public static LoadedModel of(Model model, Optional<Path> file, Map<String, Rational> values) {
-        for (Map.Entry<String, Rational> e : values.entrySet()) {
-            ParamDecl d = model.param(e.getKey()).orElseThrow(() -> new QchainException(ErrorKey.BAD_ARGUMENT,
-                "parameter", e.getKey(), "the model declares no such parameter"));
-            if (!d.domain().contains(e.getValue())) {
-                throw new QchainException(ErrorKey.VALUE_OUTSIDE_DOMAIN, e.getKey(), e.getValue(), d.domain());
+        try {
+            // names and domains of the given values, checked by the exact module before any evaluation
+            Chains.effectiveValues(model, values);
+        } catch (QchainException e) {
+            if (e.key() != ErrorKey.FREE_PARAMETERS) {
+                throw e;
             }
         }
         return new LoadedModel(model, file, Map.copyOf(values));
@@ -257,7 +258,7 @@ public final class LoadedModel {
                 s = symbolic;
                 if (s == null) {
                     // the only reference to the symbolic side: numeric runs never reach it
-                    s = SymbolicEngine.validate(model);
+                    s = Interrupts.guarded(() -> SymbolicEngine.validate(model));
                     symbolic = s;
                 }
             }

@@ -52,9 +52,7 @@ final class NumericEngine {
     static StepResult step(LoadedModel model, StepQuery q, Progress progress) {
         guard(model, q);
         RationalMatrix p = model.matrix();
-        List<String> warnings = new ArrayList<>();
-        StepResult.Header header = new StepResult.Header(model.source(), model.model().kind().word(), q.n(),
-            warnings);
+        StepResult.Header header = header(model, q.n(), List.of());
         if (q.from().isEmpty()) {
             RationalMatrix pn = MatrixPowers.power(p, q.n(), progress);
             List<List<Rational>> rows = new ArrayList<>();
@@ -70,13 +68,17 @@ final class NumericEngine {
         }
         int to = model.state("--to", q.to().get());
         Rational total = MatrixPowers.entryOfPower(p, from, to, q.n(), progress);
+        List<String> warnings = new ArrayList<>();
         Optional<List<StepResult.PathLine>> paths = Optional.empty();
         if (q.paths().isPresent()) {
             paths = Optional.of(paths(model, from, to, total, q, warnings, progress));
         }
-        // the header is built after the path search, which may add warnings
-        header = new StepResult.Header(model.source(), model.model().kind().word(), q.n(), warnings);
-        return new StepResult.Single(header, q.from().get(), q.to().get(), total, paths);
+        // the path search may add warnings
+        return new StepResult.Single(header(model, q.n(), warnings), q.from().get(), q.to().get(), total, paths);
+    }
+
+    private static StepResult.Header header(LoadedModel model, long n, List<String> warnings) {
+        return new StepResult.Header(model.source(), model.model().kind().word(), n, warnings);
     }
 
     private static List<StepResult.PathLine> paths(LoadedModel model, int from, int to, Rational total, StepQuery q,
@@ -126,7 +128,6 @@ final class NumericEngine {
         for (int i = 0; i < p.rows(); i++) {
             rows.add(List.of(p.row(i)));
         }
-        StepResult.Header h = new StepResult.Header(model.source(), model.model().kind().word(), 1, List.of());
-        return new CheckResult.Numeric(new StepResult.Matrix(h, states, rows));
+        return new CheckResult.Numeric(new StepResult.Matrix(header(model, 1, List.of()), states, rows));
     }
 }

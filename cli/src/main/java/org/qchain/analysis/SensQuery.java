@@ -17,7 +17,7 @@ import org.qchain.exact.SizeEstimate;
  * @param maxDigits refuse powers estimated to need more digits in their coefficients
  */
 public record SensQuery(long n, String from, String to, String wrt, Optional<String> sweep, boolean factor,
-                        long maxTerms, long maxDigits) {
+                        long maxTerms, long maxDigits) implements Query {
 
     /** The sensitivity of P^n(from, to) to {@code wrt} with the default limits and no sweep. */
     public static SensQuery of(long n, String from, String to, String wrt) {

@@ -19,7 +19,7 @@ import org.qchain.symbolic.SymbolicLimits;
  * @param maxTerms      symbolic results: refuse powers estimated to need more polynomial terms
  */
 public record StepQuery(long n, Optional<String> from, Optional<String> to, OptionalInt paths, long maxDigits,
-                        long maxPathDigits, boolean symbolic, boolean factor, long maxTerms) {
+                        long maxPathDigits, boolean symbolic, boolean factor, long maxTerms) implements Query {
     /** Default limit on polynomial terms (the symbolic module's; a constant, so reading it loads no class). */
     public static final long DEFAULT_MAX_TERMS = SymbolicLimits.DEFAULT_MAX_TERMS;
 

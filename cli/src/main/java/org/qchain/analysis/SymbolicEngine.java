@@ -380,19 +380,20 @@ final class SymbolicEngine {
         List<ClosedResult.Eigen> eig = new ArrayList<>();
         for (int k = 0; k < cf.eigenvalues().size(); k++) {
             Eigenvalue e = cf.eigenvalues().get(k);
-            eig.add(new ClosedResult.Eigen(e.factor(), e.multiplicity(), e.jordanIndex(), e.kind(), e.values(),
+            eig.add(new ClosedResult.Eigen(Formula.of(e.factor(), e.factorLatex()), e.multiplicity(), e.jordanIndex(),
+                e.kind(), e.values(),
                 eigenDecimals.isEmpty() ? List.of() : eigenDecimals.get(k)));
         }
         List<ClosedResult.Roots> roots = new ArrayList<>();
         if (named.isEmpty()) {
             for (Eigenvalue e : cf.eigenvalues()) {
                 if (e.kind().equals("roots")) {
-                    roots.add(new ClosedResult.Roots(e.name(), e.factor(), List.of()));
+                    roots.add(new ClosedResult.Roots(e.name(), Formula.of(e.factor(), e.factorLatex()), List.of()));
                 }
             }
         } else {
             for (RootPolynomial r : named) {
-                roots.add(new ClosedResult.Roots(r.name(), r.polynomial(), r.roots()));
+                roots.add(new ClosedResult.Roots(r.name(), Formula.of(r.polynomial(), r.latex()), r.roots()));
             }
         }
         LongRun lr = cf.longRun();
@@ -428,7 +429,8 @@ final class SymbolicEngine {
         for (Map<String, Rational> c : cf.specialCorners(domains)) {
             special.add(new Point(c));
         }
-        ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits, lr.rate(), rateValue,
+        ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits,
+            Formula.of(lr.rate(), lr.rateLatex()), rateValue,
             lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(), lr.exactFrom(), values);
         return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, cf.conditions(),
             cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),

@@ -25,10 +25,8 @@ final class CheckCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Option(names = "--digits", paramLabel = "D", converter = Converters.Digits.class,
-        defaultValue = "" + OutputOptions.DEFAULT_DIGITS,
-        description = "Significant digits of the decimals, correctly rounded (default: ${DEFAULT-VALUE}).")
-    int digits = OutputOptions.DEFAULT_DIGITS;
+    @Mixin
+    DigitsOption digits;
 
     @Option(names = "--symbolic",
         description = "Keep the parameters symbolic: print the entries as formulas and check, over the parameter"
@@ -40,7 +38,8 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         LoadedModel loaded = model.load();
         CheckResult result = Analysis.check(loaded, new CheckQuery(symbolic));
-        Emitter.emit(spec, OutputFormat.TEXT.formatter(digits).format(result), result.warnings(), Optional.empty());
+        Emitter.emit(spec, OutputFormat.TEXT.formatter(digits.digits).format(result), result.warnings(),
+            Optional.empty());
         return ExitCodes.OK;
     }
 }

@@ -73,11 +73,8 @@ final class ClosedCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
-    @Option(names = "--max-terms", paramLabel = "T", converter = Converters.TermLimit.class,
-        defaultValue = "" + SymbolicOptions.DEFAULT_MAX_TERMS,
-        description = "Refuse chains whose powers up to P^s (s states, all the method multiplies out) are estimated"
-            + " to need more than T polynomial terms (default: ${DEFAULT-VALUE}).")
-    long maxTerms = SymbolicOptions.DEFAULT_MAX_TERMS;
+    @Mixin
+    LimitOptions.Terms terms;
 
     @Override
     public Integer call() {
@@ -94,7 +91,7 @@ final class ClosedCommand implements Callable<Integer> {
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         ClosedQuery q = new ClosedQuery(form, Optional.ofNullable(start != null ? start : from),
-            start != null ? "--start" : "--from", Optional.ofNullable(to), maxTerms, output.digits);
+            start != null ? "--start" : "--from", Optional.ofNullable(to), terms.maxTerms, output.digits());
         ClosedResult result = root.run(spec, progress -> Analysis.closed(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

@@ -1,34 +1,56 @@
 package org.qchain.cli;
 
+import java.math.BigInteger;
 import java.util.Arrays;
 import java.util.Iterator;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.Rational;
 import org.qchain.format.OutputFormat;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
 
-/** Option value converters: a bad value is a usage error (exit 2) whose message shows the value. */
+/**
+ * Option value converters: a bad value is a usage error (exit 2) whose message shows the value. Every number goes
+ * through {@link #whole}, which uses the exact module's reader.
+ */
 final class Converters {
     private Converters() {
     }
 
     /**
-     * A whole number in {@code [min, max]}.
+     * A whole number in {@code [min, max]}, read by the exact module's number reader ({@link Rational#parse}, the
+     * grammar of numbers in model files: {@code 12}, {@code 1e6}, {@code 24/2}; {@code _} may group digits), so that
+     * the command line has no number grammar of its own.
      *
      * @param value the option's text
      * @param what  what it counts, for the message ({@code "steps"})
-     * @param range the message for a value out of range
+     * @param range the message for a value below {@code min} (or above {@code max} when {@code max} is not
+     *              {@code Long.MAX_VALUE})
      */
-    private static long whole(String value, String what, long min, long max, String range) {
-        long x;
+    static long whole(String value, String what, long min, long max, String range) {
+        Rational r;
         try {
-            x = Long.parseLong(value.strip().replace("_", ""));
-        } catch (NumberFormatException e) {
+            r = Rational.parse(value.replace("_", ""));
+        } catch (QchainException e) {
+            // the exact module's reason, unless it only repeats that the text is no number
+            String why = e.key() == ErrorKey.MALFORMED_NUMBER ? "" : " (" + e.detail() + ")";
+            throw new TypeConversionException("'" + value + "' is not a whole number of " + what + why);
+        } catch (RuntimeException e) {
             throw new TypeConversionException("'" + value + "' is not a whole number of " + what);
         }
-        if (x < min || x > max) {
+        if (!r.isInteger()) {
+            throw new TypeConversionException("'" + value + "' is not a whole number of " + what);
+        }
+        BigInteger x = r.numerator();
+        if (x.compareTo(BigInteger.valueOf(min)) < 0
+            || max != Long.MAX_VALUE && x.compareTo(BigInteger.valueOf(max)) > 0) {
             throw new TypeConversionException("'" + value + "' " + range);
         }
-        return x;
+        if (x.compareTo(BigInteger.valueOf(Long.MAX_VALUE)) > 0) {
+            throw new TypeConversionException("'" + value + "' is too large: at most " + Long.MAX_VALUE);
+        }
+        return x.longValueExact();
     }
 
     /** A number of steps: an integer {@code >= 0}. */
@@ -89,6 +111,60 @@ final class Converters {
         @Override
         public Iterator<String> iterator() {
             return Arrays.stream(OutputFormat.values()).map(OutputFormat::word).iterator();
+        }
+    }
+
+    /** A tolerance: an exact number {@code >= 0} in the model's number grammar ({@code 1e-9}, {@code 1/1000}). */
+    static final class Bound implements ITypeConverter<org.qchain.exact.Rational> {
+        @Override
+        public org.qchain.exact.Rational convert(String value) {
+            org.qchain.exact.Rational r;
+            try {
+                r = org.qchain.exact.Rational.parse(value);
+            } catch (RuntimeException e) {
+                throw new TypeConversionException("'" + value + "' is not a number (write e.g. 1e-9 or 1/1000)");
+            }
+            if (r.signum() < 0) {
+                throw new TypeConversionException("'" + value + "' is negative; a tolerance must be 0 or more");
+            }
+            return r;
+        }
+    }
+
+    /** A tolerance in ulps: an integer {@code >= 0}. */
+    static final class UlpBound implements ITypeConverter<Long> {
+        @Override
+        public Long convert(String value) {
+            return whole(value, "ulps", 0, Long.MAX_VALUE, "is negative; a tolerance in ulps must be 0 or more");
+        }
+    }
+
+    /** How many entries to list: 0 to {@value #MAX}. */
+    static final class ShowCount implements ITypeConverter<Integer> {
+        static final int MAX = 1_000_000;
+
+        @Override
+        public Integer convert(String value) {
+            return (int) whole(value, "entries", 0, MAX, "must be from 0 to " + MAX);
+        }
+    }
+
+    /** The word given to {@code --what}. */
+    static final class VerifyWhat implements ITypeConverter<org.qchain.analysis.VerifyQuery.What> {
+        @Override
+        public org.qchain.analysis.VerifyQuery.What convert(String value) {
+            return org.qchain.analysis.VerifyQuery.What.of(value).orElseThrow(() -> new TypeConversionException(
+                "'" + value + "' is not a quantity verify checks (one of " + String.join(", ", new VerifyWhatWords())
+                + ")"));
+        }
+    }
+
+    /** The words of {@code --what}, for help and completion. */
+    static final class VerifyWhatWords implements Iterable<String> {
+        @Override
+        public Iterator<String> iterator() {
+            return Arrays.stream(org.qchain.analysis.VerifyQuery.What.values())
+                .map(org.qchain.analysis.VerifyQuery.What::word).iterator();
         }
     }
 }

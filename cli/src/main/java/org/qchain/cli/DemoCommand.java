@@ -81,7 +81,7 @@ final class DemoCommand implements Callable<Integer> {
         Result r = root.run(spec, progress -> Analysis.step(chain, q, progress));
         out.println();
         out.println("$ " + command);
-        out.print(OutputFormat.TEXT.formatter(OutputOptions.DEFAULT_DIGITS).format(r));
+        out.print(OutputFormat.TEXT.formatter(DigitsOption.DEFAULT).format(r));
     }
 
     /** A checked read of a classpath resource as UTF-8 text. */

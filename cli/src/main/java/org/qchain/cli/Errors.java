@@ -2,6 +2,7 @@ package org.qchain.cli;
 
 import java.io.PrintWriter;
 import java.util.concurrent.atomic.AtomicBoolean;
+import org.qchain.analysis.Interrupts;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import picocli.CommandLine;
@@ -34,12 +35,13 @@ final class Errors implements IExecutionExceptionHandler, IParameterExceptionHan
      * @return {@link ExitCodes#INPUT}, {@link ExitCodes#INTERNAL} or {@link ExitCodes#INTERRUPTED}
      */
     int report(Throwable t, PrintWriter err) {
-        if (t instanceof QchainException q && q.key() == ErrorKey.INTERRUPTED) {
+        if (Interrupts.isInterruption(t)) {
+            // Ctrl-C: ours, Java's or JAS's way of saying so, reported once
             reportInterrupt(err);
             return ExitCodes.INTERRUPTED;
         }
         if (t instanceof QchainException q && q.isInputError()) {
-            err.println("qchain: " + oneLine(q.getMessage()));
+            err.println("qchain: " + oneLine(q.getMessage()) + hint(q));
             err.flush();
             return ExitCodes.INPUT;
         }
@@ -54,6 +56,17 @@ final class Errors implements IExecutionExceptionHandler, IParameterExceptionHan
         }
         err.flush();
         return ExitCodes.INTERNAL;
+    }
+
+    /**
+     * What the command line adds to a message whose key (of a module below it) cannot name options: the option that
+     * helps.
+     */
+    static String hint(QchainException q) {
+        if (q.key() == ErrorKey.FREE_PARAMETERS) {
+            return " (give values with --at, or use a symbolic command)";
+        }
+        return "";
     }
 
     /** Prints {@code qchain: interrupted} unless it was printed already in this process. */

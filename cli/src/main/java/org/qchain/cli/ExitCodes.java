@@ -8,6 +8,8 @@ public final class ExitCodes {
     public static final int INTERNAL = 1;
     /** Bad input (model file, option value) or usage; the message names file:line:col or the option. */
     public static final int INPUT = 2;
+    /** {@code verify}: a value is outside the tolerance (the file was read and checked). */
+    public static final int OVER_TOLERANCE = 3;
     /** Stopped by Ctrl-C (128 + SIGINT, as shells report it). */
     public static final int INTERRUPTED = 130;
 

@@ -26,7 +26,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "qchain", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     description = "Exact n-step transition probabilities of Markov chains: exact fractions, with correctly rounded"
         + " decimals beside them.",
-    subcommands = {StepCommand.class, SensCommand.class, ClosedCommand.class, CheckCommand.class, DemoCommand.class, CompletionCommand.class,
+    subcommands = {StepCommand.class, SensCommand.class, ClosedCommand.class, CheckCommand.class, VerifyCommand.class, DemoCommand.class, CompletionCommand.class,
         HelpCommand.class})
 public final class QchainCommand implements Callable<Integer> {
     /** Milliseconds the Ctrl-C hook waits for the work to stop and clean up before the JVM halts. */
@@ -107,6 +107,7 @@ public final class QchainCommand implements Callable<Integer> {
         codes.put(" " + ExitCodes.OK, "success");
         codes.put(" " + ExitCodes.INTERNAL, "internal error (set QCHAIN_DEBUG=1 for a stack trace)");
         codes.put(" " + ExitCodes.INPUT, "bad input or usage: the message names file:line:col or the option");
+        codes.put(" " + ExitCodes.OVER_TOLERANCE, "verify: a value is outside the tolerance");
         codes.put(ExitCodes.INTERRUPTED + "", "interrupted (Ctrl-C); no partial output file is left");
         Deque<CommandLine> todo = new ArrayDeque<>();
         todo.add(cl);

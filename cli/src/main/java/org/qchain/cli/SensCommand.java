@@ -57,18 +57,15 @@ final class SensCommand implements Callable<Integer> {
     @Mixin
     SymbolicOptions symbolicOptions;
 
-    @Option(names = "--max-digits", paramLabel = "M", converter = Converters.DigitLimit.class,
-        defaultValue = "" + StepCommand.DEFAULT_MAX_DIGITS,
-        description = "Refuse symbolic powers estimated to need more than M digits in their coefficients"
-            + " (default: ${DEFAULT-VALUE}).")
-    long maxDigits = StepCommand.DEFAULT_MAX_DIGITS;
+    @Mixin
+    LimitOptions.Digits digitLimit;
 
     @Override
     public Integer call() {
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         SensQuery q = new SensQuery(n, from, to, wrt, Optional.ofNullable(sweep), symbolicOptions.factor,
-            symbolicOptions.maxTerms, maxDigits);
+            symbolicOptions.maxTerms(), digitLimit.maxDigits);
         SensResult result = root.run(spec, progress -> Analysis.sens(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

@@ -7,6 +7,7 @@ import org.qchain.analysis.Analysis;
 import org.qchain.analysis.LoadedModel;
 import org.qchain.analysis.Route;
 import org.qchain.analysis.StepQuery;
+import org.qchain.format.OutputFormat;
 import org.qchain.result.Result;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -26,9 +27,6 @@ import picocli.CommandLine.Spec;
         "of the parameters (--factor: factored), with its value at the nominal or --at point when every parameter",
         "has one."})
 final class StepCommand implements Callable<Integer> {
-    /** Default limit on the total digits of a result. */
-    static final long DEFAULT_MAX_DIGITS = org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS;
-
     @Spec
     CommandSpec spec;
 
@@ -56,11 +54,8 @@ final class StepCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
-    @Option(names = "--max-digits", paramLabel = "M", converter = Converters.DigitLimit.class,
-        defaultValue = "" + DEFAULT_MAX_DIGITS,
-        description = "Refuse results estimated to need more than M digits in total (symbolic results: in their"
-            + " coefficients; default: ${DEFAULT-VALUE}).")
-    long maxDigits = DEFAULT_MAX_DIGITS;
+    @Mixin
+    LimitOptions.Digits digitLimit;
 
     @Option(names = "--max-path-digits", paramLabel = "W", converter = Converters.DigitLimit.class,
         defaultValue = "" + org.qchain.exact.SizeEstimate.DEFAULT_MAX_PATH_DIGITS,
@@ -76,6 +71,12 @@ final class StepCommand implements Callable<Integer> {
     @Mixin
     SymbolicOptions symbolicOptions;
 
+    @Option(names = "--double",
+        description = "With --format csv or json: add each value's correctly rounded binary64 (IEEE 754 double) as"
+            + " the shortest decimal that reads back as that double and as a hexadecimal float, for pasting exact"
+            + " reference values into other programs' tests.")
+    boolean doubles;
+
     @Override
     public Integer call() {
         if (to != null && from == null) {
@@ -84,11 +85,14 @@ final class StepCommand implements Callable<Integer> {
         if (paths != null && (from == null || to == null)) {
             throw new ParameterException(spec.commandLine(), "--paths needs both --from and --to");
         }
+        if (doubles && output.format != OutputFormat.CSV && output.format != OutputFormat.JSON) {
+            throw new ParameterException(spec.commandLine(), "--double needs --format csv or --format json");
+        }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         StepQuery q = new StepQuery(n, Optional.ofNullable(from), Optional.ofNullable(to),
-            paths == null ? OptionalInt.empty() : OptionalInt.of(paths), maxDigits, maxPathDigits, symbolic,
-            symbolicOptions.factor, symbolicOptions.maxTerms);
+            paths == null ? OptionalInt.empty() : OptionalInt.of(paths), digitLimit.maxDigits, maxPathDigits, symbolic,
+            symbolicOptions.factor, symbolicOptions.maxTerms());
         if (Analysis.route(loaded, q) == Route.SYMBOLIC) {
             if (paths != null) {
                 throw new ParameterException(spec.commandLine(), "--paths needs numeric values for every parameter"
@@ -98,8 +102,12 @@ final class StepCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--factor applies to symbolic results: the model has"
                 + " values for all its parameters (use --symbolic to keep them symbolic)");
         }
+        if (doubles && Analysis.route(loaded, q) == Route.SYMBOLIC) {
+            throw new ParameterException(spec.commandLine(), "--double needs numeric values for every parameter"
+                + " (a formula has no double; give values with --at)");
+        }
         Result result = root.run(spec, progress -> Analysis.step(loaded, q, progress));
-        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
+        Emitter.emit(spec, output.formatter(doubles).format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }
 }

@@ -4,7 +4,8 @@
  * <p>One {@code Callable<Integer>} class per subcommand ({@code StepCommand}, {@code SensCommand},
  * {@code ClosedCommand}, {@code CheckCommand}, {@code DemoCommand}, {@code CompletionCommand}); shared options are
  * mixins ({@code ModelOptions}: MODEL and {@code --at}; {@code OutputOptions}: {@code --format}, {@code --digits},
- * {@code --output}; {@code SymbolicOptions}: {@code --factor}, {@code --max-terms}). A command turns its options into
+ * {@code --output}; {@code DigitsOption}; {@code LimitOptions}: {@code --max-digits}, {@code --max-terms};
+ * {@code SymbolicOptions}: {@code --factor} with {@code --max-terms}). A command turns its options into
  * a query of {@link org.qchain.analysis}, loads the model ({@code ModelOptions.load}), runs
  * {@link org.qchain.analysis.Analysis} with a progress line ({@code QchainCommand.run}), lays the result out with the
  * formatter of {@code --format} ({@link org.qchain.format}) and prints it ({@code Emitter}: stdout or an atomic

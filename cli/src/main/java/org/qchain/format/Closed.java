@@ -145,8 +145,8 @@ final class Closed {
         }
         return lr.periodic()
             ? "Convergence rate of each subsequence (largest modulus of the eigenvalues that are not roots of unity): "
-                + lr.rate()
-            : "Convergence rate (second-largest eigenvalue modulus): " + lr.rate();
+                + lr.rate().plain()
+            : "Convergence rate (second-largest eigenvalue modulus): " + lr.rate().plain();
     }
 
     /** Whether the conditions are known to hold inside the parameters' domains; empty without conditions. */

@@ -3,11 +3,13 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.exact.reference.EntryCheck;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * Comma-separated values as RFC 4180 defines them: CRLF after every record, a header row, fields quoted when they hold
@@ -22,9 +24,25 @@ final class CsvFormatter extends Layout {
         super(digits);
     }
 
+    CsvFormatter(int digits, boolean doubles) {
+        super(digits, doubles);
+    }
+
     @Override
     public String stepMatrix(StepResult.Matrix m) {
         StringBuilder sb = new StringBuilder();
+        if (doubles) {
+            // one record per entry: a table with three columns per entry would no longer read back as a model
+            Text.csvRecord(sb, List.of("from", "to", "value", "double", "hex"));
+            for (int i = 0; i < m.states().size(); i++) {
+                for (int j = 0; j < m.states().size(); j++) {
+                    Rational e = m.entries().get(i).get(j);
+                    Text.csvRecord(sb, List.of(m.states().get(i), m.states().get(j), e.toString(), shortest(e),
+                        hex(e)));
+                }
+            }
+            return sb.toString();
+        }
         Text.csvRecord(sb, m.states());
         for (List<Rational> row : m.entries()) {
             Text.csvRecord(sb, row.stream().map(Rational::toString).toList());
@@ -35,11 +53,9 @@ final class CsvFormatter extends Layout {
     @Override
     public String stepRow(StepResult.Row r) {
         StringBuilder sb = new StringBuilder();
-        Text.csvRecord(sb, List.of("n", "from", "to", "value", "decimal"));
+        Text.csvRecord(sb, entryHeader());
         for (int j = 0; j < r.states().size(); j++) {
-            Rational e = r.entries().get(j);
-            Text.csvRecord(sb, List.of(String.valueOf(r.header().n()), r.from(), r.states().get(j), e.toString(),
-                dec(e)));
+            Text.csvRecord(sb, entryRecord(r.header().n(), r.from(), r.states().get(j), r.entries().get(j)));
         }
         return sb.toString();
     }
@@ -57,10 +73,27 @@ final class CsvFormatter extends Layout {
             }
             return sb.toString();
         }
-        Text.csvRecord(sb, List.of("n", "from", "to", "value", "decimal"));
-        Text.csvRecord(sb, List.of(String.valueOf(s.header().n()), s.from(), s.to(), s.value().toString(),
-            dec(s.value())));
+        Text.csvRecord(sb, entryHeader());
+        Text.csvRecord(sb, entryRecord(s.header().n(), s.from(), s.to(), s.value()));
         return sb.toString();
+    }
+
+    /** The header of one record per entry: {@code n,from,to,value,decimal}, then {@code double,hex} with doubles. */
+    private List<String> entryHeader() {
+        List<String> h = new ArrayList<>(List.of("n", "from", "to", "value", "decimal"));
+        if (doubles) {
+            h.addAll(List.of("double", "hex"));
+        }
+        return h;
+    }
+
+    private List<String> entryRecord(long n, String from, String to, Rational e) {
+        List<String> rec = new ArrayList<>(List.of(String.valueOf(n), from, to, e.toString(), dec(e)));
+        if (doubles) {
+            rec.add(shortest(e));
+            rec.add(hex(e));
+        }
+        return rec;
     }
 
     @Override
@@ -122,6 +155,21 @@ final class CsvFormatter extends Layout {
             for (int j = 0; j < s.states().size(); j++) {
                 Text.csvRecord(sb, List.of(s.states().get(i), s.states().get(j), s.entries().get(i).get(j).plain()));
             }
+        }
+        return sb.toString();
+    }
+
+    /** The listed entries, worst first, one record each; the verdict is the exit code. */
+    @Override
+    public String verify(VerifyResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("entry", "given", "exact", "decimal", "error", "relative_error", "ulps",
+            "correctly_rounded", "pass", "line", "column"));
+        for (EntryCheck c : r.report().worst()) {
+            Text.csvRecord(sb, List.of(c.label(), c.given(), c.truth().toString(), dec(c.truth()),
+                Checks.errorExact(c.error()), Checks.errorExact(c.relativeError()), c.ulps().isPresent()
+                    ? String.valueOf(c.ulps().getAsLong()) : "", String.valueOf(c.isCorrectlyRounded()),
+                String.valueOf(c.pass()), String.valueOf(c.pos().line()), String.valueOf(c.pos().column())));
         }
         return sb.toString();
     }

@@ -6,6 +6,7 @@ import org.qchain.result.Result;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * Lays out any result as text of one format: one method per result type. Formatters never compute beyond rounding
@@ -39,6 +40,9 @@ public interface Formatter {
         if (result instanceof ClosedResult c) {
             return closed(c);
         }
+        if (result instanceof VerifyResult v) {
+            return verify(v);
+        }
         return check((CheckResult) result);
     }
 
@@ -62,4 +66,7 @@ public interface Formatter {
 
     /** A checked model. */
     String check(CheckResult c);
+
+    /** Float results checked against the exact values. */
+    String verify(VerifyResult v);
 }

@@ -32,7 +32,7 @@ public final class Json {
         return this;
     }
 
-    /** Appends {@code true} or {@code false} (mutates). */
+    /** Appends a boolean member (mutates). */
     public Json bool(String key, boolean value) {
         key(key);
         sb.append(value);

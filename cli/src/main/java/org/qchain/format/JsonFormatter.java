@@ -4,12 +4,16 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.qchain.exact.Rational;
+import org.qchain.exact.floats.FloatText;
+import org.qchain.exact.reference.Target;
+import org.qchain.exact.reference.VerifyReport;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Point;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * One compact JSON object per result, then a line break. The keys the issues name come first, in their order; fields
@@ -19,6 +23,10 @@ import org.qchain.result.SymbolicStepResult;
 final class JsonFormatter extends Layout {
     JsonFormatter(int digits) {
         super(digits);
+    }
+
+    JsonFormatter(int digits, boolean doubles) {
+        super(digits, doubles);
     }
 
     private List<String> exact(List<Rational> row) {
@@ -40,6 +48,10 @@ final class JsonFormatter extends Layout {
             .strings("states", m.states())
             .stringRows("matrix", m.entries().stream().map(this::exact).toList())
             .stringRows("decimals", m.entries().stream().map(this::decimals).toList());
+        if (doubles) {
+            j.stringRows("doubles", m.entries().stream().map(r -> r.stream().map(Layout::shortest).toList()).toList())
+                .stringRows("hex", m.entries().stream().map(r -> r.stream().map(Layout::hex).toList()).toList());
+        }
         return common(j, h).close() + "\n";
     }
 
@@ -53,6 +65,10 @@ final class JsonFormatter extends Layout {
             .strings("row", exact(r.entries()))
             .strings("decimals", decimals(r.entries()))
             .string("kind", h.kind());
+        if (doubles) {
+            j.strings("doubles", r.entries().stream().map(Layout::shortest).toList())
+                .strings("hex", r.entries().stream().map(Layout::hex).toList());
+        }
         return common(j, h).close() + "\n";
     }
 
@@ -66,6 +82,9 @@ final class JsonFormatter extends Layout {
             .string("value", s.value().toString())
             .string("decimal", dec(s.value()))
             .string("kind", h.kind());
+        if (doubles) {
+            j.string("double", shortest(s.value())).string("hex", hex(s.value()));
+        }
         s.paths().ifPresent(paths -> j.objects("paths", paths, p -> Json.object()
             .strings("states", p.states())
             .string("probability", p.probability().toString())
@@ -201,11 +220,11 @@ final class JsonFormatter extends Layout {
             });
         }
         if (!r.isSeries()) {
-            j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor())
+            j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor().plain())
                 .number("multiplicity", e.multiplicity()).number("jordan_index", e.jordanIndex())
                 .string("kind", e.kind()).strings("values", e.values()).strings("decimals", e.decimals()));
             j.objects("root_polynomials", r.roots(), rt -> Json.object().string("name", rt.name())
-                .string("polynomial", rt.polynomial()).strings("roots", rt.roots()));
+                .string("polynomial", rt.polynomial().plain()).strings("roots", rt.roots()));
             r.longRun().ifPresent(lr -> {
                 List<Integer> rs = new ArrayList<>();
                 for (int k = 0; k < lr.limits().size(); k++) {
@@ -213,7 +232,7 @@ final class JsonFormatter extends Layout {
                 }
                 Json l = Json.object().number("period", lr.period())
                     .objects("limits", rs, k -> limitJson(r, k, lr.limits().get(k), Closed.limitDecimals(r, lr)))
-                    .string("rate", lr.rate());
+                    .string("rate", lr.rate().plain());
                 lr.rateValue().ifPresent(v -> l.string("rate_value", v));
                 List<String> special = new ArrayList<>();
                 for (org.qchain.result.Point p : lr.special()) {
@@ -267,5 +286,49 @@ final class JsonFormatter extends Layout {
             .strings("parameters", s.parameters()).stringRows("matrix", Symbolic.plain(s.entries()))
             .strings("conditions", s.warnings()).string("model", s.source()).strings("warnings", s.warnings())
             .close() + "\n";
+    }
+
+    // --- verify --------------------------------------------------------------------------------------------------
+
+    @Override
+    public String verify(VerifyResult r) {
+        VerifyReport rep = r.report();
+        Target t = r.target();
+        Json j = Json.object().string("what", r.what());
+        r.n().ifPresent(n -> j.number("n", n));
+        r.from().ifPresent(f -> j.string("from", f));
+        r.to().ifPresent(x -> j.string("to", x));
+        j.string("model", r.source()).string("against", r.against()).string("form", rep.form().description());
+        Json tol = Json.object();
+        rep.tolerance().relative().ifPresent(x -> tol.string("relative", Checks.bound(x)));
+        rep.tolerance().absolute().ifPresent(x -> tol.string("absolute", Checks.bound(x)));
+        rep.tolerance().ulps().ifPresent(x -> tol.number("ulps", x));
+        j.object("tolerance", tol)
+            .bool("passed", rep.passed())
+            .number("expected", rep.expected())
+            .number("checked", rep.checked())
+            .number("overTolerance", rep.overTolerance())
+            .number("nonFinite", rep.nonFinite())
+            .number("correctlyRounded", rep.correctlyRounded())
+            .bool("allCorrectlyRounded", rep.allCorrectlyRounded())
+            .string("worstRelativeError", Checks.errorExact(rep.worstRelativeError()));
+        rep.worstUlps().ifPresent(u -> j.number("worstUlps", u));
+        j.objects("worst", rep.worst(), c -> {
+            Json e = Json.object().string("entry", c.label());
+            if (t.shape() == Target.Shape.MATRIX) {
+                e.string("from", Checks.rowState(t, c)).string("to", Checks.colState(t, c));
+            } else if (t.shape() == Target.Shape.VECTOR) {
+                e.string("state", Checks.colState(t, c));
+            }
+            e.string("given", c.given()).string("givenDouble", Checks.errorExact(c.givenDouble()))
+                .string("exact", c.truth().toString()).string("decimal", dec(c.truth()))
+                .string("exactDouble", FloatText.shortest(c.truthDouble()))
+                .string("error", Checks.errorExact(c.error()))
+                .string("relativeError", Checks.errorExact(c.relativeError()));
+            c.ulps().ifPresent(u -> e.number("ulps", u));
+            return e.bool("correctlyRounded", c.isCorrectlyRounded()).bool("pass", c.pass())
+                .number("line", c.pos().line()).number("column", c.pos().column());
+        });
+        return j.number("digits", digits).strings("warnings", r.warnings()).close() + "\n";
     }
 }

@@ -3,11 +3,14 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.exact.reference.EntryCheck;
+import org.qchain.exact.reference.VerifyReport;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * LaTeX for reports: tabulars with {@code \frac} entries and state names as text (special characters escaped),
@@ -195,7 +198,7 @@ final class LatexFormatter extends Layout {
         }
         sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
         for (ClosedResult.Eigen e : r.eigenvalues()) {
-            sb.append("% eigenvalue ").append(String.join(", ", e.values())).append(" from ").append(e.factor());
+            sb.append("% eigenvalue ").append(String.join(", ", e.values())).append(" from ").append(e.factor().plain());
             if (e.multiplicity() > 1) {
                 sb.append(", multiplicity ").append(e.multiplicity());
             }
@@ -231,6 +234,30 @@ final class LatexFormatter extends Layout {
         for (String w : s.warnings()) {
             sb.append("% condition: ").append(Text.comment(w)).append('\n');
         }
+        return caution(sb);
+    }
+
+    // --- verify --------------------------------------------------------------------------------------------------
+
+    @Override
+    public String verify(VerifyResult r) {
+        VerifyReport rep = r.report();
+        StringBuilder sb = new StringBuilder();
+        sb.append("% ").append(Text.comment(Checks.quantity(r))).append(" of ").append(Text.comment(r.source()))
+            .append(" checked against ").append(Text.comment(r.against())).append("; decimals: ")
+            .append(Text.digits(digits)).append('\n');
+        sb.append("% tolerance: ").append(Text.comment(Checks.tolerance(rep.tolerance()))).append('\n');
+        sb.append("\\begin{tabular}{l|lrrrrl}\n");
+        sb.append("entry & given & exact & error & relative error & ulps & status \\\\ \\hline\n");
+        for (EntryCheck c : rep.worst()) {
+            sb.append(Text.latex(c.label()).replace(" -> ", " $\\to$ ")).append(" & \\texttt{")
+                .append(Text.latex(c.given())).append("} & ")
+                .append(dec(c.truth())).append(" & ").append(Checks.error(c.error())).append(" & ")
+                .append(Checks.error(c.relativeError())).append(" & ").append(Checks.ulpsCell(c)).append(" & ")
+                .append(Checks.status(c)).append(" \\\\\n");
+        }
+        sb.append("\\end{tabular}\n\n");
+        sb.append(Text.latex(Checks.summary(rep))).append(".\n");
         return caution(sb);
     }
 }

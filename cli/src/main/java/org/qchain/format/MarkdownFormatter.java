@@ -3,11 +3,14 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.exact.reference.EntryCheck;
+import org.qchain.exact.reference.VerifyReport;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.VerifyResult;
 
 /** Markdown (pipe tables) for pasting into reports: exact values and decimals in tables, then the caution. */
 final class MarkdownFormatter extends Layout {
@@ -209,7 +212,7 @@ final class MarkdownFormatter extends Layout {
             sb.append("\nEigenvalues:\n\n");
             for (ClosedResult.Eigen e : r.eigenvalues()) {
                 sb.append("- `").append(Text.code(String.join(", ", e.values()))).append("` from `")
-                    .append(Text.code(e.factor())).append('`');
+                    .append(Text.code(e.factor().plain())).append('`');
                 if (e.multiplicity() > 1) {
                     sb.append(", multiplicity ").append(e.multiplicity());
                 }
@@ -219,7 +222,7 @@ final class MarkdownFormatter extends Layout {
                 sb.append('\n');
             }
             for (ClosedResult.Roots rt : r.roots()) {
-                sb.append("- `").append(rt.name()).append(" = ").append(Text.code(rt.polynomial())).append('`');
+                sb.append("- `").append(rt.name()).append(" = ").append(Text.code(rt.polynomial().plain())).append('`');
                 if (!rt.roots().isEmpty()) {
                     sb.append(": roots ").append(String.join(", ", rt.roots()));
                 }
@@ -277,6 +280,32 @@ final class MarkdownFormatter extends Layout {
                 sb.append("- ").append(Text.markdown(w)).append('\n');
             }
         }
+        return caution(sb);
+    }
+
+    // --- verify --------------------------------------------------------------------------------------------------
+
+    @Override
+    public String verify(VerifyResult r) {
+        VerifyReport rep = r.report();
+        StringBuilder sb = new StringBuilder();
+        sb.append("**").append(Text.markdown(Checks.quantity(r))).append("** of `").append(Text.code(r.source()))
+            .append("` checked against `").append(Text.code(r.against())).append("` (")
+            .append(rep.form().description()).append("): **").append(rep.passed() ? "pass" : "fail").append("**, ")
+            .append(Checks.verdict(rep)).append(". Tolerance: ").append(Checks.tolerance(rep.tolerance()))
+            .append(".\n\n");
+        if (!rep.worst().isEmpty()) {
+            line(sb, List.of("entry", "given", "exact (" + digits + " digits)", "error", "relative error", "ulps",
+                "at", "status"));
+            line(sb, separator(8));
+            for (EntryCheck c : rep.worst()) {
+                line(sb, List.of(Text.markdown(c.label()), "`" + Text.code(c.given()) + "`", dec(c.truth()),
+                    Checks.error(c.error()), Checks.error(c.relativeError()), Checks.ulpsCell(c), Checks.place(c),
+                    Checks.status(c)));
+            }
+            sb.append('\n');
+        }
+        sb.append(Checks.summary(rep)).append(".\n");
         return caution(sb);
     }
 }

@@ -42,6 +42,26 @@ public enum OutputFormat {
     }
 
     /**
+     * The formatter of this format, adding each exact value's correctly rounded binary64 (shortest round-trip decimal
+     * and hexadecimal float) where the format has room for it.
+     *
+     * @param digits  significant digits of the decimals it prints, at least 1
+     * @param doubles whether to add the doubles
+     * @return the formatter
+     * @throws IllegalArgumentException if doubles are asked of a format other than JSON and CSV
+     */
+    public Formatter formatter(int digits, boolean doubles) {
+        if (!doubles) {
+            return formatter(digits);
+        }
+        return switch (this) {
+            case JSON -> new JsonFormatter(digits, true);
+            case CSV -> new CsvFormatter(digits, true);
+            default -> throw new IllegalArgumentException("doubles are written in JSON and CSV only");
+        };
+    }
+
+    /**
      * The format of a word, ignoring case and surrounding spaces.
      *
      * @param word the word

@@ -3,11 +3,14 @@ package org.qchain.format;
 import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
+import org.qchain.exact.reference.EntryCheck;
+import org.qchain.exact.reference.VerifyReport;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.VerifyResult;
 
 /**
  * Human-readable layout: for numbers, an overview matrix of decimals, then every entry with its decimal beside the
@@ -278,7 +281,7 @@ final class TextFormatter extends Layout {
             List<String> vals = new ArrayList<>();
             boolean decimals = false;
             for (ClosedResult.Eigen e : r.eigenvalues()) {
-                facts.add(e.factor() + ":");
+                facts.add(e.factor().plain() + ":");
                 String extra = e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() : "";
                 extra += e.jordanIndex() > 1 ? ", Jordan block of size " + e.jordanIndex() : "";
                 String dec = Closed.eigenDecimals(e);
@@ -293,7 +296,7 @@ final class TextFormatter extends Layout {
             }
         }
         for (ClosedResult.Roots rt : r.roots()) {
-            sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial());
+            sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial().plain());
             if (!rt.roots().isEmpty()) {
                 sb.append("; roots ").append(String.join(", ", rt.roots()));
             }
@@ -411,5 +414,30 @@ final class TextFormatter extends Layout {
                     + " on the parameters (above)")
             .append('\n');
         return sb.toString();
+    }
+
+    // --- verify --------------------------------------------------------------------------------------------------
+
+    @Override
+    public String verify(VerifyResult r) {
+        VerifyReport rep = r.report();
+        StringBuilder sb = new StringBuilder();
+        sb.append(Checks.quantity(r)).append(" of ").append(r.source()).append(" checked against ").append(r.against())
+            .append(" (").append(rep.form().description()).append(")\n");
+        sb.append("Tolerance: ").append(Checks.tolerance(rep.tolerance())).append('\n');
+        sb.append("Result: ").append(rep.passed() ? "PASS, " : "FAIL, ").append(Checks.verdict(rep)).append("\n\n");
+        if (!rep.worst().isEmpty()) {
+            sb.append(rep.worst().size() == rep.checked() ? "Every value, worst first:\n"
+                : "The " + rep.worst().size() + " worst values:\n");
+            TextTable t = new TextTable().addRow("entry", "given", "exact (" + digits + " digits)", "error",
+                "relative error", "ulps", "at", "status");
+            for (EntryCheck c : rep.worst()) {
+                t.addRow(c.label(), c.given(), dec(c.truth()), Checks.error(c.error()), Checks.error(c.relativeError()),
+                    Checks.ulpsCell(c), Checks.place(c), Checks.status(c));
+            }
+            sb.append(t.render()).append('\n');
+        }
+        sb.append(Checks.summary(rep)).append(".\n");
+        return end(sb);
     }
 }

@@ -9,8 +9,9 @@ import org.qchain.exact.Rational;
  * generating functions or recurrences, with the validity range, the parameter conditions, the eigenvalues and the
  * long run ({@code closed}).
  *
- * <p>The closed-form engine prints its formulas itself (plain and LaTeX); the eigenvalues, limits and the rate are
- * its plain formulas, and the rate's and roots' values are its certified-digit decimals at {@link #digits()}.
+ * <p>The closed-form engine prints its formulas itself (plain and LaTeX: the cells, the factors, the rate); the
+ * eigenvalues and limits are its plain formulas, and the rate's and roots' values are its decimals at
+ * {@link #digits()} (numeric roots of the characteristic polynomial, not exact values).
  *
  * @param source      the model file name as the user gave it
  * @param form        which form is printed
@@ -129,14 +130,14 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
     /**
      * A factor of {@code det(xI - P)} and its eigenvalues.
      *
-     * @param factor       the monic irreducible factor, plain syntax
+     * @param factor       the monic irreducible factor in x
      * @param multiplicity its multiplicity
      * @param jordanIndex  the size of the largest Jordan block of each eigenvalue of the factor (1: none)
      * @param kind         {@code rational}, {@code quadratic} or {@code roots}
      * @param values       the eigenvalues as formulas
      * @param decimals     the eigenvalues at the point, as decimals to {@code digits}; empty without a point
      */
-    public record Eigen(String factor, int multiplicity, int jordanIndex, String kind, List<String> values,
+    public record Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<String> values,
                         List<String> decimals) {
         /** Copies the lists. */
         public Eigen {
@@ -163,7 +164,7 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param exactFrom  see {@code exact}
      * @param values     the limits at the point, exactly, shaped like {@code limits}; empty without a point
      */
-    public record LongRun(int period, List<List<List<String>>> limits, String rate, Optional<String> rateValue,
+    public record LongRun(int period, List<List<List<String>>> limits, Formula rate, Optional<String> rateValue,
                           List<String> conditions, List<String> notProved, List<Point> special, boolean exact,
                           int exactFrom, List<List<List<Rational>>> values) {
         /** Copies the lists. */
@@ -185,10 +186,10 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * A named factor of degree 3 or more.
      *
      * @param name       its name in formulas
-     * @param polynomial the factor, plain syntax
+     * @param polynomial the factor in x
      * @param roots      numeric roots at the point, empty if the point is not known
      */
-    public record Roots(String name, String polynomial, List<String> roots) {
+    public record Roots(String name, Formula polynomial, List<String> roots) {
         /** Copies the list. */
         public Roots {
             roots = List.copyOf(roots);

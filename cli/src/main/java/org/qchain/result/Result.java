@@ -6,7 +6,8 @@ import java.util.List;
  * What an analysis computed, ready for any formatter. Every result is an immutable record; formatters lay it out and
  * never compute beyond rounding an exact value for display.
  */
-public sealed interface Result permits StepResult, SymbolicStepResult, SensResult, ClosedResult, CheckResult {
+public sealed interface Result permits StepResult, SymbolicStepResult, SensResult, ClosedResult, CheckResult,
+    VerifyResult {
 
     /** The model file name as the user gave it. */
     String source();

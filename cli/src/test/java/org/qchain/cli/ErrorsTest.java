@@ -54,6 +54,38 @@ class ErrorsTest {
     }
 
     @Test
+    void theCommandLineAddsItsHintToAKeyThatCannotNameOptions() {
+        // exact's FREE_PARAMETERS says what is missing; only the command line knows the option that gives it
+        assertEquals(2, new Errors().report(new QchainException(ErrorKey.FREE_PARAMETERS, "p"), err));
+        assertEquals("qchain: parameters without a value: p (give values with --at, or use a symbolic command)\n",
+            buf.toString());
+    }
+
+    @Test
+    void jasPreemptionAndJavaInterruptsAreInterruptionsToo() {
+        // JAS stops a preempted computation with its own unchecked exception; a Ctrl-C during symbolic work must
+        // still end as one "interrupted" line and exit 130, not as an internal error
+        assertEquals(130, new Errors().report(new edu.jas.kern.PreemptingException(), err));
+        assertEquals(130, new Errors().report(new IllegalStateException("wrapped",
+            new InterruptedException("sleep")), err));
+        assertEquals("qchain: interrupted\nqchain: interrupted\n", buf.toString());
+    }
+
+    @Test
+    void interruptedSymbolicStepExits130WithOneMessage() {
+        Thread.currentThread().interrupt();
+        Cli.Result r;
+        try {
+            r = Cli.run("step", Cli.model("free.chain"), "-n", "200");
+        } finally {
+            Thread.interrupted();
+        }
+        assertEquals(130, r.code(), r::toString);
+        assertEquals("", r.out());
+        assertEquals("qchain: interrupted\n", r.err());
+    }
+
+    @Test
     void interruptedStepExits130WithOneMessageAndNoOutput() {
         // what the Ctrl-C hook does: interrupt the working thread; the engine then stops with INTERRUPTED
         Thread.currentThread().interrupt();

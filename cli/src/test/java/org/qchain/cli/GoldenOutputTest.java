@@ -46,6 +46,15 @@ class GoldenOutputTest {
                 "--format", f)));
         }
         out.add(new Case("step-matrix-digits5.txt", List.of("--digits", "5")));
+        // --double: each value's correctly rounded binary64, as shortest decimal and hex float
+        out.add(new Case("step-matrix-double.csv", List.of("--format", "csv", "--double")));
+        out.add(new Case("step-matrix-double.json", List.of("--format", "json", "--double")));
+        out.add(new Case("step-row-double.csv", List.of("--from", "Worn", "--format", "csv", "--double")));
+        out.add(new Case("step-row-double.json", List.of("--from", "Worn", "--format", "json", "--double")));
+        out.add(new Case("step-entry-double.csv", List.of("--from", "Up", "--to", "Down", "--format", "csv",
+            "--double")));
+        out.add(new Case("step-entry-double.json", List.of("--from", "Up", "--to", "Down", "--format", "json",
+            "--double")));
         // six states at 20 digits: the decimal overview is split into column blocks of at most 100 characters
         out.add(new Case("step-matrix-wide.txt", Cli.model("depot.chain"), List.of("--digits", "20")));
         return out.stream();

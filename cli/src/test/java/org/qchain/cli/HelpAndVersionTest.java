@@ -20,10 +20,11 @@ class HelpAndVersionTest {
         + "   0    success\n"
         + "   1    internal error (set QCHAIN_DEBUG=1 for a stack trace)\n"
         + "   2    bad input or usage: the message names file:line:col or the option\n"
+        + "   3    verify: a value is outside the tolerance\n"
         + "  130   interrupted (Ctrl-C); no partial output file is left\n";
 
     @ParameterizedTest
-    @ValueSource(strings = {"", "step", "check", "demo", "completion"})
+    @ValueSource(strings = {"", "step", "check", "verify", "demo", "completion"})
     void helpListsExitCodesAndEndsWithTheCaution(String command) {
         Cli.Result r = command.isEmpty() ? Cli.run("--help") : Cli.run(command, "--help");
         assertEquals(0, r.code(), r::toString);

@@ -105,6 +105,17 @@ class NoSymjaOnNumericPathTest {
     }
 
     @Test
+    void verifyAndStepDoublesLoadNoSymbolicClass() throws Exception {
+        String m = Cli.model("plant.chain");
+        String ref = "src/test/resources/reference/";
+        assertNoForbidden(classesRequestedBy("verify", m, "--against", ref + "plant-p4.csv", "-n", "4"));
+        assertNoForbidden(classesRequestedBy("verify", m, "--against", ref + "plant-p4-worn.json", "-n", "4", "--from",
+            "Worn", "--format", "json"));
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "4", "--format", "csv", "--double"));
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "4", "--from", "Up", "--format", "json", "--double"));
+    }
+
+    @Test
     void checkAndDemoLoadNoSymbolicClass() throws Exception {
         assertNoForbidden(classesRequestedBy("check", Cli.model("plant.chain")));
         assertNoForbidden(classesRequestedBy("demo"));

@@ -56,6 +56,28 @@ class UsageErrorsTest {
     }
 
     @Test
+    void stepsAreReadWithTheModelFilesNumberGrammar() {
+        // one number reader for the model file and every option (exact's Rational.parse): exact integers in any
+        // of its forms are accepted, fractions that are not whole and digits outside ASCII are not
+        Cli.Result r = Cli.run("step", MODEL, "-n", "4", "--from", "Up", "--to", "Down", "--format", "csv");
+        assertEquals(r.out(), Cli.run("step", MODEL, "-n", "8/2", "--from", "Up", "--to", "Down", "--format", "csv")
+            .out());
+        assertEquals(r.out(), Cli.run("step", MODEL, "-n", "4e0", "--from", "Up", "--to", "Down", "--format",
+            "csv").out());
+        assertUsageError(Cli.run("step", MODEL, "-n", "7/2"),
+            "qchain: Invalid value for option '--steps': '7/2' is not a whole number of steps", "qchain step");
+        assertUsageError(Cli.run("step", MODEL, "-n", "\u0663"),
+            "qchain: Invalid value for option '--steps': '\u0663' is not a whole number of steps", "qchain step");
+        Cli.Result hugeExponent = Cli.run("step", MODEL, "-n", "1e99999999999");
+        assertEquals(2, hugeExponent.code(), hugeExponent::toString);
+        assertTrue(hugeExponent.err().startsWith("qchain: Invalid value for option '--steps': '1e99999999999' is"
+            + " not a whole number of steps ("), hugeExponent::toString);
+        assertUsageError(Cli.run("step", MODEL, "-n", "99999999999999999999"),
+            "qchain: Invalid value for option '--steps': '99999999999999999999' is too large: at most "
+                + Long.MAX_VALUE, "qchain step");
+    }
+
+    @Test
     void negativeStepsIsRefused() {
         assertUsageError(Cli.run("step", MODEL, "-n", "-1"),
             "qchain: Invalid value for option '--steps': '-1' is negative; the number of steps must be 0 or more",

@@ -1,10 +1,11 @@
 package org.qchain.exact;
 
 /**
- * Message keys of every error qchain reports. Each key carries an English pattern with {@code {0}}, {@code {1}}, ...
- * placeholders; tests assert the key, not the text.
+ * Message keys of the errors the exact module (and, for keys added before the key split, the other modules) reports.
+ * Each key carries an English pattern with {@code {0}}, {@code {1}}, ... placeholders; tests assert the key, not the
+ * text. Patterns carry no command-line wording (no option names): the command line adds its hints.
  */
-public enum ErrorKey {
+public enum ErrorKey implements MessageKey {
     // --- model files -------------------------------------------------------------------------------------------
     /** A lexical or grammatical error in a model file. {0}: what was expected or found. */
     SYNTAX("{0}"),
@@ -35,7 +36,7 @@ public enum ErrorKey {
     /** {0}: detail. */
     DIVISION_BY_ZERO("division by zero{0}"),
     /** {0}: parameter names. */
-    FREE_PARAMETERS("parameters without a value: {0} (give values with --at, or use a symbolic command)"),
+    FREE_PARAMETERS("parameters without a value: {0}"),
     /** {0}: chain kind found, {1}: what the command needs. */
     WRONG_KIND("this is a {0} chain; {1}"),
     /** {0}: row number, {1}: columns found, {2}: columns expected. */
@@ -102,7 +103,7 @@ public enum ErrorKey {
      */
     CLOSED_FORM_UNSUPPORTED("no closed form in n: {0}"),
     /** {0}: the condition that fails, {1}: the parameter values. */
-    CLOSED_FORM_CONDITION("the closed form needs {0}, which fails at {1}; compute it with these values given (--at) instead"),
+    CLOSED_FORM_CONDITION("the closed form needs {0}, which fails at {1}; compute it with these values given instead"),
     /** {0}: estimated digits processed, {1}: limit, {2}: option that raises it. */
     PATH_SEARCH_TOO_LARGE("the path search would process about {0} digits in all, more than the limit {1}; raise it with {2}, or ask for fewer steps or paths"),
 
@@ -135,6 +136,10 @@ public enum ErrorKey {
     /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries. */
     DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries"),
 
+    // --- verify (issue 11, appended) ----------------------------------------------------------------------------
+    /** {0}: the quantity, {1}: the analysis it needs. */
+    VERIFY_NOT_AVAILABLE("checking {0} needs {1}, which this version of qchain does not have yet"),
+
     // --- closed forms and sweeps: guards (issue 8) -------------------------------------------------------------
     /** {0}: estimated digits of the exact values, {1}: points, {2}: the limit, {3}: how to raise it (may be empty). */
     SWEEP_TOO_LARGE("the sweep would compute about {0} digits of exact values at {1} points, more than the limit {2}{3}");
@@ -146,33 +151,8 @@ public enum ErrorKey {
     }
 
     /** The English pattern with {@code {i}} placeholders; {@code ''} stands for one quote. */
+    @Override
     public String pattern() {
         return pattern;
-    }
-
-    /**
-     * Fills the pattern with the arguments.
-     *
-     * @param args values for {@code {0}}, {@code {1}}, ...
-     * @return the message text
-     */
-    public String format(Object... args) {
-        StringBuilder sb = new StringBuilder();
-        String p = pattern;
-        for (int i = 0; i < p.length(); i++) {
-            char c = p.charAt(i);
-            if (c == '\'' && i + 1 < p.length() && p.charAt(i + 1) == '\'') {
-                sb.append('\'');
-                i++;
-            } else if (c == '{') {
-                int close = p.indexOf('}', i);
-                int idx = Integer.parseInt(p.substring(i + 1, close));
-                sb.append(idx < args.length ? String.valueOf(args[idx]) : "{" + idx + "}");
-                i = close;
-            } else {
-                sb.append(c);
-            }
-        }
-        return sb.toString();
     }
 }

@@ -5,8 +5,9 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * The one unchecked root of every error qchain reports on purpose. It carries a {@link ErrorKey message key}, the
- * arguments of the message and, for errors in an input file, the {@link SourcePos position} of the offending text.
+ * The one unchecked root of every error qchain reports on purpose. It carries a {@link MessageKey message key} (of
+ * any module's key enum), the arguments of the message and, for errors in an input file, the
+ * {@link SourcePos position} of the offending text.
  *
  * <p>The command-line front end prints {@link #getMessage()} on one line and exits with code 2 for errors whose key
  * is an input error ({@link #isInputError()}), 1 otherwise.
@@ -14,7 +15,7 @@ import java.util.Optional;
 public class QchainException extends RuntimeException {
     private static final long serialVersionUID = 1L;
 
-    private final ErrorKey key;
+    private final MessageKey key;
     private final transient List<Object> args;
     private final SourcePos pos;
 
@@ -24,7 +25,7 @@ public class QchainException extends RuntimeException {
      * @param key  the message key
      * @param args the message arguments
      */
-    public QchainException(ErrorKey key, Object... args) {
+    public QchainException(MessageKey key, Object... args) {
         this(null, key, args);
     }
 
@@ -35,20 +36,20 @@ public class QchainException extends RuntimeException {
      * @param key  the message key
      * @param args the message arguments
      */
-    public QchainException(SourcePos pos, ErrorKey key, Object... args) {
+    public QchainException(SourcePos pos, MessageKey key, Object... args) {
         super(render(pos, key, args));
         this.key = key;
         this.args = List.copyOf(Arrays.asList(args.clone()).stream().map(String::valueOf).toList());
         this.pos = pos;
     }
 
-    private static String render(SourcePos pos, ErrorKey key, Object[] args) {
+    private static String render(SourcePos pos, MessageKey key, Object[] args) {
         String text = key.format(args);
         return pos == null ? text : pos + ": " + text;
     }
 
     /** The message key. */
-    public ErrorKey key() {
+    public MessageKey key() {
         return key;
     }
 

@@ -178,6 +178,9 @@ public final class ReferenceReader {
         } else {
             csv();
         }
+        if (count == 0) {
+            throw new QchainException(new SourcePos(src.file(), 1, 1), ErrorKey.REF_EMPTY, expected());
+        }
         return new Summary(form, count);
     }
 

@@ -50,7 +50,7 @@ class FloatTextTest {
     @Test
     void roundTripsAndIsNeverLongerThanDoubleToString() {
         Random rnd = new Random(8);
-        for (int k = 0; k < 20_000; k++) {
+        for (int k = 0; k < 5_000; k++) {
             double d = Double.longBitsToDouble(rnd.nextLong());
             if (!Double.isFinite(d)) {
                 continue;
@@ -108,7 +108,7 @@ class FloatTextTest {
     @Test
     void hexReadsExactlyAndRoundsAsParseDouble() {
         Random rnd = new Random(13);
-        for (int k = 0; k < 10_000; k++) {
+        for (int k = 0; k < 3_000; k++) {
             double d = Double.longBitsToDouble(rnd.nextLong());
             if (!Double.isFinite(d)) {
                 continue;

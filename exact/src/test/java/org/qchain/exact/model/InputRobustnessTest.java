@@ -13,6 +13,7 @@ import java.util.Map;
 import java.util.concurrent.atomic.AtomicReference;
 import org.junit.jupiter.api.Test;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.MessageKey;
 import org.qchain.exact.InputLimits;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
@@ -185,8 +186,8 @@ class InputRobustnessTest {
         for (String t : texts) {
             Rational viaParse = null;
             Rational viaCsv = null;
-            ErrorKey parseKey = null;
-            ErrorKey csvKey = null;
+            MessageKey parseKey = null;
+            MessageKey csvKey = null;
             try {
                 viaParse = Rational.parse(t);
             } catch (QchainException e) {

@@ -152,6 +152,9 @@ class ReferenceReaderTest {
         assertEquals(ErrorKey.REF_EMPTY, fails(M3, "").key());
         assertEquals(ErrorKey.REF_EMPTY, fails(M3, "\uFEFF\r\n  \n").key());
         assertEquals(ErrorKey.REF_EMPTY, fails(V3, "Up,Worn,Down\n").key());
+        assertEquals("ref.csv:1:1: the file has no values; expected 3 values (the model has 3 states)",
+            fails(V3, "{ }").getMessage());
+        assertEquals(ErrorKey.REF_EMPTY, fails(M3, "from,to,value\n").key());
     }
 
     @Test
