@@ -76,6 +76,16 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
         }
     }
 
+    /** As the canonical constructor with the usual symbols ({@link Names#DEFAULT}). */
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
+                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+                        List<String> rows, List<String> cols, List<List<Formula>> cells,
+                        List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
+                        List<Roots> roots, Optional<Point> point, int digits, List<String> warnings) {
+        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+            recurrences, eigenvalues, longRun, roots, point, digits, warnings, Names.DEFAULT);
+    }
+
     /** Whether a series form (generating function or recurrence) is printed. */
     public boolean isSeries() {
         return form != Form.MATRIX;
@@ -144,6 +154,11 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
             values = List.copyOf(values);
             decimals = List.copyOf(decimals);
         }
+
+        /** Without decimals. */
+        public Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<String> values) {
+            this(factor, multiplicity, jordanIndex, kind, values, List.of());
+        }
     }
 
     /**
@@ -174,6 +189,12 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
             conditions = List.copyOf(conditions);
             notProved = List.copyOf(notProved);
             special = List.copyOf(special);
+        }
+
+        /** Without conditions, special points or values (a rate of {@code 0} means exact from n = 0). */
+        public LongRun(int period, List<List<List<String>>> limits, Formula rate, Optional<String> rateValue) {
+            this(period, limits, rate, rateValue, List.of(), List.of(), List.of(), rate.plain().equals("0"), 0,
+                List.of());
         }
 
         /** Whether P^n is periodic for generic parameter values. */
