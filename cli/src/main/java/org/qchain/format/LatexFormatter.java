@@ -170,6 +170,42 @@ final class LatexFormatter extends Layout {
 
     // --- closed ------------------------------------------------------------------------------------------------
 
+    /** The longest run of a formula on one line of an {@code align*} before it is broken. */
+    static final int LINE = 100;
+
+    /**
+     * A long formula broken over lines of the surrounding {@code align*}: before a top-level {@code +} or {@code -}
+     * (outside every brace group and {@code \\left ... \\right} pair, so each line is valid TeX) once the line is
+     * longer than {@link #LINE} characters; the continuation lines start {@code &\\quad}.
+     */
+    static String broken(String tex) {
+        StringBuilder out = new StringBuilder();
+        int depth = 0;
+        int lineStart = 0;
+        for (int i = 0; i < tex.length(); i++) {
+            char c = tex.charAt(i);
+            if (c == '{') {
+                depth++;
+            } else if (c == '}') {
+                depth--;
+            } else if (tex.startsWith("\\left", i)) {
+                depth++;
+            } else if (tex.startsWith("\\right", i)) {
+                depth--;
+            }
+            boolean op = depth == 0 && i > 0 && (c == '+' || c == '-') && tex.charAt(i - 1) == ' '
+                && i + 1 < tex.length() && tex.charAt(i + 1) == ' ';
+            if (op && out.length() - lineStart > LINE) {
+                // drop the space before the operator, break, and continue the line with the operator
+                out.setLength(out.length() - 1);
+                out.append(" \\\\\n&\\quad ");
+                lineStart = out.length();
+            }
+            out.append(c);
+        }
+        return out.toString();
+    }
+
     @Override
     public String closed(ClosedResult r) {
         StringBuilder sb = new StringBuilder();
@@ -192,7 +228,8 @@ final class LatexFormatter extends Layout {
                 String idx = "\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.cols().get(j)) + "}";
                 String lhs = r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(" + r.names().series() + ")"
                     : "P^{" + r.names().step() + "}_{" + idx + "}";
-                String rhs = r.cells().get(i).get(j).latex();
+                String rhs = r.form() == ClosedResult.Form.RECURRENCE ? r.cells().get(i).get(j).latex()
+                    : broken(r.cells().get(i).get(j).latex());
                 lines.add(r.form() == ClosedResult.Form.RECURRENCE ? "&" + lhs + ":\\; " + rhs : lhs + " &= " + rhs);
             }
         }
