@@ -45,6 +45,9 @@ public final class Analysis {
         if (query instanceof ClosedQuery q) {
             return closed(model, q, progress);
         }
+        if (query instanceof VerifyQuery q) {
+            return verify(model, q, progress);
+        }
         return check(model, (CheckQuery) query);
     }
 

@@ -22,7 +22,7 @@ import org.qchain.exact.reference.Tolerance;
  * @param maxDigits   refuse exact values estimated to have more digits in total
  */
 public record VerifyQuery(Path against, String againstName, What what, OptionalLong n, Optional<String> from,
-                          Optional<String> to, Tolerance tolerance, int show, long maxDigits) {
+                          Optional<String> to, Tolerance tolerance, int show, long maxDigits) implements Query {
     /** How many of the worst entries are listed by default. */
     public static final int DEFAULT_SHOW = 10;
 
