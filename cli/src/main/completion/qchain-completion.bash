@@ -159,6 +159,8 @@ function _complete_qchain() {
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} closed" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} check" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} verify" ];    then _picocli_qchain; return $?; fi
+  if [ "${COMP_LINE}" = "${COMP_WORDS[0]} avail" ];    then _picocli_qchain; return $?; fi
+  if [ "${COMP_LINE}" = "${COMP_WORDS[0]} convert" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} demo" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} completion" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} help" ];    then _picocli_qchain; return $?; fi
@@ -169,13 +171,17 @@ function _complete_qchain() {
   local cmds2=(closed)
   local cmds3=(check)
   local cmds4=(verify)
-  local cmds5=(demo)
-  local cmds6=(completion)
-  local cmds7=(help)
+  local cmds5=(avail)
+  local cmds6=(convert)
+  local cmds7=(demo)
+  local cmds8=(completion)
+  local cmds9=(help)
 
-  if CompWordsContainsArray "${cmds7[@]}"; then _picocli_qchain_help; return $?; fi
-  if CompWordsContainsArray "${cmds6[@]}"; then _picocli_qchain_completion; return $?; fi
-  if CompWordsContainsArray "${cmds5[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds9[@]}"; then _picocli_qchain_help; return $?; fi
+  if CompWordsContainsArray "${cmds8[@]}"; then _picocli_qchain_completion; return $?; fi
+  if CompWordsContainsArray "${cmds7[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds6[@]}"; then _picocli_qchain_convert; return $?; fi
+  if CompWordsContainsArray "${cmds5[@]}"; then _picocli_qchain_avail; return $?; fi
   if CompWordsContainsArray "${cmds4[@]}"; then _picocli_qchain_verify; return $?; fi
   if CompWordsContainsArray "${cmds3[@]}"; then _picocli_qchain_check; return $?; fi
   if CompWordsContainsArray "${cmds2[@]}"; then _picocli_qchain_closed; return $?; fi
@@ -191,7 +197,7 @@ function _picocli_qchain() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens closed check verify demo completion help"
+  local commands="step sens closed check verify avail convert demo completion help"
   local flag_opts="'-h' '--help' '-V' '--version'"
   local arg_opts=""
 
@@ -212,7 +218,7 @@ function _picocli_qchain_step() {
 
   local commands=""
   local flag_opts="'--symbolic' '--factor' '--double' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-terms'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '-t' '--time' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -221,7 +227,16 @@ function _picocli_qchain_step() {
     '--at')
       return
       ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
+      return
+      ;;
     '-n'|'--steps')
+      return
+      ;;
+    '-t'|'--time')
       return
       ;;
     '--from')
@@ -282,13 +297,22 @@ function _picocli_qchain_sens() {
 
   local commands=""
   local flag_opts="'--factor' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--of' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
+      return
+      ;;
+    '--of')
       return
       ;;
     '-n'|'--steps')
@@ -352,14 +376,20 @@ function _picocli_qchain_closed() {
 
   local commands=""
   local flag_opts="'-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--from' '--to' '--start' '--form' '--format' '--digits' '-o' '--output' '--max-terms'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--digits' '-o' '--output' '--max-terms' '--format'"
   local FORM_option_args=("MATRIX" "GF" "RECURRENCE") # --form values
-  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+  local FORMAT_option_args=("text" "json" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--from')
@@ -376,11 +406,6 @@ function _picocli_qchain_closed() {
       COMPREPLY=( $( compReplyArray "${FORM_option_args[@]}" ) )
       return $?
       ;;
-    '--format')
-      local IFS=$'\n'
-      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
-      return $?
-      ;;
     '--digits')
       return
       ;;
@@ -392,6 +417,11 @@ function _picocli_qchain_closed() {
       ;;
     '--max-terms')
       return
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
       ;;
   esac
 
@@ -419,12 +449,18 @@ function _picocli_qchain_check() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--digits'"
 
   type compopt &>/dev/null && compopt +o default
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--digits')
@@ -456,7 +492,7 @@ function _picocli_qchain_verify() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--against' '-n' '--steps' '-t' '--time' '--what' '--from' '--to' '--tol' '--abs-tol' '--ulps' '--show' '--format' '--digits' '-o' '--output' '--max-digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--against' '-n' '--steps' '-t' '--time' '--what' '--from' '--to' '--tol' '--abs-tol' '--ulps' '--show' '--format' '--digits' '-o' '--output' '--max-digits'"
   local WHAT_option_args=("matrix" "row" "entry" "stationary" "absorption" "expected-steps" "availability" "mttf") # --what values
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
@@ -464,6 +500,12 @@ function _picocli_qchain_verify() {
 
   case ${prev_word} in
     '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
       return
       ;;
     '--against')
@@ -536,6 +578,125 @@ function _picocli_qchain_verify() {
   fi
 }
 
+# Generates completions for the options and subcommands of the `avail` subcommand.
+function _picocli_qchain_avail() {
+  # Get completion data
+  local curr_word=${COMP_WORDS[COMP_CWORD]}
+  local prev_word=${COMP_WORDS[COMP_CWORD-1]}
+
+  local commands=""
+  local flag_opts="'-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-t' '--time' '--from' '--hours-per-year' '--format' '--digits' '-o' '--output'"
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
+
+  type compopt &>/dev/null && compopt +o default
+
+  case ${prev_word} in
+    '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
+      return
+      ;;
+    '-t'|'--time')
+      return
+      ;;
+    '--from')
+      return
+      ;;
+    '--hours-per-year')
+      return
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
+    '--digits')
+      return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+  esac
+
+  if [[ "${curr_word}" == -* ]]; then
+    COMPREPLY=( $(compgen -W "${flag_opts} ${arg_opts}" -- "${curr_word}") )
+  else
+    local positionals=""
+    local currIndex
+    currIndex=$(currentPositionalIndex "avail" "${arg_opts}" "${flag_opts}")
+    if (( currIndex >= 0 && currIndex <= 0 )); then
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      positionals=$( compgen -f -- "${curr_word}" ) # files
+    fi
+    local IFS=$'\n'
+    COMPREPLY=( $(compgen -W "${commands// /$'\n'}${IFS}${positionals}" -- "${curr_word}") )
+  fi
+}
+
+# Generates completions for the options and subcommands of the `convert` subcommand.
+function _picocli_qchain_convert() {
+  # Get completion data
+  local curr_word=${COMP_WORDS[COMP_CWORD]}
+  local prev_word=${COMP_WORDS[COMP_CWORD-1]}
+
+  local commands=""
+  local flag_opts="'-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--to' '--rate' '-o' '--output'"
+  local KIND_option_args=("jump" "uniformized") # --to values
+
+  type compopt &>/dev/null && compopt +o default
+
+  case ${prev_word} in
+    '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
+      return
+      ;;
+    '--to')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${KIND_option_args[@]}" ) )
+      return $?
+      ;;
+    '--rate')
+      return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+  esac
+
+  if [[ "${curr_word}" == -* ]]; then
+    COMPREPLY=( $(compgen -W "${flag_opts} ${arg_opts}" -- "${curr_word}") )
+  else
+    local positionals=""
+    local currIndex
+    currIndex=$(currentPositionalIndex "convert" "${arg_opts}" "${flag_opts}")
+    if (( currIndex >= 0 && currIndex <= 0 )); then
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      positionals=$( compgen -f -- "${curr_word}" ) # files
+    fi
+    local IFS=$'\n'
+    COMPREPLY=( $(compgen -W "${commands// /$'\n'}${IFS}${positionals}" -- "${curr_word}") )
+  fi
+}
+
 # Generates completions for the options and subcommands of the `demo` subcommand.
 function _picocli_qchain_demo() {
   # Get completion data
@@ -589,7 +750,7 @@ function _picocli_qchain_help() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens closed check verify demo completion"
+  local commands="step sens closed check verify avail convert demo completion"
   local flag_opts="'-h' '--help'"
   local arg_opts=""
 

@@ -3,12 +3,15 @@ package org.qchain.analysis;
 import java.util.Optional;
 import java.util.OptionalInt;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.ctmc.Generators;
 import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
+import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Result;
 import org.qchain.result.SensResult;
+import org.qchain.result.TransientResult;
 import org.qchain.result.VerifyResult;
 
 /**
@@ -45,6 +48,15 @@ public final class Analysis {
         if (query instanceof ClosedQuery q) {
             return closed(model, q, progress);
         }
+        if (query instanceof TransientQuery q) {
+            return transientProbabilities(model, q, progress);
+        }
+        if (query instanceof AvailabilityQuery q) {
+            return availability(model, q, progress);
+        }
+        if (query instanceof RateSensQuery q) {
+            return rateSens(model, q);
+        }
         if (query instanceof VerifyQuery q) {
             return verify(model, q, progress);
         }
@@ -73,7 +85,7 @@ public final class Analysis {
      *                         chain, paths asked of a symbolic chain, an interruption
      */
     public static Result step(LoadedModel model, StepQuery q, Progress progress) {
-        model.requireDiscrete("qchain step needs a discrete chain (continuous chains are not supported yet)");
+        model.requireDiscrete("qchain step -n needs a discrete chain; for a continuous chain give the time: qchain step MODEL -t T");
         if (route(model, q) == Route.SYMBOLIC) {
             if (q.paths().isPresent()) {
                 throw new QchainException(AnalysisKey.PATHS_NEED_VALUES, q.paths().getAsInt());
@@ -133,6 +145,80 @@ public final class Analysis {
      */
     public static VerifyResult verify(LoadedModel model, VerifyQuery q, Progress progress) {
         return Verification.run(model, q, progress);
+    }
+
+    /**
+     * Transition probabilities {@code P(t)} of a continuous chain at rational times, as certified decimals.
+     *
+     * @param model    the loaded model
+     * @param q        the query
+     * @param progress told about long work (one report per time)
+     * @return the result
+     * @throws QchainException for a discrete chain, a parameter without a value, an unknown state, an interruption
+     */
+    public static TransientResult transientProbabilities(LoadedModel model, TransientQuery q, Progress progress) {
+        return ContinuousEngine.transientProbabilities(model, q, progress);
+    }
+
+    /**
+     * Figures of merit of a repairable system (a continuous chain with an {@code up} line).
+     *
+     * @param model    the loaded model
+     * @param q        the query
+     * @param progress told about long work
+     * @return the result
+     * @throws QchainException NO_UP_STATES without an {@code up} line; for a discrete chain, a parameter without a
+     *                         value, a chain whose long-run law depends on the start, an unknown state
+     */
+    public static AvailabilityResult availability(LoadedModel model, AvailabilityQuery q, Progress progress) {
+        return ContinuousEngine.availability(model, q, progress);
+    }
+
+    /**
+     * The embedded jump chain or the uniformized chain of a continuous chain.
+     *
+     * @param model the loaded model
+     * @param q     the query
+     * @return the discrete chain, to be written as a model file
+     * @throws QchainException for a discrete chain, a parameter without a value, a rate below the largest total rate
+     */
+    public static ConvertedModel convert(LoadedModel model, ConvertQuery q) {
+        org.qchain.exact.RationalMatrix g = model.generator("qchain convert");
+        Optional<org.qchain.exact.Rational> rate = Optional.empty();
+        org.qchain.exact.RationalMatrix p;
+        if (q.target() == ConvertQuery.Target.JUMP) {
+            p = Generators.jumpChain(g);
+        } else {
+            org.qchain.exact.Rational max = Generators.maxRate(g);
+            org.qchain.exact.Rational r = q.rate().orElse(max.isZero() ? org.qchain.exact.Rational.ONE : max);
+            p = Generators.uniformized(g, r);
+            rate = Optional.of(r);
+        }
+        Optional<java.util.List<String>> up = model.model().upStates()
+            .map(ix -> ix.stream().map(i -> model.states().get(i)).toList());
+        return new ConvertedModel(model.source(), q, rate, model.states(), up, p);
+    }
+
+    /**
+     * The exact derivative of a figure of merit of a continuous chain with respect to a parameter.
+     *
+     * @param model the loaded model
+     * @param q     the query
+     * @return the result
+     * @throws QchainException for a discrete chain, no {@code up} line, an unknown parameter or state, an infinite
+     *                         MTTF, a parameter without a value
+     */
+    public static org.qchain.result.RateSensResult rateSens(LoadedModel model, RateSensQuery q) {
+        model.generator("qchain sens --of " + Figures.name(q.figure()));
+        java.util.List<Integer> up = model.model().upStates().orElseThrow(() -> new QchainException(
+            ErrorKey.NO_UP_STATES, "qchain sens --of " + Figures.name(q.figure())));
+        int from = q.from().map(f -> model.state("--from", f)).orElse(up.get(0));
+        org.qchain.exact.ctmc.RateSensitivity.Derivative d = org.qchain.exact.ctmc.RateSensitivity.of(model.model(),
+            model.given(), q.wrt(), q.figure(), from);
+        Optional<String> start = q.figure() == org.qchain.exact.ctmc.RateSensitivity.Figure.MTTF
+            ? Optional.of(model.states().get(from)) : Optional.empty();
+        return new org.qchain.result.RateSensResult(model.source(), Figures.name(q.figure()), start, q.wrt(),
+            model.point().orElseThrow(), d.value(), d.derivative(), d.elasticity(), java.util.List.of());
     }
 
     /**

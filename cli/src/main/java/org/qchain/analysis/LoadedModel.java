@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.InputLimits;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
@@ -85,8 +86,46 @@ public final class LoadedModel {
      *                         malformed value list
      */
     public static LoadedModel load(Path file, Optional<String> at) {
-        Model m = ModelParser.parseFile(file);
-        return of(m, Optional.of(file), at.map(t -> assignments(m, t)).orElse(Map.of()));
+        return load(file, at, InputLimits.DEFAULT);
+    }
+
+    /**
+     * As {@link #load(Path, Optional)}, under the given input limits (digits of one number, states of a dense
+     * matrix); the model keeps them, so every engine checks its dense size against them before any work.
+     *
+     * @param file   the model file
+     * @param at     the values, if any
+     * @param limits the input limits
+     * @return the loaded model
+     * @throws QchainException as {@link #load(Path, Optional)}; NUMBER_TOO_LONG, DENSE_TOO_LARGE
+     */
+    public static LoadedModel load(Path file, Optional<String> at, InputLimits limits) {
+        return load(file, at.map(List::of).orElse(List.of()), limits);
+    }
+
+    /**
+     * Reads a model file and loads it with the values of repeated {@code --at} options, each
+     * {@code NAME=VALUE} (or several, comma-separated); a name may be given once in all.
+     *
+     * @param file   the model file
+     * @param at     the options' texts, in the order given
+     * @param limits the input limits
+     * @return the loaded model
+     * @throws QchainException as {@link #load(Path, Optional)}; {@link ErrorKey#BAD_ARGUMENT} naming {@code --at}
+     *                         for a malformed value or a name given twice
+     */
+    public static LoadedModel load(Path file, List<String> at, InputLimits limits) {
+        Model m = ModelParser.parseFile(file, limits);
+        Map<String, Rational> values = new LinkedHashMap<>();
+        for (String text : at) {
+            for (Map.Entry<String, Rational> e : assignments(m, text).entrySet()) {
+                if (values.putIfAbsent(e.getKey(), e.getValue()) != null) {
+                    throw new QchainException(ErrorKey.BAD_ARGUMENT, "--at", text,
+                        "'" + e.getKey() + "' is given more than once");
+                }
+            }
+        }
+        return of(m, Optional.of(file), values);
     }
 
     /**
@@ -205,7 +244,7 @@ public final class LoadedModel {
         for (String name : model.usedParameters()) {
             p.put(name, known.get(name));
         }
-        return Optional.of(new Point(p));
+        return Optional.of(new Point(p, given.keySet()));
     }
 
     /**
@@ -236,6 +275,21 @@ public final class LoadedModel {
     public int state(String option, String name) {
         return model.indexOf(name).orElseThrow(() -> new QchainException(ErrorKey.BAD_ARGUMENT, option, name,
             "not a state of " + model.source() + " (states: " + String.join(", ", model.states()) + ")"));
+    }
+
+    /**
+     * The exact generator (rate matrix) of a continuous chain at the point.
+     *
+     * @param what the command or figure, for the message when the model is not continuous
+     * @return the generator, validated (no negative rate, no division by zero)
+     * @throws QchainException {@link ErrorKey#WRONG_KIND} for a discrete model; {@link ErrorKey#FREE_PARAMETERS} if a
+     *                         used parameter has no value; the located errors of {@link Chains#transitionMatrix}
+     */
+    public RationalMatrix generator(String what) {
+        if (model.kind() != ChainKind.CONTINUOUS) {
+            throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(), what + " needs a continuous chain");
+        }
+        return Chains.transitionMatrix(model, given);
     }
 
     /**

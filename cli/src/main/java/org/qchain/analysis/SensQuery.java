@@ -11,7 +11,7 @@ import org.qchain.exact.SizeEstimate;
  * @param from      the starting state
  * @param to        the state after n steps
  * @param wrt       the parameter of the derivative
- * @param sweep     a sweep range {@code NAME=START:STEP:END}, if wanted
+ * @param sweep     a sweep in the interval syntax, {@code p in [0, 1/10] by 1/100}, if wanted
  * @param factor    factored formulas
  * @param maxTerms  refuse powers estimated to need more polynomial terms
  * @param maxDigits refuse powers estimated to need more digits in their coefficients

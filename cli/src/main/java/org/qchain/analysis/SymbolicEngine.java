@@ -206,7 +206,7 @@ final class SymbolicEngine {
             // the formula's value must equal the exact engine's value of the substituted chain
             requireEqual(ps.probability(),
                 MatrixPowers.entryOfPower(Chains.transitionMatrix(m, point.get().values()), from, to, q.n()));
-            at = Optional.of(new SensResult.AtPoint(new Point(pt), ps.probability(), ps.derivative(),
+            at = Optional.of(new SensResult.AtPoint(new Point(pt, point.get().given()), ps.probability(), ps.derivative(),
                 ps.elasticity()));
         }
         Optional<SensResult.Sweep> sweep = Optional.empty();
@@ -239,9 +239,10 @@ final class SymbolicEngine {
         try {
             r = SweepRange.parse(text);
         } catch (QchainException e) {
-            // SWEEP's arguments are the text and the reason: name the option instead of repeating the text
+            // SWEEP's arguments are the text and the reason; a syntax error names its column in the option's text
             throw new QchainException(ErrorKey.BAD_ARGUMENT, "--sweep", text,
-                e.key() == ErrorKey.SWEEP ? String.valueOf(e.args().get(1)) : e.detail());
+                e.key() == ErrorKey.SWEEP ? String.valueOf(e.args().get(1))
+                    : e.pos().map(p -> "at column " + p.column() + ": ").orElse("") + e.detail());
         }
         try {
             Sensitivity.checkSweep(m, r);
@@ -339,7 +340,7 @@ final class SymbolicEngine {
             }
             p.put(name, v);
         }
-        return Optional.of(new Point(p));
+        return Optional.of(new Point(p, model.given().keySet()));
     }
 
     private static ClosedResult fromClosedForm(LoadedModel model, ClosedQuery q, ClosedForm cf,

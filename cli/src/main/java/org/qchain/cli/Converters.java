@@ -97,6 +97,22 @@ final class Converters {
         }
     }
 
+    /** A limit on the digits of one input number: 1 to {@link Integer#MAX_VALUE}. */
+    static final class InputDigits implements ITypeConverter<Integer> {
+        @Override
+        public Integer convert(String value) {
+            return (int) whole(value, "digits", 1, Integer.MAX_VALUE, "must be at least 1");
+        }
+    }
+
+    /** A limit on the states of a dense matrix: 1 to 3037000499 (its square is the largest long). */
+    static final class DenseStates implements ITypeConverter<Long> {
+        @Override
+        public Long convert(String value) {
+            return whole(value, "states", 1, 3_037_000_499L, "must be at least 1");
+        }
+    }
+
     /** The word given to {@code --format}; a bad word is a usage error naming it. */
     static final class Format implements ITypeConverter<OutputFormat> {
         @Override
@@ -165,6 +181,84 @@ final class Converters {
         public Iterator<String> iterator() {
             return Arrays.stream(org.qchain.analysis.VerifyQuery.What.values())
                 .map(org.qchain.analysis.VerifyQuery.What::word).iterator();
+        }
+    }
+
+    /** Times for a continuous chain: {@code 1,2,5}, ranges {@code A..B:S} (from A to B in steps of S), or a mix. */
+    static final class Times implements ITypeConverter<TimeList> {
+        /** The most times one option may give. */
+        static final int MAX = 10_000;
+
+        @Override
+        public TimeList convert(String value) {
+            java.util.List<org.qchain.exact.Rational> out = new java.util.ArrayList<>();
+            for (String raw : value.split(",", -1)) {
+                String item = raw.strip();
+                int dots = item.indexOf("..");
+                if (dots < 0) {
+                    out.add(time(item, value));
+                    continue;
+                }
+                int colon = item.indexOf(':', dots);
+                if (colon < 0) {
+                    throw new TypeConversionException("'" + item + "' in '" + value + "': a range is A..B:STEP, e.g. 0..10:2");
+                }
+                org.qchain.exact.Rational a = time(item.substring(0, dots), value);
+                org.qchain.exact.Rational b = time(item.substring(dots + 2, colon), value);
+                org.qchain.exact.Rational step = time(item.substring(colon + 1), value);
+                if (step.signum() <= 0 || b.compareTo(a) < 0) {
+                    throw new TypeConversionException("'" + item + "' in '" + value + "': a range A..B:STEP needs"
+                        + " A <= B and STEP > 0");
+                }
+                for (org.qchain.exact.Rational t = a; t.compareTo(b) <= 0; t = t.add(step)) {
+                    if (out.size() >= MAX) {
+                        throw new TypeConversionException("'" + value + "' gives more than " + MAX + " times");
+                    }
+                    out.add(t);
+                }
+            }
+            if (out.size() > MAX) {
+                throw new TypeConversionException("'" + value + "' gives more than " + MAX + " times");
+            }
+            return new TimeList(out);
+        }
+
+        private static org.qchain.exact.Rational time(String text, String value) {
+            String t = text.strip();
+            String whole = t.equals(value.strip()) ? "" : " in '" + value + "'";
+            org.qchain.exact.Rational r;
+            try {
+                r = org.qchain.exact.Rational.parse(t);
+            } catch (RuntimeException e) {
+                throw new TypeConversionException("'" + t + "'" + whole + " is not a time; write an integer,"
+                    + " a fraction such as 1/2 or a decimal such as 0.25");
+            }
+            if (r.signum() < 0) {
+                throw new TypeConversionException("'" + t + "'" + whole + " is negative; times are 0 or more");
+            }
+            return r;
+        }
+    }
+
+    /** The times an option gave, in order. */
+    record TimeList(java.util.List<org.qchain.exact.Rational> times) {
+    }
+
+    /** A positive rational: an integer, a fraction {@code p/q} or a decimal, read exactly. */
+    static final class PositiveRational implements ITypeConverter<org.qchain.exact.Rational> {
+        @Override
+        public org.qchain.exact.Rational convert(String value) {
+            org.qchain.exact.Rational r;
+            try {
+                r = org.qchain.exact.Rational.parse(value);
+            } catch (RuntimeException e) {
+                throw new TypeConversionException("'" + value + "' is not a number; write an integer, a fraction such"
+                    + " as 1/2 or a decimal such as 0.25");
+            }
+            if (r.signum() <= 0) {
+                throw new TypeConversionException("'" + value + "' must be positive");
+            }
+            return r;
         }
     }
 }

@@ -66,6 +66,12 @@ final class Errors implements IExecutionExceptionHandler, IParameterExceptionHan
         if (q.key() == ErrorKey.FREE_PARAMETERS) {
             return " (give values with --at, or use a symbolic command)";
         }
+        if (q.key() == ErrorKey.NUMBER_TOO_LONG) {
+            return "; raise it with --max-input-digits";
+        }
+        if (q.key() == ErrorKey.DENSE_TOO_LARGE) {
+            return "; raise it with --max-dense-states";
+        }
         return "";
     }
 
@@ -98,8 +104,15 @@ final class Errors implements IExecutionExceptionHandler, IParameterExceptionHan
     public int handleParseException(ParameterException ex, String[] args) {
         CommandLine cl = ex.getCommandLine();
         PrintWriter err = cl.getErr();
-        err.println("qchain: " + oneLine(ex.getMessage()));
-        UnmatchedArgumentException.printSuggestions(ex, err);
+        if (ex instanceof UnmatchedArgumentException u && cl.getCommandSpec().parent() == null
+            && !u.getUnmatched().isEmpty() && !u.getUnmatched().get(0).startsWith("-")) {
+            // a word where a command belongs: list every command rather than guess two
+            err.println("qchain: unknown command '" + u.getUnmatched().get(0) + "'; the commands are: "
+                + QchainCommand.commandNames(cl));
+        } else {
+            err.println("qchain: " + oneLine(ex.getMessage()));
+            UnmatchedArgumentException.printSuggestions(ex, err);
+        }
         err.println("Try '" + cl.getCommandSpec().qualifiedName() + " --help' for more information.");
         err.flush();
         return ExitCodes.INPUT;

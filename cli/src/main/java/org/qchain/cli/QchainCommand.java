@@ -4,6 +4,8 @@ import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayDeque;
+import java.util.Arrays;
+import java.util.List;
 import java.util.Deque;
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -11,14 +13,17 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import org.qchain.format.Caution;
+import org.qchain.format.OutputFormat;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.HelpCommand;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine.Spec;
 
 /**
- * The root command {@code qchain}. Called without a subcommand it prints its usage on stderr and exits 2.
+ * The root command {@code qchain}. Called without a subcommand it says so on stderr ({@code qchain: no command
+ * given; the commands are: ...}), prints its usage and exits 2.
  *
  * <p>{@link #newCommandLine(boolean)} builds the configured command tree (error handlers, exit code lists and the
  * caution footer on every help); {@link #run(String[])} is the process entry point used by {@link Main}.
@@ -26,7 +31,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "qchain", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     description = "Exact n-step transition probabilities of Markov chains: exact fractions, with correctly rounded"
         + " decimals beside them.",
-    subcommands = {StepCommand.class, SensCommand.class, ClosedCommand.class, CheckCommand.class, VerifyCommand.class, DemoCommand.class, CompletionCommand.class,
+    subcommands = {StepCommand.class, SensCommand.class, ClosedCommand.class, CheckCommand.class, VerifyCommand.class,
+        AvailCommand.class, ConvertCommand.class, DemoCommand.class, CompletionCommand.class,
         HelpCommand.class})
 public final class QchainCommand implements Callable<Integer> {
     /** Milliseconds the Ctrl-C hook waits for the work to stop and clean up before the JVM halts. */
@@ -49,8 +55,16 @@ public final class QchainCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        spec.commandLine().usage(spec.commandLine().getErr());
+        PrintWriter err = spec.commandLine().getErr();
+        err.println("qchain: no command given; the commands are: " + commandNames(spec.commandLine()));
+        spec.commandLine().usage(err);
+        err.flush();
         return ExitCodes.INPUT;
+    }
+
+    /** The subcommands' names, comma-separated, in the order of the help. */
+    static String commandNames(CommandLine root) {
+        return String.join(", ", root.getSubcommands().keySet());
     }
 
     /** A progress reporter for a subcommand; it prints only if progress is allowed. */
@@ -90,6 +104,22 @@ public final class QchainCommand implements Callable<Integer> {
     }
 
     /**
+     * {@code closed} shares the output options but refuses {@code csv}: its {@code --format} help and completion list
+     * only the formats it writes.
+     */
+    private static void offerClosedFormats(CommandSpec closed) {
+        OptionSpec f = closed.findOption("--format");
+        List<String> words = Arrays.stream(OutputFormat.values()).filter(x -> x != OutputFormat.CSV)
+            .map(OutputFormat::word).toList();
+        closed.remove(f);
+        closed.addOption(OptionSpec.builder(f)
+            .description("Output format: " + String.join(", ", words) + " (default: " + OutputFormat.TEXT.word()
+                + "); csv is not available for closed forms.")
+            .completionCandidates(words)
+            .build());
+    }
+
+    /**
      * The configured command tree.
      *
      * @param progressAllowed whether long work may show progress on stderr; tests pass {@code false}
@@ -118,6 +148,9 @@ public final class QchainCommand implements Callable<Integer> {
                 .exitCodeList(codes)
                 .footerHeading("%n")
                 .footer(Caution.TEXT);
+            if (c.getCommandSpec().name().equals("closed")) {
+                offerClosedFormats(c.getCommandSpec());
+            }
             todo.addAll(c.getSubcommands().values());
         }
         return cl;

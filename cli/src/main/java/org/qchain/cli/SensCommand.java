@@ -10,6 +10,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
@@ -19,9 +20,10 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "sens", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
-        "Sensitivity of the n-step probability P^n(FROM -> TO) to a parameter: P and its exact derivative dP/dp as",
-        "formulas in the parameters, their values and the elasticity (p/P) dP/dp at the nominal values (or --at),",
-        "and with --sweep a table of P and dP/dp over an exact range of the parameter, exact and decimal."})
+        "Sensitivity of the n-step probability P^n(FROM -> TO) to a parameter: its exact derivative and elasticity.",
+        "P and dP/dp are printed as formulas in the parameters, with their values and the elasticity (p/P) dP/dp at"
+            + " the nominal values (or --at).",
+        "With --sweep: a table of P and dP/dp over exact values of the parameter, exact and decimal."})
 final class SensCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -32,23 +34,30 @@ final class SensCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Option(names = {"-n", "--steps"}, required = true, paramLabel = "N", converter = Converters.Steps.class,
-        description = "Number of steps (0 or more).")
-    long n;
+    @Option(names = "--of", paramLabel = "FIGURE", defaultValue = "entry",
+        description = "What is differentiated: entry (P^n(FROM -> TO), the default), or for a continuous chain with"
+            + " an 'up' line availability, unavailability, mttf (from --from, default the first up state) or"
+            + " failure-frequency, exactly at the nominal or --at point.")
+    String of = "entry";
 
-    @Option(names = "--from", required = true, paramLabel = "STATE", description = "Starting state.")
+    @Option(names = {"-n", "--steps"}, paramLabel = "N", converter = Converters.Steps.class,
+        description = "Number of steps (0 or more); for --of entry.")
+    Long n;
+
+    @Option(names = "--from", paramLabel = "STATE", description = "Starting state.")
     String from;
 
-    @Option(names = "--to", required = true, paramLabel = "STATE", description = "State after n steps.")
+    @Option(names = "--to", paramLabel = "STATE", description = "State after n steps; for --of entry.")
     String to;
 
     @Option(names = "--wrt", required = true, paramLabel = "PARAM",
         description = "The parameter p of the derivative dP/dp.")
     String wrt;
 
-    @Option(names = "--sweep", paramLabel = "NAME=START:STEP:END",
-        description = "A table of P and dP/dp for NAME = START, START+STEP, ... up to END (exact rationals, e.g."
-            + " p=0:1/100:1/10; at most 10001 points); the other parameters at their nominal or --at values.")
+    @Option(names = "--sweep", paramLabel = "\"NAME in [LOW, HIGH] by STEP\"",
+        description = "A table of P and dP/dp over exact values of NAME, in the model file's interval syntax:"
+            + " \"p in [0, 1/10] by 1/100\" or \"p in [0, 1/10] with 11 points\" (an open end such as (0 is left"
+            + " out; at most 10001 points); the other parameters at their nominal or --at values.")
     String sweep;
 
     @Mixin
@@ -62,11 +71,34 @@ final class SensCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (!of.equals("entry")) {
+            return figure();
+        }
+        if (n == null || from == null || to == null) {
+            throw new ParameterException(spec.commandLine(), "--of entry needs -n N, --from STATE and --to STATE");
+        }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         SensQuery q = new SensQuery(n, from, to, wrt, Optional.ofNullable(sweep), symbolicOptions.factor,
             symbolicOptions.maxTerms(), digitLimit.maxDigits);
         SensResult result = root.run(spec, progress -> Analysis.sens(loaded, q, progress));
+        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
+        return ExitCodes.OK;
+    }
+
+    /** {@code --of FIGURE}: the exact derivative of a figure of merit of a continuous chain. */
+    private Integer figure() {
+        org.qchain.exact.ctmc.RateSensitivity.Figure f = org.qchain.analysis.Figures.of(of).orElseThrow(() ->
+            new ParameterException(spec.commandLine(), "--of '" + of + "': expected entry, availability,"
+                + " unavailability, mttf or failure-frequency"));
+        if (n != null || to != null || sweep != null || symbolicOptions.factor) {
+            throw new ParameterException(spec.commandLine(), "--of " + of + " takes --wrt, --from, --at, --digits,"
+                + " --format and --output (-n, --to, --sweep and --factor are for --of entry)");
+        }
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
+        LoadedModel loaded = model.load();
+        org.qchain.analysis.RateSensQuery q = new org.qchain.analysis.RateSensQuery(f, wrt, Optional.ofNullable(from));
+        org.qchain.result.Result result = root.run(spec, progress -> Analysis.rateSens(loaded, q));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }

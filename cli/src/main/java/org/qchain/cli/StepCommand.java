@@ -7,6 +7,7 @@ import org.qchain.analysis.Analysis;
 import org.qchain.analysis.LoadedModel;
 import org.qchain.analysis.Route;
 import org.qchain.analysis.StepQuery;
+import org.qchain.analysis.TransientQuery;
 import org.qchain.format.OutputFormat;
 import org.qchain.result.Result;
 import picocli.CommandLine.Command;
@@ -23,9 +24,11 @@ import picocli.CommandLine.Spec;
         "Exact n-step transition probabilities P^n of a discrete chain, as fractions with decimals beside them.",
         "Without --from: the whole matrix. With --from: that row (where the chain may be after n steps).",
         "With --from and --to: one probability; add --paths K for its K most probable paths.",
-        "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function",
-        "of the parameters (--factor: factored), with its value at the nominal or --at point when every parameter",
-        "has one."})
+        "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function"
+            + " of the parameters (--factor: factored), with its value at the nominal or --at point when every"
+            + " parameter has one.",
+        "Continuous chains: -t T (several: -t 1,2,5 or a range -t 0..10:2) gives P(t) = exp(Qt) as certified"
+            + " decimals: every printed digit is proven, and the bound (widest enclosure) is printed."})
 final class StepCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -36,9 +39,13 @@ final class StepCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Option(names = {"-n", "--steps"}, required = true, paramLabel = "N", converter = Converters.Steps.class,
-        description = "Number of steps (0 or more).")
-    long n;
+    @Option(names = {"-n", "--steps"}, paramLabel = "N", converter = Converters.Steps.class,
+        description = "Number of steps (0 or more); discrete chains.")
+    Long n;
+
+    @Option(names = {"-t", "--time"}, paramLabel = "T", converter = Converters.Times.class,
+        description = "Time(s) for a continuous chain: T, T1,T2,... or A..B:STEP (rationals, 0 or more).")
+    Converters.TimeList times;
 
     @Option(names = "--from", paramLabel = "STATE", description = "Starting state: print only its row of P^n.")
     String from;
@@ -79,6 +86,14 @@ final class StepCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if ((n == null) == (times == null)) {
+            throw new ParameterException(spec.commandLine(), n == null
+                ? "give the number of steps -n N (discrete chain) or the time -t T (continuous chain)"
+                : "-n (steps of a discrete chain) and -t (time of a continuous chain) exclude each other");
+        }
+        if (times != null) {
+            return continuous();
+        }
         if (to != null && from == null) {
             throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state)");
         }
@@ -108,6 +123,21 @@ final class StepCommand implements Callable<Integer> {
         }
         Result result = root.run(spec, progress -> Analysis.step(loaded, q, progress));
         Emitter.emit(spec, output.formatter(doubles).format(result), result.warnings(), output.output());
+        return ExitCodes.OK;
+    }
+
+    /** {@code -t}: P(t) of a continuous chain as certified decimals. */
+    private Integer continuous() {
+        if (to != null || paths != null || symbolic || symbolicOptions.factor) {
+            throw new ParameterException(spec.commandLine(), "-t takes --from, --digits, --format and --output;"
+                + " --to, --paths, --symbolic and --factor are for discrete chains");
+        }
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
+        LoadedModel loaded = model.load();
+        TransientQuery q = new TransientQuery(times.times(), Optional.ofNullable(from), output.digits(),
+            org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_BITS);
+        Result result = root.run(spec, progress -> Analysis.transientProbabilities(loaded, q, progress));
+        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }
 }

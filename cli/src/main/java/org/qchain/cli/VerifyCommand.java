@@ -22,12 +22,14 @@ import picocli.CommandLine.Spec;
 @Command(name = "verify", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     sortOptions = false,
     description = {
-        "Checks floating-point results from another tool (your code, a spreadsheet, a numerical library) against",
-        "the exact values: each number in FILE is read exactly and subtracted exactly from the truth; only the",
-        "errors are rounded, for display. Prints the worst entries first, then a summary; exits 0 when every",
-        "value meets the tolerance and 3 when one does not. FILE is CSV (a table, optionally with a header of",
-        "state names in any order and a column of row names; or from,to,value records) or JSON (a nested array or",
-        "an object keyed by state names); see docs/reference-files.md."})
+        "Checks floating-point results from another tool (your code, a spreadsheet, a numerical library) against"
+            + " the exact values.",
+        "Each number in FILE is read exactly and subtracted exactly from the truth; only the errors are rounded,"
+            + " for display. Prints the worst entries first, then a summary; exits 0 when every value meets the"
+            + " tolerance and 3 when one does not.",
+        "FILE is CSV (a table, optionally with a header of state names in any order and a column of row names; or"
+            + " from,to,value records) or JSON (a nested array or an object keyed by state names); see"
+            + " docs/reference-files.md."})
 final class VerifyCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;

@@ -4,6 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import org.qchain.exact.Rational;
 import org.qchain.exact.reference.EntryCheck;
+import org.qchain.result.AvailabilityResult;
+import org.qchain.result.RateSensResult;
+import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -171,6 +174,42 @@ final class CsvFormatter extends Layout {
                     ? String.valueOf(c.ulps().getAsLong()) : "", String.valueOf(c.isCorrectlyRounded()),
                 String.valueOf(c.pass()), String.valueOf(c.pos().line()), String.valueOf(c.pos().column())));
         }
+        return sb.toString();
+    }
+
+    // --- continuous chains ---------------------------------------------------------------------------------------
+
+    @Override
+    public String transientProbabilities(TransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("t", "from", "to", "decimal", "status", "bound"));
+        List<String> names = Continuous.rowNames(r);
+        for (TransientResult.AtTime at : r.times()) {
+            for (int i = 0; i < at.rows().size(); i++) {
+                for (int j = 0; j < r.states().size(); j++) {
+                    org.qchain.exact.certified.CertifiedDecimal d = at.rows().get(i).get(j);
+                    Text.csvRecord(sb, List.of(at.t().toString(), names.get(i), r.states().get(j), d.text(),
+                        d.status().name().toLowerCase(java.util.Locale.ROOT), Continuous.bound(at.bound())));
+                }
+            }
+        }
+        return sb.toString();
+    }
+
+    @Override
+    public String availability(AvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("figure", "exact", "decimal"));
+        Continuous.figures(r, digits).forEach(f -> Text.csvRecord(sb, f));
+        Continuous.points(r).forEach(p -> Text.csvRecord(sb, List.of(p.get(0), "", p.get(1))));
+        return sb.toString();
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("quantity", "exact", "decimal"));
+        Continuous.sensRows(r, digits).forEach(x -> Text.csvRecord(sb, x));
         return sb.toString();
     }
 }

@@ -1,11 +1,14 @@
 package org.qchain.format;
 
+import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.RateSensResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Result;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
 import org.qchain.result.SymbolicStepResult;
+import org.qchain.result.TransientResult;
 import org.qchain.result.VerifyResult;
 
 /**
@@ -40,6 +43,15 @@ public interface Formatter {
         if (result instanceof ClosedResult c) {
             return closed(c);
         }
+        if (result instanceof TransientResult t) {
+            return transientProbabilities(t);
+        }
+        if (result instanceof AvailabilityResult a) {
+            return availability(a);
+        }
+        if (result instanceof RateSensResult r) {
+            return rateSens(r);
+        }
         if (result instanceof VerifyResult v) {
             return verify(v);
         }
@@ -67,6 +79,14 @@ public interface Formatter {
     /** A checked model. */
     String check(CheckResult c);
 
+    /** P(t) of a continuous chain as certified decimals. */
+    String transientProbabilities(TransientResult r);
+
+    /** Figures of merit of a repairable system. */
+    String availability(AvailabilityResult r);
+
+    /** The derivative of a figure of merit with respect to a rate. */
+    String rateSens(RateSensResult r);
     /** Float results checked against the exact values. */
     String verify(VerifyResult v);
 }

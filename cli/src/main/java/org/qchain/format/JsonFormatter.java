@@ -7,6 +7,9 @@ import org.qchain.exact.Rational;
 import org.qchain.exact.floats.FloatText;
 import org.qchain.exact.reference.Target;
 import org.qchain.exact.reference.VerifyReport;
+import org.qchain.result.AvailabilityResult;
+import org.qchain.result.RateSensResult;
+import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Point;
@@ -330,5 +333,96 @@ final class JsonFormatter extends Layout {
                 .number("line", c.pos().line()).number("column", c.pos().column());
         });
         return j.number("digits", digits).strings("warnings", r.warnings()).close() + "\n";
+    }
+
+    // --- continuous chains ---------------------------------------------------------------------------------------
+
+    /** One object per time, one per line. */
+    @Override
+    public String transientProbabilities(TransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        for (TransientResult.AtTime at : r.times()) {
+            Json j = Json.object()
+                .string("kind", "continuous")
+                .string("t", at.t().toString())
+                .stringRows("matrix", at.rows().stream().map(row -> row.stream().map(Continuous::value).toList()).toList())
+                .stringRows("decimals", at.rows().stream().map(row -> row.stream()
+                    .map(org.qchain.exact.certified.CertifiedDecimal::text).toList()).toList())
+                .number("digits", digits)
+                .string("bound", Continuous.bound(at.bound()))
+                .strings("states", r.states())
+                .strings("rows", Continuous.rowNames(r))
+                .stringRows("status", at.rows().stream().map(row -> row.stream()
+                    .map(d -> d.status().name().toLowerCase(java.util.Locale.ROOT)).toList()).toList())
+                .string("uniformization_rate", at.uniformizationRate().toString())
+                .string("model", r.source())
+                .strings("warnings", r.warnings())
+                .string("caution", Caution.TEXT);
+            sb.append(j.close()).append('\n');
+        }
+        return sb.toString();
+    }
+
+    @Override
+    public String availability(AvailabilityResult r) {
+        Json mttf = Json.object();
+        Json mttfDec = Json.object();
+        r.mttf().forEach((s, v) -> {
+            mttf.string(s, Continuous.exact(v, "inf"));
+            mttfDec.string(s, Continuous.decimal(v, "inf", digits));
+        });
+        Json pi = Json.object();
+        r.stationary().forEach((s, v) -> pi.string(s, v.toString()));
+        Json j = Json.object()
+            .strings("up", r.up())
+            .string("steady_state_availability", r.availability().toString())
+            .object("mttf", mttf)
+            .string("mean_up_time", Continuous.exact(r.meanUpTime(), "undefined"))
+            .string("mean_down_time", Continuous.exact(r.meanDownTime(), "undefined"))
+            .string("failure_frequency", r.failureFrequency().toString())
+            .string("unavailability", r.unavailability().toString())
+            .string("hours_per_year", r.hoursPerYear().toString())
+            .string("down_hours_per_year", r.downHoursPerYear().toString())
+            .object("stationary", pi)
+            .object("decimals", Json.object()
+                .string("steady_state_availability", dec(r.availability()))
+                .object("mttf", mttfDec)
+                .string("mean_up_time", Continuous.decimal(r.meanUpTime(), "undefined", digits))
+                .string("mean_down_time", Continuous.decimal(r.meanDownTime(), "undefined", digits))
+                .string("failure_frequency", dec(r.failureFrequency()))
+                .string("unavailability", dec(r.unavailability()))
+                .string("down_hours_per_year", dec(r.downHoursPerYear())))
+            .string("from", r.from())
+            .objects("point_availability_at", r.point(), p -> Json.object()
+                .string("t", p.t().toString())
+                .string("decimal", p.value().text())
+                .string("status", p.value().status().name().toLowerCase(java.util.Locale.ROOT))
+                .string("bound", Continuous.bound(p.value().enclosure().width())))
+            .number("digits", digits)
+            .string("model", r.source())
+            .strings("warnings", r.warnings())
+            .string("caution", Caution.TEXT);
+        return j.close() + "\n";
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        Json pt = Json.object();
+        r.point().values().forEach((k, v) -> pt.string(k, v.toString()));
+        Json j = Json.object()
+            .string("of", r.figure())
+            .string("wrt", r.wrt())
+            .string("value", r.value().toString())
+            .string("derivative", r.derivative().toString())
+            .string("elasticity", Continuous.exact(r.elasticity(), "undefined"))
+            .object("decimals", Json.object()
+                .string("value", dec(r.value()))
+                .string("derivative", dec(r.derivative()))
+                .string("elasticity", Continuous.decimal(r.elasticity(), "undefined", digits)))
+            .object("at", pt);
+        r.from().ifPresent(f -> j.string("from", f));
+        j.number("digits", digits).string("model", r.source()).strings("warnings", r.warnings())
+            .string("caution", Caution.TEXT);
+        return j.close() + "\n";
     }
 }

@@ -5,6 +5,9 @@ import java.util.List;
 import org.qchain.exact.Rational;
 import org.qchain.exact.reference.EntryCheck;
 import org.qchain.exact.reference.VerifyReport;
+import org.qchain.result.AvailabilityResult;
+import org.qchain.result.RateSensResult;
+import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -295,6 +298,61 @@ final class LatexFormatter extends Layout {
         }
         sb.append("\\end{tabular}\n\n");
         sb.append(Text.latex(Checks.summary(rep))).append(".\n");
+        return caution(sb);
+    }
+
+    // --- continuous chains ---------------------------------------------------------------------------------------
+
+    @Override
+    public String transientProbabilities(TransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% P(t) for ").append(Text.comment(r.source())).append(" (continuous chain), certified decimals: ")
+            .append(Text.digits(digits)).append('\n');
+        for (TransientResult.AtTime at : r.times()) {
+            List<List<String>> g = Continuous.grid(r, at);
+            sb.append("% t = ").append(at.t()).append("; ").append(Continuous.boundSentence(at)).append('\n');
+            sb.append("\\begin{tabular}{l|").append("r".repeat(r.states().size())).append("}\n");
+            sb.append("$P(").append(at.t()).append(")$");
+            g.get(0).subList(1, g.get(0).size()).forEach(s -> sb.append(" & ").append(Text.latex(s)));
+            sb.append(" \\\\ \\hline\n");
+            for (List<String> row : g.subList(1, g.size())) {
+                sb.append(Text.latex(row.get(0)));
+                row.subList(1, row.size()).forEach(c -> sb.append(" & $").append(c).append('$'));
+                sb.append(" \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+        }
+        return caution(sb);
+    }
+
+    @Override
+    public String availability(AvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% Availability of ").append(Text.comment(r.source())).append("; up: ")
+            .append(Text.comment(String.join(", ", r.up()))).append('\n');
+        sb.append("\\begin{tabular}{lll}\n figure & exact & decimal \\\\ \\hline\n");
+        for (List<String> f : Continuous.figures(r, digits)) {
+            sb.append(Text.latex(f.get(0))).append(" & ").append(Text.latex(f.get(1))).append(" & ")
+                .append(Text.latex(f.get(2))).append(" \\\\\n");
+        }
+        for (List<String> p : Continuous.points(r)) {
+            sb.append(Text.latex(p.get(0))).append(" & & ").append(Text.latex(p.get(1))).append(" \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+        return caution(sb);
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% Sensitivity of ").append(Text.comment(Continuous.figureName(r))).append(" to ")
+            .append(Text.comment(r.wrt())).append(" in ").append(Text.comment(r.source())).append('\n');
+        sb.append("\\begin{tabular}{lll}\n quantity & exact & decimal \\\\ \\hline\n");
+        for (List<String> x : Continuous.sensRows(r, digits)) {
+            sb.append(Text.latex(x.get(0))).append(" & $").append(Text.frac(Rational.parse(x.get(1).equals("undefined")
+                ? "0" : x.get(1)))).append("$ & ").append(Text.latex(x.get(2))).append(" \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
         return caution(sb);
     }
 }

@@ -5,6 +5,9 @@ import java.util.List;
 import org.qchain.exact.Rational;
 import org.qchain.exact.reference.EntryCheck;
 import org.qchain.exact.reference.VerifyReport;
+import org.qchain.result.AvailabilityResult;
+import org.qchain.result.RateSensResult;
+import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -121,7 +124,7 @@ final class MarkdownFormatter extends Layout {
         boolean values = r.values().isPresent();
         if (values) {
             sb.append("Values at ").append(r.point().orElseThrow().text())
-                .append(" (nominal values, overridden by --at); decimals: ").append(Text.digits(digits))
+                .append(" (").append(r.point().orElseThrow().origin()).append("); decimals: ").append(Text.digits(digits))
                 .append(".\n\n");
         }
         sb.append(values ? "| from | to | formula | exact | decimal |\n| --- | --- | --- | --- | --- |\n"
@@ -306,6 +309,48 @@ final class MarkdownFormatter extends Layout {
             sb.append('\n');
         }
         sb.append(Checks.summary(rep)).append(".\n");
+        return caution(sb);
+    }
+
+    // --- continuous chains ---------------------------------------------------------------------------------------
+
+    @Override
+    public String transientProbabilities(TransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**P(t)** for `").append(Text.code(r.source())).append("` (continuous chain): row = state at the")
+            .append(" start, column = state at time t; certified decimals (").append(Text.digits(digits)).append(").\n");
+        for (TransientResult.AtTime at : r.times()) {
+            sb.append("\nt = ").append(at.t()).append(":\n\n");
+            List<List<String>> g = Continuous.grid(r, at);
+            line(sb, g.get(0).stream().map(Text::markdown).toList());
+            line(sb, separator(g.get(0).size()));
+            g.subList(1, g.size()).forEach(row -> line(sb, row.stream().map(Text::markdown).toList()));
+            sb.append("\n").append(Continuous.boundSentence(at)).append(".\n");
+        }
+        return caution(sb);
+    }
+
+    @Override
+    public String availability(AvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**Availability** of `").append(Text.code(r.source())).append("` (up: ")
+            .append(Text.markdown(String.join(", ", r.up()))).append(")\n\n");
+        line(sb, List.of("figure", "exact", "decimal"));
+        line(sb, separator(3));
+        Continuous.figures(r, digits).forEach(f -> line(sb, f.stream().map(Text::markdown).toList()));
+        Continuous.points(r).forEach(p -> line(sb, List.of(Text.markdown(p.get(0)), "", p.get(1))));
+        return caution(sb);
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**Sensitivity** of ").append(Text.markdown(Continuous.figureName(r))).append(" to `")
+            .append(Text.code(r.wrt())).append("` in `").append(Text.code(r.source())).append("` at ")
+            .append(Text.markdown(r.point().text())).append("\n\n");
+        line(sb, List.of("quantity", "exact", "decimal"));
+        line(sb, separator(3));
+        Continuous.sensRows(r, digits).forEach(x -> line(sb, x.stream().map(Text::markdown).toList()));
         return caution(sb);
     }
 }

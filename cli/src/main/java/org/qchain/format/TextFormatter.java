@@ -5,6 +5,9 @@ import java.util.List;
 import org.qchain.exact.Rational;
 import org.qchain.exact.reference.EntryCheck;
 import org.qchain.exact.reference.VerifyReport;
+import org.qchain.result.AvailabilityResult;
+import org.qchain.result.RateSensResult;
+import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -184,7 +187,7 @@ final class TextFormatter extends Layout {
         sb.append(table.render());
         if (r.values().isPresent()) {
             sb.append("\nAt ").append(r.point().orElseThrow().text())
-                .append(" (nominal values, overridden by --at):\n");
+                .append(" (").append(r.point().orElseThrow().origin()).append("):\n");
             TextTable vt = new TextTable().addRow("from", "to", "decimal", "exact");
             Symbolic.forEachCell(r, (i, j) -> {
                 Rational e = r.values().get().get(i).get(j);
@@ -208,7 +211,7 @@ final class TextFormatter extends Layout {
             .addRow("dP/d" + s.wrt(), "= " + s.derivative().plain()).render());
         if (s.at().isPresent()) {
             SensResult.AtPoint a = s.at().get();
-            sb.append("\nAt ").append(a.point().text()).append(" (nominal values, overridden by --at):\n");
+            sb.append("\nAt ").append(a.point().text()).append(" (").append(a.point().origin()).append("):\n");
             TextTable t = new TextTable().addRow("", "decimal", "exact");
             t.addRow("P", dec(a.probability()), a.probability().toString());
             t.addRow("dP/d" + s.wrt(), dec(a.derivative()), a.derivative().toString());
@@ -438,6 +441,56 @@ final class TextFormatter extends Layout {
             sb.append(t.render()).append('\n');
         }
         sb.append(Checks.summary(rep)).append(".\n");
+        return end(sb);
+    }
+
+    // --- continuous chains ---------------------------------------------------------------------------------------
+
+    @Override
+    public String transientProbabilities(TransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("P(t) for ").append(r.source()).append(" (continuous chain, ").append(r.states().size())
+            .append(r.states().size() == 1 ? " state)" : " states), certified decimals (").append(Text.digits(digits))
+            .append(")\n");
+        sb.append("Row i, column j: probability of being in state j at time t, starting in state i.\n");
+        for (TransientResult.AtTime at : r.times()) {
+            sb.append("\nt = ").append(at.t()).append(":\n");
+            TextTable table = new TextTable();
+            Continuous.grid(r, at).forEach(table::addRow);
+            sb.append(table.render());
+            sb.append(Continuous.boundSentence(at)).append(".\n");
+        }
+        return end(sb);
+    }
+
+    @Override
+    public String availability(AvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Availability of ").append(r.source()).append(" (continuous chain; up: ")
+            .append(String.join(", ", r.up())).append("; every other state is down)\n\n");
+        TextTable table = new TextTable().addRow("figure", "decimal", "exact");
+        for (List<String> f : Continuous.figures(r, digits)) {
+            table.addRow(f.get(0), f.get(2), f.get(1));
+        }
+        sb.append(table.render());
+        if (!r.point().isEmpty()) {
+            sb.append("\nPoint availability (certified decimals, ").append(Text.digits(digits)).append("):\n");
+            TextTable pts = new TextTable().addRow("figure", "decimal", "enclosure width");
+            Continuous.points(r).forEach(pts::addRow);
+            sb.append(pts.render());
+        }
+        sb.append("\nTimes are in the unit of the model's rates; failure frequency is per that unit.\n");
+        return end(sb);
+    }
+
+    @Override
+    public String rateSens(RateSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Sensitivity of ").append(Continuous.figureName(r)).append(" to ").append(r.wrt()).append(" in ")
+            .append(r.source()).append(" at ").append(r.point().text()).append(" (exact)\n\n");
+        TextTable table = new TextTable().addRow("quantity", "decimal", "exact");
+        Continuous.sensRows(r, digits).forEach(x -> table.addRow(x.get(0), x.get(2), x.get(1)));
+        sb.append(table.render());
         return end(sb);
     }
 }

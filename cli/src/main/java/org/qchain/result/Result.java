@@ -7,7 +7,7 @@ import java.util.List;
  * never compute beyond rounding an exact value for display.
  */
 public sealed interface Result permits StepResult, SymbolicStepResult, SensResult, ClosedResult, CheckResult,
-    VerifyResult {
+    TransientResult, AvailabilityResult, RateSensResult, VerifyResult {
 
     /** The model file name as the user gave it. */
     String source();

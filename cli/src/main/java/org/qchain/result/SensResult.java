@@ -69,9 +69,9 @@ public record SensResult(String source, String kind, long n, String from, String
             lines = List.copyOf(lines);
         }
 
-        /** {@code p = 0 : 1/100 : 1/10}. */
+        /** {@code p in [0, 1/10] by 1/100}, as the option is written. */
         public String range() {
-            return parameter + " = " + start + " : " + step + " : " + end;
+            return parameter + " in [" + start + ", " + end + "] by " + step;
         }
     }
 }

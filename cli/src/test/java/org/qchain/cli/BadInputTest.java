@@ -99,8 +99,8 @@ class BadInputTest {
 
     @Test
     void continuousChainIsRefusedForNow() {
-        assertOneLineError("qchain: this is a continuous chain; qchain step needs a discrete chain (continuous"
-            + " chains are not supported yet)", Cli.run("step", Cli.model("continuous.chain"), "-n", "2"));
+        assertOneLineError("qchain: this is a continuous chain; qchain step -n needs a discrete chain; for a continuous"
+            + " chain give the time: qchain step MODEL -t T", Cli.run("step", Cli.model("continuous.chain"), "-n", "2"));
     }
 
     @Test

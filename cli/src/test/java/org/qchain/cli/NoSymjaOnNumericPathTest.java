@@ -105,6 +105,16 @@ class NoSymjaOnNumericPathTest {
     }
 
     @Test
+    void continuousCommandsLoadNoSymbolicClass() throws Exception {
+        String m = Cli.model("generator-set.chain");
+        assertNoForbidden(classesRequestedBy("step", m, "-t", "1,10"));
+        assertNoForbidden(classesRequestedBy("step", m, "-t", "1", "--from", "Both", "--format", "json"));
+        assertNoForbidden(classesRequestedBy("avail", m, "-t", "5", "--format", "markdown"));
+        assertNoForbidden(classesRequestedBy("convert", m, "--to", "uniformized"));
+        assertNoForbidden(classesRequestedBy("sens", m, "--of", "mttf", "--wrt", "mu", "--format", "json"));
+    }
+
+    @Test
     void verifyAndStepDoublesLoadNoSymbolicClass() throws Exception {
         String m = Cli.model("plant.chain");
         String ref = "src/test/resources/reference/";

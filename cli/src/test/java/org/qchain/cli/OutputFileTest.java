@@ -103,4 +103,46 @@ class OutputFileTest {
         assertEquals(2, r.code(), r::toString);
         assertEquals("qchain: invalid --output '" + dir + "': it is a directory\n", r.err());
     }
+
+    @Test
+    void aNamedPipeIsWrittenIntoNotReplaced() throws Exception {
+        Path fifo = dir.resolve("results.fifo");
+        Process mk = new ProcessBuilder("mkfifo", fifo.toString()).inheritIO().start();
+        assertEquals(0, mk.waitFor());
+        java.util.concurrent.CompletableFuture<String> reader = java.util.concurrent.CompletableFuture.supplyAsync(() -> {
+            try {
+                return Files.readString(fifo);
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        });
+        Cli.Result r = Cli.run("step", MODEL, "-n", "2", "-o", fifo.toString());
+        assertEquals(0, r.code(), r::toString);
+        assertEquals(Cli.run("step", MODEL, "-n", "2").out(), reader.get(30, java.util.concurrent.TimeUnit.SECONDS));
+        assertTrue(Files.exists(fifo) && !Files.isRegularFile(fifo), "the pipe is still a pipe");
+        try (Stream<Path> files = Files.list(dir)) {
+            assertEquals(1, files.count(), "no temporary file is left");
+        }
+    }
+
+    @Test
+    void aDeviceFileIsWrittenIntoNotReplaced() {
+        Path devNull = Path.of("/dev/null");
+        Cli.Result r = Cli.run("step", MODEL, "-n", "2", "-o", devNull.toString());
+        assertEquals(0, r.code(), r::toString);
+        assertEquals("", r.out());
+        assertTrue(Files.exists(devNull) && !Files.isRegularFile(devNull), "/dev/null is still a device");
+    }
+
+    @Test
+    void aSymbolicLinkKeepsPointingAtTheReplacedFile() throws IOException {
+        Path real = dir.resolve("real.txt");
+        Files.writeString(real, "old\n");
+        Path link = dir.resolve("link.txt");
+        Files.createSymbolicLink(link, real);
+        Cli.Result r = Cli.run("step", MODEL, "-n", "2", "-o", link.toString());
+        assertEquals(0, r.code(), r::toString);
+        assertTrue(Files.isSymbolicLink(link), "the link is still a link");
+        assertEquals(Cli.run("step", MODEL, "-n", "2").out(), Files.readString(real));
+    }
 }

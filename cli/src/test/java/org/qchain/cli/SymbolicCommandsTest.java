@@ -46,7 +46,7 @@ class SymbolicCommandsTest {
             out.add(new Case("step-entry-at." + ext, List.of("step", FREE, "-n", "3", "--from", "Up", "--to", "Down",
                 "--at", "p=1/20", "--format", f)));
             out.add(new Case("sens-sweep." + ext, List.of("sens", FREE, "-n", "3", "--from", "Up", "--to", "Down",
-                "--wrt", "p", "--at", "p=1/20", "--sweep", "p=0:1/100:1/20", "--format", f)));
+                "--wrt", "p", "--at", "p=1/20", "--sweep", "p in [0, 1/20] by 1/100", "--format", f)));
         }
         out.add(new Case("check.txt", List.of("check", FREE)));
         out.add(new Case("step-matrix-at.json", List.of("step", FREE, "-n", "2", "--at", "p=1/20", "--format", "json")));
@@ -161,14 +161,24 @@ class SymbolicCommandsTest {
     @Test
     void badSymbolicInputGivesOneLineAndExitCode2() {
         String[] sens = {"sens", FREE, "-n", "2", "--from", "Up", "--to", "Down", "--wrt", "p"};
-        assertUsageError("qchain: invalid --sweep 'p=0:0:1/10': the step 0 must be positive",
-            Cli.run(concat(sens, "--sweep", "p=0:0:1/10")));
-        assertUsageError("qchain: invalid --sweep 'p=0:-1/10:1/10': the step -1/10 must be positive",
-            Cli.run(concat(sens, "--sweep", "p=0:-1/10:1/10")));
-        assertUsageError("qchain: invalid --sweep 'p=0:1/1000000:1': it has 1000001 points, more than 10001",
-            Cli.run(concat(sens, "--sweep", "p=0:1/1000000:1")));
-        assertUsageError("qchain: invalid --sweep 'p=0:1/2:2': value 2 of parameter 'p' is outside its domain (0, 1)",
-            Cli.run(concat(sens, "--sweep", "p=0:1/2:2")));
+        assertUsageError("qchain: invalid --sweep 'p in [0, 1/10] by 0': the step 0 must be positive",
+            Cli.run(concat(sens, "--sweep", "p in [0, 1/10] by 0")));
+        assertUsageError("qchain: invalid --sweep 'p in [0, 1/10] by -1/10': the step -1/10 must be positive",
+            Cli.run(concat(sens, "--sweep", "p in [0, 1/10] by -1/10")));
+        assertUsageError("qchain: invalid --sweep 'p in [0, 1] by 1/1000000': it has 1000001 points, more than 10001",
+            Cli.run(concat(sens, "--sweep", "p in [0, 1] by 1/1000000")));
+        assertUsageError("qchain: invalid --sweep 'p in [0, 1] with 20000 points': it has 20000 points, more than"
+            + " 10001", Cli.run(concat(sens, "--sweep", "p in [0, 1] with 20000 points")));
+        assertUsageError("qchain: invalid --sweep 'p in [0, 2] by 1/2': value 2 of parameter 'p' is outside its"
+            + " domain (0, 1)", Cli.run(concat(sens, "--sweep", "p in [0, 2] by 1/2")));
+        // the old NAME=START:STEP:END form is answered with its spelling in the interval syntax
+        assertUsageError("qchain: invalid --sweep 'p=0:1/100:1/10': write it as 'p in [0, 1/10] by 1/100'",
+            Cli.run(concat(sens, "--sweep", "p=0:1/100:1/10")));
+        assertUsageError("qchain: invalid --sweep 'p in [0, 1] step 1/10': at column 13: expected 'by STEP' or"
+            + " 'with COUNT points' after the interval, found 'step'",
+            Cli.run(concat(sens, "--sweep", "p in [0, 1] step 1/10")));
+        assertUsageError("qchain: invalid --at 'p=1/10': 'p' is given more than once",
+            Cli.run(concat(sens, "--at", "p=1/20", "--at", "p=1/10")));
         assertUsageError("qchain: invalid --at 'p=3/2': value 3/2 of parameter 'p' is outside its domain (0, 1)",
             Cli.run(concat(sens, "--at", "p=3/2")));
         assertUsageError("qchain: invalid --wrt 'q': not a parameter of " + FREE + " (parameters: p, r)",

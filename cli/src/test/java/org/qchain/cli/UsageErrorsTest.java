@@ -28,20 +28,46 @@ class UsageErrorsTest {
         Cli.Result r = Cli.run();
         assertEquals(2, r.code());
         assertEquals("", r.out());
-        assertTrue(r.err().startsWith("Usage: qchain [-hV] [COMMAND]\n"), r::toString);
+        assertEquals("qchain: no command given; the commands are: " + COMMANDS, r.errLines()[0], r::toString);
+        assertEquals("Usage: qchain [-hV] [COMMAND]", r.errLines()[1], r::toString);
+    }
+
+    /** The commands in the order of the help. */
+    private static final String COMMANDS = String.join(", ",
+        QchainCommand.newCommandLine(false).getSubcommands().keySet());
+
+    @Test
+    void unknownCommandListsTheCommands() {
+        for (String word : new String[]{"stpe", "stationary"}) {
+            Cli.Result r = Cli.run(word, MODEL);
+            assertEquals(2, r.code(), r::toString);
+            assertEquals("qchain: unknown command '" + word + "'; the commands are: " + COMMANDS, r.errLines()[0],
+                r::toString);
+            assertEquals("Try 'qchain --help' for more information.", r.errLines()[1], r::toString);
+        }
+        assertTrue(COMMANDS.startsWith("step, sens, closed, check"), COMMANDS);
     }
 
     @Test
-    void unknownCommandIsAUsageError() {
-        Cli.Result r = Cli.run("stpe");
-        assertEquals(2, r.code(), r::toString);
-        assertEquals("qchain: Unmatched argument at index 0: 'stpe'", r.errLines()[0], r::toString);
-        assertTrue(r.err().contains("step"), r::toString);
+    void stepsInOtherScriptsAreNoNumber() {
+        // U+0663 ARABIC-INDIC DIGIT THREE and U+FF13 FULLWIDTH DIGIT THREE are digits to Java, not to qchain
+        for (String n : new String[]{"\u0663", "\uff13"}) {
+            assertUsageError(Cli.run("step", MODEL, "-n", n),
+                "qchain: Invalid value for option '--steps': '" + n + "' is not a whole number of steps", "qchain step");
+        }
+    }
+
+    @Test
+    void tooManyStepsSaysTooLarge() {
+        assertUsageError(Cli.run("step", MODEL, "-n", "99999999999999999999"),
+            "qchain: Invalid value for option '--steps': '99999999999999999999' is too large: at most"
+                + " 9223372036854775807", "qchain step");
     }
 
     @Test
     void missingStepsNamesTheOption() {
-        assertUsageError(Cli.run("step", MODEL), "qchain: Missing required option: '--steps=N'", "qchain step");
+        assertUsageError(Cli.run("step", MODEL),
+            "qchain: give the number of steps -n N (discrete chain) or the time -t T (continuous chain)", "qchain step");
     }
 
     @Test

@@ -133,12 +133,29 @@ public enum ErrorKey implements MessageKey {
     NESTING_TOO_DEEP("parentheses nested more than {0} deep"),
     /** {0}: line of the first transition. */
     PARAM_AFTER_TRANSITIONS("a ''param'' line after the transitions: declare parameters before the first transition (line {0}); move this line up"),
-    /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries. */
-    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries"),
+    /** {0}: states, {1}: entries, {2}: memory lower bound, {3}: the limit in entries, {4}: the most states it allows. */
+    DENSE_TOO_LARGE("the model has {0} states: its dense matrix would have {1} entries (at least {2} of memory), more than the limit of {3} entries ({4} states)"),
 
     // --- verify (issue 11, appended) ----------------------------------------------------------------------------
     /** {0}: the quantity, {1}: the analysis it needs. */
     VERIFY_NOT_AVAILABLE("checking {0} needs {1}, which this version of qchain does not have yet"),
+
+    // --- linear systems, long run and absorption (appended) ---------------------------------------------------------
+    /** {0}: what is singular and why (names states or the condition). */
+    SINGULAR_SYSTEM("the system is singular: {0}"),
+    /** {0}: what cannot be computed, {1}: why. */
+    NO_ABSORPTION("{0}: {1}"),
+    /** {0}: size of the system, {1}: estimated digits, {2}: limit, {3}: option that raises it. */
+    SOLVE_TOO_LARGE("the exact solve of a {0}-state system would have about {1} digits in its result, more than the"
+        + " limit {2}; raise it with {3}"),
+
+    // --- continuous-time chains and availability (issue 10) ---
+    /** {0}: state. */
+    UP_STATE_TWICE("state ''{0}'' is listed twice on the ''up'' line"),
+    /** {0}: the figure asked for. */
+    NO_UP_STATES("{0} needs the operating states: add a line ''up STATE STATE ...'' after ''states'' (the other states are down)"),
+    /** {0}: what is degenerate. */
+    DEGENERATE_AVAILABILITY("{0}"),
 
     // --- closed forms and sweeps: guards (issue 8) -------------------------------------------------------------
     /** {0}: estimated digits of the exact values, {1}: points, {2}: the limit, {3}: how to raise it (may be empty). */

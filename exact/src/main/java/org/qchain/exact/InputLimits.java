@@ -58,8 +58,14 @@ public record InputLimits(int maxNumberDigits, long maxDenseEntries) {
         long entries = (long) states * states;
         if (entries > maxDenseEntries) {
             // 4 bytes per reference (compressed) is a lower bound: the entries' own objects come on top
-            throw new QchainException(ErrorKey.DENSE_TOO_LARGE, states, entries, bytes(entries * 4), maxDenseEntries);
+            throw new QchainException(ErrorKey.DENSE_TOO_LARGE, states, entries, bytes(entries * 4), maxDenseEntries,
+                maxDenseStates());
         }
+    }
+
+    /** The most states whose dense matrix fits the limit: the integer square root of {@link #maxDenseEntries}. */
+    public long maxDenseStates() {
+        return java.math.BigInteger.valueOf(maxDenseEntries).sqrt().longValue();
     }
 
     /** A byte count in the largest unit that keeps it at least 1: {@code 40.0 GB}. */

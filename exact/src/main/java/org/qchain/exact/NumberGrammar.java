@@ -186,6 +186,33 @@ public final class NumberGrammar {
         return i == n;
     }
 
+    /**
+     * A whole number as written in an option: an optional sign, ASCII digits, and optionally {@code _} between digits
+     * ({@code 1_000_000}); any other character, a non-ASCII digit included ({@code ٣}), makes it no whole number.
+     *
+     * @param text the text (surrounding spaces are ignored)
+     * @return its value, of any size (the caller compares it with its range), or empty if it is not one
+     */
+    public static java.util.Optional<java.math.BigInteger> whole(String text) {
+        String t = text.strip();
+        int s = !t.isEmpty() && (t.charAt(0) == '+' || t.charAt(0) == '-') ? 1 : 0;
+        StringBuilder digits = new StringBuilder(t.length());
+        for (int i = s; i < t.length(); i++) {
+            char c = t.charAt(i);
+            if (isDigit(c)) {
+                digits.append(c);
+            } else if (!(c == '_' && i > s && i + 1 < t.length() && isDigit(t.charAt(i - 1))
+                && isDigit(t.charAt(i + 1)))) {
+                return java.util.Optional.empty();
+            }
+        }
+        if (digits.length() == 0 || digits.length() > InputLimits.DEFAULT_MAX_NUMBER_DIGITS) {
+            return java.util.Optional.empty();
+        }
+        java.math.BigInteger v = new java.math.BigInteger(digits.toString());
+        return java.util.Optional.of(t.charAt(0) == '-' ? v.negate() : v);
+    }
+
     /** An ASCII digit. */
     public static boolean isDigit(char c) {
         return c >= '0' && c <= '9';

@@ -63,9 +63,9 @@ class BadInputTest {
 
     @Test
     void sweepWithZeroStep() {
-        QchainException e = assertThrows(QchainException.class, () -> SweepRange.parse("p=0:0:1/10"));
+        QchainException e = assertThrows(QchainException.class, () -> SweepRange.parse("p in [0, 1/10] by 0"));
         assertEquals(ErrorKey.SWEEP, e.key());
-        assertEquals("invalid sweep 'p=0:0:1/10': the step 0 must be positive", e.getMessage());
+        assertEquals("invalid sweep 'p in [0, 1/10] by 0': the step 0 must be positive", e.getMessage());
     }
 
     @Test

@@ -19,7 +19,9 @@ import org.qchain.exact.QchainException;
 
 /**
  * Writes output files atomically: the text goes to a temporary file in the target's directory, is forced to disk, and
- * is then moved over the target in one step, so a reader (or an interrupted run) never sees a partial file.
+ * is then moved over the target in one step, so a reader (or an interrupted run) never sees a partial file. Only
+ * regular files are replaced: a named pipe or a device file is written into directly, and a symbolic link keeps
+ * pointing where it did (the file it names is replaced).
  */
 public final class AtomicFiles {
     private AtomicFiles() {
@@ -50,7 +52,8 @@ public final class AtomicFiles {
 
     /**
      * Writes {@code text} (UTF-8) to {@code target} atomically, replacing it if it exists and keeping its
-     * permissions; a new file gets {@code rw-r--r--}.
+     * permissions; a new file gets {@code rw-r--r--}. A target that exists and is not a regular file (a named pipe,
+     * a device) is written into directly and never replaced; a symbolic link is followed.
      *
      * @param target the file to write
      * @param option the option that named it, for messages
@@ -60,12 +63,21 @@ public final class AtomicFiles {
      */
     public static void write(Path target, String option, String text) {
         Path abs = target.toAbsolutePath().normalize();
-        Path dir = abs.getParent();
         Path tmp = null;
         try {
             if (Files.isDirectory(abs)) {
                 throw new QchainException(ErrorKey.BAD_ARGUMENT, option, target, "it is a directory");
             }
+            if (Files.isSymbolicLink(abs) && Files.exists(abs)) {
+                // replace the file the link points to, never the link itself
+                abs = abs.toRealPath();
+            }
+            if (Files.exists(abs) && !Files.isRegularFile(abs)) {
+                // a named pipe, a device (/dev/null, /dev/stdout), a socket: write into it, never replace it
+                writeDirectly(abs, text);
+                return;
+            }
+            Path dir = abs.getParent();
             tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
                 ByteBuffer buf = ByteBuffer.wrap(text.getBytes(StandardCharsets.UTF_8));
@@ -96,6 +108,12 @@ public final class AtomicFiles {
                     // best effort: the target itself is untouched either way
                 }
             }
+        }
+    }
+
+    private static void writeDirectly(Path target, String text) throws IOException {
+        try (var out = Files.newOutputStream(target, StandardOpenOption.WRITE)) {
+            out.write(text.getBytes(StandardCharsets.UTF_8));
         }
     }
 

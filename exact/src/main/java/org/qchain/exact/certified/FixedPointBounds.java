@@ -37,6 +37,11 @@ final class FixedPointBounds {
         this.hi = hi;
     }
 
+    /** Bounds from their rows (sparse, columns ascending; the arrays are taken, not copied). */
+    static FixedPointBounds ofRows(int n, int w, int[][] cols, BigInteger[][] lo, BigInteger[][] hi) {
+        return new FixedPointBounds(n, w, cols, lo, hi);
+    }
+
     /** {@code floor(P 2^w)} and {@code ceil(P 2^w)} of a non-negative matrix. */
     static FixedPointBounds of(SparseRationalMatrix p, int w) {
         int n = p.size();

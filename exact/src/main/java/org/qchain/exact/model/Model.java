@@ -28,9 +28,16 @@ public final class Model {
     private final List<List<Transition>> rows;
     private final List<String> used;
     private final InputLimits limits;
+    private final List<Integer> up;
 
     private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
                   List<Transition> transitions, InputLimits limits) {
+        this(source, kind, params, states, transitions, limits, null);
+    }
+
+    private Model(String source, ChainKind kind, List<ParamDecl> params, List<String> states,
+                  List<Transition> transitions, InputLimits limits, List<Integer> up) {
+        this.up = up == null ? null : List.copyOf(up);
         this.source = source;
         this.kind = kind;
         this.params = List.copyOf(params);
@@ -111,6 +118,32 @@ public final class Model {
     /** The input limits the model was read under. */
     public InputLimits limits() {
         return limits;
+    }
+
+    /**
+     * This model with its operating states marked (the {@code up} line); the other states are down.
+     *
+     * @param upStates indexes of the operating states, in the order listed
+     * @return a copy of this model that knows its operating states
+     * @throws IllegalArgumentException if an index is out of range or repeated
+     */
+    public Model withUpStates(List<Integer> upStates) {
+        java.util.Set<Integer> seen = new java.util.HashSet<>();
+        for (int i : upStates) {
+            if (i < 0 || i >= states.size() || !seen.add(i)) {
+                throw new IllegalArgumentException("bad or repeated up state index " + i);
+            }
+        }
+        return new Model(source, kind, params, states, transitions, limits, upStates);
+    }
+
+    /**
+     * The operating states (indexes, in the order the {@code up} line lists them), if the model marks them.
+     *
+     * @return the indexes, or empty if the model has no {@code up} line
+     */
+    public Optional<List<Integer>> upStates() {
+        return Optional.ofNullable(up);
     }
 
     /** The file name as given, for messages. */

@@ -1,6 +1,7 @@
 package org.qchain.exact.model;
 
 import java.io.IOException;
+import java.math.BigInteger;
 import java.nio.ByteBuffer;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
@@ -193,6 +194,77 @@ public final class ModelParser {
             .parseAll();
     }
 
+    /** The form {@code NAME=START:STEP:END}, which reads as {@code NAME in [START, END] by STEP}. */
+    private static final java.util.regex.Pattern OLD_SWEEP =
+        java.util.regex.Pattern.compile("\\s*(\\w+)\\s*=([^:]+):([^:]+):([^:]+)");
+
+    /**
+     * Reads a sweep in the model file's interval syntax: {@code NAME in INTERVAL by STEP} or
+     * {@code NAME in INTERVAL with COUNT points}, e.g. {@code p in [0, 1/10] by 1/100}; the ends and the step are
+     * constants as in a {@code param} line. The name is not checked against a model.
+     *
+     * @param sourceName the name used in messages (the text is line 1)
+     * @param text       the sweep
+     * @return the points, counted but not listed (the caller checks the count against its limit first)
+     * @throws QchainException SYNTAX, BAD_DOMAIN or MALFORMED_NUMBER at the column at fault; SWEEP for a step that
+     *                         is not positive, an infinite upper end, or no point in the interval
+     */
+    public static SweepSpec parseSweep(String sourceName, String text) {
+        java.util.regex.Matcher old = OLD_SWEEP.matcher(text);
+        if (old.matches()) {
+            throw new QchainException(ErrorKey.SWEEP, text.strip(), "write it as '"
+                + old.group(1) + " in [" + old.group(2).strip() + ", " + old.group(4).strip() + "] by "
+                + old.group(3).strip() + "'");
+        }
+        Columns cols = Columns.of(text);
+        List<Token> toks = Lexer.tokens(sourceName, 1, text, cols, 0, text.length(),
+            InputLimits.DEFAULT_MAX_NUMBER_DIGITS);
+        ExprParser p = new ExprParser(toks, 0);
+        String example = " (a sweep is NAME in [LOW, HIGH] by STEP, or NAME in [LOW, HIGH] with COUNT points)";
+        Token name = p.next();
+        if (name.kind() != Kind.NAME || RESERVED.contains(name.text())) {
+            throw new QchainException(name.pos(), ErrorKey.SYNTAX, "expected a parameter name, found "
+                + name.describe() + example);
+        }
+        Token in = p.next();
+        if (in.kind() != Kind.NAME || !in.text().equals("in")) {
+            throw new QchainException(in.pos(), ErrorKey.SYNTAX, "expected 'in' after the parameter name, found "
+                + in.describe() + example);
+        }
+        Domain d = LineParser.domain(p, text);
+        if (d.upper().isEmpty()) {
+            throw new QchainException(in.pos(), ErrorKey.SWEEP, text.strip(), "a sweep needs a finite upper end");
+        }
+        Token form = p.next();
+        String word = form.kind() == Kind.NAME ? form.text() : "";
+        if (word.equals("by")) {
+            if (p.peek().kind() == Kind.END) {
+                throw new QchainException(p.peek().pos(), ErrorKey.SYNTAX, "missing the step after 'by'");
+            }
+            Rational step = ExprParser.constant(p.parseExpr(), "a step");
+            p.expectEnd("the step");
+            return SweepSpec.byStep(text.strip(), name.text(), d, step);
+        }
+        if (word.equals("with")) {
+            Token k = p.next();
+            if (!k.isIntegerLiteral()) {
+                throw new QchainException(k.pos(), ErrorKey.SYNTAX, "expected a whole number of points after 'with',"
+                    + " found " + k.describe());
+            }
+            Token points = p.next();
+            if (points.kind() != Kind.NAME || !(points.text().equals("points") || points.text().equals("point"))) {
+                throw new QchainException(points.pos(), ErrorKey.SYNTAX, "expected 'points' after the count, found "
+                    + points.describe());
+            }
+            p.expectEnd("'points'");
+            BigInteger count = k.value().numerator();
+            return SweepSpec.withPoints(text.strip(), name.text(), d,
+                count.bitLength() > 62 ? Long.MAX_VALUE : count.longValueExact());
+        }
+        throw new QchainException(form.pos(), ErrorKey.SYNTAX, "expected 'by STEP' or 'with COUNT points' after the"
+            + " interval, found " + form.describe());
+    }
+
     /** The parameter-name nodes of a tree, left to right. */
     static List<Expr.Var> varNodes(Expr e) {
         return Folding.varNodes(e);
@@ -286,6 +358,8 @@ public final class ModelParser {
         private List<String> states;
         private final Map<String, Integer> stateIndex = new HashMap<>();
         private int statesLine;
+        private List<Integer> up;
+        private int upLine;
         private final List<Transition> transitions = new ArrayList<>();
         private final Map<Long, Transition> seen = new HashMap<>();
 
@@ -335,6 +409,14 @@ public final class ModelParser {
                         markDeclaration(ln);
                         statesLine(ln, line, w);
                         break;
+                    case "up":
+                        if (stateIndex.containsKey("up")) {
+                            otherLine(ln, line, w); // a state named "up": its transitions keep their meaning
+                            break;
+                        }
+                        markDeclaration(ln);
+                        upLine(ln, line, w);
+                        break;
                     default:
                         markDeclaration(ln);
                         otherLine(ln, line, w);
@@ -343,7 +425,41 @@ public final class ModelParser {
             if (states == null) {
                 throw new QchainException(new SourcePos(file, 1, 1), ErrorKey.MISSING_STATES, "the end of the file");
             }
-            return Model.of(file, kind(), List.copyOf(params.values()), states, transitions, limits);
+            Model m = Model.of(file, kind(), List.copyOf(params.values()), states, transitions, limits);
+            return up == null ? m : m.withUpStates(up);
+        }
+
+        /** {@code up STATE STATE ...}: the operating states, after {@code states} and before the transitions. */
+        private void upLine(int ln, String line, List<Word> w) {
+            SourcePos at = pos(ln, w.get(0).start());
+            if (states == null) {
+                throw new QchainException(at, ErrorKey.MISSING_STATES, "the 'up' line");
+            }
+            if (upLine != 0) {
+                throw new QchainException(at, ErrorKey.DUPLICATE_LINE, "up", upLine);
+            }
+            if (!transitions.isEmpty()) {
+                throw new QchainException(at, ErrorKey.SYNTAX,
+                    "the 'up' line must come before the transitions (line " + transitions.get(0).pos().line()
+                        + " is a transition)");
+            }
+            if (w.size() == 1) {
+                throw new QchainException(pos(ln, line.length()), ErrorKey.SYNTAX,
+                    "missing the operating states after 'up', e.g. 'up " + states.get(0) + "'");
+            }
+            List<Integer> idx = new ArrayList<>();
+            for (Word s : w.subList(1, w.size())) {
+                Integer i = stateIndex.get(s.text());
+                if (i == null) {
+                    throw new QchainException(pos(ln, s.start()), ErrorKey.UNKNOWN_STATE, s.text());
+                }
+                if (idx.contains(i)) {
+                    throw new QchainException(pos(ln, s.start()), ErrorKey.UP_STATE_TWICE, s.text());
+                }
+                idx.add(i);
+            }
+            up = idx;
+            upLine = ln;
         }
 
         private void markDeclaration(int ln) {
@@ -436,7 +552,7 @@ public final class ModelParser {
             params.put(name, new ParamDecl(name, domain, nominal, namePos));
         }
 
-        private Domain domain(ExprParser p, String line) {
+        static Domain domain(ExprParser p, String line) {
             Token open = p.next();
             if (!open.is("(") && !open.is("[")) {
                 throw new QchainException(open.pos(), ErrorKey.SYNTAX,
@@ -504,7 +620,7 @@ public final class ModelParser {
             p.next();
         }
 
-        private QchainException badDomain(Token open, String line, SourcePos at, String why) {
+        private static QchainException badDomain(Token open, String line, SourcePos at, String why) {
             int close = line.indexOf(')', open.index());
             int close2 = line.indexOf(']', open.index());
             int end = close < 0 ? close2 : (close2 < 0 ? close : Math.min(close, close2));

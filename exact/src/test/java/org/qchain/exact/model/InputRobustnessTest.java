@@ -15,6 +15,7 @@ import org.junit.jupiter.api.Test;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.MessageKey;
 import org.qchain.exact.InputLimits;
+import org.qchain.exact.NumberGrammar;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
@@ -194,7 +195,7 @@ class InputRobustnessTest {
                 parseKey = e.key();
             }
             try {
-                viaCsv = NumberGrammar().constant(t);
+                viaCsv = csvEntry().constant(t);
             } catch (QchainException e) {
                 csvKey = e.key();
             }
@@ -207,12 +208,30 @@ class InputRobustnessTest {
     }
 
     /** Reads a constant the way a CSV matrix entry is read. */
-    private static CsvEntry NumberGrammar() {
+    private static CsvEntry csvEntry() {
         return t -> Lexer.constant(t, null, InputLimits.DEFAULT_MAX_NUMBER_DIGITS);
     }
 
     private interface CsvEntry {
         Rational constant(String t);
+    }
+
+    @Test
+    void wholeNumbersAreAsciiDigitsOfAnySize() {
+        assertEquals(java.util.Optional.of(java.math.BigInteger.valueOf(1_000_000)), NumberGrammar.whole("1_000_000"));
+        assertEquals(java.util.Optional.of(java.math.BigInteger.valueOf(-3)), NumberGrammar.whole(" -3 "));
+        assertEquals(java.util.Optional.of(new java.math.BigInteger("99999999999999999999")),
+            NumberGrammar.whole("99999999999999999999"));
+        for (String bad : new String[]{"\u0663", "1\u0663", "\uff11", "1.0", "1e3", "_1", "1_", "1__0", "", "-", "0x1"}) {
+            assertEquals(java.util.Optional.empty(), NumberGrammar.whole(bad), bad);
+        }
+    }
+
+    @Test
+    void theDenseLimitInStatesIsTheIntegerSquareRoot() {
+        assertEquals(4096, InputLimits.DEFAULT.maxDenseStates());
+        assertEquals(2, InputLimits.DEFAULT.withMaxDenseEntries(8).maxDenseStates());
+        assertEquals(3_037_000_499L, InputLimits.DEFAULT.withMaxDenseEntries(Long.MAX_VALUE).maxDenseStates());
     }
 
     // --- columns count characters ---------------------------------------------------------------------------------
@@ -271,7 +290,7 @@ class InputRobustnessTest {
         QchainException e = assertThrows(QchainException.class, () -> Chains.transitionMatrix(m, Map.of()));
         assertEquals(ErrorKey.DENSE_TOO_LARGE, e.key());
         assertEquals("the model has 100000 states: its dense matrix would have 10000000000 entries (at least 40.0 GB"
-            + " of memory), more than the limit of 16777216 entries", e.getMessage());
+            + " of memory), more than the limit of 16777216 entries (4096 states)", e.getMessage());
     }
 
     @Test

@@ -3,10 +3,13 @@ package org.qchain.symbolic.sensitivity;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
+import org.qchain.exact.model.ModelParser;
+import org.qchain.exact.model.SweepSpec;
 
 /**
- * A range of exact parameter values {@code start, start + step, ..., <= end}, written {@code p=start:step:end}
- * (for example {@code p=0:1/100:1/10}, eleven points).
+ * A range of exact parameter values {@code start, start + step, ..., <= end}, written in the model file's interval
+ * syntax ({@link ModelParser#parseSweep}): {@code p in [0, 1/10] by 1/100} or {@code p in [0, 1/10] with 11 points}
+ * (eleven points each).
  *
  * @param parameter the parameter name
  * @param start     the first value
@@ -24,7 +27,7 @@ public record SweepRange(String parameter, Rational start, Rational step, Ration
      *                         or more than {@link #MAX_POINTS} points
      */
     public SweepRange {
-        String text = parameter + "=" + start + ":" + step + ":" + end;
+        String text = parameter + " in [" + start + ", " + end + "] by " + step;
         if (step.signum() <= 0) {
             throw new QchainException(ErrorKey.SWEEP, text, "the step " + step + " must be positive");
         }
@@ -46,31 +49,23 @@ public record SweepRange(String parameter, Rational start, Rational step, Ration
     }
 
     /**
-     * Parses {@code name=start:step:end}; numbers as in model files ({@code 1/100}, {@code 0.01}).
+     * Parses a sweep in the interval syntax, {@code p in [0, 1/10] by 1/100} or {@code p in [0, 1/10] with 11
+     * points}; numbers as in model files ({@code 1/100}, {@code 0.01}). The points are counted before any is made.
      *
      * @param text the text
      * @return the range
-     * @throws QchainException with {@link ErrorKey#SWEEP} for malformed text or a bad range
+     * @throws QchainException with {@link ErrorKey#SWEEP} for a bad range or more than {@link #MAX_POINTS}
+     *                         points; the model parser's located errors for malformed text
      */
     public static SweepRange parse(String text) {
-        int eq = text.indexOf('=');
-        if (eq <= 0) {
-            throw new QchainException(ErrorKey.SWEEP, text, "expected name=start:step:end, e.g. p=0:1/100:1/10");
+        SweepSpec s = ModelParser.parseSweep("--sweep", text);
+        if (s.count() > MAX_POINTS) {
+            throw new QchainException(ErrorKey.SWEEP, text.strip(), "it has "
+                + (s.count() == Long.MAX_VALUE ? "too many" : String.valueOf(s.count())) + " points, more than "
+                + MAX_POINTS);
         }
-        String name = text.substring(0, eq).strip();
-        String[] parts = text.substring(eq + 1).split(":", -1);
-        if (parts.length != 3) {
-            throw new QchainException(ErrorKey.SWEEP, text, "expected name=start:step:end, e.g. p=0:1/100:1/10");
-        }
-        Rational[] v = new Rational[3];
-        for (int i = 0; i < 3; i++) {
-            try {
-                v[i] = Rational.parse(parts[i]);
-            } catch (QchainException e) {
-                throw new QchainException(ErrorKey.SWEEP, text, "'" + parts[i].strip() + "' is not a number");
-            }
-        }
-        return new SweepRange(name, v[0], v[1], v[2]);
+        // one point: any positive step gives start = end
+        return new SweepRange(s.parameter(), s.first(), s.count() == 1 ? Rational.ONE : s.step(), s.last());
     }
 
     /** The number of points. */
@@ -83,9 +78,9 @@ public record SweepRange(String parameter, Rational start, Rational step, Ration
         return start.add(step.multiply(Rational.of(k)));
     }
 
-    /** {@code name=start:step:end}. */
+    /** {@code name in [start, end] by step}. */
     @Override
     public String toString() {
-        return parameter + "=" + start + ":" + step + ":" + end;
+        return parameter + " in [" + start + ", " + end + "] by " + step;
     }
 }

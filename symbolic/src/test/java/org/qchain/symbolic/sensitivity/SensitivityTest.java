@@ -48,7 +48,7 @@ class SensitivityTest {
 
     @Test
     void sweepGivesOneExactRowPerPoint() {
-        SweepRange r = SweepRange.parse("a=0:1/100:1/10");
+        SweepRange r = SweepRange.parse("a in [0, 1/10] by 1/100");
         assertEquals(11, r.size());
         Sensitivity.checkSweep(model, r);
         List<SweepRow> rows = sens().sweep(r, model.nominalValues());
@@ -59,18 +59,22 @@ class SensitivityTest {
 
     @Test
     void badSweepsAreClearErrors() {
-        for (String bad : List.of("a=0:0:1/10", "a=0:-1/100:1/10", "a=1/10:1/100:0", "a=0:1/1000000:1", "a0:1:2",
-            "a=0:x:1", "a=0:1")) {
+        for (String bad : List.of("a in [0, 1/10] by 0", "a in [0, 1/10] by -1/100", "a in [0, 1] by 1/1000000",
+            "a in [0, 1] with 10002 points", "a=0:1/100:1/10", "a in [0, inf) by 1")) {
             QchainException e = assertThrows(QchainException.class, () -> SweepRange.parse(bad), bad);
             assertEquals(ErrorKey.SWEEP, e.key(), bad);
         }
-        assertEquals("invalid sweep 'a=0:0:1/10': the step 0 must be positive",
-            assertThrows(QchainException.class, () -> SweepRange.parse("a=0:0:1/10")).getMessage());
+        for (String bad : List.of("a0:1:2", "a in [0, x] by 1", "a in [0, 1]", "a in [0, 1] by")) {
+            QchainException e = assertThrows(QchainException.class, () -> SweepRange.parse(bad), bad);
+            assertEquals(ErrorKey.SYNTAX, e.key(), bad);
+        }
+        assertEquals("invalid sweep 'a in [0, 1/10] by 0': the step 0 must be positive",
+            assertThrows(QchainException.class, () -> SweepRange.parse("a in [0, 1/10] by 0")).getMessage());
         QchainException out = assertThrows(QchainException.class,
-            () -> Sensitivity.checkSweep(model, SweepRange.parse("a=0:1/2:3/2")));
+            () -> Sensitivity.checkSweep(model, SweepRange.parse("a in [0, 3/2] by 1/2")));
         assertEquals(ErrorKey.VALUE_OUTSIDE_DOMAIN, out.key());
         QchainException unknown = assertThrows(QchainException.class,
-            () -> Sensitivity.checkSweep(model, SweepRange.parse("z=0:1/2:1")));
+            () -> Sensitivity.checkSweep(model, SweepRange.parse("z in [0, 1] by 1/2")));
         assertEquals(ErrorKey.UNKNOWN_PARAMETER, unknown.key());
     }
 

@@ -1,0 +1,109 @@
+package org.qchain.analysis;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.Progress;
+import org.qchain.exact.QchainException;
+import org.qchain.exact.Rational;
+import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.certified.CertifiedDecimal;
+import org.qchain.exact.certified.CertifiedTransient;
+import org.qchain.exact.certified.Enclosure;
+import org.qchain.exact.certified.Ziv;
+import org.qchain.exact.ctmc.Availability;
+import org.qchain.result.AvailabilityResult;
+import org.qchain.result.TransientResult;
+
+/** The numeric engine calls for continuous chains (exact and certified; no symbolic types). */
+final class ContinuousEngine {
+    /** Refuse a transient solve of more states than this (dense bounds: states squared entries per product). */
+    static final int MAX_TRANSIENT_STATES = 2000;
+
+    private ContinuousEngine() {
+    }
+
+    static TransientResult transientProbabilities(LoadedModel model, TransientQuery q, Progress progress) {
+        RationalMatrix g = model.generator("qchain step -t");
+        guard(g.rows());
+        OptionalRow row = OptionalRow.of(model, q.from());
+        List<TransientResult.AtTime> out = new ArrayList<>();
+        for (int k = 0; k < q.times().size(); k++) {
+            Rational t = q.times().get(k);
+            CertifiedTransient plan = CertifiedTransient.of(g, t);
+            CertifiedDecimal[][] d = plan.decimals(q.digits(), q.maxBits());
+            List<List<CertifiedDecimal>> rows = new ArrayList<>();
+            for (int i = 0; i < d.length; i++) {
+                if (row.index < 0 || row.index == i) {
+                    rows.add(Arrays.asList(d[i]));
+                }
+            }
+            out.add(new TransientResult.AtTime(t, rows, CertifiedTransient.widest(d), plan.rate()));
+            progress.update("times", k + 1, q.times().size());
+        }
+        return new TransientResult(model.source(), model.states(), q.from(), out, q.digits(), List.of());
+    }
+
+    static AvailabilityResult availability(LoadedModel model, AvailabilityQuery q, Progress progress) {
+        RationalMatrix g = model.generator("qchain avail");
+        List<Integer> up = model.model().upStates().orElseThrow(() ->
+            new QchainException(ErrorKey.NO_UP_STATES, "qchain avail"));
+        Availability.Figures f = Availability.of(g, up, q.hoursPerYear());
+        List<String> states = model.states();
+        Map<String, Rational> pi = new LinkedHashMap<>();
+        for (int i = 0; i < states.size(); i++) {
+            pi.put(states.get(i), f.stationary().get(i));
+        }
+        Map<String, Optional<Rational>> mttf = new LinkedHashMap<>();
+        List<String> upNames = new ArrayList<>();
+        for (int i : f.up()) {
+            upNames.add(states.get(i));
+            mttf.put(states.get(i), f.mttf().get(i));
+        }
+        String from = q.from().orElse(states.get(up.get(0)));
+        int start = model.state("--from", from);
+        List<AvailabilityResult.PointAvailability> point = new ArrayList<>();
+        if (!q.times().isEmpty()) {
+            guard(g.rows());
+        }
+        for (int k = 0; k < q.times().size(); k++) {
+            Rational t = q.times().get(k);
+            CertifiedTransient plan = CertifiedTransient.of(g, t);
+            // A(t) = sum over up states of P(start, j)(t): the sum of the enclosures encloses it
+            CertifiedDecimal[] a = Ziv.round(bits -> {
+                Enclosure[] row = plan.enclose(bits, Progress.NONE)[start];
+                Rational lo = Rational.ZERO;
+                Rational hi = Rational.ZERO;
+                for (int j : up) {
+                    lo = lo.add(row[j].lo());
+                    hi = hi.add(row[j].hi());
+                }
+                return new Enclosure[] {Enclosure.of(lo, hi.min(Rational.ONE).max(lo))};
+            }, q.digits(), CertifiedTransient.startBits(q.digits()),
+                Math.max(CertifiedTransient.startBits(q.digits()), q.maxBits()), Optional::empty);
+            point.add(new AvailabilityResult.PointAvailability(t, a[0]));
+            progress.update("times", k + 1, q.times().size());
+        }
+        return new AvailabilityResult(model.source(), upNames, states, pi, f.availability(), f.unavailability(),
+            mttf, f.meanUpTime(), f.meanDownTime(), f.failureFrequency(), f.hoursPerYear(), f.downHoursPerYear(),
+            from, point, q.digits(), List.of());
+    }
+
+    private static void guard(int n) {
+        if (n > MAX_TRANSIENT_STATES) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, "MODEL", n + " states",
+                "transient probabilities are computed for at most " + MAX_TRANSIENT_STATES + " states");
+        }
+    }
+
+    /** The row asked for, or -1 for all. */
+    private record OptionalRow(int index) {
+        static OptionalRow of(LoadedModel model, Optional<String> from) {
+            return new OptionalRow(from.map(f -> model.state("--from", f)).orElse(-1));
+        }
+    }
+}

@@ -1,0 +1,65 @@
+package org.qchain.cli;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import org.qchain.analysis.Analysis;
+import org.qchain.analysis.AvailabilityQuery;
+import org.qchain.analysis.LoadedModel;
+import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedPowers;
+import org.qchain.result.Result;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code qchain avail}: figures of merit of a repairable system. */
+@Command(name = "avail", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
+    description = {
+        "Figures of merit of a repairable system: a continuous chain whose 'up' line marks the operating states.",
+        "Exact: steady-state availability and unavailability, down hours per year, failure frequency (failures per",
+        "unit of time in the long run), mean up and down time per cycle, mean time to failure (MTTF: expected time",
+        "to first reach a down state) from each up state, and the long-run share of every state.",
+        "With -t: point availability A(t) from --from (default: the first up state) as certified decimals."})
+final class AvailCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @ParentCommand
+    QchainCommand root;
+
+    @Mixin
+    ModelOptions model;
+
+    @Option(names = {"-t", "--time"}, paramLabel = "T", converter = Converters.Times.class,
+        description = "Time(s) for the point availability A(t): T, T1,T2,... or A..B:STEP.")
+    Converters.TimeList times;
+
+    @Option(names = "--from", paramLabel = "STATE",
+        description = "Start of the point availability (default: the first state on the 'up' line).")
+    String from;
+
+    @Option(names = "--hours-per-year", paramLabel = "H", defaultValue = "8766",
+        converter = Converters.PositiveRational.class,
+        description = "Hours in a year for the down time per year (default: ${DEFAULT-VALUE}, 365.25 days;"
+            + " rates must then be per hour).")
+    Rational hoursPerYear;
+
+    @Mixin
+    OutputOptions output;
+
+    @Override
+    public Integer call() {
+        Rational h = hoursPerYear;
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
+        LoadedModel loaded = model.load();
+        AvailabilityQuery q = new AvailabilityQuery(Optional.ofNullable(from),
+            times == null ? List.of() : times.times(), h, output.digits(), CertifiedPowers.DEFAULT_MAX_BITS);
+        Result result = root.run(spec, progress -> Analysis.availability(loaded, q, progress));
+        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
+        return ExitCodes.OK;
+    }
+}

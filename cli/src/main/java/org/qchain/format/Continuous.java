@@ -1,0 +1,117 @@
+package org.qchain.format;
+
+import java.math.RoundingMode;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.qchain.exact.Decimals;
+import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedDecimal;
+import org.qchain.result.AvailabilityResult;
+import org.qchain.result.RateSensResult;
+import org.qchain.result.TransientResult;
+
+/** Phrases and tables shared by every format's layout of continuous-chain results. */
+final class Continuous {
+    /** What the hours-per-year figure says about its year. */
+    static final String YEAR_NOTE = "hours per year";
+
+    private Continuous() {
+    }
+
+    /** A bound, rounded up to 2 significant digits (it stays a bound). */
+    static String bound(Rational b) {
+        return b.isZero() ? "0" : Decimals.format(b, 2, RoundingMode.CEILING);
+    }
+
+    /** A certified value for the "matrix" of the JSON: the exact value where it is known, else its decimal. */
+    static String value(CertifiedDecimal d) {
+        return d.status() == CertifiedDecimal.Status.EXACT ? d.enclosure().lo().toString() : d.text();
+    }
+
+    /** The names of the rows shown. */
+    static List<String> rowNames(TransientResult r) {
+        return r.from().map(List::of).orElse(r.states());
+    }
+
+    /** {@code P(t)} as a grid of decimals, the first row a header. */
+    static List<List<String>> grid(TransientResult r, TransientResult.AtTime at) {
+        List<List<String>> out = new ArrayList<>();
+        List<String> head = new ArrayList<>();
+        head.add("from\\to");
+        head.addAll(r.states());
+        out.add(head);
+        List<String> names = rowNames(r);
+        for (int i = 0; i < at.rows().size(); i++) {
+            List<String> line = new ArrayList<>();
+            line.add(names.get(i));
+            at.rows().get(i).forEach(d -> line.add(d.text()));
+            out.add(line);
+        }
+        return out;
+    }
+
+    /** The sentence about the bound of one time. */
+    static String boundSentence(TransientResult.AtTime at) {
+        return "every digit shown is proven; each value's enclosure is at most " + bound(at.bound())
+            + " wide (uniformization rate " + at.uniformizationRate() + ")";
+    }
+
+    /** An exact figure that may be infinite or undefined. */
+    static String exact(Optional<Rational> v, String none) {
+        return v.map(Rational::toString).orElse(none);
+    }
+
+    static String decimal(Optional<Rational> v, String none, int digits) {
+        return v.map(x -> Text.decimal(x, digits)).orElse(none);
+    }
+
+    /**
+     * The figures of an availability result, one row each: name, exact value, decimal.
+     *
+     * @param r      the result
+     * @param digits significant digits of the decimals
+     * @return the rows
+     */
+    static List<List<String>> figures(AvailabilityResult r, int digits) {
+        List<List<String>> out = new ArrayList<>();
+        out.add(List.of("steady-state availability", r.availability().toString(), Text.decimal(r.availability(), digits)));
+        out.add(List.of("steady-state unavailability", r.unavailability().toString(),
+            Text.decimal(r.unavailability(), digits)));
+        out.add(List.of("down time per year (" + r.hoursPerYear() + " " + YEAR_NOTE + ")",
+            r.downHoursPerYear().toString(), Text.decimal(r.downHoursPerYear(), digits)));
+        out.add(List.of("failure frequency", r.failureFrequency().toString(), Text.decimal(r.failureFrequency(), digits)));
+        out.add(List.of("mean up time per cycle", exact(r.meanUpTime(), "undefined (never fails)"),
+            decimal(r.meanUpTime(), "undefined", digits)));
+        out.add(List.of("mean down time per cycle", exact(r.meanDownTime(), "undefined (never fails)"),
+            decimal(r.meanDownTime(), "undefined", digits)));
+        r.mttf().forEach((s, v) -> out.add(List.of("MTTF from " + s, exact(v, "inf"), decimal(v, "inf", digits))));
+        r.stationary().forEach((s, v) -> out.add(List.of("long-run share of " + s, v.toString(), Text.decimal(v, digits))));
+        return out;
+    }
+
+    /** The point availabilities, one row each: {@code A(t)} label, decimal (certified). */
+    static List<List<String>> points(AvailabilityResult r) {
+        List<List<String>> out = new ArrayList<>();
+        for (AvailabilityResult.PointAvailability p : r.point()) {
+            out.add(List.of("A(" + p.t() + ") from " + r.from(), p.value().text(), bound(p.value().enclosure().width())));
+        }
+        return out;
+    }
+
+    /** What a rate sensitivity is about, e.g. {@code MTTF from Both}. */
+    static String figureName(RateSensResult r) {
+        return r.figure() + r.from().map(f -> " from " + f).orElse("");
+    }
+
+    /** The rows of a rate sensitivity: name, exact value, decimal. */
+    static List<List<String>> sensRows(RateSensResult r, int digits) {
+        List<List<String>> out = new ArrayList<>();
+        String f = figureName(r);
+        out.add(List.of(f, r.value().toString(), Text.decimal(r.value(), digits)));
+        out.add(List.of("d(" + f + ")/d" + r.wrt(), r.derivative().toString(), Text.decimal(r.derivative(), digits)));
+        out.add(List.of("elasticity (" + r.wrt() + "/figure) d/d" + r.wrt(), exact(r.elasticity(), "undefined"),
+            decimal(r.elasticity(), "undefined", digits)));
+        return out;
+    }
+}

@@ -1,0 +1,246 @@
+package org.qchain.exact.linear;
+
+import java.math.BigInteger;
+import java.util.Optional;
+import org.qchain.exact.Rational;
+import org.qchain.exact.RationalMatrix;
+
+/**
+ * Exact solutions of linear systems with rational coefficients, without fractions inside the elimination.
+ *
+ * <p>Each equation (row) is first multiplied by the least common multiple of its denominators, which leaves the
+ * solution unchanged and gives an integer system. Systems with word-size entries (every Markov chain with modest
+ * denominators) go to p-adic lifting ({@link Dixon}): one LU decomposition modulo a prime that keeps a band, then
+ * word-size lifting steps and one rational reconstruction per entry. Others go to fraction-free Gauss-Jordan
+ * elimination ({@link Bareiss}), whose result is one integer matrix over one common denominator, reduced entry by
+ * entry once at the end. Both are exact; neither ever reduces a fraction during elimination.
+ *
+ * <p>Example: {@code LinearSolver.solve(a, b)} for {@code A X = B}; {@code LinearSolver.leftNullVector(p − I)} for
+ * the stationary law of an irreducible chain.
+ */
+public final class LinearSolver {
+    private LinearSolver() {
+    }
+
+    /**
+     * The solution X of {@code A X = B}.
+     *
+     * @param a square n x n matrix
+     * @param b n x m right-hand sides, one per column
+     * @return the n x m matrix X
+     * @throws IllegalArgumentException if the shapes do not fit
+     * @throws SingularSystemException  if {@code A} is singular ({@link SingularSystemException#index()} is the
+     *                                  first unknown left undetermined)
+     * @throws org.qchain.exact.QchainException with key INTERRUPTED if the calling thread is interrupted
+     */
+    public static RationalMatrix solve(RationalMatrix a, RationalMatrix b) {
+        requireSquare(a);
+        if (b.rows() != a.rows()) {
+            throw new IllegalArgumentException("right-hand side has " + b.rows() + " rows, the matrix " + a.rows());
+        }
+        int n = a.rows();
+        int m = b.cols();
+        BigInteger[][] ai = new BigInteger[n][n];
+        BigInteger[][] bi = new BigInteger[n][m];
+        for (int i = 0; i < n; i++) {
+            BigInteger l = BigInteger.ONE;
+            for (int j = 0; j < n; j++) {
+                l = lcm(l, a.get(i, j).denominator());
+            }
+            for (int j = 0; j < m; j++) {
+                l = lcm(l, b.get(i, j).denominator());
+            }
+            for (int j = 0; j < n; j++) {
+                ai[i][j] = scaled(a.get(i, j), l);
+            }
+            for (int j = 0; j < m; j++) {
+                bi[i][j] = scaled(b.get(i, j), l);
+            }
+        }
+        Bareiss.Solution s = solveInteger(ai, bi);
+        Rational[][] x = new Rational[n][m];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < m; j++) {
+                x[i][j] = Rational.of(s.numerators()[i][j], s.denominator());
+            }
+        }
+        return RationalMatrix.of(x);
+    }
+
+    /**
+     * The solution X of {@code X A = B}.
+     *
+     * @param a square n x n matrix
+     * @param b k x n right-hand sides, one per row
+     * @return the k x n matrix X
+     * @throws IllegalArgumentException if the shapes do not fit
+     * @throws SingularSystemException  if {@code A} is singular (the index is a row of {@code A})
+     */
+    public static RationalMatrix solveLeft(RationalMatrix a, RationalMatrix b) {
+        requireSquare(a);
+        if (b.cols() != a.rows()) {
+            throw new IllegalArgumentException("right-hand side has " + b.cols() + " columns, the matrix " + a.rows());
+        }
+        int n = a.rows();
+        int k = b.rows();
+        // X A = B with A = L^-1 A' (L = diag of row multipliers): Y A' = B with X = Y L; solve A'^T Y^T = B^T
+        BigInteger[] mult = new BigInteger[n];
+        Rational[][] at = new Rational[n][n];
+        for (int i = 0; i < n; i++) {
+            BigInteger l = BigInteger.ONE;
+            for (int j = 0; j < n; j++) {
+                l = lcm(l, a.get(i, j).denominator());
+            }
+            mult[i] = l;
+            for (int j = 0; j < n; j++) {
+                at[j][i] = Rational.of(scaled(a.get(i, j), l));
+            }
+        }
+        Rational[][] bt = new Rational[n][k];
+        for (int i = 0; i < n; i++) {
+            for (int r = 0; r < k; r++) {
+                bt[i][r] = b.get(r, i);
+            }
+        }
+        RationalMatrix yt = solve(RationalMatrix.of(at), RationalMatrix.of(bt));
+        Rational[][] x = new Rational[k][n];
+        for (int r = 0; r < k; r++) {
+            for (int i = 0; i < n; i++) {
+                x[r][i] = yt.get(i, r).multiply(Rational.of(mult[i]));
+            }
+        }
+        return RationalMatrix.of(x);
+    }
+
+    /**
+     * The row vector x with {@code x A = 0} and {@code x·1 = 1}, for a square matrix whose rows sum to zero (such
+     * as {@code P − I} for a transition matrix P, or a generator matrix): the stationary law when the chain is
+     * irreducible. Solved as {@code x A' = e_n}, where A' is A with its last column replaced by ones (the last
+     * column of A is minus the sum of the others, so its equation is implied).
+     *
+     * @param a square matrix with zero row sums
+     * @return x, of length n
+     * @throws IllegalArgumentException if a row does not sum to zero
+     * @throws SingularSystemException  if the solution is not unique (the null space has dimension above 1)
+     */
+    public static Rational[] leftNullVector(RationalMatrix a) {
+        requireSquare(a);
+        int n = a.rows();
+        Rational[][] e = a.toArray();
+        for (int i = 0; i < n; i++) {
+            Rational s = Rational.ZERO;
+            for (Rational x : e[i]) {
+                s = s.add(x);
+            }
+            if (!s.isZero()) {
+                throw new IllegalArgumentException("row " + i + " sums to " + s + ", not 0");
+            }
+            e[i][n - 1] = Rational.ONE;
+        }
+        Rational[][] rhs = new Rational[1][n];
+        java.util.Arrays.fill(rhs[0], Rational.ZERO);
+        rhs[0][n - 1] = Rational.ONE;
+        try {
+            return solveLeft(RationalMatrix.of(e), RationalMatrix.of(rhs)).row(0);
+        } catch (SingularSystemException ex) {
+            throw new SingularSystemException(ex.index(),
+                "the null space has dimension above 1 (more than one closed class)");
+        }
+    }
+
+    /**
+     * The determinant.
+     *
+     * @throws IllegalArgumentException if {@code a} is not square
+     */
+    public static Rational determinant(RationalMatrix a) {
+        requireSquare(a);
+        int n = a.rows();
+        BigInteger[][] ai = new BigInteger[n][n];
+        BigInteger scale = BigInteger.ONE;
+        for (int i = 0; i < n; i++) {
+            BigInteger l = BigInteger.ONE;
+            for (int j = 0; j < n; j++) {
+                l = lcm(l, a.get(i, j).denominator());
+            }
+            scale = scale.multiply(l);
+            for (int j = 0; j < n; j++) {
+                ai[i][j] = scaled(a.get(i, j), l);
+            }
+        }
+        return Rational.of(Bareiss.determinant(ai, Thread.currentThread()), scale);
+    }
+
+    /**
+     * The inverse.
+     *
+     * @throws SingularSystemException if {@code a} is singular
+     */
+    public static RationalMatrix inverse(RationalMatrix a) {
+        requireSquare(a);
+        return solve(a, RationalMatrix.identity(a.rows()));
+    }
+
+    /** Integer {@code A X = B}: p-adic lifting when the entries are word-size, Bareiss otherwise. */
+    static Bareiss.Solution solveInteger(BigInteger[][] a, BigInteger[][] b) {
+        Thread caller = Thread.currentThread();
+        int n = a.length;
+        if (b[0].length == 0) {
+            return new Bareiss.Solution(b, BigInteger.ONE);
+        }
+        Optional<long[][]> small = asLongs(a);
+        if (small.isPresent() && n >= DIXON_MIN_SIZE) {
+            Optional<Bareiss.Solution> s = Dixon.solve(small.get(), b, caller);
+            if (s.isPresent()) {
+                return s.get();
+            }
+        }
+        return Bareiss.solve(a, b, caller);
+    }
+
+    /** Below this size fraction-free elimination is as fast and simpler. */
+    static int DIXON_MIN_SIZE = 12;
+
+    private static Optional<long[][]> asLongs(BigInteger[][] a) {
+        int n = a.length;
+        long[][] out = new long[n][n];
+        long max = 0;
+        int maxNz = 0;
+        for (int i = 0; i < n; i++) {
+            int nz = 0;
+            for (int j = 0; j < n; j++) {
+                if (a[i][j].bitLength() > 62) {
+                    return Optional.empty();
+                }
+                long v = a[i][j].longValue();
+                out[i][j] = v;
+                if (v != 0) {
+                    nz++;
+                    max = Math.max(max, Math.abs(v));
+                }
+            }
+            maxNz = Math.max(maxNz, nz);
+        }
+        return Dixon.fits(max, maxNz) ? Optional.of(out) : Optional.empty();
+    }
+
+    private static BigInteger scaled(Rational x, BigInteger l) {
+        return x.isZero() ? BigInteger.ZERO : x.numerator().multiply(l.divide(x.denominator()));
+    }
+
+    private static BigInteger lcm(BigInteger x, BigInteger y) {
+        if (y.equals(BigInteger.ONE) || x.equals(y)) {
+            return x;
+        }
+        if (x.equals(BigInteger.ONE)) {
+            return y;
+        }
+        return x.divide(x.gcd(y)).multiply(y);
+    }
+
+    private static void requireSquare(RationalMatrix a) {
+        if (!a.isSquare()) {
+            throw new IllegalArgumentException("matrix is not square: " + a.rows() + "x" + a.cols());
+        }
+    }
+}
