@@ -94,7 +94,7 @@ class SensitivityTest {
             new String[][] {{"*", "a/(1 + b)"}, {"b", "*"}}, true);
         EntrySensitivity s = Sensitivity.of(RatFunMatrix.fromModel(m), 7, 0, 1, "a", SymbolicLimits.DEFAULT, x -> { });
         Map<String, Rational> base = Map.of("b", Rational.of(2, 7));
-        SweepRange range = SweepRange.parse("a=1/13:1/17:9/10");
+        SweepRange range = SweepRange.parse("a in [1/13, 9/10] by 1/17");
         List<SweepRow> rows = s.sweep(range, base);
         assertEquals(range.size(), rows.size());
         for (SweepRow r : rows) {
@@ -106,7 +106,7 @@ class SensitivityTest {
 
     @Test
     void sweepPastTheDigitLimitIsRefusedBeforeWork() {
-        SweepRange range = SweepRange.parse("a=0:1/10000:1");
+        SweepRange range = SweepRange.parse("a in [0, 1] by 1/10000");
         QchainException e = assertThrows(QchainException.class,
             () -> sens().sweep(range, Map.of("b", Rational.of(1, 5)), 1000, org.qchain.exact.Progress.NONE));
         assertEquals(ErrorKey.SWEEP_TOO_LARGE, e.key());
