@@ -213,7 +213,17 @@ final class SymbolicEngine {
         if (range.isPresent()) {
             SweepRange r = range.get();
             List<SensResult.SweepLine> lines = new ArrayList<>();
-            for (SweepRow row : s.sweep(r, others)) {
+            List<SweepRow> rows;
+            try {
+                rows = s.sweep(r, others, q.maxDigits(), progress);
+            } catch (QchainException e) {
+                if (e.key() != ErrorKey.SWEEP_TOO_LARGE) {
+                    throw e;
+                }
+                throw new QchainException(ErrorKey.SWEEP_TOO_LARGE, e.args().get(0), e.args().get(1), e.args().get(2),
+                    "; raise it with " + NumericEngine.MAX_DIGITS_OPTION + ", or sweep fewer points");
+            }
+            for (SweepRow row : rows) {
                 lines.add(new SensResult.SweepLine(row.value(), row.probability(), row.derivative()));
             }
             sweep = Optional.of(new SensResult.Sweep(r.parameter(), r.start(), r.step(), r.end(), new Point(others),
@@ -348,15 +358,12 @@ final class SymbolicEngine {
             }
             cells.add(line);
         }
-        List<ClosedResult.Eigen> eig = new ArrayList<>();
-        for (Eigenvalue e : cf.eigenvalues()) {
-            eig.add(new ClosedResult.Eigen(Formula.of(e.factor(), e.factorLatex()), e.multiplicity(), e.jordanIndex(),
-                e.kind(), e.values()));
-        }
         List<String> warnings = new ArrayList<>();
         Optional<Point> pt = point(model, cf.parameters());
         Optional<String> rateValue = Optional.empty();
         List<RootPolynomial> named = List.of();
+        List<List<String>> eigenDecimals = List.of();
+        List<RationalMatrix> limitValues = List.of();
         if (pt.isPresent()) {
             try {
                 if (!cf.parameters().isEmpty()) {
@@ -364,12 +371,21 @@ final class SymbolicEngine {
                 }
                 rateValue = Optional.of(cf.rate(pt.get().values(), q.digits()));
                 named = cf.rootPolynomials(pt.get().values(), q.digits());
+                eigenDecimals = cf.eigenvalueDecimals(pt.get().values(), q.digits());
+                limitValues = cf.longRunAt(pt.get().values());
             } catch (QchainException e) {
                 if (e.key() != ErrorKey.CLOSED_FORM_CONDITION) {
                     throw e;
                 }
                 warnings.add(e.detail());
             }
+        }
+        List<ClosedResult.Eigen> eig = new ArrayList<>();
+        for (int k = 0; k < cf.eigenvalues().size(); k++) {
+            Eigenvalue e = cf.eigenvalues().get(k);
+            eig.add(new ClosedResult.Eigen(Formula.of(e.factor(), e.factorLatex()), e.multiplicity(), e.jordanIndex(),
+                e.kind(), e.values(),
+                eigenDecimals.isEmpty() ? List.of() : eigenDecimals.get(k)));
         }
         List<ClosedResult.Roots> roots = new ArrayList<>();
         if (named.isEmpty()) {
@@ -396,16 +412,37 @@ final class SymbolicEngine {
             }
             limits.add(picked);
         }
+        List<List<List<Rational>>> values = new ArrayList<>();
+        for (RationalMatrix full : limitValues) {
+            List<List<Rational>> picked = new ArrayList<>();
+            for (int i : ri) {
+                List<Rational> r = new ArrayList<>();
+                for (int j : ci) {
+                    r.add(full.get(i, j));
+                }
+                picked.add(r);
+            }
+            values.add(picked);
+        }
         Map<String, Domain> domains = new LinkedHashMap<>();
         for (String name : cf.parameters()) {
             m.param(name).ifPresent(d -> domains.put(name, d.domain()));
         }
+        List<Point> special = new ArrayList<>();
+        for (Map<String, Rational> c : cf.specialCorners(domains)) {
+            special.add(new Point(c));
+        }
+        ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits,
+            Formula.of(lr.rate(), lr.rateLatex()), rateValue,
+            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(), lr.exactFrom(), values);
         return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, cf.conditions(),
             cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),
-            names(m, ci), cells, List.of(), eig,
-            Optional.of(new ClosedResult.LongRun(lr.period(), limits, Formula.of(lr.rate(), lr.rateLatex()),
-                rateValue)), roots,
-            pt.filter(p -> !p.isEmpty()), q.digits(), warnings);
+            names(m, ci), cells, List.of(), eig, Optional.of(longRun), roots,
+            pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()));
+    }
+
+    private static ClosedResult.Names names(org.qchain.symbolic.closed.Symbols s) {
+        return new ClosedResult.Names(s.step(), s.period(), s.variable(), s.series(), s.sequence());
     }
 
     private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Optional<Integer> row,
@@ -434,9 +471,9 @@ final class SymbolicEngine {
                 recs.add(rr);
             }
         }
-        return new ClosedResult(m.source(), q.form(), ClosedForm.N_SYMBOL, validFrom, List.of(), List.of(),
+        return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(), List.of(),
             m.states(), sf.parameters(), selection(row, col), names(m, ri), names(m, ci), cells, recs, List.of(),
-            Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of());
+            Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of(), names(sf.symbols()));
     }
 
     // --- classes, longrun, absorb --------------------------------------------------------------------------------

@@ -1,27 +1,152 @@
 package org.qchain.format;
 
+import java.util.ArrayList;
+import java.util.List;
 import org.qchain.result.ClosedResult;
+import org.qchain.result.Point;
 
 /** Phrases shared by every format's layout of closed forms. */
 final class Closed {
     private Closed() {
     }
 
-    /** What a cell is: {@code P^n(A -> B)} or {@code G(A -> B; z)}. */
+    /** What a cell is: {@code P^n(A -> B)} or {@code G(A -> B; z)}, in the result's own symbols. */
     static String label(ClosedResult r, String from, String to) {
         String arrow = from + " -> " + to;
-        return r.form() == ClosedResult.Form.GF ? "G(" + arrow + "; z)" : "P^n(" + arrow + ")";
+        return r.form() == ClosedResult.Form.GF ? "G(" + arrow + "; " + r.names().series() + ")" : pn(r) + "(" + arrow + ")";
+    }
+
+    /** {@code P^n} with the step symbol. */
+    static String pn(ClosedResult r) {
+        return "P^" + r.names().step();
     }
 
     static String what(ClosedResult r) {
+        ClosedResult.Names s = r.names();
         switch (r.form()) {
             case GF:
-                return "generating functions G(z) = sum over n of P^n z^n";
+                return "generating functions G(" + s.series() + ") = sum over " + s.step() + " of " + pn(r) + " "
+                    + s.series() + "^" + s.step();
             case RECURRENCE:
-                return "linear recurrences in n, u(n) = P^n(from -> to)";
+                return "linear recurrences in " + s.step() + ", " + s.sequence() + "(" + s.step() + ") = " + pn(r)
+                    + "(from -> to)";
             default:
-                return "closed form in n";
+                return "closed form in " + s.step();
         }
+    }
+
+    /**
+     * The symbols, when a parameter's name moved one of them away from the usual letter; empty otherwise.
+     */
+    static String symbolsNote(ClosedResult r) {
+        ClosedResult.Names s = r.names();
+        if (s.usual()) {
+            return "";
+        }
+        List<String> parts = new ArrayList<>();
+        parts.add(s.step() + " is the step count");
+        if (!r.isSeries()) {
+            parts.add(s.variable() + " the variable of det(" + s.variable() + "I - P)");
+        }
+        if (r.form() == ClosedResult.Form.GF) {
+            parts.add(s.series() + " the variable of the generating functions");
+        }
+        if (r.form() == ClosedResult.Form.RECURRENCE) {
+            parts.add(s.sequence() + " the sequence");
+        }
+        return "Symbols (chosen apart from the parameter names): " + String.join(", ", parts) + ".";
+    }
+
+    /** The heading of the long run, without the final colon. */
+    static String longRunHeading(ClosedResult r, ClosedResult.LongRun lr) {
+        String n = r.names().step();
+        String m = r.names().period();
+        String where = lr.conditions().isEmpty() ? "" : " where " + String.join(", ", lr.conditions());
+        if (!lr.periodic()) {
+            return pn(r) + " converges as " + n + " grows" + where + "; the limit";
+        }
+        return "periodic with period " + lr.period() + " (the eigenvalues of modulus 1 are roots of unity of orders"
+            + " dividing " + lr.period() + ")" + where + "; the limits of P^(" + lr.period() + m + " + r) as " + m
+            + " grows, r = 0 .. " + (lr.period() - 1);
+    }
+
+    /** The label of the k-th subsequence of a periodic chain: {@code n = 3m + 1}. */
+    static String subsequence(ClosedResult r, ClosedResult.LongRun lr, int k) {
+        return r.names().step() + " = " + subsequenceIndex(r, lr, k);
+    }
+
+    /** {@code 3m + 1}. */
+    static String subsequenceIndex(ClosedResult r, ClosedResult.LongRun lr, int k) {
+        return lr.period() + r.names().period() + " + " + k;
+    }
+
+    /** The sentences on conditions not shown and on special corners of the domains; empty if there are none. */
+    static String longRunNote(ClosedResult.LongRun lr) {
+        StringBuilder sb = new StringBuilder();
+        if (!lr.conditions().isEmpty() && lr.notProved().isEmpty()) {
+            sb.append(lr.conditions().size() == 1 ? "It always holds" : "They always hold")
+                .append(" inside the parameters' domains.");
+        }
+        if (!lr.notProved().isEmpty()) {
+            sb.append("Not shown to hold throughout the parameters' domains: ").append(String.join(", ", lr.notProved()))
+                .append('.');
+        }
+        if (!lr.special().isEmpty()) {
+            List<String> pts = new ArrayList<>();
+            for (Point p : lr.special()) {
+                pts.add(p.text());
+            }
+            sb.append(sb.length() > 0 ? " " : "").append("Special points (corners of the domains where a condition fails;"
+                + " there the chain may be periodic, or its limit or formulas differ): ").append(String.join("; ", pts))
+                .append('.');
+        }
+        return sb.toString();
+    }
+
+    /** The limits at the point as decimals, shaped like the limits; empty without a point. */
+    static List<List<List<String>>> limitDecimals(ClosedResult r, ClosedResult.LongRun lr) {
+        List<List<List<String>>> out = new ArrayList<>();
+        for (List<List<org.qchain.exact.Rational>> grid : lr.values()) {
+            List<List<String>> g = new ArrayList<>();
+            for (List<org.qchain.exact.Rational> row : grid) {
+                List<String> rr = new ArrayList<>();
+                for (org.qchain.exact.Rational v : row) {
+                    rr.add(Text.decimal(v, r.digits()));
+                }
+                g.add(rr);
+            }
+            out.add(g);
+        }
+        return out;
+    }
+
+    /** The eigenvalues' decimals when they add something to the exact values; empty otherwise. */
+    static String eigenDecimals(ClosedResult.Eigen e) {
+        if (e.decimals().isEmpty() || e.decimals().equals(e.values())) {
+            return "";
+        }
+        return String.join(", ", e.decimals());
+    }
+
+    /** Where the decimals are taken: {@code " at p=1/20, r=1/4"} or empty for a chain without parameters. */
+    static String pointNote(ClosedResult r) {
+        return r.point().map(p -> " at " + p.text()).orElse("");
+    }
+
+    /** The rate sentence: what the number means, or that the long run is reached exactly. */
+    static String rateLine(ClosedResult r, ClosedResult.LongRun lr) {
+        String n = r.names().step();
+        if (lr.exact()) {
+            return lr.periodic()
+                ? "Exact from " + n + " = " + lr.exactFrom() + ": P^(" + n + " + " + lr.period() + ") = " + pn(r)
+                    + " (no eigenvalue other than roots of unity and 0)"
+                : "Exact from " + n + " = " + lr.exactFrom() + ": " + pn(r)
+                    + " equals its limit (no eigenvalue other than 1 and 0)";
+        }
+        return lr.periodic()
+            ? "Convergence rate of each subsequence (largest modulus of the eigenvalues that are not roots of unity): "
+                + lr.rate().plain()
+            : "Convergence rate (second-largest eigenvalue modulus): " + lr.rate().plain();
     }
 
     /** Whether the conditions are known to hold inside the parameters' domains; empty without conditions. */

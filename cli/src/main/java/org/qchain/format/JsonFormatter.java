@@ -246,7 +246,7 @@ final class JsonFormatter extends Layout {
             j.strings("conditions_not_proved", r.notProved());
         }
         if (r.form() == ClosedResult.Form.GF) {
-            j.string("variable", "z");
+            j.string("variable", r.names().series());
         }
         if (r.form() == ClosedResult.Form.RECURRENCE) {
             List<Object[]> items = new ArrayList<>();
@@ -265,7 +265,7 @@ final class JsonFormatter extends Layout {
         if (!r.isSeries()) {
             j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor().plain())
                 .number("multiplicity", e.multiplicity()).number("jordan_index", e.jordanIndex())
-                .string("kind", e.kind()).strings("values", e.values()));
+                .string("kind", e.kind()).strings("values", e.values()).strings("decimals", e.decimals()));
             j.objects("root_polynomials", r.roots(), rt -> Json.object().string("name", rt.name())
                 .string("polynomial", rt.polynomial().plain()).strings("roots", rt.roots()));
             r.longRun().ifPresent(lr -> {
@@ -274,27 +274,50 @@ final class JsonFormatter extends Layout {
                     rs.add(k);
                 }
                 Json l = Json.object().number("period", lr.period())
-                    .objects("limits", rs, k -> limitJson(r, k, lr.limits().get(k)))
+                    .objects("limits", rs, k -> limitJson(r, k, lr.limits().get(k), Closed.limitDecimals(r, lr)))
                     .string("rate", lr.rate().plain());
                 lr.rateValue().ifPresent(v -> l.string("rate_value", v));
+                List<String> special = new ArrayList<>();
+                for (org.qchain.result.Point p : lr.special()) {
+                    special.add(p.text());
+                }
+                l.string("rate_of", lr.periodic() ? "subsequences" : "powers").bool("exact", lr.exact())
+                    .number("exact_from", lr.exactFrom()).strings("conditions", lr.conditions())
+                    .strings("conditions_not_proved", lr.notProved()).strings("special_points", special);
                 j.object("long_run", l);
             });
             r.point().ifPresent(p -> j.string("at", p.text()));
         }
+        ClosedResult.Names names = r.names();
         j.string("kind", "discrete").string("model", r.source()).number("digits", r.digits())
-            .strings("warnings", r.warnings());
+            .strings("warnings", r.warnings())
+            .object("symbols", Json.object().string("step", names.step()).string("period", names.period())
+                .string("variable", names.variable()).string("series", names.series())
+                .string("sequence", names.sequence()));
         return j.close() + "\n";
     }
 
-    private static Json limitJson(ClosedResult r, int k, List<List<String>> grid) {
+    private static Json limitJson(ClosedResult r, int k, List<List<String>> grid, List<List<List<String>>> dec) {
         Json l = Json.object().number("r", k);
         switch (r.selection()) {
             case ENTRY:
-                return l.string("formula", grid.get(0).get(0));
+                l.string("formula", grid.get(0).get(0));
+                if (!dec.isEmpty()) {
+                    l.string("decimal", dec.get(k).get(0).get(0));
+                }
+                return l;
             case ROW:
-                return l.strings("row", grid.get(0));
+                l.strings("row", grid.get(0));
+                if (!dec.isEmpty()) {
+                    l.strings("decimals", dec.get(k).get(0));
+                }
+                return l;
             default:
-                return l.stringRows("matrix", grid);
+                l.stringRows("matrix", grid);
+                if (!dec.isEmpty()) {
+                    l.stringRows("decimals", dec.get(k));
+                }
+                return l;
         }
     }
 

@@ -198,25 +198,66 @@ final class LatexFormatter extends Layout {
 
     // --- closed ------------------------------------------------------------------------------------------------
 
+    /** The longest run of a formula on one line of an {@code align*} before it is broken. */
+    static final int LINE = 100;
+
+    /**
+     * A long formula broken over lines of the surrounding {@code align*}: before a top-level {@code +} or {@code -}
+     * (outside every brace group and {@code \\left ... \\right} pair, so each line is valid TeX) once the line is
+     * longer than {@link #LINE} characters; the continuation lines start {@code &\\quad}.
+     */
+    static String broken(String tex) {
+        StringBuilder out = new StringBuilder();
+        int depth = 0;
+        int lineStart = 0;
+        for (int i = 0; i < tex.length(); i++) {
+            char c = tex.charAt(i);
+            if (c == '{') {
+                depth++;
+            } else if (c == '}') {
+                depth--;
+            } else if (tex.startsWith("\\left", i)) {
+                depth++;
+            } else if (tex.startsWith("\\right", i)) {
+                depth--;
+            }
+            boolean op = depth == 0 && i > 0 && (c == '+' || c == '-') && tex.charAt(i - 1) == ' '
+                && i + 1 < tex.length() && tex.charAt(i + 1) == ' ';
+            if (op && out.length() - lineStart > LINE) {
+                // drop the space before the operator, break, and continue the line with the operator
+                out.setLength(out.length() - 1);
+                out.append(" \\\\\n&\\quad ");
+                lineStart = out.length();
+            }
+            out.append(c);
+        }
+        return out.toString();
+    }
+
     @Override
     public String closed(ClosedResult r) {
         StringBuilder sb = new StringBuilder();
-        sb.append("% P^n for ").append(Text.comment(r.source())).append(" (discrete chain): ").append(Closed.what(r))
+        sb.append("% ").append(Closed.pn(r)).append(" for ").append(Text.comment(r.source())).append(" (discrete chain): ").append(Closed.what(r))
             .append('\n');
         if (!r.isSeries()) {
-            sb.append("% valid for n >= ").append(r.validFrom());
+            sb.append("% valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
                 sb.append(" where ").append(String.join(", ", r.conditions())).append('.');
             }
             sb.append(Closed.domainNote(r)).append('\n');
+        }
+        if (!Closed.symbolsNote(r).isEmpty()) {
+            sb.append("% ").append(Closed.symbolsNote(r)).append('\n');
         }
         sb.append("\\begin{align*}\n");
         List<String> lines = new ArrayList<>();
         for (int i = 0; i < r.rows().size(); i++) {
             for (int j = 0; j < r.cols().size(); j++) {
                 String idx = "\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.cols().get(j)) + "}";
-                String lhs = r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(z)" : "P^{n}_{" + idx + "}";
-                String rhs = r.cells().get(i).get(j).latex();
+                String lhs = r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(" + r.names().series() + ")"
+                    : "P^{" + r.names().step() + "}_{" + idx + "}";
+                String rhs = r.form() == ClosedResult.Form.RECURRENCE ? r.cells().get(i).get(j).latex()
+                    : broken(r.cells().get(i).get(j).latex());
                 lines.add(r.form() == ClosedResult.Form.RECURRENCE ? "&" + lhs + ":\\; " + rhs : lhs + " &= " + rhs);
             }
         }
@@ -228,8 +269,15 @@ final class LatexFormatter extends Layout {
             }
             sb.append('\n');
         }
-        r.longRun().ifPresent(lr -> sb.append("% long run: period ").append(lr.period()).append("; rate ")
-            .append(lr.rate().plain()).append(lr.rateValue().map(v -> " = " + v).orElse("")).append('\n'));
+        r.longRun().ifPresent(lr -> {
+            sb.append("% long run: ").append(Text.comment(Closed.longRunHeading(r, lr))).append('\n');
+            String note = Closed.longRunNote(lr);
+            if (!note.isEmpty()) {
+                sb.append("% ").append(Text.comment(note)).append('\n');
+            }
+            sb.append("% ").append(Text.comment(Closed.rateLine(r, lr)))
+                .append(lr.exact() ? "" : lr.rateValue().map(v -> " = " + v).orElse("")).append('\n');
+        });
         return caution(sb);
     }
 

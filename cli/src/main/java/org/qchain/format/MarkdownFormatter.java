@@ -208,9 +208,10 @@ final class MarkdownFormatter extends Layout {
     @Override
     public String closed(ClosedResult r) {
         StringBuilder sb = new StringBuilder();
-        sb.append("**P^n** for `").append(Text.code(r.source())).append("` (discrete chain): ").append(Closed.what(r));
+        sb.append("**").append(Closed.pn(r)).append("** for `").append(Text.code(r.source()))
+            .append("` (discrete chain): ").append(Closed.what(r));
         if (!r.isSeries()) {
-            sb.append("; valid for n ≥ ").append(r.validFrom());
+            sb.append("; valid for ").append(r.names().step()).append(" ≥ ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
                 List<String> c = new ArrayList<>();
                 for (String s : r.conditions()) {
@@ -219,9 +220,13 @@ final class MarkdownFormatter extends Layout {
                 sb.append(" where ").append(String.join(", ", c));
             }
         }
-        sb.append('.').append(Closed.domainNote(r)).append("\n\n");
-        sb.append("| from | to | ").append(r.form() == ClosedResult.Form.GF ? "G(z)"
-                : (r.form() == ClosedResult.Form.RECURRENCE ? "recurrence" : "P^n"))
+        sb.append('.').append(Closed.domainNote(r));
+        if (!Closed.symbolsNote(r).isEmpty()) {
+            sb.append(' ').append(Closed.symbolsNote(r));
+        }
+        sb.append("\n\n");
+        sb.append("| from | to | ").append(r.form() == ClosedResult.Form.GF ? "G(" + r.names().series() + ")"
+                : (r.form() == ClosedResult.Form.RECURRENCE ? "recurrence" : Closed.pn(r)))
             .append(" |\n| --- | --- | --- |\n");
         for (int i = 0; i < r.rows().size(); i++) {
             for (int j = 0; j < r.cols().size(); j++) {
@@ -252,26 +257,29 @@ final class MarkdownFormatter extends Layout {
             }
         }
         r.longRun().ifPresent(lr -> {
-            boolean periodic = lr.period() > 1;
-            sb.append("\nLong run: ").append(periodic
-                ? "periodic with period " + lr.period() + "; the limits of P^(" + lr.period() + "m + r)"
-                : "P^n converges as n grows; its limit:");
-            sb.append(periodic ? ":\n\n| " : "\n\n| ").append(periodic ? "r | " : "")
+            boolean periodic = lr.periodic();
+            sb.append("\nLong run: ").append(Text.markdown(Closed.longRunHeading(r, lr))).append(":\n\n| ")
+                .append(periodic ? r.names().step() + " | " : "")
                 .append("from | to | limit |\n| ").append(periodic ? "--- | " : "").append("--- | --- | --- |\n");
             for (int k = 0; k < lr.limits().size(); k++) {
                 for (int i = 0; i < r.rows().size(); i++) {
                     for (int j = 0; j < r.cols().size(); j++) {
-                        sb.append("| ").append(periodic ? k + " | " : "")
+                        sb.append("| ").append(periodic ? Text.markdown(Closed.subsequenceIndex(r, lr, k)) + " | " : "")
                             .append(Text.markdown(r.rows().get(i))).append(" | ")
                             .append(Text.markdown(r.cols().get(j))).append(" | `")
                             .append(Text.code(lr.limits().get(k).get(i).get(j))).append("` |\n");
                     }
                 }
             }
-            sb.append("\nConvergence rate (second-largest eigenvalue modulus): `").append(Text.code(lr.rate().plain()))
-                .append('`');
-            lr.rateValue().ifPresent(v -> sb.append(" = ").append(v)
-                .append(r.point().map(p -> " at " + p.text()).orElse("")));
+            String note = Closed.longRunNote(lr);
+            if (!note.isEmpty()) {
+                sb.append('\n').append(Text.markdown(note)).append('\n');
+            }
+            sb.append('\n').append(Text.markdown(Closed.rateLine(r, lr)));
+            if (!lr.exact()) {
+                lr.rateValue().ifPresent(v -> sb.append(" = ").append(v)
+                    .append(r.point().map(p -> " at " + p.text()).orElse("")));
+            }
             sb.append(".\n");
         });
         return caution(sb);

@@ -310,21 +310,26 @@ final class TextFormatter extends Layout {
     @Override
     public String closed(ClosedResult r) {
         StringBuilder sb = new StringBuilder();
-        sb.append("P^n for ").append(r.source()).append(" (discrete chain): ").append(Closed.what(r)).append('\n');
+        sb.append(Closed.pn(r)).append(" for ").append(r.source()).append(" (discrete chain): ").append(Closed.what(r))
+            .append('\n');
         if (!r.isSeries()) {
-            sb.append("Valid for n >= ").append(r.validFrom());
+            sb.append("Valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
                 sb.append(" where ").append(String.join(", ", r.conditions()));
             }
             sb.append('.');
             sb.append(Closed.domainNote(r));
             if (r.validFrom() > 0) {
-                sb.append(" For smaller n (eigenvalue 0), qchain step gives P^n exactly.");
+                sb.append(" For smaller ").append(r.names().step()).append(" (eigenvalue 0), qchain step gives ")
+                    .append(Closed.pn(r)).append(" exactly.");
             }
             sb.append('\n');
         }
         if (!r.parameters().isEmpty()) {
             sb.append("Parameters (symbolic): ").append(String.join(", ", r.parameters())).append('\n');
+        }
+        if (!Closed.symbolsNote(r).isEmpty()) {
+            sb.append(Closed.symbolsNote(r)).append('\n');
         }
         sb.append('\n');
         List<String> labels = new ArrayList<>();
@@ -337,16 +342,24 @@ final class TextFormatter extends Layout {
         }
         aligned(sb, labels, r.form() == ClosedResult.Form.RECURRENCE ? ": " : " = ", values, "");
         if (!r.eigenvalues().isEmpty()) {
-            sb.append("\nEigenvalues, by irreducible factor of det(xI - P):\n");
+            sb.append("\nEigenvalues, by irreducible factor of det(").append(r.names().variable()).append("I - P):\n");
             List<String> facts = new ArrayList<>();
             List<String> vals = new ArrayList<>();
+            boolean decimals = false;
             for (ClosedResult.Eigen e : r.eigenvalues()) {
                 facts.add(e.factor().plain() + ":");
                 String extra = e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() : "";
                 extra += e.jordanIndex() > 1 ? ", Jordan block of size " + e.jordanIndex() : "";
-                vals.add(String.join(", ", e.values()) + (extra.isEmpty() ? "" : extra + ")"));
+                String dec = Closed.eigenDecimals(e);
+                decimals |= !dec.isEmpty();
+                vals.add(String.join(", ", e.values()) + (extra.isEmpty() ? "" : extra + ")")
+                    + (dec.isEmpty() ? "" : "  ≈ " + dec));
             }
             aligned(sb, facts, " ", vals, "  ");
+            if (decimals) {
+                sb.append("  (≈: decimals").append(Closed.pointNote(r)).append(", ").append(r.digits())
+                    .append(" significant digits)\n");
+            }
         }
         for (ClosedResult.Roots rt : r.roots()) {
             sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial().plain());
@@ -359,38 +372,70 @@ final class TextFormatter extends Layout {
         return end(sb);
     }
 
+    /** The widest label that is still padded to align the column after it. */
+    private static final int MAX_PAD = 40;
+
     private static void longRun(StringBuilder sb, ClosedResult r, ClosedResult.LongRun lr) {
-        sb.append('\n');
-        if (lr.period() == 1) {
-            sb.append("Long run: P^n converges as n grows; the limit:\n");
-        } else {
-            sb.append("Long run: periodic with period ").append(lr.period())
-                .append("; the limits of P^(").append(lr.period()).append("m + r) as m grows:\n");
-        }
+        sb.append('\n').append("Long run: ").append(Closed.longRunHeading(r, lr)).append(":\n");
+        List<List<List<String>>> dec = Closed.limitDecimals(r, lr);
+        boolean shown = false;
         for (int k = 0; k < lr.limits().size(); k++) {
             List<String> labels = new ArrayList<>();
             List<String> values = new ArrayList<>();
+            List<String> approx = new ArrayList<>();
             for (int i = 0; i < r.rows().size(); i++) {
                 for (int j = 0; j < r.cols().size(); j++) {
-                    labels.add((lr.period() > 1 ? "r = " + k + ": " : "") + r.rows().get(i) + " -> " + r.cols().get(j));
-                    values.add(lr.limits().get(k).get(i).get(j));
+                    labels.add((lr.periodic() ? Closed.subsequence(r, lr, k) + ": " : "") + r.rows().get(i) + " -> "
+                        + r.cols().get(j));
+                    String exact = lr.limits().get(k).get(i).get(j);
+                    values.add(exact);
+                    String d = dec.isEmpty() ? "" : dec.get(k).get(i).get(j);
+                    approx.add(d.isEmpty() || d.equals(exact) ? "" : "  ≈ " + d);
+                    shown |= !approx.get(approx.size() - 1).isEmpty();
                 }
             }
-            aligned(sb, labels, "  ", values, "  ");
+            if (approx.stream().allMatch(String::isEmpty)) {
+                aligned(sb, labels, "  ", values, "  ");
+            } else {
+                List<String> padded = new ArrayList<>();
+                int w = 0;
+                for (String v : values) {
+                    w = Math.max(w, v.length());
+                }
+                for (int t = 0; t < values.size(); t++) {
+                    String v = values.get(t);
+                    padded.add(approx.get(t).isEmpty() ? v : v + " ".repeat(w - v.length()) + approx.get(t));
+                }
+                aligned(sb, labels, "  ", padded, "  ");
+            }
         }
-        sb.append("Convergence rate (second-largest eigenvalue modulus): ").append(lr.rate().plain()).append('\n');
-        lr.rateValue().ifPresent(v -> sb.append("  = ").append(v)
-            .append(r.point().map(p -> " at " + p.text()).orElse("")).append(" (").append(r.digits())
-            .append(" significant digits)\n"));
+        if (shown) {
+            sb.append("  (≈: decimals").append(Closed.pointNote(r)).append(", ").append(r.digits())
+                .append(" significant digits)\n");
+        }
+        String note = Closed.longRunNote(lr);
+        if (!note.isEmpty()) {
+            sb.append(note).append('\n');
+        }
+        sb.append(Closed.rateLine(r, lr)).append('\n');
+        if (!lr.exact()) {
+            lr.rateValue().ifPresent(v -> sb.append("  = ").append(v)
+                .append(r.point().map(p -> " at " + p.text()).orElse("")).append(" (").append(r.digits())
+                .append(" significant digits)\n"));
+        }
     }
 
+    /** Labels padded to one width, unless one is longer than {@link #MAX_PAD}: then a single separator each. */
     private static void aligned(StringBuilder sb, List<String> left, String sep, List<String> right, String indent) {
         int w = 0;
         for (String l : left) {
             w = Math.max(w, l.length());
         }
+        if (w > MAX_PAD) {
+            w = 0;
+        }
         for (int i = 0; i < left.size(); i++) {
-            sb.append(indent).append(left.get(i)).append(" ".repeat(w - left.get(i).length())).append(sep)
+            sb.append(indent).append(left.get(i)).append(" ".repeat(Math.max(0, w - left.get(i).length()))).append(sep)
                 .append(right.get(i)).append('\n');
         }
     }

@@ -2,6 +2,7 @@ package org.qchain.result;
 
 import java.util.List;
 import java.util.Optional;
+import org.qchain.exact.Rational;
 
 /**
  * P^n (the whole matrix, one row or one entry) as formulas in a symbolic n and the free parameters, or their
@@ -31,12 +32,14 @@ import java.util.Optional;
  * @param point       the parameter values used for numeric values, if complete and not empty
  * @param digits      significant digits of numeric values
  * @param warnings    warnings
+ * @param names       the symbols the formulas use for their own quantities (none is a parameter's name)
  */
 public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
                            List<String> notProved, List<String> states, List<String> parameters, Selection selection,
                            List<String> rows, List<String> cols, List<List<Formula>> cells,
                            List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
-                           List<Roots> roots, Optional<Point> point, int digits, List<String> warnings)
+                           List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
+                           Names names)
     implements Result {
 
     /** Copies the lists. */
@@ -52,6 +55,35 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
         eigenvalues = List.copyOf(eigenvalues);
         roots = List.copyOf(roots);
         warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * The symbols of the formulas, chosen so that none is the name of a parameter.
+     *
+     * @param step     the step count ({@code n} unless a parameter has that name)
+     * @param period   the index of the subsequences P^(dm + r) of a periodic chain ({@code m})
+     * @param variable the variable of the characteristic polynomial ({@code x})
+     * @param series   the variable of the generating functions ({@code z})
+     * @param sequence the sequence name of recurrences ({@code u})
+     */
+    public record Names(String step, String period, String variable, String series, String sequence) {
+        /** The usual symbols. */
+        public static final Names DEFAULT = new Names("n", "m", "x", "z", "u");
+
+        /** Whether every symbol is the usual one. */
+        public boolean usual() {
+            return equals(DEFAULT);
+        }
+    }
+
+    /** As the canonical constructor with the usual symbols ({@link Names#DEFAULT}). */
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
+                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+                        List<String> rows, List<String> cols, List<List<Formula>> cells,
+                        List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
+                        List<Roots> roots, Optional<Point> point, int digits, List<String> warnings) {
+        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+            recurrences, eigenvalues, longRun, roots, point, digits, warnings, Names.DEFAULT);
     }
 
     /** Whether a series form (generating function or recurrence) is printed. */
@@ -113,26 +145,61 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param jordanIndex  the size of the largest Jordan block of each eigenvalue of the factor (1: none)
      * @param kind         {@code rational}, {@code quadratic} or {@code roots}
      * @param values       the eigenvalues as formulas
+     * @param decimals     the eigenvalues at the point, as decimals to {@code digits}; empty without a point
      */
-    public record Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<String> values) {
-        /** Copies the list. */
+    public record Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<String> values,
+                        List<String> decimals) {
+        /** Copies the lists. */
         public Eigen {
             values = List.copyOf(values);
+            decimals = List.copyOf(decimals);
+        }
+
+        /** Without decimals. */
+        public Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<String> values) {
+            this(factor, multiplicity, jordanIndex, kind, values, List.of());
         }
     }
 
     /**
      * The long run, restricted to the printed cells.
      *
-     * @param period    d; 1 when P^n converges
-     * @param limits    d grids shaped like {@code cells}: the limit of P^(dm + r) for r = 0 .. d - 1
-     * @param rate      the second-largest eigenvalue modulus as a formula
-     * @param rateValue its value at the point, to {@code digits}, when the point is known
+     * @param period     d; 1 when P^n converges
+     * @param limits     d grids shaped like {@code cells}: the limit of P^(dm + r) for r = 0 .. d - 1
+     * @param rate       the largest modulus of the eigenvalues that are neither roots of unity nor 0, as a formula:
+     *                   with d = 1 the second-largest eigenvalue modulus; with d &gt; 1 the rate of each subsequence
+     *                   P^(dm + r) (the second-largest modulus of P itself is then 1)
+     * @param rateValue  its value at the point, to {@code digits}, when the point is known
+     * @param conditions the conditions on the parameters under which this long run holds (no eigenvalue becomes a
+     *                   root of unity)
+     * @param notProved  those of {@code conditions} not shown to hold throughout the parameters' domains
+     * @param special    corners of the parameters' box where a condition (of the formulas or the long run) fails
+     * @param exact      whether no other eigenvalue than roots of unity and 0 exists: P^n (or each subsequence) equals
+     *                   its limit from n = {@code exactFrom} on
+     * @param exactFrom  see {@code exact}
+     * @param values     the limits at the point, exactly, shaped like {@code limits}; empty without a point
      */
-    public record LongRun(int period, List<List<List<String>>> limits, Formula rate, Optional<String> rateValue) {
+    public record LongRun(int period, List<List<List<String>>> limits, Formula rate, Optional<String> rateValue,
+                          List<String> conditions, List<String> notProved, List<Point> special, boolean exact,
+                          int exactFrom, List<List<List<Rational>>> values) {
         /** Copies the lists. */
         public LongRun {
             limits = limits.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
+            values = values.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
+            conditions = List.copyOf(conditions);
+            notProved = List.copyOf(notProved);
+            special = List.copyOf(special);
+        }
+
+        /** Without conditions, special points or values (a rate of {@code 0} means exact from n = 0). */
+        public LongRun(int period, List<List<List<String>>> limits, Formula rate, Optional<String> rateValue) {
+            this(period, limits, rate, rateValue, List.of(), List.of(), List.of(), rate.plain().equals("0"), 0,
+                List.of());
+        }
+
+        /** Whether P^n is periodic for generic parameter values. */
+        public boolean periodic() {
+            return period > 1;
         }
     }
 

@@ -48,6 +48,11 @@ class ClosedCommandTest {
         // numeric chains: a Jordan block (binomial terms) and a period-2 chain
         out.add(new Case("jordan.json", List.of(Cli.model("closed-jordan.chain"), "--format", "json")));
         out.add(new Case("periodic.txt", List.of(Cli.model("closed-periodic.chain"))));
+        // regression (issue 8): parameters named n and x move the formulas' symbols; closed domains with a
+        // periodic corner (n = x = 1) state the long run's condition and the special points
+        out.add(new Case("names.txt", List.of(Cli.model("closed-names.chain"))));
+        out.add(new Case("names.json", List.of(Cli.model("closed-names.chain"), "--form", "gf", "--from", "Running",
+            "--to", "Broken", "--format", "json")));
         // an irreducible quadratic factor (square roots) in every format, and a named cubic with numeric roots
         for (String f : new String[] {"text", "json", "markdown", "latex"}) {
             String ext = f.equals("text") ? "txt" : f.equals("markdown") ? "md" : f.equals("latex") ? "tex" : f;

@@ -91,6 +91,17 @@ class SymbolicCommandsTest {
     }
 
     @Test
+    void sweepPastTheDigitLimitIsRefusedWithTheEstimateAndTheOption() {
+        // regression (issue 8): a 10,001-point sweep ran past 60 s with no estimate; the estimate comes first now
+        Cli.Result r = Cli.run("sens", FREE, "-n", "20", "--from", "Up", "--to", "Down", "--wrt", "p", "--at", "r=1/4",
+            "--sweep", "p in [0, 1/2] by 1/20000", "--max-digits", "100000");
+        assertEquals(2, r.code(), r::toString);
+        assertTrue(r.err().matches("qchain: the sweep would compute about \\d+ digits of exact values at 10001 points,"
+            + " more than the limit 100000; raise it with --max-digits, or sweep fewer points\n"), r.err());
+        assertEquals("", r.out());
+    }
+
+    @Test
     void valuesAtThePointEqualTheExactModulesNumericStep() {
         // the same chain with the point as nominal values goes the numeric path: the exact values must agree
         for (int n : new int[] {1, 4, 9}) {

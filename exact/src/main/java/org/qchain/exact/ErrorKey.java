@@ -163,7 +163,11 @@ public enum ErrorKey implements MessageKey {
 
     // --- long run and absorption (appended) ---
     /** {0}: what cannot be computed, {1}: why. */
-    NOT_APPLICABLE("{0}: {1}");
+    NOT_APPLICABLE("{0}: {1}"),
+
+    // --- closed forms and sweeps: guards (issue 8) -------------------------------------------------------------
+    /** {0}: estimated digits of the exact values, {1}: points, {2}: the limit, {3}: how to raise it (may be empty). */
+    SWEEP_TOO_LARGE("the sweep would compute about {0} digits of exact values at {1} points, more than the limit {2}{3}");
 
     private final String pattern;
 

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import org.qchain.exact.Rational;
 import org.qchain.exact.model.Domain;
+import org.qchain.symbolic.BoxSign;
 import org.qchain.symbolic.Poly;
 import org.qchain.symbolic.RatFun;
 
@@ -23,6 +24,9 @@ final class RangeProver {
             return c.signum() >= 0 ? Verdict.holds() : Verdict.fails(Map.of(), "everywhere");
         }
         List<String> ringVars = g.ring().variables();
+        if (bernsteinProof(g, vars, domains)) {
+            return Verdict.holds();
+        }
         int k = ringVars.size();
         Interval[] box = new Interval[k];
         for (int i = 0; i < k; i++) {
@@ -66,6 +70,43 @@ final class RangeProver {
             return Verdict.holds(); // extremes of a multilinear polynomial over a box are at its corners
         }
         return bisect(g, vars, box);
+    }
+
+    /**
+     * The sign proof of {@link BoxSign} (Bernstein coefficients with subdivision, unbounded domains mapped onto
+     * bounded ones): the denominator's sign is fixed throughout the domains and the numerator times that sign is
+     * at least 0 on their closure.
+     */
+    private static boolean bernsteinProof(RatFun g, List<String> vars, Map<String, Domain> domains) {
+        List<Domain> doms = new ArrayList<>();
+        for (String v : vars) {
+            doms.add(domains.get(v));
+        }
+        Map<List<Integer>, Rational> num = terms(g.numerator(), vars, g.ring().variables());
+        Map<List<Integer>, Rational> den = terms(g.denominator(), vars, g.ring().variables());
+        if (BoxSign.positive(den, doms)) {
+            return BoxSign.nonNegative(num, doms);
+        }
+        Map<List<Integer>, Rational> negDen = new java.util.HashMap<>();
+        den.forEach((e, c) -> negDen.put(e, c.negate()));
+        if (BoxSign.positive(negDen, doms)) {
+            Map<List<Integer>, Rational> negNum = new java.util.HashMap<>();
+            num.forEach((e, c) -> negNum.put(e, c.negate()));
+            return BoxSign.nonNegative(negNum, doms);
+        }
+        return false;
+    }
+
+    private static Map<List<Integer>, Rational> terms(Poly p, List<String> vars, List<String> ringVars) {
+        Map<List<Integer>, Rational> out = new java.util.HashMap<>();
+        for (Poly.Term t : p.terms()) {
+            List<Integer> e = new ArrayList<>();
+            for (String v : vars) {
+                e.add(t.exponents().get(ringVars.indexOf(v)));
+            }
+            out.merge(e, t.coefficient(), Rational::add);
+        }
+        return out;
     }
 
     private static boolean multilinear(Poly p, List<String> vars) {

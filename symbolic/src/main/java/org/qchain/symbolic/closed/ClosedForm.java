@@ -31,7 +31,7 @@ import org.qchain.symbolic.RatFunMatrix;
  * every entry of {@link #conditions()} holds; {@link #evaluate(long, Map)} checks both.
  */
 public final class ClosedForm {
-    /** The symbol of the step count in every formula. */
+    /** The usual symbol of the step count; {@link #symbols()} has the one a closed form uses. */
     public static final String N_SYMBOL = "n";
 
     private final ParamField field;
@@ -47,11 +47,22 @@ public final class ClosedForm {
     private final List<GenPolynomial<BigRational>> conditionPolys;
     private final List<String> conditions;
     private final List<Eigenvalue> eigenvalues;
+    private final Symbols symbols;
+    /** The step count as a formula. */
+    private final Fml n;
 
     ClosedForm(Series series, List<String> states, Progress progress) {
         this.field = series.field;
         this.ring = series.ring;
+        this.symbols = Symbols.avoiding(series.field.names);
+        this.n = Fml.name(symbols.step());
         this.spectral = Spectral.of(series, progress);
+        int named = 1;
+        for (Spectral.Group g : spectral.groups) {
+            if (g.kind == Spectral.Kind.ROOTS) {
+                g.name = symbols.factor(named++);
+            }
+        }
         this.seriesForm = new SeriesForm(series, states);
         this.states = List.copyOf(states);
         this.size = spectral.series.size;
@@ -91,8 +102,6 @@ public final class ClosedForm {
 
     // --- the formulas ------------------------------------------------------------------------------------------
 
-    private static final Fml N = Fml.name(N_SYMBOL);
-
     private Fml buildFormula(int i, int j) {
         List<Fml> terms = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
@@ -117,7 +126,7 @@ public final class ClosedForm {
                     // lambda^n and the coefficient N_k / lambda^k; a parametric one keeps lambda^(n-k), which
                     // needs no condition lambda != 0
                     boolean constant = ParamField.isConstant(g.lambda);
-                    Fml exponent = constant ? N : shifted(-k);
+                    Fml exponent = constant ? n : shifted(-k);
                     Quotient<BigRational> coef = constant && k > 0 ? c.divide(ParamField.power(g.lambda, k)) : c;
                     Fml power = g.lambda.isONE() ? Fml.ONE : Fml.pow(field.formula(g.lambda), exponent);
                     terms.add(Fml.prod(List.of(field.formula(coef), binom, power)));
@@ -157,13 +166,13 @@ public final class ClosedForm {
     }
 
     /** {@code binomial(n, k)}, written 1 for k = 0 and n for k = 1. */
-    private static Fml binomial(int k) {
-        return k == 0 ? Fml.ONE : (k == 1 ? N : Fml.call("binomial", N, Fml.integer(k)));
+    private Fml binomial(int k) {
+        return k == 0 ? Fml.ONE : (k == 1 ? n : Fml.call("binomial", n, Fml.integer(k)));
     }
 
     /** {@code n + d}. */
-    private static Fml shifted(int d) {
-        return d == 0 ? N : Fml.sum(N, Fml.integer(d));
+    private Fml shifted(int d) {
+        return d == 0 ? n : Fml.sum(n, Fml.integer(d));
     }
 
     // --- conditions --------------------------------------------------------------------------------------------
@@ -231,7 +240,8 @@ public final class ClosedForm {
         for (Spectral.Group g : spectral.groups) {
             // a linear factor reads x - (lambda), the way its eigenvalue is printed
             Fml f = g.kind == Spectral.Kind.LINEAR && !g.lambda.isZERO()
-                ? Fml.sum(Fml.name("x"), Fml.neg(field.formula(g.lambda))) : field.formula(g.factor, "x");
+                ? Fml.sum(Fml.name(symbols.variable()), Fml.neg(field.formula(g.lambda)))
+                : field.formula(g.factor, symbols.variable());
             List<String> values = new ArrayList<>();
             String kind;
             if (g.kind == Spectral.Kind.LINEAR) {
@@ -263,9 +273,14 @@ public final class ClosedForm {
 
     // --- public API --------------------------------------------------------------------------------------------
 
-    /** The symbol of the step count, {@code n}. */
+    /** The symbol of the step count: {@code n} unless a parameter has that name (see {@link #symbols()}). */
     public String nSymbol() {
-        return N_SYMBOL;
+        return symbols.step();
+    }
+
+    /** The names the formulas use for their own quantities, none of them a parameter's name. */
+    public Symbols symbols() {
+        return symbols;
     }
 
     /** The state names; their order fixes rows and columns. */
@@ -549,8 +564,12 @@ public final class ClosedForm {
     // --- long run ----------------------------------------------------------------------------------------------
 
     /**
-     * The long-run behaviour: period, limits of the subsequences, and the convergence rate. It assumes parameter
-     * values inside their domains, where the zero pattern of P (and so every period) is that of generic values.
+     * The long-run behaviour: period, limits of the subsequences, the convergence rate, and the conditions on the
+     * parameters under which this behaviour holds. The period and limits are those of generic parameter values: at
+     * a special point where an eigenvalue that is generically inside the unit circle becomes a root of unity (for
+     * example 1 - p - r = -1 at p = r = 1), the chain is periodic there, or its limit differs; {@link
+     * LongRun#conditions()} excludes these points and {@link #longRunNotProved(Map)} tells whether any lies inside
+     * the domains.
      */
     public LongRun longRun() {
         int d = 1;
@@ -580,7 +599,222 @@ public final class ClosedForm {
             limits.add(plainMatrix(m));
         }
         Fml rate = moduli.isEmpty() ? Fml.ZERO : (moduli.size() == 1 ? moduli.get(0) : new Fml.Call("max", List.copyOf(moduli)));
-        return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate));
+        List<String> conds = new ArrayList<>();
+        for (LongRunCondition c : longRunConditions()) {
+            conds.add(c.text);
+        }
+        return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate), conds, moduli.isEmpty(), validFrom);
+    }
+
+    /**
+     * The limits of {@link #longRun()} at a parameter point, exactly: the limit of P^(dm + r) for r = 0 .. d - 1.
+     *
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return d exact matrices
+     * @throws QchainException as {@link #evaluate(long, Map)}
+     */
+    public List<RationalMatrix> longRunAt(Map<String, Rational> at) {
+        checkPoint(at);
+        int d = longRun().period();
+        Evaluator<BigRational> ev = new Evaluator<>(BigRational.ZERO, q -> substitute(q, at));
+        List<RationalMatrix> out = new ArrayList<>();
+        for (int r = 0; r < d; r++) {
+            Rational[][] m = new Rational[size][size];
+            for (int i = 0; i < size; i++) {
+                for (int j = 0; j < size; j++) {
+                    BigRational s = BigRational.ZERO;
+                    for (Spectral.Group g : spectral.groups) {
+                        if (g.unitOrder > 0) {
+                            s = s.sum(ev.entry(g, r, i, j));
+                        }
+                    }
+                    m[i][j] = ParamField.rational(s);
+                }
+            }
+            out.add(RationalMatrix.of(m));
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The eigenvalues of each factor of {@link #eigenvalues()} at a point, as decimals (complex ones as
+     * {@code a + b i}), correctly rounded as the roots of named factors are.
+     *
+     * @param at     a value for every parameter
+     * @param digits significant digits, at least 1
+     * @return per factor, its roots in the order of the numeric root finder
+     * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
+     */
+    public List<List<String>> eigenvalueDecimals(Map<String, Rational> at, int digits) {
+        List<List<String>> out = new ArrayList<>();
+        for (Spectral.Group g : spectral.groups) {
+            List<String> v = new ArrayList<>();
+            if (g.kind == Spectral.Kind.QUADRATIC) {
+                // in the printed order: u/2 + (s/2) sqrt(D), then u/2 - (s/2) sqrt(D)
+                long prec = digits + 20L;
+                Quotient<BigRational> half = field.of(2).inverse();
+                org.apfloat.Apfloat mid = apfloat(substitute(g.u.multiply(half), at), prec);
+                org.apfloat.Apfloat w = apfloat(substitute(g.scale.multiply(half), at), prec);
+                BigRational dv = substitute(g.delta, at);
+                org.apfloat.Apfloat root = org.apfloat.ApfloatMath.sqrt(apfloat(dv.abs(), prec));
+                for (int sign : new int[] {1, -1}) {
+                    org.apfloat.Apfloat t = w.multiply(root).multiply(new org.apfloat.Apfloat(sign, prec));
+                    v.add(dv.signum() >= 0 ? NumericRoots.format(mid.add(t), digits)
+                        : NumericRoots.format(new org.apfloat.Apcomplex(mid, t), digits));
+                }
+            } else if (g.kind == Spectral.Kind.LINEAR) {
+                v.add(org.qchain.exact.Decimals.format(ParamField.rational(substitute(g.lambda, at)), digits));
+            } else {
+                for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
+                    v.add(NumericRoots.format(z, digits));
+                }
+            }
+            out.add(List.copyOf(v));
+        }
+        return List.copyOf(out);
+    }
+
+    /** A condition of the long run: {@code poly != 0} (poly empty: not decidable here, never proved). */
+    private record LongRunCondition(String text, java.util.Optional<GenPolynomial<BigRational>> poly) {
+    }
+
+    private List<LongRunCondition> longRunConditionCache;
+
+    /**
+     * No eigenvalue outside the roots of unity of the generic chain becomes a root of unity: for a rational
+     * eigenvalue l, l != 1 and l != -1 (a real number is no other root of unity); for a factor f of degree 2 or
+     * more, the resultant of f and the k-th cyclotomic polynomial is not 0 for k = 1 .. s (at a parameter point
+     * where P is stochastic, an eigenvalue of modulus 1 is a k-th root of unity with k at most s: Perron-Frobenius,
+     * see Seneta, Non-negative Matrices and Markov Chains, ch. 1; from memory).
+     */
+    private synchronized List<LongRunCondition> longRunConditions() {
+        if (longRunConditionCache != null) {
+            return longRunConditionCache;
+        }
+        List<LongRunCondition> out = new ArrayList<>();
+        // a factor the formulas' conditions already exclude is not stated twice
+        java.util.Set<String> seen = new java.util.HashSet<>();
+        for (GenPolynomial<BigRational> c : conditionPolys) {
+            seen.add(key(c));
+        }
+        for (Spectral.Group g : spectral.groups) {
+            if (g.unitOrder > 0 || g == zero || allConstant(g.coeffs)) {
+                continue;
+            }
+            if (g.kind == Spectral.Kind.LINEAR) {
+                for (int v : new int[] {1, -1}) {
+                    Quotient<BigRational> diff = g.lambda.subtract(field.of(v));
+                    if (ParamField.isConstant(diff)) {
+                        continue;
+                    }
+                    List<GenPolynomial<BigRational>> fs = field.irreducibleFactors(diff.num);
+                    if (fs.size() == 1) {
+                        if (seen.add(key(fs.get(0)))) {
+                            out.add(new LongRunCondition(Fml.plain(field.formula(g.lambda)) + " != " + v,
+                                java.util.Optional.of(fs.get(0))));
+                        }
+                    } else {
+                        addFactors(out, seen, fs);
+                    }
+                }
+                continue;
+            }
+            for (int k = 1; k <= size; k++) {
+                Quotient<BigRational> res = Cyclotomic.resultant(field, g.factor, k);
+                if (!ParamField.isConstant(res)) {
+                    addFactors(out, seen, field.irreducibleFactors(res.num));
+                }
+                // a nonzero constant: never a k-th root of unity (0 is impossible for a non-unit factor)
+            }
+        }
+        longRunConditionCache = List.copyOf(out);
+        return longRunConditionCache;
+    }
+
+    private void addFactors(List<LongRunCondition> out, java.util.Set<String> seen, List<GenPolynomial<BigRational>> fs) {
+        for (GenPolynomial<BigRational> p : fs) {
+            if (seen.add(key(p))) {
+                out.add(new LongRunCondition(key(p) + " != 0", java.util.Optional.of(p)));
+            }
+        }
+    }
+
+    private static boolean allConstant(Quotient<BigRational>[] a) {
+        for (Quotient<BigRational> q : a) {
+            if (!ParamField.isConstant(q)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * The conditions of {@link LongRun#conditions()} not shown to hold throughout the domains (as for
+     * {@link #conditionsNotProved(Map)}).
+     *
+     * @param domains the domain of each parameter
+     * @return the conditions not shown to hold, in order
+     */
+    public List<String> longRunNotProved(Map<String, Domain> domains) {
+        List<String> out = new ArrayList<>();
+        for (LongRunCondition c : longRunConditions()) {
+            if (c.poly.isEmpty() || !DomainCheck.holdsThroughout(field, c.poly.get(), domains)) {
+                out.add(c.text);
+            }
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The corners of the parameters' box (every parameter at a closed end of its domain) at which a condition of
+     * the formulas or of the long run fails: the special points to state beside the results.
+     *
+     * @param domains the domain of each parameter (a parameter without a closed bounded end gives no corners)
+     * @return each point as a map from parameter to value, in parameter order
+     */
+    public List<Map<String, Rational>> specialCorners(Map<String, Domain> domains) {
+        List<List<Rational>> ends = new ArrayList<>();
+        for (String p : field.names) {
+            Domain d = domains.get(p);
+            List<Rational> e = new ArrayList<>();
+            if (d != null && d.lowerClosed()) {
+                e.add(d.lower());
+            }
+            if (d != null && d.upper().isPresent() && d.upperClosed()) {
+                e.add(d.upper().get());
+            }
+            if (e.isEmpty()) {
+                return List.of();
+            }
+            ends.add(e);
+        }
+        List<GenPolynomial<BigRational>> polys = new ArrayList<>(conditionPolys);
+        for (LongRunCondition c : longRunConditions()) {
+            c.poly.ifPresent(polys::add);
+        }
+        List<Map<String, Rational>> out = new ArrayList<>();
+        int[] at = new int[ends.size()];
+        while (!ends.isEmpty()) {
+            Map<String, Rational> pt = new LinkedHashMap<>();
+            for (int i = 0; i < at.length; i++) {
+                pt.put(field.names.get(i), ends.get(i).get(at[i]));
+            }
+            for (GenPolynomial<BigRational> c : polys) {
+                if (field.evaluate(c, pt).isZERO()) {
+                    out.add(java.util.Collections.unmodifiableMap(pt));
+                    break;
+                }
+            }
+            int i = 0;
+            while (i < at.length && ++at[i] == ends.get(i).size()) {
+                at[i] = 0;
+                i++;
+            }
+            if (i == at.length) {
+                break;
+            }
+        }
+        return List.copyOf(out);
     }
 
     private Fml modulus(Spectral.Group g) {
@@ -616,7 +850,7 @@ public final class ClosedForm {
         List<RootPolynomial> out = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g.kind == Spectral.Kind.ROOTS) {
-                Fml f = field.formula(g.factor, "x");
+                Fml f = field.formula(g.factor, symbols.variable());
                 List<String> roots = new ArrayList<>();
                 for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
                     roots.add(NumericRoots.format(z, digits));
@@ -664,6 +898,10 @@ public final class ClosedForm {
             a[k] = substitute(g.coeffs[k], at);
         }
         return a;
+    }
+
+    private static org.apfloat.Apfloat apfloat(BigRational r, long prec) {
+        return new org.apfloat.Apfloat(r.numerator(), prec).divide(new org.apfloat.Apfloat(r.denominator(), prec));
     }
 
     private static int lcm(int a, int b) {

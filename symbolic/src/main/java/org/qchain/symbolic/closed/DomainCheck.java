@@ -9,12 +9,15 @@ import java.util.List;
 import java.util.Map;
 import org.qchain.exact.Rational;
 import org.qchain.exact.model.Domain;
+import org.qchain.symbolic.BoxSign;
 
 /**
  * Proves, where it can, that a condition {@code c != 0} holds for every parameter value inside the declared domains.
  * Sound, not complete: {@code true} is a proof; {@code false} means "not shown". One parameter: Sturm sequences
  * count the real roots of c in the interval exactly. Several: a polynomial whose coefficients all have one sign is
- * nonzero where every parameter is positive; otherwise interval arithmetic on the closed box must exclude 0.
+ * nonzero where every parameter is positive; interval arithmetic on the closed box may exclude 0; otherwise the
+ * sign is decided by Bernstein coefficients with subdivision ({@link BoxSign}, stated depth and box budget), which
+ * also covers unbounded domains and zeros on open ends of the domains.
  */
 final class DomainCheck {
     private DomainCheck() {
@@ -37,7 +40,29 @@ final class DomainCheck {
             int i = used.get(0);
             return noRootIn(univariate(f, c, i), domains.get(f.names.get(i)));
         }
-        return sameSignPositiveBox(f, c, used, domains) || intervalExcludesZero(f, c, used, domains);
+        return sameSignPositiveBox(f, c, used, domains) || intervalExcludesZero(f, c, used, domains)
+            || BoxSign.nonZero(terms(f, c, used), domainList(f, used, domains));
+    }
+
+    /** c's terms with exponent vectors over the used parameters, for {@link BoxSign}. */
+    static Map<List<Integer>, Rational> terms(ParamField f, GenPolynomial<BigRational> c, List<Integer> used) {
+        Map<List<Integer>, Rational> out = new java.util.HashMap<>();
+        for (Map.Entry<ExpVector, BigRational> t : c.getMap().entrySet()) {
+            List<Integer> e = new ArrayList<>();
+            for (int i : used) {
+                e.add((int) t.getKey().getVal(f.names.size() - 1 - i));
+            }
+            out.merge(e, ParamField.rational(t.getValue()), Rational::add);
+        }
+        return out;
+    }
+
+    static List<Domain> domainList(ParamField f, List<Integer> used, Map<String, Domain> domains) {
+        List<Domain> out = new ArrayList<>();
+        for (int i : used) {
+            out.add(domains.get(f.names.get(i)));
+        }
+        return out;
     }
 
     private static long degreeIn(ParamField f, GenPolynomial<BigRational> c, int i) {

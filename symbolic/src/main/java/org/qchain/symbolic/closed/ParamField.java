@@ -29,8 +29,52 @@ final class ParamField {
     ParamField(List<String> names, String variable) {
         this.names = List.copyOf(names);
         this.poly = new GenPolynomialRing<>(BigRational.ZERO, names.toArray(new String[0]));
-        this.field = new QuotientRing<>(poly);
+        this.field = names.isEmpty() ? new QuotientRing<>(poly) : new ModularGcdQuotientRing(poly);
         this.univariate = new GenPolynomialRing<>(field, new String[] {variable});
+    }
+
+    /**
+     * The quotient field with JAS's modular gcd over Z in place of its default (subresultants over Q), which every
+     * Quotient operation calls to reduce: measured about 20 times faster on the same pairs (LIBNOTES-DETAIL, JAS
+     * gcd; the symbolic module's own polynomials use it too). A 5-state chain with two parameters went from minutes
+     * in the projectors to seconds.
+     */
+    private static final class ModularGcdQuotientRing extends QuotientRing<BigRational> {
+        private final transient GenPolynomialRing<edu.jas.arith.BigInteger> integers;
+
+        ModularGcdQuotientRing(GenPolynomialRing<BigRational> ring) {
+            super(ring);
+            this.integers = new GenPolynomialRing<>(edu.jas.arith.BigInteger.ZERO, ring);
+        }
+
+        @Override
+        protected GenPolynomial<BigRational> gcd(GenPolynomial<BigRational> a, GenPolynomial<BigRational> b) {
+            if (a.isZERO()) {
+                return b;
+            }
+            if (b.isZERO()) {
+                return a;
+            }
+            if (a.isConstant() || b.isConstant()) {
+                return ring.getONE();
+            }
+            edu.jas.ufd.GreatestCommonDivisorAbstract<edu.jas.arith.BigInteger> engine =
+                new edu.jas.ufd.GreatestCommonDivisorModular<edu.jas.arith.ModLong>();
+            GenPolynomial<edu.jas.arith.BigInteger> g = engine.gcd(
+                edu.jas.poly.PolyUtil.integerFromRationalCoefficients(integers, a),
+                edu.jas.poly.PolyUtil.integerFromRationalCoefficients(integers, b));
+            return edu.jas.poly.PolyUtil.fromIntegerCoefficients(ring, g);
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return super.equals(o);
+        }
+
+        @Override
+        public int hashCode() {
+            return super.hashCode();
+        }
     }
 
     Quotient<BigRational> zero() {
@@ -122,19 +166,43 @@ final class ParamField {
     }
 
     /** Irreducible factors over Q of a polynomial in the parameters, each primitive with integer coefficients. */
-    List<GenPolynomial<BigRational>> irreducibleFactors(GenPolynomial<BigRational> p) {
+    synchronized List<GenPolynomial<BigRational>> irreducibleFactors(GenPolynomial<BigRational> p) {
         List<GenPolynomial<BigRational>> out = new ArrayList<>();
         if (p.isConstant()) {
             return out;
         }
-        FactorAbstract<BigRational> f = FactorFactory.getImplementation(BigRational.ZERO);
-        for (GenPolynomial<BigRational> g : f.factors(p).keySet()) {
-            if (!g.isConstant()) {
-                out.add(integral(g));
+        // the denominators of one closed form share their factors: divide out those found before, and factor only
+        // what remains (the factorisation of large denominators was most of the time for 6 states)
+        GenPolynomial<BigRational> rest = p;
+        for (GenPolynomial<BigRational> k : knownFactors) {
+            boolean divides = false;
+            while (!rest.isConstant()) {
+                GenPolynomial<BigRational>[] qr = rest.quotientRemainder(k);
+                if (!qr[1].isZERO()) {
+                    break;
+                }
+                rest = qr[0];
+                divides = true;
+            }
+            if (divides) {
+                out.add(k);
+            }
+        }
+        if (!rest.isConstant()) {
+            FactorAbstract<BigRational> f = FactorFactory.getImplementation(BigRational.ZERO);
+            for (GenPolynomial<BigRational> g : f.factors(rest).keySet()) {
+                if (!g.isConstant()) {
+                    GenPolynomial<BigRational> i = integral(g);
+                    out.add(i);
+                    knownFactors.add(i);
+                }
             }
         }
         return out;
     }
+
+    /** Irreducible factors found so far (see {@link #irreducibleFactors}). */
+    private final List<GenPolynomial<BigRational>> knownFactors = new ArrayList<>();
 
     // --- printing ----------------------------------------------------------------------------------------------
 

@@ -3,7 +3,7 @@ package org.qchain.symbolic.closed;
 import edu.jas.arith.BigRational;
 import edu.jas.poly.ExpVector;
 import edu.jas.poly.GenPolynomial;
-import edu.jas.ufd.FactorAbstract;
+import edu.jas.poly.GenPolynomialRing;
 import edu.jas.ufd.FactorFactory;
 import edu.jas.ufd.Quotient;
 import java.util.ArrayList;
@@ -84,9 +84,8 @@ final class Series {
         }
         this.adjugate = numeric != null ? numeric.adjugate() : List.copyOf(adj);
         Steps.report(progress, "factoring", 0, 1);
-        FactorAbstract<Quotient<BigRational>> factorizer = FactorFactory.getImplementation(f.field);
         SortedMap<GenPolynomial<Quotient<BigRational>>, Long> fm = numeric != null ? numeric.factors(chi)
-            : factorizer.factors(chi);
+            : factorOverParameters(f, chi);
         List<GenPolynomial<Quotient<BigRational>>> fs = new ArrayList<>();
         List<Integer> ms = new ArrayList<>();
         GenPolynomial<Quotient<BigRational>> product = f.univariate.getONE();
@@ -104,6 +103,65 @@ final class Series {
         }
         this.factors = List.copyOf(fs);
         this.multiplicities = List.copyOf(ms);
+    }
+
+    /**
+     * The factorisation of a monic polynomial in x over Q(parameters), through Q[parameters, x]: the denominators
+     * cleared, JAS's multivariate factorisation over Q, the factors of positive degree in x brought back (Gauss's
+     * lemma: irreducible over Q[parameters, x] and of positive degree in x means irreducible over Q(parameters)[x];
+     * Lang, Algebra, ch. IV, from memory). JAS's factorisation over the quotient field itself ran past 600 s for a
+     * 4-state chain with two parameters, with its gcd in every coefficient operation; this takes well under a second.
+     * The factors of degree 0 in x (the cleared denominator's content) are dropped; the caller checks the product.
+     */
+    static SortedMap<GenPolynomial<Quotient<BigRational>>, Long> factorOverParameters(ParamField f,
+            GenPolynomial<Quotient<BigRational>> p) {
+        int n = f.names.size();
+        if (n == 0) {
+            return FactorFactory.getImplementation(f.field).factors(p);
+        }
+        GenPolynomial<BigRational> l = f.poly.getONE();
+        for (Quotient<BigRational> c : p.getMap().values()) {
+            if (!c.den.isConstant()) {
+                l = l.multiply(c.den).divide(l.gcd(c.den));
+            }
+        }
+        String[] vars = new String[n + 1];
+        for (int i = 0; i < n; i++) {
+            vars[i] = "p" + i;
+        }
+        vars[n] = "x";
+        GenPolynomialRing<BigRational> joint = new GenPolynomialRing<>(BigRational.ZERO, vars);
+        GenPolynomial<BigRational> q = joint.getZERO();
+        for (Map.Entry<ExpVector, Quotient<BigRational>> t : p.getMap().entrySet()) {
+            Quotient<BigRational> c = t.getValue();
+            // c * l is a polynomial: l is a multiple of c's denominator
+            GenPolynomial<BigRational> cl = c.num.multiply(l.divide(c.den));
+            for (Map.Entry<ExpVector, BigRational> u : cl.getMap().entrySet()) {
+                long[] e = new long[n + 1];
+                e[0] = t.getKey().getVal(0);
+                for (int k = 0; k < n; k++) {
+                    e[k + 1] = u.getKey().getVal(k);
+                }
+                q = q.sum(u.getValue(), ExpVector.create(e));
+            }
+        }
+        SortedMap<GenPolynomial<BigRational>, Long> fm = FactorFactory.getImplementation(BigRational.ZERO).factors(q);
+        SortedMap<GenPolynomial<Quotient<BigRational>>, Long> out = new java.util.TreeMap<>();
+        for (Map.Entry<GenPolynomial<BigRational>, Long> e : fm.entrySet()) {
+            GenPolynomial<Quotient<BigRational>> back = f.univariate.getZERO();
+            for (Map.Entry<ExpVector, BigRational> t : e.getKey().getMap().entrySet()) {
+                long[] c = new long[n];
+                for (int k = 0; k < n; k++) {
+                    c[k] = t.getKey().getVal(k + 1);
+                }
+                Quotient<BigRational> coef = new Quotient<>(f.field, f.poly.getONE().multiply(t.getValue(), ExpVector.create(c)));
+                back = back.sum(coef, ExpVector.create(1, 0, t.getKey().getVal(0)));
+            }
+            if (back.degree(0) > 0) {
+                out.merge(back.monic(), e.getValue(), Long::sum);
+            }
+        }
+        return out;
     }
 
     /** From a matrix of the symbolic module, in the variables that occur in it. */

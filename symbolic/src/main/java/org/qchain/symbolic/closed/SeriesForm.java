@@ -16,7 +16,6 @@ import java.util.TreeMap;
  * {@link ClosedForms#series} or {@link ClosedForm#series()}.
  */
 public final class SeriesForm {
-    private static final Fml N = Fml.name(ClosedForm.N_SYMBOL);
 
     private final Series series;
     private final ParamField field;
@@ -24,12 +23,14 @@ public final class SeriesForm {
     private final int size;
     /** Reduced generating functions, made on first use (idempotent, so an unsynchronised race is harmless). */
     private final List<GenPolynomial<Quotient<BigRational>>>[][] gfCache;
+    private final Symbols symbols;
 
     SeriesForm(Series series, List<String> states) {
         this.series = series;
         this.field = series.field;
         this.states = List.copyOf(states);
         this.size = series.size;
+        this.symbols = Symbols.avoiding(field.names);
         @SuppressWarnings("unchecked")
         List<GenPolynomial<Quotient<BigRational>>>[][] cache = (List<GenPolynomial<Quotient<BigRational>>>[][]) new List[size][size];
         this.gfCache = cache;
@@ -51,7 +52,12 @@ public final class SeriesForm {
 
     /** The characteristic polynomial {@code det(xI - P)} in plain syntax, highest power of x first. */
     public String characteristicPolynomial() {
-        return Fml.plain(field.formula(series.chi, "x"));
+        return Fml.plain(field.formula(series.chi, symbols.variable()));
+    }
+
+    /** The names the formulas use for their own quantities, none of them a parameter's name. */
+    public Symbols symbols() {
+        return symbols;
     }
 
 
@@ -124,7 +130,7 @@ public final class SeriesForm {
         Fml num = zPolynomial(parts.get(0), l);
         Fml den = zPolynomial(parts.get(1), l);
         Fml whole = Fml.isOne(den) ? num : Fml.div(num, den);
-        return new GeneratingFunction("z", Fml.plain(num), Fml.plain(den), Fml.plain(whole), Fml.latex(whole));
+        return new GeneratingFunction(symbols.series(), Fml.plain(num), Fml.plain(den), Fml.plain(whole), Fml.latex(whole));
     }
 
     private GenPolynomial<BigRational> lcm(GenPolynomial<BigRational> a, GenPolynomial<BigRational> b) {
@@ -146,7 +152,7 @@ public final class SeriesForm {
         for (Map.Entry<Long, Quotient<BigRational>> t : byPower.entrySet()) {
             Fml c = field.formula(t.getValue());
             long k = t.getKey();
-            Fml zk = k == 0 ? Fml.ONE : Fml.pow(Fml.name("z"), Fml.integer(k));
+            Fml zk = k == 0 ? Fml.ONE : Fml.pow(Fml.name(symbols.series()), Fml.integer(k));
             terms.add(Fml.prod(c, zk));
         }
         return Fml.sum(terms);
@@ -184,22 +190,25 @@ public final class SeriesForm {
         for (int k = 0; k < r.size(); k++) {
             Fml c = field.formula(r.get(k));
             coeffs.add(Fml.plain(c));
-            Fml arg = Fml.sum(N, Fml.neg(Fml.integer(k + 1)));
-            rhs.add(Fml.prod(c, Fml.call("u", arg)));
+            Fml arg = Fml.sum(Fml.name(symbols.step()), Fml.neg(Fml.integer(k + 1)));
+            rhs.add(Fml.prod(c, Fml.call(symbols.sequence(), arg)));
         }
+        String u = symbols.sequence();
         List<String> init = new ArrayList<>();
         List<String> initLatex = new ArrayList<>();
         for (int k = 0; k < start; k++) {
             Fml v = field.formula(series.powers.get(k)[i][j]);
             init.add(Fml.plain(v));
-            initLatex.add("u(" + k + ") = " + Fml.latex(v));
+            initLatex.add(Fml.latex(Fml.name(u)) + "(" + k + ") = " + Fml.latex(v));
         }
         Fml right = Fml.sum(rhs);
-        StringBuilder plain = new StringBuilder("u(n) = " + Fml.plain(right) + " for n >= " + start);
+        String n = symbols.step();
+        StringBuilder plain = new StringBuilder(u + "(" + n + ") = " + Fml.plain(right) + " for " + n + " >= " + start);
         for (int k = 0; k < init.size(); k++) {
-            plain.append("; u(").append(k).append(") = ").append(init.get(k));
+            plain.append("; ").append(u).append('(').append(k).append(") = ").append(init.get(k));
         }
-        String latex = "u(n) = " + Fml.latex(right) + " \\quad (n \\ge " + start + ")"
+        String latex = Fml.latex(Fml.name(u)) + "(" + Fml.latex(Fml.name(n)) + ") = " + Fml.latex(right) + " \\quad ("
+            + Fml.latex(Fml.name(n)) + " \\ge " + start + ")"
             + (initLatex.isEmpty() ? "" : ",\\; " + String.join(",\\; ", initLatex));
         return new Recurrence(r.size(), coeffs, start, init, plain.toString(), latex);
     }

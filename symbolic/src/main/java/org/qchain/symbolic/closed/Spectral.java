@@ -159,7 +159,7 @@ final class Spectral {
                 e = Mat.identity(f, s);
             } else {
                 GenPolynomial<Quotient<BigRational>> h = chi.divide(gm);
-                idem = h.multiply(h.modInverse(gm)).remainder(chi);
+                idem = h.multiply(ModInverse.of(f, h, gm)).remainder(chi);
                 e = evalAt(f, idem, powers);
             }
             total = Mat.addScaled(total, f.one(), e);
@@ -230,11 +230,11 @@ final class Spectral {
             if (step == gr.multiplicity) {
                 throw new QchainException(ErrorKey.INTERNAL, "Newton's iteration for the semisimple part did not end");
             }
-            sp = sp.subtract(fs.multiply(compose(fd, sp, fm).modInverse(fm))).remainder(fm);
+            sp = sp.subtract(fs.multiply(ModInverse.of(f, compose(fd, sp, fm), fm))).remainder(fm);
         }
         GenPolynomial<Quotient<BigRational>> v = xpoly.subtract(sp);
         // h_(i,t): b_i(x) / f'(x) mod f
-        GenPolynomial<Quotient<BigRational>> w = fd.modInverse(gr.factor);
+        GenPolynomial<Quotient<BigRational>> w = ModInverse.of(f, fd, gr.factor);
         List<Quotient<BigRational>[]> h = new ArrayList<>();
         for (int i = 0; i < e; i++) {
             GenPolynomial<Quotient<BigRational>> b = f.univariate.getZERO();
@@ -306,7 +306,7 @@ final class Spectral {
             RationalRoute.Parts parts = numeric.simple(g, chiDeriv, ps);
             return simpleGroup(f, g, kind, a, parts.c(), parts.projector());
         }
-        GenPolynomial<Quotient<BigRational>> w = chiDeriv.remainder(g).modInverse(g);
+        GenPolynomial<Quotient<BigRational>> w = ModInverse.of(f, chiDeriv, g);
         List<Quotient<BigRational>[][]> c = new ArrayList<>();
         for (int t = 0; t < e; t++) {
             c.add(Mat.zero(f, s));

@@ -61,6 +61,12 @@
  * cf.longRun().rate();  // abs(1 - a - b)
  * }</pre>
  *
+ * <p>The formulas' own symbols (step count, polynomial and series variables, sequence and factor names) come from
+ * {@link org.qchain.symbolic.closed.Symbols}: never a parameter's name, so a printed formula reads back to the right
+ * value whatever the parameters are called. {@link org.qchain.symbolic.closed.ClosedForm#longRun()} states its
+ * conditions (no eigenvalue generically inside the unit circle becomes a root of unity: cyclotomic resultants), and
+ * {@link org.qchain.symbolic.closed.ClosedForm#specialCorners} the corners of the domains where a condition fails.
+ *
  * <p>JAS types stay inside this package; the public API speaks {@code String} formulas, {@code Rational},
  * {@code RationalMatrix} and the symbolic module's {@code RatFunMatrix}.
  */

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.symbolic.RatFun;
@@ -54,12 +55,53 @@ public record EntrySensitivity(long n, int from, int to, String parameter, RatFu
      * @throws QchainException as {@link #at(Map)}
      */
     public List<SweepRow> sweep(SweepRange range, Map<String, Rational> base) {
-        List<SweepRow> rows = new ArrayList<>(range.size());
-        for (int k = 0; k < range.size(); k++) {
-            Map<String, Rational> pt = new LinkedHashMap<>(base);
+        return sweep(range, base, Long.MAX_VALUE, Progress.NONE);
+    }
+
+    /**
+     * As {@link #sweep(SweepRange, Map)}, refused before any value is computed when the exact values are estimated
+     * past a digit limit, with progress reports (phase {@code sweep}, one step per point) and an interrupt check
+     * between points. The estimate: for each point a/b, the integer coefficients' digits plus the degrees times the
+     * digits of a and b, for the value and the derivative.
+     *
+     * @param range     the range
+     * @param base      values for the other parameters
+     * @param maxDigits the largest allowed estimated number of digits of all exact values together
+     * @param progress  receives the reports
+     * @return one row per point
+     * @throws QchainException with {@link ErrorKey#SWEEP_TOO_LARGE} past the limit, {@link ErrorKey#INTERRUPTED}
+     *                         if the thread is interrupted, otherwise as {@link #at(Map)}
+     */
+    public List<SweepRow> sweep(SweepRange range, Map<String, Rational> base, long maxDigits, Progress progress) {
+        String v = range.parameter();
+        Map<String, Rational> others = new LinkedHashMap<>(base);
+        others.remove(v);
+        RatFun pf = others.isEmpty() ? probability : probability.substitute(others);
+        RatFun df = others.isEmpty() ? derivative : derivative.substitute(others);
+        UnivariateValues pv = UnivariateValues.of(pf, v);
+        UnivariateValues dv = UnivariateValues.of(df, v);
+        int size = range.size();
+        long digits = 0;
+        for (int k = 0; k < size; k++) {
             Rational x = range.point(k);
-            pt.put(range.parameter(), x);
-            rows.add(new SweepRow(x, probability.evaluate(pt), derivative.evaluate(pt)));
+            digits = Math.addExact(digits, pv.digitsAt(x) + dv.digitsAt(x));
+        }
+        if (digits > maxDigits) {
+            throw new QchainException(ErrorKey.SWEEP_TOO_LARGE, digits, size, maxDigits, "");
+        }
+        List<SweepRow> rows = new ArrayList<>(size);
+        for (int k = 0; k < size; k++) {
+            if (Thread.currentThread().isInterrupted()) {
+                throw new QchainException(ErrorKey.INTERRUPTED);
+            }
+            progress.update("sweep", k, size);
+            Rational x = range.point(k);
+            Map<String, Rational> pt = new LinkedHashMap<>(base);
+            pt.put(v, x);
+            // a vanishing denominator: the general evaluation reports it with its own message
+            Rational p = pv.at(x).orElseGet(() -> probability.evaluate(pt));
+            Rational d = dv.at(x).orElseGet(() -> derivative.evaluate(pt));
+            rows.add(new SweepRow(x, p, d));
         }
         return rows;
     }

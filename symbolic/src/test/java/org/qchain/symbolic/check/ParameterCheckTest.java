@@ -82,13 +82,23 @@ class ParameterCheckTest {
     }
 
     @Test
-    void unboundedDomainIsReportedAsUndecided() {
+    void unboundedDomainIsProvedNowWhereItHolds() {
+        // k/(1 + k) and 1/(1 + k) lie in [0, 1] for every k > 0 (common practice, no source); this was once
+        // "could not decide" (unbounded domain), Bernstein coefficients after x = y/(1 - y) prove it (issue 8)
         Domain positive = Domain.positive();
         List<ParamDecl> ps = List.of(TestChains.param("k", positive, Rational.of(1, 10)));
         Model m = TestChains.discrete(ps, new String[][] {{"*", "k/(1 + k)"}, {"1/2", "*"}}, true);
         CheckReport rep = ParameterCheck.check(m);
-        assertTrue(rep.findings().stream().allMatch(f -> !f.decided()), rep.findings().toString());
-        assertTrue(rep.findings().get(0).message().contains("could not decide"), rep.findings().toString());
+        assertEquals(List.of(), rep.findings());
+    }
+
+    @Test
+    void unboundedDomainThatFailsStaysAFinding() {
+        // 2k/(1 + k) exceeds 1 for k > 1: refuted at a sample point, so never "holds"
+        List<ParamDecl> ps = List.of(TestChains.param("k", Domain.positive(), Rational.of(1, 10)));
+        Model m = TestChains.discrete(ps, new String[][] {{"*", "2*k/(1 + k)"}, {"1/2", "*"}}, true);
+        CheckReport rep = ParameterCheck.check(m);
+        assertTrue(!rep.findings().isEmpty(), rep.findings().toString());
     }
 
     @Test
@@ -113,5 +123,21 @@ class ParameterCheckTest {
         QchainException unknown = assertThrows(QchainException.class,
             () -> ParamPoints.resolve(m, Map.of("z", Rational.of(1, 2))));
         assertEquals(ErrorKey.BAD_ARGUMENT, unknown.key());
+    }
+
+    @Test
+    void boundsThatHoldOnUnboundedAndOpenBoxesAreProved() {
+        // regression (issue 8): these held but were "not shown"; decided by hand (common practice, no source: a sum
+        // of non-negative terms; 1 - x + x^2 = (x - 1/2)^2 + 3/4)
+        org.qchain.symbolic.ParamRing ring = org.qchain.symbolic.ParamRing.of(List.of("p", "q"));
+        Domain unit = new Domain(Rational.ZERO, true, Optional.of(Rational.ONE), true);
+        Map<String, Domain> doms = Map.of("p", unit, "q", Domain.positive());
+        assertEquals(Verdict.Kind.HOLDS, RangeProver.nonNegative(ring.fromExpr(
+            org.qchain.exact.model.ModelParser.parseExpression("t", "p/10 + 11*q/10")), doms).kind());
+        assertEquals(Verdict.Kind.HOLDS, RangeProver.nonNegative(ring.fromExpr(
+            org.qchain.exact.model.ModelParser.parseExpression("t", "(1 - q + q^2)/(1 + p*q)")), doms).kind());
+        // and one that fails stays refuted: 1 - 2q < 0 for q > 1/2
+        assertTrue(RangeProver.nonNegative(ring.fromExpr(
+            org.qchain.exact.model.ModelParser.parseExpression("t", "1 - 2*q")), doms).kind() != Verdict.Kind.HOLDS);
     }
 }

@@ -84,4 +84,32 @@ class SensitivityTest {
             () -> Sensitivity.of(p, 2, 0, 1, "z", SymbolicLimits.DEFAULT, x -> { }));
         assertEquals(ErrorKey.UNKNOWN_PARAMETER, e.key());
     }
+
+    @Test
+    void fastSweepEqualsThePointwiseEvaluation() {
+        // regression (issue 8): the sweep evaluates through integer Horner steps; it must give the general
+        // evaluation's values exactly, here for P^7 of the same chain with a rational function (b = 1/(1 + a))
+        Model m = TestChains.discrete(List.of(TestChains.param("a", Domain.probability(), Rational.of(1, 10)),
+            TestChains.param("b", Domain.probability(), Rational.of(1, 5))),
+            new String[][] {{"*", "a/(1 + b)"}, {"b", "*"}}, true);
+        EntrySensitivity s = Sensitivity.of(RatFunMatrix.fromModel(m), 7, 0, 1, "a", SymbolicLimits.DEFAULT, x -> { });
+        Map<String, Rational> base = Map.of("b", Rational.of(2, 7));
+        SweepRange range = SweepRange.parse("a in [1/13, 9/10] by 1/17");
+        List<SweepRow> rows = s.sweep(range, base);
+        assertEquals(range.size(), rows.size());
+        for (SweepRow r : rows) {
+            Map<String, Rational> pt = Map.of("a", r.value(), "b", Rational.of(2, 7));
+            assertEquals(s.probability().evaluate(pt), r.probability());
+            assertEquals(s.derivative().evaluate(pt), r.derivative());
+        }
+    }
+
+    @Test
+    void sweepPastTheDigitLimitIsRefusedBeforeWork() {
+        SweepRange range = SweepRange.parse("a in [0, 1] by 1/10000");
+        QchainException e = assertThrows(QchainException.class,
+            () -> sens().sweep(range, Map.of("b", Rational.of(1, 5)), 1000, org.qchain.exact.Progress.NONE));
+        assertEquals(ErrorKey.SWEEP_TOO_LARGE, e.key());
+        assertEquals("10001", String.valueOf(e.args().get(1)));
+    }
 }

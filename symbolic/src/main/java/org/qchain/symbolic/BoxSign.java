@@ -1,0 +1,379 @@
+package org.qchain.symbolic;
+
+import java.math.BigInteger;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+import org.qchain.exact.Rational;
+import org.qchain.exact.model.Domain;
+
+/**
+ * Proves the sign of a polynomial with rational coefficients on a box of parameter domains, exactly, by Bernstein
+ * coefficients with subdivision. Sound, not complete: {@code true} is a proof, {@code false} means "not shown".
+ *
+ * <p>On a box, a polynomial is the sum of its Bernstein coefficients times the Bernstein basis polynomials, which
+ * are non-negative on the closed box and positive inside it (Farouki, "The Bernstein polynomial basis: a centennial
+ * retrospective", Computer Aided Geometric Design 29 (2012), section 5; from memory). So: all coefficients at least 0
+ * proves {@code p >= 0} on the closed box, and if one is positive besides, {@code p > 0} inside it. Where that fails,
+ * the widest side is halved, to at most {@link #MAX_DEPTH} halvings and {@link #MAX_BOXES} boxes in all; strict
+ * positivity inside a box then also needs the dividing slice, a box of one dimension less. A domain with no upper
+ * end, {@code (lo, inf)}, is first mapped onto {@code [0, 1)} by {@code x = lo + y/(1 - y)} and the polynomial
+ * multiplied by {@code (1 - y)^d} (d its degree in x), which keeps its sign. The closed ends of the domains are
+ * faces of the box, each checked as a box of its own.
+ */
+public final class BoxSign {
+    /** The most halvings of one box (the stated depth of the subdivision). */
+    public static final int MAX_DEPTH = 12;
+
+    /** The most boxes examined for one question. */
+    public static final int MAX_BOXES = 20_000;
+
+    private final int k;
+    private final int[] deg;
+    private final int[] stride;
+    private final Rational[] coef;
+    private int boxes;
+
+    private BoxSign(int[] deg, Rational[] coef) {
+        this.k = deg.length;
+        this.deg = deg;
+        this.stride = strides(deg);
+        this.coef = coef;
+    }
+
+    /**
+     * Whether {@code p > 0} at every point of the domains (open ends excluded, closed ends included).
+     *
+     * @param terms   the polynomial: exponent vector (one entry per domain) to coefficient
+     * @param domains the domain of each variable, in the order of the exponent vectors
+     * @return true if proved
+     */
+    public static boolean positive(Map<List<Integer>, Rational> terms, List<Domain> domains) {
+        return of(terms, domains).positiveOnDomains(domains);
+    }
+
+    /**
+     * Whether {@code p != 0} at every point of the domains: {@code p > 0} or {@code p < 0} throughout.
+     *
+     * @see #positive(Map, List)
+     */
+    public static boolean nonZero(Map<List<Integer>, Rational> terms, List<Domain> domains) {
+        return positive(terms, domains) || positive(negated(terms), domains);
+    }
+
+    /**
+     * Whether {@code p >= 0} at every point of the closure of the domains (so also on the domains).
+     *
+     * @see #positive(Map, List)
+     */
+    public static boolean nonNegative(Map<List<Integer>, Rational> terms, List<Domain> domains) {
+        BoxSign b = of(terms, domains);
+        Rational[] lo = new Rational[b.k];
+        Rational[] hi = new Rational[b.k];
+        for (int i = 0; i < b.k; i++) {
+            lo[i] = b.deg[i] == 0 ? Rational.ZERO : lowerEnd(domains.get(i));
+            hi[i] = b.deg[i] == 0 ? Rational.ZERO : upperEnd(domains.get(i));
+        }
+        return b.nonNegativeClosed(b.coef, lo, hi, 0);
+    }
+
+    private static Map<List<Integer>, Rational> negated(Map<List<Integer>, Rational> terms) {
+        Map<List<Integer>, Rational> out = new java.util.HashMap<>();
+        terms.forEach((e, c) -> out.put(e, c.negate()));
+        return out;
+    }
+
+    /** Dense coefficients, with every unbounded variable mapped onto [0, 1). */
+    private static BoxSign of(Map<List<Integer>, Rational> terms, List<Domain> domains) {
+        int k = domains.size();
+        int[] deg = new int[k];
+        for (List<Integer> e : terms.keySet()) {
+            if (e.size() != k) {
+                throw new IllegalArgumentException("exponent vector " + e + " for " + k + " domains");
+            }
+            for (int i = 0; i < k; i++) {
+                deg[i] = Math.max(deg[i], e.get(i));
+            }
+        }
+        int[] stride = strides(deg);
+        Rational[] c = new Rational[stride[k]];
+        Arrays.fill(c, Rational.ZERO);
+        terms.forEach((e, v) -> {
+            int idx = 0;
+            for (int i = 0; i < k; i++) {
+                idx += e.get(i) * stride[i];
+            }
+            c[idx] = c[idx].add(v);
+        });
+        BoxSign b = new BoxSign(deg, c);
+        for (int i = 0; i < k; i++) {
+            Domain d = domains.get(i);
+            if (deg[i] > 0 && d.upper().isEmpty()) {
+                b.axis(c, i, a -> unbounded(a, d.lower()));
+            }
+        }
+        return b;
+    }
+
+    private static int[] strides(int[] deg) {
+        int[] s = new int[deg.length + 1];
+        s[0] = 1;
+        for (int i = 0; i < deg.length; i++) {
+            s[i + 1] = Math.multiplyExact(s[i], deg[i] + 1);
+        }
+        return s;
+    }
+
+    /** The box's lower end in the working coordinates. */
+    private static Rational lowerEnd(Domain d) {
+        return d.upper().isEmpty() ? Rational.ZERO : d.lower();
+    }
+
+    private static Rational upperEnd(Domain d) {
+        return d.upper().orElse(Rational.ONE);
+    }
+
+    // --- strict positivity on the domains ------------------------------------------------------------------------
+
+    private boolean positiveOnDomains(List<Domain> domains) {
+        // every face: each variable either inside its open interval (0) or at its closed lower (1) or upper (2) end
+        int[][] options = new int[k][];
+        for (int i = 0; i < k; i++) {
+            Domain d = domains.get(i);
+            java.util.List<Integer> o = new java.util.ArrayList<>(List.of(0));
+            if (deg[i] > 0 && d.lowerClosed()) {
+                o.add(1);
+            }
+            if (deg[i] > 0 && d.upper().isPresent() && d.upperClosed()) {
+                o.add(2);
+            }
+            options[i] = o.stream().mapToInt(Integer::intValue).toArray();
+        }
+        int[] at = new int[k];
+        int[] choice = new int[k];
+        while (true) {
+            for (int i = 0; i < k; i++) {
+                choice[i] = options[i][at[i]];
+            }
+            if (!positiveOnFace(domains, choice)) {
+                return false;
+            }
+            int i = 0;
+            while (i < k && ++at[i] == options[i].length) {
+                at[i] = 0;
+                i++;
+            }
+            if (i == k) {
+                return true;
+            }
+        }
+    }
+
+    private boolean positiveOnFace(List<Domain> domains, int[] choice) {
+        Rational[] c = coef.clone();
+        Rational[] lo = new Rational[k];
+        Rational[] hi = new Rational[k];
+        for (int i = 0; i < k; i++) {
+            if (deg[i] == 0) {
+                lo[i] = Rational.ZERO;
+                hi[i] = Rational.ZERO;
+                continue;
+            }
+            Domain d = domains.get(i);
+            if (choice[i] == 0) {
+                lo[i] = lowerEnd(d);
+                hi[i] = upperEnd(d);
+            } else {
+                Rational v = choice[i] == 1 ? lowerEnd(d) : upperEnd(d);
+                fix(c, i, v);
+                lo[i] = Rational.ZERO;
+                hi[i] = Rational.ZERO;
+            }
+        }
+        return positiveOpen(c, lo, hi, 0);
+    }
+
+    /** p > 0 inside the box (its sides with lo == hi are fixed coordinates, already substituted). */
+    private boolean positiveOpen(Rational[] c, Rational[] lo, Rational[] hi, int depth) {
+        if (++boxes > MAX_BOXES) {
+            return false;
+        }
+        Rational[] b = bernstein(c, lo, hi);
+        boolean allNonNeg = true;
+        boolean anyPos = false;
+        for (Rational r : b) {
+            allNonNeg &= r.signum() >= 0;
+            anyPos |= r.signum() > 0;
+        }
+        if (allNonNeg) {
+            return anyPos;
+        }
+        int w = widest(lo, hi);
+        if (depth >= MAX_DEPTH || w < 0) {
+            return false;
+        }
+        Rational[][] halves = halves(lo, hi, w);
+        if (!positiveOpen(c, lo, halves[0], depth + 1) || !positiveOpen(c, halves[1], hi, depth + 1)) {
+            return false;
+        }
+        Rational m = halves[1][w];
+        Rational[] slice = c.clone();
+        fix(slice, w, m);
+        Rational[] ls = lo.clone();
+        Rational[] hs = hi.clone();
+        ls[w] = Rational.ZERO;
+        hs[w] = Rational.ZERO;
+        return positiveOpen(slice, ls, hs, depth + 1);
+    }
+
+    /** p >= 0 on the closed box. */
+    private boolean nonNegativeClosed(Rational[] c, Rational[] lo, Rational[] hi, int depth) {
+        if (++boxes > MAX_BOXES) {
+            return false;
+        }
+        boolean ok = true;
+        for (Rational r : bernstein(c, lo, hi)) {
+            ok &= r.signum() >= 0;
+        }
+        if (ok) {
+            return true;
+        }
+        int w = widest(lo, hi);
+        if (depth >= MAX_DEPTH || w < 0) {
+            return false;
+        }
+        Rational[][] halves = halves(lo, hi, w);
+        return nonNegativeClosed(c, lo, halves[0], depth + 1) && nonNegativeClosed(c, halves[1], hi, depth + 1);
+    }
+
+    /** The upper ends of the lower half and the lower ends of the upper half, side w halved. */
+    private static Rational[][] halves(Rational[] lo, Rational[] hi, int w) {
+        Rational m = lo[w].add(hi[w]).multiply(Rational.of(1, 2));
+        Rational[] h1 = hi.clone();
+        h1[w] = m;
+        Rational[] l2 = lo.clone();
+        l2[w] = m;
+        return new Rational[][] {h1, l2};
+    }
+
+    private int widest(Rational[] lo, Rational[] hi) {
+        int w = -1;
+        Rational best = Rational.ZERO;
+        for (int i = 0; i < k; i++) {
+            Rational len = hi[i].subtract(lo[i]);
+            if (len.compareTo(best) > 0) {
+                best = len;
+                w = i;
+            }
+        }
+        return w;
+    }
+
+    // --- coefficient transforms, one axis at a time ---------------------------------------------------------------
+
+    private Rational[] bernstein(Rational[] c, Rational[] lo, Rational[] hi) {
+        Rational[] b = c.clone();
+        for (int i = 0; i < k; i++) {
+            if (deg[i] == 0 || lo[i].equals(hi[i])) {
+                continue;
+            }
+            Rational l = lo[i];
+            Rational s = hi[i].subtract(lo[i]);
+            int n = deg[i];
+            axis(b, i, a -> toBernstein(affine(a, l, s), n));
+        }
+        return b;
+    }
+
+    /** Substitutes x_i = v: the coefficients end up at exponent 0 of axis i, the rest 0. */
+    private void fix(Rational[] c, int i, Rational v) {
+        axis(c, i, a -> {
+            Rational s = Rational.ZERO;
+            for (int j = a.length - 1; j >= 0; j--) {
+                s = s.multiply(v).add(a[j]);
+            }
+            Rational[] out = new Rational[a.length];
+            Arrays.fill(out, Rational.ZERO);
+            out[0] = s;
+            return out;
+        });
+    }
+
+    /** Applies f to every line of coefficients along axis i, in place. */
+    private void axis(Rational[] c, int i, java.util.function.UnaryOperator<Rational[]> f) {
+        int n = deg[i] + 1;
+        int st = stride[i];
+        Rational[] line = new Rational[n];
+        for (int base = 0; base < c.length; base++) {
+            if ((base / st) % n != 0) {
+                continue;
+            }
+            for (int j = 0; j < n; j++) {
+                line[j] = c[base + j * st];
+            }
+            Rational[] out = f.apply(line);
+            for (int j = 0; j < n; j++) {
+                c[base + j * st] = out[j];
+            }
+        }
+    }
+
+    /** The coefficients of a(l + s t) in t. */
+    private static Rational[] affine(Rational[] a, Rational l, Rational s) {
+        int n = a.length;
+        Rational[] out = new Rational[n];
+        Arrays.fill(out, Rational.ZERO);
+        for (int j = 0; j < n; j++) {
+            if (a[j].isZero()) {
+                continue;
+            }
+            // (l + s t)^j = sum_m C(j, m) l^(j-m) s^m t^m
+            for (int m = 0; m <= j; m++) {
+                out[m] = out[m].add(a[j].multiply(Rational.of(binomial(j, m))).multiply(l.pow(j - m)).multiply(s.pow(m)));
+            }
+        }
+        return out;
+    }
+
+    /** Power coefficients on [0, 1] to Bernstein coefficients of degree n: b_m = sum_(j<=m) C(m,j)/C(n,j) a_j. */
+    private static Rational[] toBernstein(Rational[] a, int n) {
+        Rational[] b = new Rational[n + 1];
+        for (int m = 0; m <= n; m++) {
+            Rational s = Rational.ZERO;
+            for (int j = 0; j <= m; j++) {
+                if (!a[j].isZero()) {
+                    s = s.add(a[j].multiply(Rational.of(binomial(m, j))).divide(Rational.of(binomial(n, j))));
+                }
+            }
+            b[m] = s;
+        }
+        return b;
+    }
+
+    /** a(lo + y/(1 - y)) (1 - y)^d with d = a.length - 1, as coefficients in y. */
+    private static Rational[] unbounded(Rational[] a, Rational lo) {
+        int d = a.length - 1;
+        Rational[] w = affine(a, lo, Rational.ONE);
+        Rational[] out = new Rational[d + 1];
+        Arrays.fill(out, Rational.ZERO);
+        // w_j y^j (1 - y)^(d - j)
+        for (int j = 0; j <= d; j++) {
+            if (w[j].isZero()) {
+                continue;
+            }
+            for (int t = 0; t <= d - j; t++) {
+                Rational term = w[j].multiply(Rational.of(binomial(d - j, t)));
+                out[j + t] = out[j + t].add(t % 2 == 0 ? term : term.negate());
+            }
+        }
+        return out;
+    }
+
+    private static BigInteger binomial(int n, int k) {
+        BigInteger r = BigInteger.ONE;
+        for (int i = 1; i <= k; i++) {
+            r = r.multiply(BigInteger.valueOf(n - k + i)).divide(BigInteger.valueOf(i));
+        }
+        return r;
+    }
+}
