@@ -206,7 +206,7 @@ final class NumericEngine {
         }
     }
 
-    private static List<List<Rational>> rows(LoadedModel model) {
+    static List<List<Rational>> rows(LoadedModel model) {
         RationalMatrix p = model.matrix();
         List<List<Rational>> out = new ArrayList<>();
         for (int i = 0; i < p.rows(); i++) {

@@ -2,6 +2,7 @@ package org.qchain.analysis;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.MatrixPowers;
 import org.qchain.exact.Progress;
@@ -9,6 +10,9 @@ import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.SizeEstimate;
+import org.qchain.exact.ctmc.Availability;
+import org.qchain.exact.longrun.Arithmetic;
+import org.qchain.exact.longrun.ChainEngine;
 import org.qchain.exact.reference.PowerRows;
 import org.qchain.exact.reference.ReferenceReader;
 import org.qchain.exact.reference.Target;
@@ -26,24 +30,65 @@ final class Verification {
     }
 
     static VerifyResult run(LoadedModel model, VerifyQuery q, Progress progress) {
-        if (q.what().missingAnalysis().isPresent()) {
-            throw new QchainException(ErrorKey.VERIFY_NOT_AVAILABLE, q.what().word(), q.what().missingAnalysis().get());
-        }
-        model.requireDiscrete("qchain verify checks discrete chains (continuous chains are not supported yet)");
-        RationalMatrix p = model.matrix();
         List<String> states = model.states();
         String has = "the model has " + states.size() + " states";
-        long n = q.n().orElseThrow();
         Target target;
         Verifier.Truth truth;
         switch (q.what()) {
+            case STATIONARY -> {
+                Rational[] pi = stationary(model);
+                target = Target.vector(states, has);
+                truth = (i, j) -> pi[j];
+            }
+            case ABSORPTION, EXPECTED_STEPS -> {
+                model.requireDiscrete("qchain verify --what " + q.what().word() + " needs a discrete chain");
+                NumericEngine.guardSolve(model, q.maxDigits());
+                ChainEngine.Absorption<Rational> a = ChainEngine.absorb(Arithmetic.RATIONAL,
+                    NumericEngine.rows(model), states, Set.of());
+                List<String> tr = names(states, a.transientStates());
+                String trAre = "the model has " + tr.size() + " transient states";
+                if (q.what() == VerifyQuery.What.EXPECTED_STEPS) {
+                    target = Target.vector(tr, trAre);
+                    truth = (i, j) -> a.expectedSteps().get(j);
+                } else {
+                    List<String> ab = names(states, a.absorbingStates());
+                    target = Target.matrix(tr, ab, trAre, "the model has " + ab.size() + " absorbing states");
+                    truth = (i, j) -> a.probabilities().get(i).get(j);
+                }
+            }
+            case AVAILABILITY, MTTF -> {
+                RationalMatrix g = model.generator("qchain verify --what " + q.what().word());
+                List<Integer> up = model.model().upStates().orElseThrow(() ->
+                    new QchainException(ErrorKey.NO_UP_STATES, "qchain verify --what " + q.what().word()));
+                Availability.Figures f = Availability.of(g, up, Availability.HOURS_PER_YEAR);
+                if (q.what() == VerifyQuery.What.AVAILABILITY) {
+                    target = Target.scalar("steady-state availability");
+                    Rational av = f.availability();
+                    truth = (i, j) -> av;
+                } else {
+                    List<Rational> mttf = new ArrayList<>();
+                    for (int i : up) {
+                        mttf.add(f.mttf().get(i).orElseThrow(() -> new QchainException(ErrorKey.NOT_APPLICABLE,
+                            "MTTF from " + states.get(i), "the chain may never fail from there (infinite)")));
+                    }
+                    List<String> upNames = names(states, up);
+                    target = Target.vector(upNames, "the model has " + upNames.size() + " up states");
+                    truth = (i, j) -> mttf.get(j);
+                }
+            }
             case MATRIX -> {
+                model.requireDiscrete("qchain verify -n checks P^n of a discrete chain");
+                RationalMatrix p = model.matrix();
+                long n = q.n().orElseThrow();
                 SizeEstimate.requireWithin(SizeEstimate.digitsOfPower(p, n), q.maxDigits(),
                     NumericEngine.MAX_DIGITS_OPTION);
                 target = Target.matrix(states, states, has, has);
                 truth = new PowerRows(p, n, progress);
             }
             case ROW -> {
+                model.requireDiscrete("qchain verify -n checks P^n of a discrete chain");
+                RationalMatrix p = model.matrix();
+                long n = q.n().orElseThrow();
                 int from = model.state("--from", q.from().get());
                 SizeEstimate.requireWithin(SizeEstimate.digitsOfRow(p, from, n), q.maxDigits(),
                     NumericEngine.MAX_DIGITS_OPTION);
@@ -52,6 +97,9 @@ final class Verification {
                 truth = (i, j) -> row[j];
             }
             case ENTRY -> {
+                model.requireDiscrete("qchain verify -n checks P^n of a discrete chain");
+                RationalMatrix p = model.matrix();
+                long n = q.n().orElseThrow();
                 int from = model.state("--from", q.from().get());
                 int to = model.state("--to", q.to().get());
                 SizeEstimate.requireWithin(SizeEstimate.digitsOfRow(p, from, n), q.maxDigits(),
@@ -71,5 +119,32 @@ final class Verification {
         }
         return new VerifyResult(model.source(), q.againstName(), q.what().word(), q.n(), q.from(), q.to(), target,
             report, warnings);
+    }
+
+    /** The stationary law: of the one closed class of a discrete chain (zero on transient states), or from πQ = 0. */
+    private static Rational[] stationary(LoadedModel model) {
+        if (model.model().kind() == org.qchain.exact.model.ChainKind.CONTINUOUS) {
+            return Availability.stationary(model.generator("qchain verify --what stationary"));
+        }
+        NumericEngine.guardSolve(model, SizeEstimate.DEFAULT_MAX_DIGITS);
+        ChainEngine.LongRun<Rational> lr = ChainEngine.longRun(Arithmetic.RATIONAL, NumericEngine.rows(model),
+            model.states(), false);
+        List<ChainEngine.ClassLaw<Rational>> closed = lr.classes().stream().filter(ChainEngine.ClassLaw::closed)
+            .toList();
+        if (closed.size() != 1) {
+            throw new QchainException(ErrorKey.NOT_APPLICABLE, "verify --what stationary", "the chain has "
+                + closed.size() + " closed classes, so its stationary law is not unique (see qchain longrun)");
+        }
+        Rational[] pi = new Rational[model.states().size()];
+        java.util.Arrays.fill(pi, Rational.ZERO);
+        ChainEngine.ClassLaw<Rational> c = closed.get(0);
+        for (int k = 0; k < c.states().size(); k++) {
+            pi[c.states().get(k)] = c.stationary().get(k);
+        }
+        return pi;
+    }
+
+    private static List<String> names(List<String> states, List<Integer> idx) {
+        return idx.stream().map(states::get).toList();
     }
 }

@@ -29,38 +29,31 @@ public record VerifyQuery(Path against, String againstName, What what, OptionalL
     /** The quantities a file can hold. */
     public enum What {
         /** P^n, the whole matrix. */
-        MATRIX("matrix", ""),
+        MATRIX("matrix"),
         /** One row of P^n. */
-        ROW("row", ""),
+        ROW("row"),
         /** One entry of P^n. */
-        ENTRY("entry", ""),
+        ENTRY("entry"),
         /** The stationary law. */
-        STATIONARY("stationary", "the long-run analysis (stationary law)"),
+        STATIONARY("stationary"),
         /** Absorption probabilities. */
-        ABSORPTION("absorption", "the absorption analysis (absorbing chains)"),
+        ABSORPTION("absorption"),
         /** Expected steps before absorption. */
-        EXPECTED_STEPS("expected-steps", "the absorption analysis (expected steps before absorption)"),
+        EXPECTED_STEPS("expected-steps"),
         /** Long-run availability. */
-        AVAILABILITY("availability", "the availability analysis"),
+        AVAILABILITY("availability"),
         /** Mean time to failure. */
-        MTTF("mttf", "the mean-time-to-failure analysis");
+        MTTF("mttf");
 
         private final String word;
-        private final String missing;
 
-        What(String word, String missing) {
+        What(String word) {
             this.word = word;
-            this.missing = missing;
         }
 
         /** The word of {@code --what}. */
         public String word() {
             return word;
-        }
-
-        /** The analysis this build lacks for the quantity, or empty if it has it. */
-        public Optional<String> missingAnalysis() {
-            return missing.isEmpty() ? Optional.empty() : Optional.of(missing);
         }
 
         /** The quantity of a word, ignoring case. */

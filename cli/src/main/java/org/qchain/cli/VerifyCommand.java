@@ -49,7 +49,7 @@ final class VerifyCommand implements Callable<Integer> {
     Long n;
 
     @Option(names = {"-t", "--time"}, paramLabel = "T",
-        description = "Time of a continuous chain: the file holds P(t). Not supported yet.")
+        description = "Time of a continuous chain: refused for now (P(t) is not rational); see qchain step -t.")
     String time;
 
     @Option(names = "--what", paramLabel = "WHAT", converter = Converters.VerifyWhat.class,
@@ -98,8 +98,9 @@ final class VerifyCommand implements Callable<Integer> {
                 + " holds numbers, so every parameter needs a value (give them with --at)");
         }
         if (time != null) {
-            throw new ParameterException(spec.commandLine(), "-t: checking P(t) of a continuous chain needs the"
-                + " continuous-time analysis, which this version of qchain does not have yet");
+            throw new ParameterException(spec.commandLine(), "-t: P(t) is not checked yet (its entries are not"
+                + " rational, and verify compares with exact values); compare with the certified decimals of"
+                + " qchain step -t");
         }
         if (to != null && from == null) {
             throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state)");
@@ -107,7 +108,7 @@ final class VerifyCommand implements Callable<Integer> {
         VerifyQuery.What w = what != null ? what : to != null ? VerifyQuery.What.ENTRY
             : from != null ? VerifyQuery.What.ROW : VerifyQuery.What.MATRIX;
         boolean power = w == VerifyQuery.What.MATRIX || w == VerifyQuery.What.ROW || w == VerifyQuery.What.ENTRY;
-        if (power && n == null && w.missingAnalysis().isEmpty()) {
+        if (power && n == null) {
             throw new ParameterException(spec.commandLine(), "--what " + w.word() + " needs -n N (the number of"
                 + " steps)");
         }

@@ -124,12 +124,43 @@ class VerifyCommandTest {
         assertOneLineError("qchain: cannot read " + REF + "no-such.csv: no such file", verify("no-such.csv", "-n", "4"));
     }
 
+    private static Cli.Result verifyModel(String model, String file, String... more) {
+        List<String> args = new ArrayList<>(List.of("verify", Cli.model(model), "--against", REF + file));
+        args.addAll(List.of(more));
+        return Cli.run(args.toArray(new String[0]));
+    }
+
+    // Grinstead and Snell, Introduction to Probability, ch. 11, the drunkard's walk on 0..4 with p = 1/2 (from
+    // memory): absorption probabilities from 1, 2, 3 into 0 are 3/4, 1/2, 1/4; the expected steps are 3, 4, 3
     @Test
-    void quantitiesWithoutTheirAnalysisAreRefused() {
-        assertOneLineError("qchain: checking stationary needs the long-run analysis (stationary law), which this"
-            + " version of qchain does not have yet", verify("plant-p4.csv", "--what", "stationary"));
-        assertOneLineError("qchain: checking mttf needs the mean-time-to-failure analysis, which this version of"
-            + " qchain does not have yet", verify("plant-p4.csv", "--what", "mttf"));
+    void absorptionAndExpectedStepsOfTheDrunkardsWalk() {
+        Cli.Result r = verifyModel("drunkard-walk.chain", "walk-absorption.csv", "--what", "absorption", "--ulps", "0");
+        assertEquals(0, r.code(), r::toString);
+        assertTrue(r.out().contains("6 values checked, 0 over the tolerance"), r.out());
+        Cli.Result s = verifyModel("drunkard-walk.chain", "walk-steps.csv", "--what", "expected-steps");
+        assertEquals(3, s.code(), s::toString);
+        assertTrue(s.out().contains("3 values checked, 1 over the tolerance"), s.out());
+        assertTrue(s.out().contains("S3     3.0000001  3"), s.out());
+    }
+
+    // One repairable unit with failure rate λ and repair rate μ: availability μ/(λ+μ) = 10/11 here, MTTF 1/λ = 100
+    // (standard reliability result, from memory); the file holds the correctly rounded doubles of 10/11 and 1/11
+    @Test
+    void availabilityStationaryAndMttfOfOneRepairableUnit() {
+        Cli.Result a = verifyModel("one-unit.chain", "one-unit-availability.csv", "--what", "availability",
+            "--ulps", "0");
+        assertEquals(0, a.code(), a::toString);
+        Cli.Result st = verifyModel("one-unit.chain", "one-unit-stationary.csv", "--what", "stationary", "--ulps", "0");
+        assertEquals(0, st.code(), st::toString);
+        Cli.Result m = verifyModel("one-unit.chain", "one-unit-mttf.csv", "--what", "mttf", "--ulps", "0");
+        assertEquals(0, m.code(), m::toString);
+    }
+
+    @Test
+    void aStationaryLawThatIsNotUniqueIsRefused() {
+        assertOneLineError("qchain: verify --what stationary: the chain has 2 closed classes, so its stationary law is"
+            + " not unique (see qchain longrun)",
+            verifyModel("drunkard-walk.chain", "walk-steps.csv", "--what", "stationary"));
     }
 
     @Test
