@@ -93,7 +93,7 @@ final class ContinuousEngine {
             from, point, q.digits(), List.of());
     }
 
-    private static void guard(int n) {
+    static void guard(int n) {
         if (n > MAX_TRANSIENT_STATES) {
             throw new QchainException(ErrorKey.BAD_ARGUMENT, "MODEL", n + " states",
                 "transient probabilities are computed for at most " + MAX_TRANSIENT_STATES + " states");

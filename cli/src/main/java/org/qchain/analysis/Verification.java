@@ -10,6 +10,8 @@ import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.SizeEstimate;
+import org.qchain.exact.certified.CertifiedTransient;
+import org.qchain.exact.certified.Enclosure;
 import org.qchain.exact.ctmc.Availability;
 import org.qchain.exact.longrun.Arithmetic;
 import org.qchain.exact.longrun.ChainEngine;
@@ -34,9 +36,12 @@ final class Verification {
         String has = "the model has " + states.size() + " states";
         Target target;
         Verifier.Truth truth;
+        if (q.t().isPresent()) {
+            return transientCheck(model, q, progress);
+        }
         switch (q.what()) {
             case STATIONARY -> {
-                Rational[] pi = stationary(model);
+                Rational[] pi = stationary(model, q.maxDigits());
                 target = Target.vector(states, has);
                 truth = (i, j) -> pi[j];
             }
@@ -110,23 +115,76 @@ final class Verification {
             }
             default -> throw new IllegalStateException(q.what().word());
         }
+        return compare(model, q, target, truth, new ArrayList<>(), progress);
+    }
+
+    /** Working precision of the enclosures of P(t), in bits: far below any binary64 difference. */
+    static final int TRANSIENT_BITS = 256;
+
+    /**
+     * P(t) is not rational: each entry is compared with the midpoint of a certified enclosure (uniformization with
+     * a proven bound), and the result says how wide the enclosures are, so every error shown is exact to within it.
+     */
+    private static VerifyResult transientCheck(LoadedModel model, VerifyQuery q, Progress progress) {
+        RationalMatrix g = model.generator("qchain verify -t");
+        ContinuousEngine.guard(g.rows());
+        List<String> states = model.states();
+        String has = "the model has " + states.size() + " states";
+        Enclosure[][] e = CertifiedTransient.of(g, q.t().get()).enclose(TRANSIENT_BITS, progress);
+        Rational widest = Rational.ZERO;
+        Rational[][] mid = new Rational[e.length][e.length];
+        for (int i = 0; i < e.length; i++) {
+            for (int j = 0; j < e.length; j++) {
+                mid[i][j] = e[i][j].lo().add(e[i][j].hi()).divide(Rational.of(2));
+                widest = widest.compareTo(e[i][j].width()) < 0 ? e[i][j].width() : widest;
+            }
+        }
+        Target target;
+        Verifier.Truth truth;
+        switch (q.what()) {
+            case MATRIX -> {
+                target = Target.matrix(states, states, has, has);
+                truth = (i, j) -> mid[i][j];
+            }
+            case ROW -> {
+                int from = model.state("--from", q.from().get());
+                target = Target.vector(states, has);
+                truth = (i, j) -> mid[from][j];
+            }
+            case ENTRY -> {
+                int from = model.state("--from", q.from().get());
+                int to = model.state("--to", q.to().get());
+                target = Target.scalar(q.from().get() + " -> " + q.to().get());
+                truth = (i, j) -> mid[from][to];
+            }
+            default -> throw new QchainException(ErrorKey.NOT_APPLICABLE, "verify -t",
+                "-t checks P(t), its rows or entries (--what matrix, row or entry), not " + q.what().word());
+        }
+        List<String> warnings = new ArrayList<>();
+        warnings.add("P(t) is not rational: each value was compared with the midpoint of a certified enclosure no"
+            + " wider than " + org.qchain.exact.Decimals.format(widest, 3) + ", so every error shown is exact to"
+            + " within that width");
+        return compare(model, q, target, truth, warnings, progress);
+    }
+
+    private static VerifyResult compare(LoadedModel model, VerifyQuery q, Target target, Verifier.Truth truth,
+                                        List<String> warnings, Progress progress) {
         Verifier v = new Verifier(target, truth, q.tolerance(), q.show(), progress);
         VerifyReport report = v.report(ReferenceReader.read(q.against(), q.againstName(), target, v));
-        List<String> warnings = new ArrayList<>();
         if (report.checked() < report.expected()) {
             warnings.add(q.againstName() + " gives " + report.checked() + " of the " + report.expected()
                 + " values; only those were checked");
         }
         return new VerifyResult(model.source(), q.againstName(), q.what().word(), q.n(), q.from(), q.to(), target,
-            report, warnings);
+            report, warnings, q.t());
     }
 
     /** The stationary law: of the one closed class of a discrete chain (zero on transient states), or from πQ = 0. */
-    private static Rational[] stationary(LoadedModel model) {
+    private static Rational[] stationary(LoadedModel model, long maxDigits) {
         if (model.model().kind() == org.qchain.exact.model.ChainKind.CONTINUOUS) {
             return Availability.stationary(model.generator("qchain verify --what stationary"));
         }
-        NumericEngine.guardSolve(model, SizeEstimate.DEFAULT_MAX_DIGITS);
+        NumericEngine.guardSolve(model, maxDigits);
         ChainEngine.LongRun<Rational> lr = ChainEngine.longRun(Arithmetic.RATIONAL, NumericEngine.rows(model),
             model.states(), false);
         List<ChainEngine.ClassLaw<Rational>> closed = lr.classes().stream().filter(ChainEngine.ClassLaw::closed)

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.Optional;
 import java.util.OptionalLong;
+import org.qchain.exact.Rational;
 import org.qchain.exact.SizeEstimate;
 import org.qchain.exact.reference.Tolerance;
 
@@ -20,9 +21,11 @@ import org.qchain.exact.reference.Tolerance;
  * @param tolerance   when a value passes
  * @param show        how many of the worst entries the result lists, at least 0
  * @param maxDigits   refuse exact values estimated to have more digits in total
+ * @param t           the time of a continuous chain, for P(t) (then {@link #n} is empty)
  */
 public record VerifyQuery(Path against, String againstName, What what, OptionalLong n, Optional<String> from,
-                          Optional<String> to, Tolerance tolerance, int show, long maxDigits) implements Query {
+                          Optional<String> to, Tolerance tolerance, int show, long maxDigits, Optional<Rational> t)
+    implements Query {
     /** How many of the worst entries are listed by default. */
     public static final int DEFAULT_SHOW = 10;
 
@@ -78,9 +81,15 @@ public record VerifyQuery(Path against, String againstName, What what, OptionalL
         if (what == What.ENTRY && (from.isEmpty() || to.isEmpty())) {
             throw new IllegalArgumentException("an entry needs its two states");
         }
-        if ((what == What.MATRIX || what == What.ROW || what == What.ENTRY) && n.isEmpty()) {
-            throw new IllegalArgumentException(what.word() + " needs the number of steps");
+        if ((what == What.MATRIX || what == What.ROW || what == What.ENTRY) && n.isEmpty() && t.isEmpty()) {
+            throw new IllegalArgumentException(what.word() + " needs the number of steps or the time");
         }
+    }
+
+    /** A query without a time (P^n or a long-run figure). */
+    public VerifyQuery(Path against, String againstName, What what, OptionalLong n, Optional<String> from,
+                       Optional<String> to, Tolerance tolerance, int show, long maxDigits) {
+        this(against, againstName, what, n, from, to, tolerance, show, maxDigits, Optional.empty());
     }
 
     /**
@@ -102,6 +111,6 @@ public record VerifyQuery(Path against, String againstName, What what, OptionalL
 
     /** This query with another tolerance. */
     public VerifyQuery withTolerance(Tolerance t) {
-        return new VerifyQuery(against, againstName, what, n, from, to, t, show, maxDigits);
+        return new VerifyQuery(against, againstName, what, n, from, to, t, show, maxDigits, this.t);
     }
 }

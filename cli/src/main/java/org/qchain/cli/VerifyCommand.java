@@ -49,7 +49,8 @@ final class VerifyCommand implements Callable<Integer> {
     Long n;
 
     @Option(names = {"-t", "--time"}, paramLabel = "T",
-        description = "Time of a continuous chain: refused for now (P(t) is not rational); see qchain step -t.")
+        description = "Time of a continuous chain: the file holds P(t) (or its row, or one entry), compared with"
+            + " certified enclosures of P(t).")
     String time;
 
     @Option(names = "--what", paramLabel = "WHAT", converter = Converters.VerifyWhat.class,
@@ -97,10 +98,24 @@ final class VerifyCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--symbolic does not apply to verify: a float file"
                 + " holds numbers, so every parameter needs a value (give them with --at)");
         }
+        Optional<Rational> t = Optional.empty();
         if (time != null) {
-            throw new ParameterException(spec.commandLine(), "-t: P(t) is not checked yet (its entries are not"
-                + " rational, and verify compares with exact values); compare with the certified decimals of"
-                + " qchain step -t");
+            if (n != null) {
+                throw new ParameterException(spec.commandLine(), "give -n (P^n of a discrete chain) or -t (P(t) of a"
+                    + " continuous chain), not both");
+            }
+            Rational r;
+            try {
+                r = Rational.parse(time);
+            } catch (RuntimeException e) {
+                throw new ParameterException(spec.commandLine(), "-t: '" + time + "' is not a number (write e.g. 2,"
+                    + " 0.5 or 1/3)");
+            }
+            if (r.signum() < 0) {
+                throw new ParameterException(spec.commandLine(), "-t: '" + time + "' is negative; the time must be"
+                    + " 0 or more");
+            }
+            t = Optional.of(r);
         }
         if (to != null && from == null) {
             throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state)");
@@ -108,9 +123,9 @@ final class VerifyCommand implements Callable<Integer> {
         VerifyQuery.What w = what != null ? what : to != null ? VerifyQuery.What.ENTRY
             : from != null ? VerifyQuery.What.ROW : VerifyQuery.What.MATRIX;
         boolean power = w == VerifyQuery.What.MATRIX || w == VerifyQuery.What.ROW || w == VerifyQuery.What.ENTRY;
-        if (power && n == null) {
+        if (power && n == null && t.isEmpty()) {
             throw new ParameterException(spec.commandLine(), "--what " + w.word() + " needs -n N (the number of"
-                + " steps)");
+                + " steps), or -t T for a continuous chain");
         }
         if (w == VerifyQuery.What.ROW && (from == null || to != null)) {
             throw new ParameterException(spec.commandLine(), "--what row needs --from (and no --to)");
@@ -131,7 +146,7 @@ final class VerifyCommand implements Callable<Integer> {
             ulps == null ? OptionalLong.empty() : OptionalLong.of(ulps));
         VerifyQuery q = new VerifyQuery(against, against.toString(), w,
             n == null ? OptionalLong.empty() : OptionalLong.of(n), Optional.ofNullable(from), Optional.ofNullable(to),
-            tolerance, show, digitLimit.maxDigits);
+            tolerance, show, digitLimit.maxDigits, t);
         VerifyResult result = root.run(spec, progress -> Analysis.verify(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return result.passed() ? ExitCodes.OK : ExitCodes.OVER_TOLERANCE;

@@ -26,7 +26,8 @@ final class Checks {
 
     /** {@code P^10}, {@code row Up of P^10}, {@code P^10(Up -> Down)}, or the quantity's word. */
     static String quantity(VerifyResult r) {
-        String power = r.n().isPresent() ? Text.power(r.n().getAsLong()) : "";
+        String power = r.n().isPresent() ? Text.power(r.n().getAsLong())
+            : r.t().map(t -> "P(" + t + ")").orElse("");
         return switch (r.what()) {
             case "matrix" -> power;
             case "row" -> "row " + r.from().orElse("") + " of " + power;

@@ -339,6 +339,7 @@ final class JsonFormatter extends Layout {
         Target t = r.target();
         Json j = Json.object().string("what", r.what());
         r.n().ifPresent(n -> j.number("n", n));
+        r.t().ifPresent(time -> j.string("t", time.toString()));
         r.from().ifPresent(f -> j.string("from", f));
         r.to().ifPresent(x -> j.string("to", x));
         j.string("model", r.source()).string("against", r.against()).string("form", rep.form().description());

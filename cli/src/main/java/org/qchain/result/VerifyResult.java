@@ -20,13 +20,21 @@ import org.qchain.exact.reference.VerifyReport;
  * @param target   the shape checked, with its state names
  * @param report   counts, the worst entries and the tolerance
  * @param warnings warnings for the user
+ * @param t        the time, for P(t) of a continuous chain
  */
 public record VerifyResult(String source, String against, String what, OptionalLong n, Optional<String> from,
-                           Optional<String> to, Target target, VerifyReport report, List<String> warnings)
+                           Optional<String> to, Target target, VerifyReport report, List<String> warnings,
+                           Optional<org.qchain.exact.Rational> t)
     implements Result {
     /** Copies the warnings. */
     public VerifyResult {
         warnings = List.copyOf(warnings);
+    }
+
+    /** A result without a time (P^n or a long-run figure). */
+    public VerifyResult(String source, String against, String what, OptionalLong n, Optional<String> from,
+                        Optional<String> to, Target target, VerifyReport report, List<String> warnings) {
+        this(source, against, what, n, from, to, target, report, warnings, Optional.empty());
     }
 
     /** Whether every value checked meets the tolerance. */

@@ -156,6 +156,21 @@ class VerifyCommandTest {
         assertEquals(0, m.code(), m::toString);
     }
 
+    // One repairable unit, λ = 1/100, μ = 1/10: P(t)(Up -> Up) = μ/(λ+μ) + λ/(λ+μ) e^(-(λ+μ)t) (standard reliability
+    // result, from memory); one-unit-p5.csv holds that formula's entries at t = 5 as the correctly rounded doubles of
+    // 60-digit values from Python's decimal module (reference library behaviour), so every value is 0 ulp off
+    @Test
+    void transientProbabilitiesAreComparedWithCertifiedEnclosures() {
+        Cli.Result r = verifyModel("one-unit.chain", "one-unit-p5.csv", "-t", "5", "--ulps", "0");
+        assertEquals(0, r.code(), r::toString);
+        assertTrue(r.out().startsWith("P(5) of "), r.out());
+        assertTrue(r.out().contains("4 values checked, 0 over the tolerance"), r.out());
+        assertTrue(r.err().startsWith("qchain: warning: P(t) is not rational: each value was compared with the midpoint"
+            + " of a certified enclosure no wider than "), r.err());
+        Cli.Result onDiscrete = verify("plant-p4.csv", "-t", "2");
+        assertEquals(2, onDiscrete.code(), onDiscrete::toString);
+    }
+
     @Test
     void aStationaryLawThatIsNotUniqueIsRefused() {
         assertOneLineError("qchain: verify --what stationary: the chain has 2 closed classes, so its stationary law is"
@@ -166,7 +181,7 @@ class VerifyCommandTest {
     @Test
     void usageErrors() {
         for (String[] args : new String[][] {
-            {"-n", "4", "--symbolic"}, {"-t", "2"}, {}, {"-n", "4", "--to", "Up"}, {"-n", "4", "--what", "row"},
+            {"-n", "4", "--symbolic"}, {"-t", "2"}, {"-n", "4", "-t", "2"}, {"-t", "-1"}, {}, {"-n", "4", "--to", "Up"}, {"-n", "4", "--what", "row"},
             {"-n", "4", "--what", "nonsense"}, {"-n", "4", "--tol", "-1"}, {"-n", "4", "--ulps", "-2"}}) {
             Cli.Result r = verify("plant-p4.csv", args);
             assertEquals(2, r.code(), () -> String.join(" ", args) + "\n" + r);
