@@ -32,13 +32,16 @@ final class Verification {
     }
 
     static VerifyResult run(LoadedModel model, VerifyQuery q, Progress progress) {
+        if (q.t().isPresent()) {
+            return transientCheck(model, q, progress);
+        }
+        if (isPower(q.what())) {
+            return powerCheck(model, q, progress);
+        }
         List<String> states = model.states();
         String has = "the model has " + states.size() + " states";
         Target target;
         Verifier.Truth truth;
-        if (q.t().isPresent()) {
-            return transientCheck(model, q, progress);
-        }
         switch (q.what()) {
             case STATIONARY -> {
                 Rational[] pi = stationary(model, q.maxDigits());
@@ -81,41 +84,50 @@ final class Verification {
                     truth = (i, j) -> mttf.get(j);
                 }
             }
-            case MATRIX -> {
-                model.requireDiscrete("qchain verify -n checks P^n of a discrete chain");
-                RationalMatrix p = model.matrix();
-                long n = q.n().orElseThrow();
-                SizeEstimate.requireWithin(SizeEstimate.digitsOfPower(p, n), q.maxDigits(),
-                    NumericEngine.MAX_DIGITS_OPTION);
-                target = Target.matrix(states, states, has, has);
-                truth = new PowerRows(p, n, progress);
-            }
-            case ROW -> {
-                model.requireDiscrete("qchain verify -n checks P^n of a discrete chain");
-                RationalMatrix p = model.matrix();
-                long n = q.n().orElseThrow();
-                int from = model.state("--from", q.from().get());
-                SizeEstimate.requireWithin(SizeEstimate.digitsOfRow(p, from, n), q.maxDigits(),
-                    NumericEngine.MAX_DIGITS_OPTION);
-                target = Target.vector(states, has);
-                Rational[] row = MatrixPowers.rowOfPower(p, from, n, progress);
-                truth = (i, j) -> row[j];
-            }
-            case ENTRY -> {
-                model.requireDiscrete("qchain verify -n checks P^n of a discrete chain");
-                RationalMatrix p = model.matrix();
-                long n = q.n().orElseThrow();
-                int from = model.state("--from", q.from().get());
-                int to = model.state("--to", q.to().get());
-                SizeEstimate.requireWithin(SizeEstimate.digitsOfRow(p, from, n), q.maxDigits(),
-                    NumericEngine.MAX_DIGITS_OPTION);
-                target = Target.scalar(q.from().get() + " -> " + q.to().get());
-                Rational value = MatrixPowers.entryOfPower(p, from, to, n, progress);
-                truth = (i, j) -> value;
-            }
             default -> throw new IllegalStateException(q.what().word());
         }
         return compare(model, q, target, truth, new ArrayList<>(), progress);
+    }
+
+    private static boolean isPower(VerifyQuery.What w) {
+        return w == VerifyQuery.What.MATRIX || w == VerifyQuery.What.ROW || w == VerifyQuery.What.ENTRY;
+    }
+
+    /** The shape of P^n or P(t), its row or its entry, as the query names it. */
+    private static Target powerTarget(VerifyQuery q, List<String> states) {
+        String has = "the model has " + states.size() + " states";
+        return switch (q.what()) {
+            case MATRIX -> Target.matrix(states, states, has, has);
+            case ROW -> Target.vector(states, has);
+            default -> Target.scalar(q.from().get() + " -> " + q.to().get());
+        };
+    }
+
+    /** P^n, its row or its entry: guarded by the digit estimate before any power is computed. */
+    private static VerifyResult powerCheck(LoadedModel model, VerifyQuery q, Progress progress) {
+        model.requireDiscrete("qchain verify -n checks P^n of a discrete chain");
+        RationalMatrix p = model.matrix();
+        long n = q.n().orElseThrow();
+        Verifier.Truth truth;
+        if (q.what() == VerifyQuery.What.MATRIX) {
+            SizeEstimate.requireWithin(SizeEstimate.digitsOfPower(p, n), q.maxDigits(),
+                NumericEngine.MAX_DIGITS_OPTION);
+            truth = new PowerRows(p, n, progress);
+        } else {
+            int from = model.state("--from", q.from().get());
+            int to = q.to().map(t -> model.state("--to", t)).orElse(-1);
+            // one entry is computed through its whole row, so the row's size bounds both
+            SizeEstimate.requireWithin(SizeEstimate.digitsOfRow(p, from, n), q.maxDigits(),
+                NumericEngine.MAX_DIGITS_OPTION);
+            if (q.what() == VerifyQuery.What.ROW) {
+                Rational[] row = MatrixPowers.rowOfPower(p, from, n, progress);
+                truth = (i, j) -> row[j];
+            } else {
+                Rational value = MatrixPowers.entryOfPower(p, from, to, n, progress);
+                truth = (i, j) -> value;
+            }
+        }
+        return compare(model, q, powerTarget(q, model.states()), truth, new ArrayList<>(), progress);
     }
 
     /** Working precision of the enclosures of P(t), in bits: far below any binary64 difference. */
@@ -128,8 +140,10 @@ final class Verification {
     private static VerifyResult transientCheck(LoadedModel model, VerifyQuery q, Progress progress) {
         RationalMatrix g = model.generator("qchain verify -t");
         ContinuousEngine.guard(g.rows());
-        List<String> states = model.states();
-        String has = "the model has " + states.size() + " states";
+        if (!isPower(q.what())) {
+            throw new QchainException(ErrorKey.NOT_APPLICABLE, "verify -t",
+                "-t checks P(t), its rows or entries (--what matrix, row or entry), not " + q.what().word());
+        }
         Enclosure[][] e = CertifiedTransient.of(g, q.t().get()).enclose(TRANSIENT_BITS, progress);
         Rational widest = Rational.ZERO;
         Rational[][] mid = new Rational[e.length][e.length];
@@ -139,32 +153,14 @@ final class Verification {
                 widest = widest.compareTo(e[i][j].width()) < 0 ? e[i][j].width() : widest;
             }
         }
-        Target target;
-        Verifier.Truth truth;
-        switch (q.what()) {
-            case MATRIX -> {
-                target = Target.matrix(states, states, has, has);
-                truth = (i, j) -> mid[i][j];
-            }
-            case ROW -> {
-                int from = model.state("--from", q.from().get());
-                target = Target.vector(states, has);
-                truth = (i, j) -> mid[from][j];
-            }
-            case ENTRY -> {
-                int from = model.state("--from", q.from().get());
-                int to = model.state("--to", q.to().get());
-                target = Target.scalar(q.from().get() + " -> " + q.to().get());
-                truth = (i, j) -> mid[from][to];
-            }
-            default -> throw new QchainException(ErrorKey.NOT_APPLICABLE, "verify -t",
-                "-t checks P(t), its rows or entries (--what matrix, row or entry), not " + q.what().word());
-        }
+        int from = q.from().map(f -> model.state("--from", f)).orElse(-1);
+        int to = q.to().map(t -> model.state("--to", t)).orElse(-1);
+        Verifier.Truth truth = (i, j) -> mid[from < 0 ? i : from][to < 0 ? j : to];
         List<String> warnings = new ArrayList<>();
         warnings.add("P(t) is not rational: each value was compared with the midpoint of a certified enclosure no"
             + " wider than " + org.qchain.exact.Decimals.format(widest, 3) + ", so every error shown is exact to"
             + " within that width");
-        return compare(model, q, target, truth, warnings, progress);
+        return compare(model, q, powerTarget(q, model.states()), truth, warnings, progress);
     }
 
     private static VerifyResult compare(LoadedModel model, VerifyQuery q, Target target, Verifier.Truth truth,
