@@ -26,6 +26,12 @@ public final class Issue13Chains {
             "100 states, 5 transitions a row, decimal probabilities (seed 2)");
         write(dir.resolve("sparse1000.chain"), BenchChains.sparse(1000, 5, 3, BenchChains.DECIMAL_DENOMINATORS),
             "1000 states, 5 transitions a row, decimal probabilities (seed 3)");
+        write(dir.resolve("closed12.chain"),
+            BenchChains.dense(12, BenchChains.CLOSED_12_SEED, BenchChains.CLOSED_DENOMINATORS),
+            "12 states, dense, row denominators 60, 120 or 240 (the closed-form benchmark's chain)");
+        write(dir.resolve("closed20.chain"),
+            BenchChains.dense(20, BenchChains.CLOSED_20_SEED, BenchChains.CLOSED_DENOMINATORS),
+            "20 states, dense, row denominators 60, 120 or 240 (the closed-form benchmark's chain)");
     }
 
     /** States S0, S1, ...; every non-zero entry as a transition line, the diagonal included. */

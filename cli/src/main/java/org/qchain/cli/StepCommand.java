@@ -148,7 +148,7 @@ final class StepCommand implements Callable<Integer> {
                 + " (a formula has no double; give values with --at)");
         }
         Result result = root.run(spec, progress -> Analysis.step(loaded, q, progress));
-        Emitter.emit(spec, output.formatter(doubles).format(result), result.warnings(), output.output());
+        Emitter.emit(spec, output.formatter(doubles), result, output.output());
         return ExitCodes.OK;
     }
 

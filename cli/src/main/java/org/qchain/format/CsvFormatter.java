@@ -36,34 +36,53 @@ final class CsvFormatter extends Layout {
 
     @Override
     public String stepMatrix(StepResult.Matrix m) {
-        StringBuilder sb = new StringBuilder();
-        if (doubles) {
-            // one record per entry: a table with three columns per entry would no longer read back as a model
-            Text.csvRecord(sb, List.of("from", "to", "value", "double", "hex"));
-            for (int i = 0; i < m.states().size(); i++) {
-                for (int j = 0; j < m.states().size(); j++) {
-                    Rational e = m.entries().get(i).get(j);
-                    Text.csvRecord(sb, List.of(m.states().get(i), m.states().get(j), e.toString(), shortest(e),
-                        hex(e)));
+        return whole(sink -> stepMatrix(m, sink));
+    }
+
+    @Override
+    void stepMatrix(StepResult.Matrix m, Sink sink) {
+        int size = m.states().size();
+        try (AheadTexts exact = AheadTexts.exact(flat(m.entries()))) {
+            if (doubles) {
+                // one record per entry: a table with three columns per entry would no longer read back as a model
+                Text.csvRecord(sink.sb, List.of("from", "to", "value", "double", "hex"));
+                for (int i = 0; i < size; i++) {
+                    for (int j = 0; j < size; j++) {
+                        Rational e = m.entries().get(i).get(j);
+                        Text.csvRecord(sink.sb, List.of(m.states().get(i), m.states().get(j), exact.get(i * size + j),
+                            shortest(e), hex(e)));
+                        sink.spill();
+                    }
                 }
+                return;
             }
-            return sb.toString();
+            Text.csvRecord(sink.sb, m.states());
+            for (int i = 0; i < size; i++) {
+                List<String> row = new ArrayList<>(size);
+                for (int j = 0; j < size; j++) {
+                    row.add(exact.get(i * size + j));
+                }
+                Text.csvRecord(sink.sb, row);
+                sink.spill();
+            }
         }
-        Text.csvRecord(sb, m.states());
-        for (List<Rational> row : m.entries()) {
-            Text.csvRecord(sb, List.of(DecimalText.toStrings(row.toArray(new Rational[0]))));
-        }
-        return sb.toString();
     }
 
     @Override
     public String stepRow(StepResult.Row r) {
-        StringBuilder sb = new StringBuilder();
-        Text.csvRecord(sb, entryHeader());
-        for (int j = 0; j < r.states().size(); j++) {
-            Text.csvRecord(sb, entryRecord(r.header().n(), r.from(), r.states().get(j), r.entries().get(j)));
+        return whole(sink -> stepRow(r, sink));
+    }
+
+    @Override
+    void stepRow(StepResult.Row r, Sink sink) {
+        Text.csvRecord(sink.sb, entryHeader());
+        try (AheadTexts exact = AheadTexts.exact(r.entries())) {
+            for (int j = 0; j < r.states().size(); j++) {
+                Text.csvRecord(sink.sb, entryRecord(r.header().n(), r.from(), r.states().get(j), r.entries().get(j),
+                    exact.get(j)));
+                sink.spill();
+            }
         }
-        return sb.toString();
     }
 
     @Override
@@ -80,7 +99,7 @@ final class CsvFormatter extends Layout {
             return sb.toString();
         }
         Text.csvRecord(sb, entryHeader());
-        Text.csvRecord(sb, entryRecord(s.header().n(), s.from(), s.to(), s.value()));
+        Text.csvRecord(sb, entryRecord(s.header().n(), s.from(), s.to(), s.value(), s.value().toString()));
         return sb.toString();
     }
 
@@ -93,8 +112,8 @@ final class CsvFormatter extends Layout {
         return h;
     }
 
-    private List<String> entryRecord(long n, String from, String to, Rational e) {
-        List<String> rec = new ArrayList<>(List.of(String.valueOf(n), from, to, e.toString(), dec(e)));
+    private List<String> entryRecord(long n, String from, String to, Rational e, String exact) {
+        List<String> rec = new ArrayList<>(List.of(String.valueOf(n), from, to, exact, dec(e)));
         if (doubles) {
             rec.add(shortest(e));
             rec.add(hex(e));

@@ -1,5 +1,6 @@
 package org.qchain.format;
 
+import java.io.IOException;
 import org.qchain.result.AvailabilityResult;
 import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.CheckResult;
@@ -69,6 +70,20 @@ public interface Formatter {
             return absorb(a);
         }
         return check((CheckResult) result);
+    }
+
+    /**
+     * Writes {@link #format}'s text to {@code out}, the same characters; large results (the exact entries of a
+     * whole power or a row) are written in pieces while later entries are still being converted, so the whole
+     * text is never held in memory.
+     *
+     * @param result what to print
+     * @param out    where to write
+     * @throws IOException if {@code out} fails
+     * @throws UnsupportedOperationException if this format has no layout for the result
+     */
+    default void write(Result result, Appendable out) throws IOException {
+        out.append(format(result));
     }
 
     /** The full matrix P^n. */

@@ -8,12 +8,25 @@ import java.util.function.Function;
  * needs no JSON library; mutable, one per document.
  */
 public final class Json {
-    private final StringBuilder sb = new StringBuilder();
+    private final StringBuilder sb;
     private boolean first = true;
+
+    private Json(StringBuilder sb) {
+        this.sb = sb;
+    }
 
     /** A writer positioned inside a new top-level object. */
     public static Json object() {
-        Json j = new Json();
+        return object(new StringBuilder());
+    }
+
+    /** A writer appending to {@code sink}'s buffer, positioned inside a new top-level object; end it with {@link #end}. */
+    static Json object(Sink sink) {
+        return object(sink.sb);
+    }
+
+    private static Json object(StringBuilder target) {
+        Json j = new Json(target);
         j.sb.append('{');
         return j;
     }
@@ -60,6 +73,42 @@ public final class Json {
         return this;
     }
 
+    /**
+     * Appends an array of {@code rows} arrays of {@code cols} strings, entry {@code (i, j)} being text
+     * {@code i * cols + j} of {@code texts}, passing the text on to the sink's output after every entry (mutates).
+     */
+    Json streamedRows(String key, int rows, int cols, AheadTexts texts, Sink sink) {
+        key(key);
+        sb.append('[');
+        for (int i = 0; i < rows; i++) {
+            if (i > 0) {
+                sb.append(',');
+            }
+            streamedArray(i * cols, cols, texts, sink);
+        }
+        sb.append(']');
+        return this;
+    }
+
+    /** Appends an array of the first {@code count} texts of {@code texts}, as {@link #streamedRows} (mutates). */
+    Json streamed(String key, int count, AheadTexts texts, Sink sink) {
+        key(key);
+        streamedArray(0, count, texts, sink);
+        return this;
+    }
+
+    private void streamedArray(int from, int count, AheadTexts texts, Sink sink) {
+        sb.append('[');
+        for (int j = 0; j < count; j++) {
+            if (j > 0) {
+                sb.append(',');
+            }
+            quote(sb, texts.get(from + j));
+            sink.spill();
+        }
+        sb.append(']');
+    }
+
     /** Appends an array of objects, each written by {@code body} into a fresh writer (mutates). */
     public <T> Json objects(String key, List<T> items, Function<T, Json> body) {
         key(key);
@@ -79,6 +128,11 @@ public final class Json {
         key(key);
         sb.append(inner.close());
         return this;
+    }
+
+    /** Closes an object written into a sink. */
+    void end() {
+        sb.append('}');
     }
 
     /** Closes the object and returns its text. */

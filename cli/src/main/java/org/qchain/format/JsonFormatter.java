@@ -48,35 +48,58 @@ final class JsonFormatter extends Layout {
 
     @Override
     public String stepMatrix(StepResult.Matrix m) {
+        return whole(sink -> stepMatrix(m, sink));
+    }
+
+    @Override
+    void stepMatrix(StepResult.Matrix m, Sink sink) {
         StepResult.Header h = m.header();
-        Json j = Json.object()
+        int size = m.states().size();
+        List<Rational> all = flat(m.entries());
+        Json j = Json.object(sink)
             .string("kind", h.kind())
             .number("n", h.n())
-            .strings("states", m.states())
-            .stringRows("matrix", m.entries().stream().map(this::exact).toList())
-            .stringRows("decimals", m.entries().stream().map(this::decimals).toList());
+            .strings("states", m.states());
+        try (AheadTexts exact = AheadTexts.exact(all)) {
+            j.streamedRows("matrix", size, size, exact, sink);
+        }
+        try (AheadTexts decimals = AheadTexts.start(all, this::dec)) {
+            j.streamedRows("decimals", size, size, decimals, sink);
+        }
         if (doubles) {
             j.stringRows("doubles", m.entries().stream().map(r -> r.stream().map(Layout::shortest).toList()).toList())
                 .stringRows("hex", m.entries().stream().map(r -> r.stream().map(Layout::hex).toList()).toList());
         }
-        return common(j, h).close() + "\n";
+        common(j, h).end();
+        sink.sb.append('\n');
     }
 
     @Override
     public String stepRow(StepResult.Row r) {
+        return whole(sink -> stepRow(r, sink));
+    }
+
+    @Override
+    void stepRow(StepResult.Row r, Sink sink) {
         StepResult.Header h = r.header();
-        Json j = Json.object()
+        int size = r.entries().size();
+        Json j = Json.object(sink)
             .number("n", h.n())
             .string("from", r.from())
-            .strings("states", r.states())
-            .strings("row", exact(r.entries()))
-            .strings("decimals", decimals(r.entries()))
-            .string("kind", h.kind());
+            .strings("states", r.states());
+        try (AheadTexts exact = AheadTexts.exact(r.entries())) {
+            j.streamed("row", size, exact, sink);
+        }
+        try (AheadTexts decimals = AheadTexts.start(r.entries(), this::dec)) {
+            j.streamed("decimals", size, decimals, sink);
+        }
+        j.string("kind", h.kind());
         if (doubles) {
             j.strings("doubles", r.entries().stream().map(Layout::shortest).toList())
                 .strings("hex", r.entries().stream().map(Layout::hex).toList());
         }
-        return common(j, h).close() + "\n";
+        common(j, h).end();
+        sink.sb.append('\n');
     }
 
     @Override

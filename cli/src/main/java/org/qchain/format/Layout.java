@@ -1,9 +1,15 @@
 package org.qchain.format;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.util.List;
+import java.util.function.Consumer;
 import org.qchain.exact.Rational;
 import org.qchain.exact.floats.Binary64;
 import org.qchain.exact.floats.FloatText;
 import org.qchain.result.CheckResult;
+import org.qchain.result.Result;
+import org.qchain.result.StepResult;
 
 /** What every formatter shares: the significant digits of its decimals, and the decimal of an exact value. */
 abstract class Layout implements Formatter {
@@ -20,6 +26,45 @@ abstract class Layout implements Formatter {
     Layout(int digits, boolean doubles) {
         this.digits = digits;
         this.doubles = doubles;
+    }
+
+    @Override
+    public final void write(Result result, Appendable out) throws IOException {
+        Sink sink = Sink.to(out);
+        try {
+            if (result instanceof StepResult.Matrix m) {
+                stepMatrix(m, sink);
+            } else if (result instanceof StepResult.Row r) {
+                stepRow(r, sink);
+            } else {
+                sink.sb.append(format(result));
+            }
+            sink.flush();
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
+    }
+
+    /** Lays out P^n into {@code sink}; formats that stream override this, the others append {@link #stepMatrix}. */
+    void stepMatrix(StepResult.Matrix m, Sink sink) {
+        sink.sb.append(stepMatrix(m));
+    }
+
+    /** Lays out a row of P^n into {@code sink}, as {@link #stepMatrix(StepResult.Matrix, Sink)}. */
+    void stepRow(StepResult.Row r, Sink sink) {
+        sink.sb.append(stepRow(r));
+    }
+
+    /** The text of a streaming layout, gathered whole. */
+    static String whole(Consumer<Sink> layout) {
+        Sink sink = Sink.buffer();
+        layout.accept(sink);
+        return sink.text();
+    }
+
+    /** The entries of a matrix, row after row. */
+    static List<Rational> flat(List<List<Rational>> rows) {
+        return rows.stream().flatMap(List::stream).toList();
     }
 
     /** The correctly rounded double of {@code r} as its shortest round-trip decimal. */

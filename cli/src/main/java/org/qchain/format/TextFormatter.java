@@ -32,15 +32,25 @@ final class TextFormatter extends Layout {
     }
 
     private static String end(StringBuilder sb) {
-        return sb.append('\n').append(Caution.wrapped(WIDTH)).append('\n').toString();
+        return close(sb).toString();
+    }
+
+    /** Appends the caution that ends every text layout. */
+    private static StringBuilder close(StringBuilder sb) {
+        return sb.append('\n').append(Caution.wrapped(WIDTH)).append('\n');
     }
 
     // --- step ----------------------------------------------------------------------------------------------------
 
     @Override
     public String stepMatrix(StepResult.Matrix m) {
+        return whole(sink -> stepMatrix(m, sink));
+    }
+
+    @Override
+    void stepMatrix(StepResult.Matrix m, Sink sink) {
         StepResult.Header h = m.header();
-        StringBuilder sb = new StringBuilder();
+        StringBuilder sb = sink.sb;
         sb.append(Text.power(h.n())).append(" for ").append(h.source()).append(" (").append(h.kind())
             .append(" chain, ").append(m.states().size()).append(m.states().size() == 1 ? " state)" : " states)")
             .append('\n');
@@ -53,15 +63,16 @@ final class TextFormatter extends Layout {
         }
         overview(sb, m.states(), decimals);
         sb.append("Exact values:\n");
-        TextTable list = new TextTable().addRow("from", "to", "decimal", "exact");
+        TextTable list = new TextTable().addRow("from", "to", "decimal");
         for (int i = 0; i < m.states().size(); i++) {
             for (int j = 0; j < m.states().size(); j++) {
-                list.addRow(m.states().get(i), m.states().get(j), decimals.get(i).get(j),
-                    DecimalText.toString(m.entries().get(i).get(j)));
+                list.addRow(m.states().get(i), m.states().get(j), decimals.get(i).get(j));
             }
         }
-        sb.append(list.render());
-        return end(sb);
+        try (AheadTexts exact = AheadTexts.exact(flat(m.entries()))) {
+            list.render(sink, row -> row == 0 ? "exact" : exact.get(row - 1));
+        }
+        close(sb);
     }
 
     /** The square overview of a matrix of texts, split into column blocks that fit the width. */
@@ -118,19 +129,25 @@ final class TextFormatter extends Layout {
 
     @Override
     public String stepRow(StepResult.Row r) {
+        return whole(sink -> stepRow(r, sink));
+    }
+
+    @Override
+    void stepRow(StepResult.Row r, Sink sink) {
         StepResult.Header h = r.header();
-        StringBuilder sb = new StringBuilder();
+        StringBuilder sb = sink.sb;
         sb.append("Row ").append(r.from()).append(" of ").append(Text.power(h.n())).append(" for ").append(h.source())
             .append(" (").append(h.kind()).append(" chain)\n");
         sb.append("Probability of being in each state after ").append(Text.steps(h.n())).append(", starting in ")
             .append(r.from()).append("; decimals to ").append(Text.digits(digits)).append(".\n\n");
-        TextTable t = new TextTable().addRow("to", "decimal", "exact");
+        TextTable t = new TextTable().addRow("to", "decimal");
         for (int j = 0; j < r.states().size(); j++) {
-            Rational e = r.entries().get(j);
-            t.addRow(r.states().get(j), dec(e), DecimalText.toString(e));
+            t.addRow(r.states().get(j), dec(r.entries().get(j)));
         }
-        sb.append(t.render());
-        return end(sb);
+        try (AheadTexts exact = AheadTexts.exact(r.entries())) {
+            t.render(sink, row -> row == 0 ? "exact" : exact.get(row - 1));
+        }
+        close(sb);
     }
 
     @Override

@@ -1,5 +1,6 @@
 package org.qchain.format;
 
+import java.util.function.IntFunction;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -48,6 +49,31 @@ final class TextTable {
             sb.append(line.toString().stripTrailing()).append('\n');
         }
         return sb.toString();
+    }
+
+    /**
+     * Writes the table with one more column at the right, whose cells are given one by one in row order by
+     * {@code lastCell} (called once per row, the header row first) and passed on to the sink after every line: the
+     * same text as {@link #render} of the table with that column, without holding that column in memory.
+     */
+    void render(Sink sink, IntFunction<String> lastCell) {
+        int cols = rows.stream().mapToInt(r -> r.length).max().orElse(0);
+        int[] width = new int[cols];
+        for (String[] r : rows) {
+            for (int c = 0; c < r.length; c++) {
+                width[c] = Math.max(width[c], length(r[c]));
+            }
+        }
+        for (int i = 0; i < rows.size(); i++) {
+            String[] r = rows.get(i);
+            StringBuilder line = new StringBuilder(indent);
+            for (int c = 0; c < r.length; c++) {
+                line.append(r[c]).append(" ".repeat(width[c] - length(r[c]) + 2));
+            }
+            line.append(lastCell.apply(i));
+            sink.sb.append(line.toString().stripTrailing()).append('\n');
+            sink.spill();
+        }
     }
 
     private static int length(String s) {

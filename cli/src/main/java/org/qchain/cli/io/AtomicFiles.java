@@ -1,7 +1,12 @@
 package org.qchain.cli.io;
 
+import java.io.BufferedWriter;
 import java.io.IOException;
-import java.nio.ByteBuffer;
+import java.io.InterruptedIOException;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.channels.Channels;
+import java.nio.channels.ClosedByInterruptException;
 import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
@@ -24,6 +29,9 @@ import org.qchain.exact.QchainException;
  * pointing where it did (the file it names is replaced).
  */
 public final class AtomicFiles {
+    /** Characters buffered before they go to the file. */
+    private static final int BUFFER = 1 << 16;
+
     private AtomicFiles() {
     }
 
@@ -62,6 +70,33 @@ public final class AtomicFiles {
      *                         permission, full disk); the target is then unchanged and no temporary file is left
      */
     public static void write(Path target, String option, String text) {
+        write(target, option, out -> out.append(text));
+    }
+
+    /** Text written in pieces to a writer (streamed, never held whole). */
+    @FunctionalInterface
+    public interface Content {
+        /**
+         * Writes the text.
+         *
+         * @param out where to write (buffered, UTF-8)
+         * @throws IOException if writing fails
+         */
+        void writeTo(Writer out) throws IOException;
+    }
+
+    /**
+     * Writes the text that {@code content} produces into {@code target} as {@link #write(Path, String, String)}
+     * does: streamed into the temporary file, which replaces the target only when all of it is written and forced to
+     * disk; on any failure (or an interrupt) the target is unchanged and the temporary file is removed.
+     *
+     * @param target  the file to write
+     * @param option  the option that named it, for messages
+     * @param content writes the content
+     * @throws QchainException {@link ErrorKey#BAD_ARGUMENT} if the file cannot be written, {@link ErrorKey#INTERRUPTED}
+     *                         if the thread was interrupted
+     */
+    public static void write(Path target, String option, Content content) {
         Path abs = target.toAbsolutePath().normalize();
         Path tmp = null;
         try {
@@ -74,16 +109,16 @@ public final class AtomicFiles {
             }
             if (Files.exists(abs) && !Files.isRegularFile(abs)) {
                 // a named pipe, a device (/dev/null, /dev/stdout), a socket: write into it, never replace it
-                writeDirectly(abs, text);
+                writeDirectly(abs, content);
                 return;
             }
             Path dir = abs.getParent();
             tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE)) {
-                ByteBuffer buf = ByteBuffer.wrap(text.getBytes(StandardCharsets.UTF_8));
-                while (buf.hasRemaining()) {
-                    ch.write(buf);
-                }
+                Writer w = new BufferedWriter(new OutputStreamWriter(Channels.newOutputStream(ch),
+                    StandardCharsets.UTF_8), BUFFER);
+                content.writeTo(w);
+                w.flush();
                 ch.force(true);
             }
             copyPermissions(abs, tmp);
@@ -92,6 +127,8 @@ public final class AtomicFiles {
             }
             Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             tmp = null;
+        } catch (ClosedByInterruptException | InterruptedIOException e) {
+            throw new QchainException(ErrorKey.INTERRUPTED);
         } catch (AtomicMoveNotSupportedException e) {
             throw new QchainException(ErrorKey.BAD_ARGUMENT, option, target,
                 "this file system cannot replace files atomically");
@@ -111,9 +148,10 @@ public final class AtomicFiles {
         }
     }
 
-    private static void writeDirectly(Path target, String text) throws IOException {
-        try (var out = Files.newOutputStream(target, StandardOpenOption.WRITE)) {
-            out.write(text.getBytes(StandardCharsets.UTF_8));
+    private static void writeDirectly(Path target, Content content) throws IOException {
+        try (Writer w = new BufferedWriter(new OutputStreamWriter(Files.newOutputStream(target,
+            StandardOpenOption.WRITE), StandardCharsets.UTF_8), BUFFER)) {
+            content.writeTo(w);
         }
     }
 
