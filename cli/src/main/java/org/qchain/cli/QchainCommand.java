@@ -31,11 +31,19 @@ import picocli.CommandLine.Spec;
 @Command(name = "qchain", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     description = "Exact n-step transition probabilities of Markov chains: exact fractions, with correctly rounded"
         + " decimals beside them.",
-    subcommands = {StepCommand.class, SensCommand.class, ClosedCommand.class, CheckCommand.class, VerifyCommand.class,
-        AvailCommand.class, ConvertCommand.class, ClassesCommand.class, LongRunCommand.class, AbsorbCommand.class,
-        DemoCommand.class, CompletionCommand.class,
-        HelpCommand.class})
+    subcommands = {})
 public final class QchainCommand implements Callable<Integer> {
+    /**
+     * The subcommands, in the order of the help. They are added by {@link #newCommandLine}, not by the annotation,
+     * so that a process running one command builds the option model of that command only (picocli reads every
+     * command's annotations when it is added: about a quarter of a second of start-up for all of them).
+     */
+    static final List<Class<?>> SUBCOMMANDS = List.of(StepCommand.class, SensCommand.class, ClosedCommand.class,
+        CheckCommand.class, VerifyCommand.class, AvailCommand.class, ConvertCommand.class, ClassesCommand.class,
+        LongRunCommand.class, AbsorbCommand.class, DemoCommand.class, CompletionCommand.class, HelpCommand.class);
+    /** Commands that need the whole tree: the demo, the completion script and help on other commands. */
+    private static final List<String> NEED_ALL = List.of("demo", "completion", "help");
+
     /** Milliseconds the Ctrl-C hook waits for the work to stop and clean up before the JVM halts. */
     private static final long INTERRUPT_GRACE_MS = 3000;
 
@@ -127,11 +135,28 @@ public final class QchainCommand implements Callable<Integer> {
      * @return the command line, ready for {@code setOut}/{@code setErr} and {@code execute}
      */
     public static CommandLine newCommandLine(boolean progressAllowed) {
-        return newCommandLine(progressAllowed, new Errors());
+        return newCommandLine(progressAllowed, new Errors(), null);
     }
 
-    private static CommandLine newCommandLine(boolean progressAllowed, Errors errors) {
+    /**
+     * The command tree, with only the subcommand named by {@code first} when it names one that runs on its own
+     * (the whole tree otherwise, or when {@code first} is null): what the process needs for its arguments.
+     */
+    private static CommandLine newCommandLine(boolean progressAllowed, Errors errors, String first) {
         CommandLine cl = new CommandLine(new QchainCommand(progressAllowed));
+        Class<?> only = null;
+        if (first != null && !NEED_ALL.contains(first)) {
+            for (Class<?> c : SUBCOMMANDS) {
+                if (c.getAnnotation(Command.class).name().equals(first)) {
+                    only = c;
+                }
+            }
+        }
+        for (Class<?> c : SUBCOMMANDS) {
+            if (only == null || c == only) {
+                cl.addSubcommand(newInstance(c));
+            }
+        }
         cl.setExecutionExceptionHandler(errors);
         cl.setParameterExceptionHandler(errors);
         Map<String, String> codes = new LinkedHashMap<>();
@@ -157,6 +182,16 @@ public final class QchainCommand implements Callable<Integer> {
         return cl;
     }
 
+    private static Object newInstance(Class<?> c) {
+        try {
+            var ctor = c.getDeclaredConstructor();
+            ctor.setAccessible(true);
+            return ctor.newInstance();
+        } catch (ReflectiveOperationException e) {
+            throw new IllegalStateException("cannot create the command " + c.getName(), e);
+        }
+    }
+
     /**
      * Runs qchain as a process: UTF-8 stdout and stderr, progress when stderr is a terminal, a Ctrl-C hook that
      * interrupts the work and prints {@code qchain: interrupted} once, and no stack trace for any failure.
@@ -170,7 +205,7 @@ public final class QchainCommand implements Callable<Integer> {
         Errors errors = new Errors();
         CountDownLatch done = new CountDownLatch(1);
         Thread worker = Thread.currentThread();
-        CommandLine cl = newCommandLine(stderrIsTerminal(), errors);
+        CommandLine cl = newCommandLine(stderrIsTerminal(), errors, args.length > 0 ? args[0] : null);
         QchainCommand root = cl.getCommand();
         Runtime.getRuntime().addShutdownHook(new Thread(() -> {
             if (done.getCount() > 0) {
