@@ -16,13 +16,16 @@ import java.util.concurrent.atomic.AtomicReferenceArray;
  * {@code floor(4^L / 10^e)} ({@code L} the bit length of {@code 10^e}): two multiplications, which
  * {@code BigInteger} does by Karatsuba or Toom–Cook (A. J. Menezes, P. C. van Oorschot, S. A. Vanstone,
  * <i>Handbook of Applied Cryptography</i>, CRC Press 1996, ch. 14, algorithm 14.42). The powers and reciprocals are
- * built once per process and shared by all numbers. Below {@value #BASE_DIGITS} digits the JDK's own conversion
- * (repeated division by {@code 10^18}) is used. Large numbers convert their two halves in parallel on the common
+ * built once per process and shared by all numbers. The recursion goes down to pieces of {@value #BASE_DIGITS}
+ * digits, split once more by {@code 10^18} into two {@code long}s: no long division of {@link BigInteger} (the
+ * JDK's own conversion divides by {@code 10^18} again and again, and its division code is slow until the JIT has
+ * compiled it, which in a fresh process costs more than the conversion; measured in docs/performance.md). Numbers
+ * of fewer digits take the JDK's conversion. Large numbers convert their two halves in parallel on the common
  * fork-join pool, and {@link #toStrings} converts many numbers on all cores.
  */
 public final class DecimalText {
     /** Pieces of at most this many digits are converted by {@link BigInteger#toString()}. */
-    static final int BASE_DIGITS = 288;
+    static final int BASE_DIGITS = 36;
     /** Numbers of at least this many bits split their two halves over the pool. */
     static final int PARALLEL_BITS = 400_000;
 
@@ -188,14 +191,26 @@ public final class DecimalText {
         return new BigInteger[] {q, r};
     }
 
+    /**
+     * Writes {@code 0 <= x < 10^width}, {@code width <= 36}: one more Barrett split by {@code 10^18} and the two
+     * halves as {@code long}s, so that no piece goes through {@link BigInteger}'s own conversion (a long division
+     * per 18 digits, slow until the JIT has compiled it).
+     */
     private static void base(BigInteger x, byte[] buf, int pos, int width) {
-        String s = x.toString();
-        int pad = width - s.length();
-        for (int i = 0; i < pad; i++) {
-            buf[pos + i] = '0';
+        if (x.bitLength() < 63) {
+            digits(x.longValue(), buf, pos, width);
+            return;
         }
-        for (int i = 0; i < s.length(); i++) {
-            buf[pos + pad + i] = (byte) s.charAt(i);
+        BigInteger[] qr = divide(x, power(0));
+        digits(qr[0].longValue(), buf, pos, width - 18);
+        digits(qr[1].longValue(), buf, pos + width - 18, 18);
+    }
+
+    /** Writes exactly {@code width} digits of {@code 0 <= v < 10^width} (leading zeros included). */
+    private static void digits(long v, byte[] buf, int pos, int width) {
+        for (int i = pos + width - 1; i >= pos; i--) {
+            buf[i] = (byte) ('0' + v % 10);
+            v /= 10;
         }
     }
 }

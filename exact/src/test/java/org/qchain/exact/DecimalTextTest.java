@@ -30,7 +30,7 @@ class DecimalTextTest {
     // where the padding of the low halves matters
     @Test
     void powersOfTenAndTheirNeighbours() {
-        for (int e : new int[] {17, 18, 19, 287, 288, 289, 576, 1151, 1152, 4608, 9217, 40000}) {
+        for (int e : new int[] {17, 18, 19, 35, 36, 37, 54, 72, 287, 288, 289, 576, 1151, 1152, 4608, 9217, 40000}) {
             BigInteger p = BigInteger.TEN.pow(e);
             for (BigInteger x : new BigInteger[] {p, p.subtract(BigInteger.ONE), p.add(BigInteger.ONE),
                 p.multiply(BigInteger.valueOf(7)).add(BigInteger.valueOf(42))}) {
