@@ -20,6 +20,9 @@ import org.qchain.exact.Rational;
  * have thousands of digits each). The caller converts an entry itself when no helper has taken it yet, so one core is
  * enough; at most {@link #WINDOW} finished texts wait to be written, so memory stays that of a few entries.
  *
+ * <p>The texts are those of numbers (digits, sign, {@code /}, {@code .}, exponent): writers copy them without
+ * escaping.
+ *
  * <p>Use once, in order ({@link #get} with 0, 1, 2, ...), then {@link #close} (also after a failure): helpers stop.
  * A failure of a conversion is thrown by {@link #get} of its entry; an interrupt of the caller while it waits is a
  * {@link QchainException} with {@link ErrorKey#INTERRUPTED}.

@@ -103,7 +103,8 @@ public final class Json {
             if (j > 0) {
                 sb.append(',');
             }
-            quote(sb, texts.get(from + j));
+            // texts of numbers (digits, sign, '/', '.', exponent): nothing to escape, no scan of their characters
+            sb.append('"').append(texts.get(from + j)).append('"');
             sink.spill();
         }
         sb.append(']');

@@ -123,6 +123,26 @@ public final class Decimals {
      * ({@link RoundingMode#DOWN}) or away from zero ({@link RoundingMode#UP}).
      */
     static Rounded round(BigInteger p, BigInteger q, int digits, RoundingMode mode) {
+        // long operands: round the two ends of an enclosure from their leading bits; when both ends round alike,
+        // so does p/q between them (rounding is monotone); otherwise (next to a rounding boundary) the exact way
+        int cut = Math.min(p.bitLength(), q.bitLength()) - (KEPT_BITS + 4 * digits);
+        if (cut > 0) {
+            BigInteger p0 = p.shiftRight(cut);
+            BigInteger q0 = q.shiftRight(cut);
+            // p0 2^cut <= p < (p0 + 1) 2^cut, and the same for q, so p0 / (q0 + 1) < p/q < (p0 + 1) / q0
+            Rounded lo = exactRound(p0, q0.add(BigInteger.ONE), digits, mode);
+            Rounded hi = exactRound(p0.add(BigInteger.ONE), q0, digits, mode);
+            if (lo.equals(hi)) {
+                return lo;
+            }
+        }
+        return exactRound(p, q, digits, mode);
+    }
+
+    /** Bits kept of long operands of {@link #round}, beyond four per requested digit. */
+    static final int KEPT_BITS = 128;
+
+    private static Rounded exactRound(BigInteger p, BigInteger q, int digits, RoundingMode mode) {
         BigInteger low = BigInteger.TEN.pow(digits - 1);
         BigInteger high = low.multiply(BigInteger.TEN);
         // first guess of floor(log10(p/q)) from bit lengths; off by at most one or two, corrected below

@@ -135,4 +135,23 @@ class DecimalsTest {
     void rejectsNonPositiveDigits() {
         assertThrows(IllegalArgumentException.class, () -> Decimals.format(Rational.ONE, 0));
     }
+
+    // reference library: Java SE BigDecimal (MathContext, HALF_EVEN) on long fractions, which take the route through
+    // leading bits; and values constructed next to a halfway point (m + 1/2) 10^-k, just above, just below and on
+    // it, where that route must give way to the exact one
+    @Property(tries = 60, seed = "31337")
+    void longOperandsAndNearHalfwayCases(@ForAll @LongRange(min = 0, max = Long.MAX_VALUE) long seed,
+                                         @ForAll @IntRange(min = 1, max = 30) int digits) {
+        Random rnd = new Random(seed);
+        BigInteger q = new BigInteger(600 + rnd.nextInt(4000), rnd).setBit(599);
+        BigInteger p = new BigInteger(q.bitLength() - rnd.nextInt(40), rnd).add(BigInteger.ONE);
+        assertMatchesReference(Rational.of(p, q), digits);
+        // m + 1/2 with m of `digits` digits, over 10^digits: a tie of the rounding, and its neighbours at 1/q
+        BigInteger m = BigInteger.TEN.pow(digits - 1).add(new BigInteger(digits * 3, rnd).mod(BigInteger.TEN.pow(digits - 1)));
+        Rational tie = Rational.of(m.shiftLeft(1).add(BigInteger.ONE), BigInteger.TWO.multiply(BigInteger.TEN.pow(digits)));
+        Rational tiny = Rational.of(BigInteger.ONE, q);
+        assertMatchesReference(tie, digits);
+        assertMatchesReference(tie.add(tiny), digits);
+        assertMatchesReference(tie.subtract(tiny), digits);
+    }
 }

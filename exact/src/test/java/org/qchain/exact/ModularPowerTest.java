@@ -79,4 +79,25 @@ class ModularPowerTest {
         IntMatrix m = IntMatrix.of(new BigInteger[][] {{BigInteger.valueOf(-3)}});
         assertEquals(BigInteger.valueOf(-3).pow(41), ModularPower.power(m, 41, Thread.currentThread()).e[0][0]);
     }
+
+    // reference: Java's remainder operator on the same values (random values below 2^63, and the extremes: 0,
+    // multiples of p and their neighbours, the largest sums the products can reach)
+    @Test
+    void theDivisionFreeReductionIsTheRemainder() {
+        Random rnd = new Random(2026);
+        int[] ps = ModularPower.primes(40);
+        for (int p : ps) {
+            double inv = 1.0 / p;
+            long[] edges = {0, 1, p - 1L, p, p + 1L, (long) p * p, (long) p * p - 1, Long.MAX_VALUE,
+                Long.MAX_VALUE - 1, 7L * ((1L << 60) - 1) + (1L << 30), Long.MAX_VALUE / p * p,
+                Long.MAX_VALUE / p * p - 1};
+            for (long a : edges) {
+                assertEquals(a % p, ModularPower.reduce(a, p, inv), a + " mod " + p);
+            }
+            for (int t = 0; t < 20_000; t++) {
+                long a = rnd.nextLong() >>> 1;
+                assertEquals(a % p, ModularPower.reduce(a, p, inv), a + " mod " + p);
+            }
+        }
+    }
 }
