@@ -19,6 +19,8 @@ cases=(
   "row3|step $D/sparse100.chain -n 1000000 --from S0 --to S1 --certified"
   "row3-exact|step $D/sparse100.chain -n 1000000 --from S0 --to S1"
   "sparse1000|step $D/sparse1000.chain -n 1000000 --from S0 --certified --format json"
+  "row4|closed $D/closed12.chain"
+  "row5|closed $D/closed20.chain"
 )
 echo "# $(date -u +%FT%TZ) $(nproc) cores, load: $(cut -d' ' -f1-3 /proc/loadavg)"
 for ((r = 1; r <= RUNS; r++)); do
