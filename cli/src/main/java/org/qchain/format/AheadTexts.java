@@ -120,9 +120,13 @@ final class AheadTexts implements AutoCloseable {
      *
      * @param i the entry, the next one in order
      * @return its text
-     * @throws QchainException {@link ErrorKey#INTERRUPTED} if the thread is interrupted while it waits
+     * @throws QchainException {@link ErrorKey#INTERRUPTED} if the thread is interrupted
      */
     String get(int i) {
+        if (Thread.currentThread().isInterrupted()) {
+            // Ctrl-C: stop between entries, also when the caller converts them itself
+            throw new QchainException(ErrorKey.INTERRUPTED);
+        }
         while (next.get() <= i) {
             convertNext();
         }

@@ -11,6 +11,8 @@ import java.util.List;
 import java.util.Random;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.result.StepResult;
 
@@ -137,6 +139,24 @@ class StreamedOutputTest {
                 assertEquals(String.valueOf(i), t.get(i));
             }
             assertEquals("entry " + bad, assertThrows(ArithmeticException.class, () -> t.get(bad)).getMessage());
+        }
+    }
+
+    // Ctrl-C interrupts the writing thread: the next entry stops it with the interrupt's message key
+    @Test
+    void anInterruptStopsTheWriterBetweenEntries() {
+        List<Rational> values = new ArrayList<>();
+        for (int i = 0; i < 100; i++) {
+            values.add(Rational.of(i, 7));
+        }
+        try (AheadTexts t = AheadTexts.exact(values)) {
+            assertEquals("0", t.get(0));
+            assertEquals("1/7", t.get(1));
+            Thread.currentThread().interrupt();
+            QchainException e = assertThrows(QchainException.class, () -> t.get(2));
+            assertEquals(ErrorKey.INTERRUPTED, e.key());
+        } finally {
+            Thread.interrupted();
         }
     }
 }
