@@ -32,10 +32,11 @@ final class ContinuousEngine {
         guard(g.rows());
         OptionalRow row = OptionalRow.of(model, q.from());
         List<TransientResult.AtTime> out = new ArrayList<>();
+        CertifiedDecimal[][][] all = CertifiedTransient.decimals(g, q.times(), q.digits(), q.maxBits(), progress);
         for (int k = 0; k < q.times().size(); k++) {
             Rational t = q.times().get(k);
             CertifiedTransient plan = CertifiedTransient.of(g, t);
-            CertifiedDecimal[][] d = plan.decimals(q.digits(), q.maxBits());
+            CertifiedDecimal[][] d = all[k];
             List<List<CertifiedDecimal>> rows = new ArrayList<>();
             for (int i = 0; i < d.length; i++) {
                 if (row.index < 0 || row.index == i) {
@@ -43,7 +44,6 @@ final class ContinuousEngine {
                 }
             }
             out.add(new TransientResult.AtTime(t, rows, CertifiedTransient.widest(d), plan.rate()));
-            progress.update("times", k + 1, q.times().size());
         }
         return new TransientResult(model.source(), model.states(), q.from(), out, q.digits(), List.of());
     }
