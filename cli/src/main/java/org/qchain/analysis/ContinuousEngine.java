@@ -29,7 +29,7 @@ final class ContinuousEngine {
 
     static TransientResult transientProbabilities(LoadedModel model, TransientQuery q, Progress progress) {
         RationalMatrix g = model.generator("qchain step -t");
-        guard(g.rows());
+        guardWork(g, q);
         OptionalRow row = OptionalRow.of(model, q.from());
         List<TransientResult.AtTime> out = new ArrayList<>();
         CertifiedDecimal[][][] all = CertifiedTransient.decimals(g, q.times(), q.digits(), q.maxBits(), progress);
@@ -91,6 +91,19 @@ final class ContinuousEngine {
         return new AvailabilityResult(model.source(), upNames, states, pi, f.availability(), f.unavailability(),
             mttf, f.meanUpTime(), f.meanDownTime(), f.failureFrequency(), f.hoursPerYear(), f.downHoursPerYear(),
             from, point, q.digits(), List.of());
+    }
+
+    /** Refuses, before any work, a P(t) whose estimated multiplications pass the query's limit. */
+    static void guardWork(RationalMatrix g, TransientQuery q) {
+        CertifiedTransient.WorkEstimate e = CertifiedTransient.estimate(g, q.times(), q.digits());
+        if (e.multiplications() > q.maxWork()) {
+            throw new QchainException(ErrorKey.TRANSIENT_TOO_LARGE, roughly(e.multiplications()), e.bits(), e.states(),
+                e.rates(), e.times(), roughly(e.largestRateTime()), q.maxWork(), NumericEngine.MAX_WORK_OPTION);
+        }
+    }
+
+    private static String roughly(double x) {
+        return String.format(java.util.Locale.ROOT, "%.1e", x).replace("e+0", "e").replace("e+", "e");
     }
 
     static void guard(int n) {

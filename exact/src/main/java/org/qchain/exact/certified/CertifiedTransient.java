@@ -189,6 +189,69 @@ public final class CertifiedTransient {
             maxBits), q.rows(), times.size());
     }
 
+    /**
+     * The estimated work of {@link #decimals(RationalMatrix, List, int, int, Progress)} at its first working
+     * precision: multiplications of fixed-point numbers, counting {@code K} sparse products of the series
+     * ({@code n × nonzeros} each) and every squaring or product of bound matrices as dense ({@code 2 n^3}: lower and
+     * upper bounds; fill-in makes them dense soon). The probe of the smallest entry and the Ziv rounds after the
+     * first are not counted; the first round is usually the only one.
+     *
+     * @param q      a generator
+     * @param times  the times, each {@code >= 0}
+     * @param digits significant digits, at least 1
+     * @return the estimate, with the figures it is made of
+     */
+    public static WorkEstimate estimate(RationalMatrix q, List<Rational> times, int digits) {
+        int bits = startBits(digits);
+        Optional<SharedTimes> shared = SharedTimes.of(q, times);
+        double work = 0;
+        CertifiedTransient any = of(q, Rational.ZERO);
+        double n = any.n;
+        double nnz = any.uniformized.nonZeroCount();
+        double most = 0;
+        for (Rational t : times) {
+            most = Math.max(most, any.lambda.multiply(t).doubleValue());
+        }
+        if (shared.isPresent()) {
+            SharedTimes plan = shared.get();
+            long products = plan.squarings;
+            for (BigInteger m : plan.multiples) {
+                products += Math.max(0, m.bitCount() - 1);
+            }
+            work = plan.base.stepWork(bits) + 2 * n * n * n * products;
+        } else {
+            for (Rational t : times) {
+                work += of(q, t).stepWork(bits);
+            }
+        }
+        return new WorkEstimate(work, bits, any.n, (long) nnz, times.size(), most);
+    }
+
+    /**
+     * An estimate of the work of {@code P(t)}.
+     *
+     * @param multiplications fixed-point multiplications
+     * @param bits            their working precision
+     * @param states          the states
+     * @param rates           stored entries of the uniformized matrix
+     * @param times           the times
+     * @param largestRateTime the largest {@code Λt}
+     */
+    public record WorkEstimate(double multiplications, int bits, int states, long rates, int times,
+                               double largestRateTime) {
+    }
+
+    /** The series and squarings of this time at {@code bits} bits: multiplications. */
+    private double stepWork(int bits) {
+        Rational x = lambda.multiply(t);
+        if (x.isZero()) {
+            return 0;
+        }
+        Step step = Step.choose(x, bits, n, uniformized.nonZeroCount());
+        double dn = n;
+        return 2 * (step.terms * dn * uniformized.nonZeroCount() + step.s * dn * dn * dn);
+    }
+
     /** Several times as multiples of one base step (see {@link #decimals(RationalMatrix, List, int, int, Progress)}). */
     private record SharedTimes(CertifiedTransient base, BigInteger[] multiples, int squarings) {
         /** The most bits a multiple may have before sharing is not tried. */
