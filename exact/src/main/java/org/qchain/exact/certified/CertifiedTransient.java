@@ -159,7 +159,8 @@ public final class CertifiedTransient {
      * Rounds every entry of {@code P(t)} correctly to {@code digits} significant digits at several times, sharing
      * the work: with {@code g} the greatest common divisor of the times ({@code t_k = m_k g}, {@code m_k} integers),
      * {@code P(g)} is enclosed once, its squares {@code P(2^i g)} once, and each {@code P(m_k g)} is the product of
-     * the squares on the bits of {@code m_k} (binary powering; the semigroup property {@code P(s+t) = P(s)P(t)},
+     * the squares on the bits of {@code m_k}, or the square of {@code P(m_k g / 2)} when that time is also asked for
+     * (binary powering; the semigroup property {@code P(s+t) = P(s)P(t)},
      * common practice, no source). Products of non-negative bounds stay bounds, so the enclosures are as rigorous as
      * one time's. Where sharing would cost more products than computing each time alone (times with a tiny common
      * divisor), each time is computed alone.
@@ -316,18 +317,37 @@ public final class CertifiedTransient {
                 progress.update("products", ++done, total);
             }
             Enclosure[] out = new Enclosure[multiples.length * n * n];
-            for (int k = 0; k < multiples.length; k++) {
+            // P(m g) already at hand: the squares, and each time's result (so P(2m g) is one squaring of P(m g))
+            java.util.Map<BigInteger, FixedPointBounds> known = new java.util.HashMap<>();
+            for (int i = 0; i <= squarings; i++) {
+                known.put(BigInteger.ONE.shiftLeft(i), powers[i]);
+            }
+            Integer[] order = new Integer[multiples.length];
+            for (int k = 0; k < order.length; k++) {
+                order[k] = k;
+            }
+            Arrays.sort(order, (a, b) -> multiples[a].compareTo(multiples[b]));
+            for (int k : order) {
                 BigInteger m = multiples[k];
-                FixedPointBounds p = null;
-                for (int i = 0; i < m.bitLength(); i++) {
-                    if (m.testBit(i)) {
-                        if (p == null) {
-                            p = powers[i];
-                        } else {
-                            p = p.multiply(powers[i], caller);
-                            capAtOne(p);
+                FixedPointBounds p = known.get(m);
+                FixedPointBounds half = m.testBit(0) ? null : known.get(m.shiftRight(1));
+                if (p == null && half != null) {
+                    p = half.multiply(half, caller);
+                    capAtOne(p);
+                } else if (p == null) {
+                    for (int i = 0; i < m.bitLength(); i++) {
+                        if (m.testBit(i)) {
+                            if (p == null) {
+                                p = powers[i];
+                            } else {
+                                p = p.multiply(powers[i], caller);
+                                capAtOne(p);
+                            }
                         }
                     }
+                }
+                if (p != null) {
+                    known.put(m, p);
                 }
                 for (int i = 0; i < n; i++) {
                     Enclosure[] row = p == null || base.stays[i] ? unitRow(n, i) : p.enclosures(i);
