@@ -240,6 +240,15 @@ public final class CertifiedTransient {
      */
     public record WorkEstimate(double multiplications, int bits, int states, long rates, int times,
                                double largestRateTime) {
+        /**
+         * A number of this estimate in two significant digits, as the refusals print it ({@code 6.8e2}).
+         *
+         * @param x a figure of the estimate
+         * @return its text
+         */
+        public static String roughly(double x) {
+            return CertifiedPowers.roughly(x);
+        }
     }
 
     /** The series and squarings of this time at {@code bits} bits: multiplications. */
