@@ -97,9 +97,10 @@ final class ContinuousEngine {
     static void guardWork(RationalMatrix g, TransientQuery q) {
         CertifiedTransient.WorkEstimate e = CertifiedTransient.estimate(g, q.times(), q.digits());
         if (e.multiplications() > q.maxWork()) {
-            throw new QchainException(ErrorKey.TRANSIENT_TOO_LARGE, CertifiedTransient.WorkEstimate.roughly(
-                e.multiplications()), e.bits(), e.states(), e.rates(), e.times(),
-                CertifiedTransient.WorkEstimate.roughly(e.largestRateTime()), q.maxWork(), NumericEngine.MAX_WORK_OPTION);
+            throw new QchainException(ErrorKey.TRANSIENT_TOO_LARGE,
+                CertifiedTransient.WorkEstimate.roughly(e.multiplications()), e.bits(), e.states(), e.rates(),
+                e.times(), CertifiedTransient.WorkEstimate.roughly(e.largestRateTime()), q.maxWork(),
+                NumericEngine.MAX_WORK_OPTION);
         }
     }
 

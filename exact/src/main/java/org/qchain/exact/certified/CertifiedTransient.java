@@ -262,7 +262,7 @@ public final class CertifiedTransient {
         return 2 * (step.terms * dn * uniformized.nonZeroCount() + step.s * dn * dn * dn);
     }
 
-    /** Several times as multiples of one base step (see {@link #decimals(RationalMatrix, List, int, int, Progress)}). */
+    /** Several times as multiples of one base step (see the static {@code decimals} for several times). */
     private record SharedTimes(CertifiedTransient base, BigInteger[] multiples, int squarings) {
         /** The most bits a multiple may have before sharing is not tried. */
         private static final int MAX_MULTIPLE_BITS = 64;
