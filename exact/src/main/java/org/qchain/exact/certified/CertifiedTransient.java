@@ -382,12 +382,14 @@ public final class CertifiedTransient {
      * underflows counts as {@link #MAX_PROBE_BITS}.
      */
     private int smallestEntryBits(List<Rational> times) {
-        double[][] u = new double[n][n];
+        int[][] uc = new int[n][];
+        double[][] uv = new double[n][];
         for (int i = 0; i < n; i++) {
-            int[] c = uniformized.rowColumns(i);
+            uc[i] = uniformized.rowColumns(i);
             Rational[] v = uniformized.rowValues(i);
-            for (int k = 0; k < c.length; k++) {
-                u[i][c[k]] = v[k].doubleValue();
+            uv[i] = new double[v.length];
+            for (int k = 0; k < v.length; k++) {
+                uv[i][k] = v[k].doubleValue();
             }
         }
         int most = 0;
@@ -406,7 +408,7 @@ public final class CertifiedTransient {
             double weight = Math.exp(-y);
             for (int k = 0; k <= 40; k++) {
                 if (k > 0) {
-                    term = times(term, u);
+                    term = timesSparse(term, uc, uv);
                     weight *= y / k;
                 }
                 for (int i = 0; i < n; i++) {
@@ -430,20 +432,48 @@ public final class CertifiedTransient {
         return most;
     }
 
-    private static double[][] times(double[][] a, double[][] b) {
+    /** {@code a b} for a sparse {@code b} (columns and values by row), in binary64. */
+    private static double[][] timesSparse(double[][] a, int[][] bc, double[][] bv) {
         int n = a.length;
         double[][] c = new double[n][n];
         for (int i = 0; i < n; i++) {
+            checkInterrupt();
             for (int k = 0; k < n; k++) {
                 double x = a[i][k];
                 if (x != 0) {
-                    for (int j = 0; j < n; j++) {
-                        c[i][j] += x * b[k][j];
+                    for (int q = 0; q < bc[k].length; q++) {
+                        c[i][bc[k][q]] += x * bv[k][q];
                     }
                 }
             }
         }
         return c;
+    }
+
+    /** {@code a b}, dense, in binary64. */
+    private static double[][] times(double[][] a, double[][] b) {
+        int n = a.length;
+        double[][] c = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            checkInterrupt();
+            double[] ci = c[i];
+            for (int k = 0; k < n; k++) {
+                double x = a[i][k];
+                if (x != 0) {
+                    double[] bk = b[k];
+                    for (int j = 0; j < n; j++) {
+                        ci[j] += x * bk[j];
+                    }
+                }
+            }
+        }
+        return c;
+    }
+
+    private static void checkInterrupt() {
+        if (Thread.currentThread().isInterrupted()) {
+            throw new org.qchain.exact.QchainException(org.qchain.exact.ErrorKey.INTERRUPTED);
+        }
     }
 
     /** The probe's answer for an entry too small for binary64. */
