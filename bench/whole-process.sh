@@ -2,6 +2,8 @@
 # Whole-process timings of the speed issue's rows (`qchain step` from a cold JVM, output to a file), the new jar
 # against an old one in the same run, interleaved. Usage, from the repository root:
 #   OLD=/path/to/old/qchain.jar RUNS=5 bench/whole-process.sh > bench/target/whole-process.txt
+# SET=continuous times the continuous-chain case instead (bench/models/repairable50.chain: avail, and step -t at 10
+# times to 30 certified digits; no bench jar needed).
 # Needs the bench jar (mvn -B -q -o -Pbench -pl bench -am package -DskipTests) for the chain files and the CLI jar
 # (./qchain builds it). Prints one line per run: case, jar, wall seconds, user+system CPU seconds, peak RSS.
 set -euo pipefail
@@ -11,8 +13,15 @@ OLD=${OLD:-$NEW}
 RUNS=${RUNS:-5}
 D=bench/target/chains
 mkdir -p "$D" bench/target/out
-java -cp bench/target/benchmarks.jar org.qchain.bench.Issue13Chains "$D"
 L=-Dlog4j2.loggerContextFactory=org.apache.logging.log4j.simple.SimpleLoggerContextFactory
+if [ "${SET:-}" = continuous ]; then
+cases=(
+  "version|--version"
+  "avail50|avail bench/models/repairable50.chain --digits 30 --format json"
+  "step-t50|step bench/models/repairable50.chain -t 1,2,5,10,20,50,100,200,500,1000 --digits 30 --format json"
+)
+else
+java -cp bench/target/benchmarks.jar org.qchain.bench.Issue13Chains "$D"
 cases=(
   "row1|step $D/dense20.chain -n 256 --format json --max-digits 1000000000"
   "row2|step $D/dense50.chain -n 64 --format json --max-digits 1000000000"
@@ -22,6 +31,7 @@ cases=(
   "row4|closed $D/closed12.chain"
   "row5|closed $D/closed20.chain"
 )
+fi
 echo "# $(date -u +%FT%TZ) $(nproc) cores, load: $(cut -d' ' -f1-3 /proc/loadavg)"
 for ((r = 1; r <= RUNS; r++)); do
   for c in "${cases[@]}"; do

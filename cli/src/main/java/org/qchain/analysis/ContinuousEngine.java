@@ -29,13 +29,14 @@ final class ContinuousEngine {
 
     static TransientResult transientProbabilities(LoadedModel model, TransientQuery q, Progress progress) {
         RationalMatrix g = model.generator("qchain step -t");
-        guard(g.rows());
+        guardWork(g, q);
         OptionalRow row = OptionalRow.of(model, q.from());
         List<TransientResult.AtTime> out = new ArrayList<>();
+        CertifiedDecimal[][][] all = CertifiedTransient.decimals(g, q.times(), q.digits(), q.maxBits(), progress);
         for (int k = 0; k < q.times().size(); k++) {
             Rational t = q.times().get(k);
             CertifiedTransient plan = CertifiedTransient.of(g, t);
-            CertifiedDecimal[][] d = plan.decimals(q.digits(), q.maxBits());
+            CertifiedDecimal[][] d = all[k];
             List<List<CertifiedDecimal>> rows = new ArrayList<>();
             for (int i = 0; i < d.length; i++) {
                 if (row.index < 0 || row.index == i) {
@@ -43,7 +44,6 @@ final class ContinuousEngine {
                 }
             }
             out.add(new TransientResult.AtTime(t, rows, CertifiedTransient.widest(d), plan.rate()));
-            progress.update("times", k + 1, q.times().size());
         }
         return new TransientResult(model.source(), model.states(), q.from(), out, q.digits(), List.of());
     }
@@ -91,6 +91,17 @@ final class ContinuousEngine {
         return new AvailabilityResult(model.source(), upNames, states, pi, f.availability(), f.unavailability(),
             mttf, f.meanUpTime(), f.meanDownTime(), f.failureFrequency(), f.hoursPerYear(), f.downHoursPerYear(),
             from, point, q.digits(), List.of());
+    }
+
+    /** Refuses, before any work, a P(t) whose estimated multiplications pass the query's limit. */
+    static void guardWork(RationalMatrix g, TransientQuery q) {
+        CertifiedTransient.WorkEstimate e = CertifiedTransient.estimate(g, q.times(), q.digits());
+        if (e.multiplications() > q.maxWork()) {
+            throw new QchainException(ErrorKey.TRANSIENT_TOO_LARGE,
+                CertifiedTransient.WorkEstimate.roughly(e.multiplications()), e.bits(), e.states(), e.rates(),
+                e.times(), CertifiedTransient.WorkEstimate.roughly(e.largestRateTime()), q.maxWork(),
+                NumericEngine.MAX_WORK_OPTION);
+        }
     }
 
     static void guard(int n) {

@@ -12,8 +12,11 @@ import org.qchain.exact.certified.CertifiedPowers;
  * @param from    the starting state, for one row
  * @param digits  significant digits, at least 1
  * @param maxBits the largest working precision, in bits
+ * @param maxWork refuse a computation estimated to need more fixed-point multiplications than this (the estimate is
+ *                made before any work)
  */
-public record TransientQuery(List<Rational> times, Optional<String> from, int digits, int maxBits) implements Query {
+public record TransientQuery(List<Rational> times, Optional<String> from, int digits, int maxBits, long maxWork)
+    implements Query {
     /**
      * Checks the ranges.
      *
@@ -27,6 +30,21 @@ public record TransientQuery(List<Rational> times, Optional<String> from, int di
         if (digits < 1) {
             throw new IllegalArgumentException("digits must be at least 1");
         }
+        if (maxWork < 1) {
+            throw new IllegalArgumentException("the work limit must be at least 1");
+        }
+    }
+
+    /**
+     * A query with the default work limit.
+     *
+     * @param times   the times
+     * @param from    the starting state, for one row
+     * @param digits  significant digits
+     * @param maxBits the largest working precision
+     */
+    public TransientQuery(List<Rational> times, Optional<String> from, int digits, int maxBits) {
+        this(times, from, digits, maxBits, CertifiedPowers.DEFAULT_MAX_WORK);
     }
 
     /** The whole matrix at the given times, 12 digits, the default precision limit. */

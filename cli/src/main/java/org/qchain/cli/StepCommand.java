@@ -80,7 +80,7 @@ final class StepCommand implements Callable<Integer> {
 
     @Option(names = "--max-work", paramLabel = "W", converter = Converters.WorkLimit.class,
         defaultValue = "" + org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_WORK,
-        description = "With --certified: refuse computations estimated to need more than W multiplications of"
+        description = "With --certified or -t: refuse computations estimated to need more than W multiplications of"
             + " fixed-point numbers (default: ${DEFAULT-VALUE}).")
     long maxWork = org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_WORK;
 
@@ -155,13 +155,13 @@ final class StepCommand implements Callable<Integer> {
     /** {@code -t}: P(t) of a continuous chain as certified decimals. */
     private Integer continuous() {
         if (to != null || paths != null || symbolic || symbolicOptions.factor) {
-            throw new ParameterException(spec.commandLine(), "-t takes --from, --digits, --format and --output;"
+            throw new ParameterException(spec.commandLine(), "-t takes --from, --digits, --max-work, --format and --output;"
                 + " --to, --paths, --symbolic and --factor are for discrete chains");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         TransientQuery q = new TransientQuery(times.times(), Optional.ofNullable(from), output.digits(),
-            org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_BITS);
+            org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_BITS, maxWork);
         Result result = root.run(spec, progress -> Analysis.transientProbabilities(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

@@ -78,6 +78,19 @@ class ContinuousCommandsTest {
     }
 
     @Test
+    void aTransientSolvePastTheWorkLimitIsRefusedWithItsEstimate() {
+        // The estimate for generator-set.chain at t = 1/2, 24 (common divisor 1/2, so 48 = 110000b in binary): the
+        // series of the base step plus 5 squarings and 1 product of 3 x 3 bound matrices; the exact count is the
+        // engine's, the check is that it is refused before any work, names the option, and passes once raised.
+        Cli.Result r = Cli.run("step", GEN, "-t", "1/2,24", "--max-work", "100");
+        assertEquals(2, r.code(), r::toString);
+        assertTrue(r.err().matches("qchain: P\\(t\\) would take about [0-9.]+e[0-9]+ multiplications of 64-bit numbers"
+            + " \\(3 states, [0-9]+ rates, 2 times, uniformization rate times time up to 2\\.0e0\\), more than the limit"
+            + " 100; raise it with --max-work, or ask for fewer digits or times\n"), r::toString);
+        assertEquals(0, Cli.run("step", GEN, "-t", "1/2,24", "--max-work", "1000000").code());
+    }
+
+    @Test
     void continuousCommandsRefuseDiscreteChains() {
         Cli.Result r = Cli.run("avail", Cli.model("plant.chain"));
         assertEquals(2, r.code(), r::toString);

@@ -167,7 +167,16 @@ public enum ErrorKey implements MessageKey {
 
     // --- closed forms and sweeps: guards (issue 8) -------------------------------------------------------------
     /** {0}: estimated digits of the exact values, {1}: points, {2}: the limit, {3}: how to raise it (may be empty). */
-    SWEEP_TOO_LARGE("the sweep would compute about {0} digits of exact values at {1} points, more than the limit {2}{3}");
+    SWEEP_TOO_LARGE("the sweep would compute about {0} digits of exact values at {1} points, more than the limit {2}{3}"),
+
+    // --- continuous chains (appended) ---
+    /**
+     * {0}: estimated multiplications, {1}: bits, {2}: states, {3}: stored rates, {4}: times, {5}: the largest
+     * uniformization rate times time, {6}: the limit, {7}: the option that raises it.
+     */
+    TRANSIENT_TOO_LARGE("P(t) would take about {0} multiplications of {1}-bit numbers ({2} states, {3} rates, {4} times,"
+        + " uniformization rate times time up to {5}), more than the limit {6}; raise it with {7}, or ask for fewer"
+        + " digits or times");
 
     private final String pattern;
 

@@ -94,6 +94,26 @@ public final class Rational implements Comparable<Rational> {
     }
 
     /**
+     * The dyadic fraction {@code p / 2^w}, reduced by shifting out common factors of two (no gcd: the fixed-point
+     * bounds of the certified engines produce millions of these).
+     *
+     * @param p the numerator
+     * @param w the power of two of the denominator, {@code >= 0}
+     * @return the value
+     * @throws IllegalArgumentException if {@code w < 0}
+     */
+    public static Rational dyadic(BigInteger p, int w) {
+        if (w < 0) {
+            throw new IllegalArgumentException("negative power of two " + w);
+        }
+        if (p.signum() == 0) {
+            return ZERO;
+        }
+        int shift = Math.min(p.getLowestSetBit(), w);
+        return ofReduced(p.shiftRight(shift), BigInteger.ONE.shiftLeft(w - shift));
+    }
+
+    /**
      * A fraction the caller has already reduced: {@code q > 0} and {@code gcd(p, q) = 1}. Skips the gcd, which costs
      * quadratic time on numbers with millions of digits; for this package's engines only, which reduce by known
      * prime factors of the denominator instead.

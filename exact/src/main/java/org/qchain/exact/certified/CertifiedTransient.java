@@ -3,6 +3,7 @@ package org.qchain.exact.certified;
 import java.math.BigInteger;
 import java.util.ArrayDeque;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Optional;
 import org.qchain.exact.Progress;
 import org.qchain.exact.Rational;
@@ -130,45 +131,352 @@ public final class CertifiedTransient {
      * @throws org.qchain.exact.QchainException with {@code INTERRUPTED} if the thread is interrupted
      */
     public CertifiedDecimal[][] decimals(int digits, int maxBits) {
-        // Fixed point bounds the absolute error, but digits are significant: a probe at low precision finds the
-        // smallest entry, and the first real attempt carries enough bits for it (Ziv's loop still decides)
-        int start = Math.min(Math.max(startBits(digits), maxBits), startBits(digits) + smallestEntryBits());
-        CertifiedDecimal[] flat = Ziv.round(bits -> flatten(enclose(bits, Progress.NONE)), digits,
-            start, Math.max(start, maxBits), Optional::empty);
-        CertifiedDecimal[][] out = new CertifiedDecimal[n][];
-        for (int i = 0; i < n; i++) {
-            out[i] = Arrays.copyOfRange(flat, i * n, (i + 1) * n);
+        return unflatten(rounded(bits -> flatten(enclose(bits, Progress.NONE)), smallestEntryBits(List.of(t)),
+            digits, maxBits), n, 1)[0];
+    }
+
+    /**
+     * Fixed point bounds the absolute error, but digits are significant: a probe at low precision finds the smallest
+     * entry, and the first real attempt carries enough bits for it (Ziv's loop still decides).
+     */
+    private static CertifiedDecimal[] rounded(Ziv.Enclosing source, int smallest, int digits, int maxBits) {
+        int start = Math.min(Math.max(startBits(digits), maxBits), startBits(digits) + smallest);
+        return Ziv.round(source, digits, start, Math.max(start, maxBits), Optional::empty);
+    }
+
+    /** Flat decimals of {@code times} matrices of {@code n × n}, by time and row. */
+    private static CertifiedDecimal[][][] unflatten(CertifiedDecimal[] flat, int n, int times) {
+        CertifiedDecimal[][][] out = new CertifiedDecimal[times][n][];
+        for (int k = 0; k < times; k++) {
+            for (int i = 0; i < n; i++) {
+                out[k][i] = Arrays.copyOfRange(flat, (k * n + i) * n, (k * n + i + 1) * n);
+            }
         }
         return out;
     }
 
     /**
-     * {@code -log2} of the smallest positive entry, from probes at low precision (64 bits, doubled while some
-     * positive entry still has a zero lower bound, up to {@link #MAX_PROBE_BITS}); 0 if every entry is 1/2 or more.
+     * Rounds every entry of {@code P(t)} correctly to {@code digits} significant digits at several times, sharing
+     * the work: with {@code g} the greatest common divisor of the times ({@code t_k = m_k g}, {@code m_k} integers),
+     * {@code P(g)} is enclosed once, its squares {@code P(2^i g)} once, and each {@code P(m_k g)} is the product of
+     * the squares on the bits of {@code m_k}, or the square of {@code P(m_k g / 2)} when that time is also asked for
+     * (binary powering; the semigroup property {@code P(s+t) = P(s)P(t)},
+     * common practice, no source). Products of non-negative bounds stay bounds, so the enclosures are as rigorous as
+     * one time's. Where sharing would cost more products than computing each time alone (times with a tiny common
+     * divisor), each time is computed alone.
+     *
+     * @param q        a generator
+     * @param times    the times, each {@code >= 0}
+     * @param digits   significant digits, at least 1
+     * @param maxBits  the largest working precision, at least 64
+     * @param progress receives one report per product
+     * @return the decimals, by time (in the order given) and row
+     * @throws IllegalArgumentException if {@code q} is not a generator or a time is negative
+     * @throws org.qchain.exact.QchainException with {@code INTERRUPTED} if the thread is interrupted
      */
-    private int smallestEntryBits() {
-        for (int bits = PROBE_BITS; ; bits *= 2) {
-            int most = 0;
-            boolean unseen = false;
-            for (Enclosure[] row : enclose(bits, Progress.NONE)) {
-                for (Enclosure e : row) {
-                    Rational lo = e.lo();
-                    if (lo.signum() > 0) {
-                        most = Math.max(most, (int) (lo.denominator().bitLength() - lo.numerator().bitLength()));
-                    } else if (e.hi().signum() > 0) {
-                        unseen = true;
-                    }
-                }
+    public static CertifiedDecimal[][][] decimals(RationalMatrix q, List<Rational> times, int digits, int maxBits,
+                                                  Progress progress) {
+        Optional<SharedTimes> shared = SharedTimes.of(q, times);
+        if (shared.isEmpty()) {
+            CertifiedDecimal[][][] out = new CertifiedDecimal[times.size()][][];
+            for (int k = 0; k < times.size(); k++) {
+                out[k] = of(q, times.get(k)).decimals(digits, maxBits);
+                progress.update("times", k + 1, times.size());
             }
-            if (!unseen || bits >= MAX_PROBE_BITS) {
-                return unseen ? Math.max(most, bits) : most;
+            return out;
+        }
+        SharedTimes plan = shared.get();
+        return unflatten(rounded(bits -> plan.enclose(bits, progress), plan.base.smallestEntryBits(times), digits,
+            maxBits), q.rows(), times.size());
+    }
+
+    /**
+     * The estimated work of {@link #decimals(RationalMatrix, List, int, int, Progress)} at its first working
+     * precision: multiplications of fixed-point numbers, counting {@code K} sparse products of the series
+     * ({@code n × nonzeros} each) and every squaring or product of bound matrices as dense ({@code 2 n^3}: lower and
+     * upper bounds; fill-in makes them dense soon). The probe of the smallest entry and the Ziv rounds after the
+     * first are not counted; the first round is usually the only one.
+     *
+     * @param q      a generator
+     * @param times  the times, each {@code >= 0}
+     * @param digits significant digits, at least 1
+     * @return the estimate, with the figures it is made of
+     */
+    public static WorkEstimate estimate(RationalMatrix q, List<Rational> times, int digits) {
+        int bits = startBits(digits);
+        Optional<SharedTimes> shared = SharedTimes.of(q, times);
+        double work = 0;
+        CertifiedTransient any = of(q, Rational.ZERO);
+        double n = any.n;
+        double nnz = any.uniformized.nonZeroCount();
+        double most = 0;
+        for (Rational t : times) {
+            most = Math.max(most, any.lambda.multiply(t).doubleValue());
+        }
+        if (shared.isPresent()) {
+            SharedTimes plan = shared.get();
+            long products = plan.squarings;
+            for (BigInteger m : plan.multiples) {
+                products += Math.max(0, m.bitCount() - 1);
             }
+            work = plan.base.stepWork(bits) + 2 * n * n * n * products;
+        } else {
+            for (Rational t : times) {
+                work += of(q, t).stepWork(bits);
+            }
+        }
+        return new WorkEstimate(work, bits, any.n, (long) nnz, times.size(), most);
+    }
+
+    /**
+     * An estimate of the work of {@code P(t)}.
+     *
+     * @param multiplications fixed-point multiplications
+     * @param bits            their working precision
+     * @param states          the states
+     * @param rates           stored entries of the uniformized matrix
+     * @param times           the times
+     * @param largestRateTime the largest {@code Λt}
+     */
+    public record WorkEstimate(double multiplications, int bits, int states, long rates, int times,
+                               double largestRateTime) {
+        /**
+         * A number of this estimate in two significant digits, as the refusals print it ({@code 6.8e2}).
+         *
+         * @param x a figure of the estimate
+         * @return its text
+         */
+        public static String roughly(double x) {
+            return CertifiedPowers.roughly(x);
         }
     }
 
-    /** The first working precision of the probes for the entries' sizes. */
-    private static final int PROBE_BITS = 64;
-    /** The probes stop here. */
+    /** The series and squarings of this time at {@code bits} bits: multiplications. */
+    private double stepWork(int bits) {
+        Rational x = lambda.multiply(t);
+        if (x.isZero()) {
+            return 0;
+        }
+        Step step = Step.choose(x, bits, n, uniformized.nonZeroCount());
+        double dn = n;
+        return 2 * (step.terms * dn * uniformized.nonZeroCount() + step.s * dn * dn * dn);
+    }
+
+    /** Several times as multiples of one base step (see the static {@code decimals} for several times). */
+    private record SharedTimes(CertifiedTransient base, BigInteger[] multiples, int squarings) {
+        /** The most bits a multiple may have before sharing is not tried. */
+        private static final int MAX_MULTIPLE_BITS = 64;
+
+        static Optional<SharedTimes> of(RationalMatrix q, List<Rational> times) {
+            if (times.size() < 2) {
+                return Optional.empty();
+            }
+            BigInteger num = BigInteger.ZERO;
+            BigInteger den = BigInteger.ONE;
+            for (Rational t : times) {
+                if (t.signum() < 0) {
+                    throw new IllegalArgumentException("negative time " + t);
+                }
+                if (t.signum() > 0) {
+                    // gcd(a/b, c/d) = gcd(a, c) / lcm(b, d) for fractions in lowest terms
+                    num = num.gcd(t.numerator());
+                    den = den.divide(den.gcd(t.denominator())).multiply(t.denominator());
+                }
+            }
+            if (num.signum() == 0) {
+                return Optional.empty();
+            }
+            Rational g = Rational.of(num, den);
+            CertifiedTransient base = CertifiedTransient.of(q, g);
+            if (base.lambda.isZero()) {
+                return Optional.empty();
+            }
+            BigInteger[] m = new BigInteger[times.size()];
+            int top = 0;
+            long products = 0;
+            double alone = 0;
+            for (int k = 0; k < m.length; k++) {
+                Rational r = times.get(k).divide(g);
+                m[k] = r.numerator();
+                top = Math.max(top, m[k].bitLength());
+                products += Math.max(0, m[k].bitCount() - 1);
+                double x = base.lambda.multiply(times.get(k)).doubleValue();
+                alone += Math.max(0, Math.ceil(Math.log(Math.max(x, 1e-300)) / Math.log(2)) + 4);
+            }
+            int squarings = Math.max(0, top - 1);
+            double baseCost = Math.max(0, Math.ceil(Math.log(base.lambda.multiply(g).doubleValue()) / Math.log(2)) + 4);
+            if (top > MAX_MULTIPLE_BITS || baseCost + squarings + products > alone) {
+                return Optional.empty();
+            }
+            return Optional.of(new SharedTimes(base, m, squarings));
+        }
+
+        /** Enclosures of every entry at every time, flat by time and row. */
+        Enclosure[] enclose(int bits, Progress progress) {
+            int n = base.n;
+            int extra = squarings + 2 + 32 - Integer.numberOfLeadingZeros(multiples.length);
+            Thread caller = Thread.currentThread();
+            FixedPointBounds[] powers = new FixedPointBounds[squarings + 1];
+            powers[0] = base.bounds(bits, extra, caller);
+            int done = 0;
+            int total = squarings + multiples.length;
+            for (int i = 1; i <= squarings; i++) {
+                powers[i] = powers[i - 1].multiply(powers[i - 1], caller);
+                capAtOne(powers[i]);
+                progress.update("products", ++done, total);
+            }
+            Enclosure[] out = new Enclosure[multiples.length * n * n];
+            // P(m g) already at hand: the squares, and each time's result (so P(2m g) is one squaring of P(m g))
+            java.util.Map<BigInteger, FixedPointBounds> known = new java.util.HashMap<>();
+            for (int i = 0; i <= squarings; i++) {
+                known.put(BigInteger.ONE.shiftLeft(i), powers[i]);
+            }
+            Integer[] order = new Integer[multiples.length];
+            for (int k = 0; k < order.length; k++) {
+                order[k] = k;
+            }
+            Arrays.sort(order, (a, b) -> multiples[a].compareTo(multiples[b]));
+            for (int k : order) {
+                BigInteger m = multiples[k];
+                FixedPointBounds p = known.get(m);
+                FixedPointBounds half = m.testBit(0) ? null : known.get(m.shiftRight(1));
+                if (p == null && half != null) {
+                    p = half.multiply(half, caller);
+                    capAtOne(p);
+                } else if (p == null) {
+                    for (int i = 0; i < m.bitLength(); i++) {
+                        if (m.testBit(i)) {
+                            if (p == null) {
+                                p = powers[i];
+                            } else {
+                                p = p.multiply(powers[i], caller);
+                                capAtOne(p);
+                            }
+                        }
+                    }
+                }
+                if (p != null) {
+                    known.put(m, p);
+                }
+                for (int i = 0; i < n; i++) {
+                    Enclosure[] row = p == null || base.stays[i] ? unitRow(n, i) : p.enclosures(i);
+                    System.arraycopy(row, 0, out, (k * n + i) * n, n);
+                }
+                progress.update("products", ++done, total);
+            }
+            return out;
+        }
+    }
+
+    private static Enclosure[] unitRow(int n, int i) {
+        Enclosure[] row = new Enclosure[n];
+        Arrays.fill(row, Enclosure.exact(Rational.ZERO));
+        row[i] = Enclosure.exact(Rational.ONE);
+        return row;
+    }
+
+    /**
+     * {@code -log2} of the smallest entry of {@code P(t)} that can be positive, over the times, from the same
+     * uniformization in binary64 (every term is non-negative, so there is no cancellation and tiny entries come out
+     * with a good relative error). Only a starting precision: Ziv's loop decides the digits; an entry that
+     * underflows counts as {@link #MAX_PROBE_BITS}.
+     */
+    private int smallestEntryBits(List<Rational> times) {
+        int[][] uc = new int[n][];
+        double[][] uv = new double[n][];
+        for (int i = 0; i < n; i++) {
+            uc[i] = uniformized.rowColumns(i);
+            Rational[] v = uniformized.rowValues(i);
+            uv[i] = new double[v.length];
+            for (int k = 0; k < v.length; k++) {
+                uv[i][k] = v[k].doubleValue();
+            }
+        }
+        int most = 0;
+        for (Rational time : times) {
+            double x = lambda.multiply(time).doubleValue();
+            if (x == 0) {
+                continue;
+            }
+            int sq = Math.max(0, (int) Math.ceil(Math.log(x / 0.5) / Math.log(2)));
+            double y = Math.scalb(x, -sq);
+            double[][] p = new double[n][n];
+            double[][] term = new double[n][n];
+            for (int i = 0; i < n; i++) {
+                term[i][i] = 1;
+            }
+            double weight = Math.exp(-y);
+            for (int k = 0; k <= 40; k++) {
+                if (k > 0) {
+                    term = timesSparse(term, uc, uv);
+                    weight *= y / k;
+                }
+                for (int i = 0; i < n; i++) {
+                    for (int j = 0; j < n; j++) {
+                        p[i][j] += weight * term[i][j];
+                    }
+                }
+            }
+            for (int k = 0; k < sq; k++) {
+                p = times(p, p);
+            }
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    if (reach[i][j] && !stays[i]) {
+                        int b = p[i][j] > 0 ? Math.max(0, -Math.getExponent(p[i][j])) : MAX_PROBE_BITS;
+                        most = Math.max(most, Math.min(b, MAX_PROBE_BITS));
+                    }
+                }
+            }
+        }
+        return most;
+    }
+
+    /** {@code a b} for a sparse {@code b} (columns and values by row), in binary64. */
+    private static double[][] timesSparse(double[][] a, int[][] bc, double[][] bv) {
+        int n = a.length;
+        double[][] c = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            checkInterrupt();
+            for (int k = 0; k < n; k++) {
+                double x = a[i][k];
+                if (x != 0) {
+                    for (int q = 0; q < bc[k].length; q++) {
+                        c[i][bc[k][q]] += x * bv[k][q];
+                    }
+                }
+            }
+        }
+        return c;
+    }
+
+    /** {@code a b}, dense, in binary64. */
+    private static double[][] times(double[][] a, double[][] b) {
+        int n = a.length;
+        double[][] c = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            checkInterrupt();
+            double[] ci = c[i];
+            for (int k = 0; k < n; k++) {
+                double x = a[i][k];
+                if (x != 0) {
+                    double[] bk = b[k];
+                    for (int j = 0; j < n; j++) {
+                        ci[j] += x * bk[j];
+                    }
+                }
+            }
+        }
+        return c;
+    }
+
+    private static void checkInterrupt() {
+        if (Thread.currentThread().isInterrupted()) {
+            throw new org.qchain.exact.QchainException(org.qchain.exact.ErrorKey.INTERRUPTED);
+        }
+    }
+
+    /** The probe's answer for an entry too small for binary64. */
     private static final int MAX_PROBE_BITS = 1024;
 
     /** A first working precision for {@code digits} decimal digits, with guard bits. */
@@ -214,23 +522,28 @@ public final class CertifiedTransient {
             return out;
         }
         Step step = Step.choose(x, bits, n, uniformized.nonZeroCount());
-        int w = bits + step.s + 32 - Integer.numberOfLeadingZeros(n) + 4;
-        Thread caller = Thread.currentThread();
+        FixedPointBounds p = bounds(step, bits, 0, Thread.currentThread(), progress);
+        for (int i = 0; i < n; i++) {
+            out[i] = stays[i] ? unitRow(n, i) : p.enclosures(i);
+        }
+        return out;
+    }
+
+    /** The bounds of {@code P(t)} (rows of states without a way out not yet made exact), {@code extra} guard bits. */
+    private FixedPointBounds bounds(int bits, int extra, Thread caller) {
+        Step step = Step.choose(lambda.multiply(t), bits + extra, n, uniformized.nonZeroCount());
+        return bounds(step, bits, extra, caller, Progress.NONE);
+    }
+
+    private FixedPointBounds bounds(Step step, int bits, int extra, Thread caller, Progress progress) {
+        int w = bits + extra + step.s + 32 - Integer.numberOfLeadingZeros(n) + 4;
         FixedPointBounds p = smallStep(step, w, caller);
         for (int k = 0; k < step.s; k++) {
             p = p.multiply(p, caller);
             capAtOne(p);
             progress.update("squaring", k + 1, step.s);
         }
-        for (int i = 0; i < n; i++) {
-            if (stays[i]) {
-                Arrays.fill(out[i], Enclosure.exact(Rational.ZERO));
-                out[i][i] = Enclosure.exact(Rational.ONE);
-            } else {
-                out[i] = p.enclosures(i);
-            }
-        }
-        return out;
+        return p;
     }
 
     /** The scaling: {@code s} squarings of a step {@code y = x / 2^s}, the series cut after {@code K} terms. */

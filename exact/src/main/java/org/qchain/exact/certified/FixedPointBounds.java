@@ -152,9 +152,8 @@ final class FixedPointBounds {
     static Enclosure[] enclosures(int n, int w, int[] cols, BigInteger[] lo, BigInteger[] hi) {
         Enclosure[] out = new Enclosure[n];
         java.util.Arrays.fill(out, Enclosure.exact(Rational.ZERO));
-        BigInteger scale = BigInteger.ONE.shiftLeft(w);
         for (int t = 0; t < cols.length; t++) {
-            out[cols[t]] = Enclosure.of(Rational.of(lo[t], scale), Rational.of(hi[t], scale));
+            out[cols[t]] = Enclosure.of(Rational.dyadic(lo[t], w), Rational.dyadic(hi[t], w));
         }
         return out;
     }

@@ -71,6 +71,45 @@ class CertifiedTransientTest {
     }
 
     @Test
+    void severalTimesSharingOneBaseStepMatchTheClosedForm() {
+        // The one repairable unit's closed form again (Billinton and Allan, ch. 9; from memory), at times whose
+        // common divisor is 1/4 (t = 1/4, 3/2, 5, 10, 0): the shared route's decimals, time by time.
+        Rational lam = Rational.of(1, 1000);
+        Rational mu = Rational.of(1, 8);
+        java.util.List<Rational> times = java.util.List.of(Rational.of(1, 4), Rational.of(3, 2), Rational.of(5),
+            Rational.of(10), Rational.ZERO);
+        CertifiedDecimal[][][] d = CertifiedTransient.decimals(oneUnit(lam, mu), times, 25, 4096, Progress.NONE);
+        assertEquals(times.size(), d.length);
+        Rational s = lam.add(mu);
+        for (int k = 0; k < times.size(); k++) {
+            Rational e = exp(s.multiply(times.get(k)).negate());
+            Rational upUp = mu.divide(s).add(lam.divide(s).multiply(e));
+            assertEquals(Decimals.format(upUp, 25), d[k][0][0].text(), "t = " + times.get(k));
+            assertEquals(Decimals.format(Rational.ONE.subtract(upUp), 25), d[k][0][1].text(), "t = " + times.get(k));
+        }
+        assertEquals(CertifiedDecimal.Status.EXACT, d[4][0][0].status()); // t = 0: the identity
+    }
+
+    @Test
+    void sharedTimesAgreeWithEachTimeAlone() {
+        // Common practice, no source: both routes give correctly rounded decimals, so they must agree digit for digit.
+        Random rnd = new Random(20261202L);
+        for (int trial = 0; trial < 4; trial++) {
+            RationalMatrix q = randomGenerator(rnd, 3 + rnd.nextInt(4));
+            java.util.List<Rational> times = java.util.List.of(Rational.of(1, 3), Rational.of(2), Rational.of(7, 3));
+            CertifiedDecimal[][][] d = CertifiedTransient.decimals(q, times, 18, 4096, Progress.NONE);
+            for (int k = 0; k < times.size(); k++) {
+                CertifiedDecimal[][] alone = CertifiedTransient.of(q, times.get(k)).decimals(18, 4096);
+                for (int i = 0; i < alone.length; i++) {
+                    for (int j = 0; j < alone.length; j++) {
+                        assertEquals(alone[i][j].text(), d[k][i][j].text(), "trial " + trial + " t " + times.get(k));
+                    }
+                }
+            }
+        }
+    }
+
+    @Test
     void pureDeathChainMatchesThePoissonLaw() {
         // A pure death chain 0 <- 1 <- 2 at rate mu each: from 2, P(2 -> 2) = e^(-mu t), P(2 -> 1) = mu t e^(-mu t)
         // (the Poisson process's counts; S. M. Ross, "Introduction to Probability Models", ch. 5 and 6; from memory).
