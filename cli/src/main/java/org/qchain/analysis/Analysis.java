@@ -256,10 +256,9 @@ public final class Analysis {
      * @param model the loaded model
      * @param q     the query (only its route matters)
      * @return the result
-     * @throws QchainException for a continuous chain
+     * @throws QchainException for a bad model
      */
     public static org.qchain.result.ClassesResult classes(LoadedModel model, LongRunQuery q) {
-        model.requireDiscrete("qchain classes needs a discrete chain");
         return route(model, q) == Route.SYMBOLIC ? SymbolicEngine.classes(model) : NumericEngine.classes(model);
     }
 
@@ -267,22 +266,20 @@ public final class Analysis {
      * Stationary laws per closed class, absorption into closed classes, the (Cesàro) limit of P^n, mean recurrence
      * and, on request, mean first-passage times.
      *
-     * @throws QchainException for a continuous chain, a result past the size limit (with the estimate), passage
+     * @throws QchainException for a result past the size limit (with the estimate), passage
      *                         times asked of a reducible chain
      */
     public static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q) {
-        model.requireDiscrete("qchain longrun needs a discrete chain");
         return route(model, q) == Route.SYMBOLIC ? SymbolicEngine.longRun(model, q) : NumericEngine.longRun(model, q);
     }
 
     /**
      * Absorption: N, expected steps, variance, absorption probabilities, rewards, first passage.
      *
-     * @throws QchainException for a continuous chain, an unknown state, no absorbing state, states that can never
+     * @throws QchainException for an unknown state, no absorbing state, states that can never
      *                         be absorbed (naming them), a result past the size limit
      */
     public static org.qchain.result.AbsorbResult absorb(LoadedModel model, AbsorbQuery q) {
-        model.requireDiscrete("qchain absorb needs a discrete chain");
         return route(model, q.limits()) == Route.SYMBOLIC ? SymbolicEngine.absorb(model, q)
             : NumericEngine.absorb(model, q);
     }

@@ -31,20 +31,28 @@ final class ChainResults {
     static <T> ClassesResult classes(LoadedModel model, Arithmetic<T> f, List<List<T>> p, Function<T, Formula> fmt,
             List<String> parameters, List<ClassesResult.SpecialValue> special, List<String> warnings) {
         List<String> names = model.states();
-        Structure s = Structure.of(ChainEngine.graph(f, p));
+        boolean ct = continuous(model);
+        Structure s = Structure.of(ct ? ChainEngine.generatorGraph(f, p) : ChainEngine.graph(f, p));
         List<ClassesResult.ChainClass> cls = new ArrayList<>();
         for (int c = 0; c < s.classes().size(); c++) {
             cls.add(new ClassesResult.ChainClass(names(names, s.classes().get(c)), s.closed().get(c),
                 s.periods().get(c)));
         }
         return new ClassesResult(model.source(), names, parameters, cls, names(names, s.absorbing()),
-            names(names, s.transients()), special, table(p, fmt), warnings);
+            names(names, s.transients()), special, table(p, fmt), warnings, ct);
+    }
+
+    /** Whether the model is a continuous-time chain (its matrix is then the generator). */
+    static boolean continuous(LoadedModel model) {
+        return model.model().kind() == org.qchain.exact.model.ChainKind.CONTINUOUS;
     }
 
     static <T> LongRunResult longRun(LoadedModel model, LongRunQuery q, Arithmetic<T> f, List<List<T>> p,
             Function<T, Formula> fmt, List<String> parameters, List<String> warnings) {
         List<String> names = model.states();
-        ChainEngine.LongRun<T> lr = ChainEngine.longRun(f, p, names, q.passage());
+        boolean ct = continuous(model);
+        ChainEngine.LongRun<T> lr = ct ? ChainEngine.longRunContinuous(f, p, names, q.passage())
+            : ChainEngine.longRun(f, p, names, q.passage());
         List<LongRunResult.ClassLaw> laws = new ArrayList<>();
         for (ChainEngine.ClassLaw<T> c : lr.classes()) {
             laws.add(new LongRunResult.ClassLaw(names(names, c.states()), c.closed(), c.period(),
@@ -63,7 +71,7 @@ final class ChainResults {
                 + " (P + P^2 + ... + P^n)/n");
         }
         return new LongRunResult(model.source(), names, parameters, laws, abs, table(lr.limit(), fmt), lr.cesaro(),
-            lr.passage().map(m -> table(m, fmt)), warnings);
+            lr.passage().map(m -> table(m, fmt)), warnings, ct);
     }
 
     static <T> AbsorbResult absorb(LoadedModel model, AbsorbQuery q, Arithmetic<T> f, List<List<T>> p,
@@ -81,7 +89,18 @@ final class ChainResults {
             throw new QchainException(ErrorKey.BAD_ARGUMENT, "--steps", q.steps().getAsInt(),
                 "must be between 1 and " + MAX_STEPS);
         }
-        ChainEngine.Absorption<T> a = ChainEngine.absorb(f, p, names, made);
+        boolean ct = continuous(model);
+        if (ct && q.discount().isPresent()) {
+            throw new QchainException(ErrorKey.NOT_APPLICABLE, "--discount",
+                "a discount factor per step needs a discrete chain; this chain is continuous");
+        }
+        if (ct && q.steps().isPresent()) {
+            throw new QchainException(ErrorKey.NOT_APPLICABLE, "--steps",
+                "the first-passage distribution counts steps and needs a discrete chain; for a continuous chain"
+                    + " qchain avail gives the reliability and qchain step -t the probabilities at given times");
+        }
+        ChainEngine.Absorption<T> a = ct ? ChainEngine.absorbContinuous(f, p, names, made)
+            : ChainEngine.absorb(f, p, names, made);
         if (from.isPresent() && !a.transientStates().contains(from.get())) {
             throw new QchainException(ErrorKey.BAD_ARGUMENT, "--from", names.get(from.get()),
                 "is absorbing; choose one of " + String.join(", ", names(names, a.transientStates())));
@@ -92,8 +111,9 @@ final class ChainResults {
             for (String s : names) {
                 r.add(f.of(q.rewards().getOrDefault(s, Rational.ZERO)));
             }
-            List<List<T>> pm = ChainEngine.withAbsorbing(f, p, made);
-            ChainEngine.LongRun<T> lr = ChainEngine.longRun(f, pm, names, false);
+            List<List<T>> pm = ct ? ChainEngine.withZeroRows(f, p, made) : ChainEngine.withAbsorbing(f, p, made);
+            ChainEngine.LongRun<T> lr = ct ? ChainEngine.longRunContinuous(f, pm, names, false)
+                : ChainEngine.longRun(f, pm, names, false);
             List<T> disc = q.discount().map(v -> ChainEngine.discountedReward(f, pm, r, f.of(v))).orElse(List.of());
             rewards = Optional.of(new AbsorbResult.Rewards(names, r.stream().map(fmt).toList(),
                 ChainEngine.accumulatedReward(f, a, r).stream().map(fmt).toList(),
@@ -120,7 +140,7 @@ final class ChainResults {
         return new AbsorbResult(model.source(), parameters, names(names, a.transientStates()),
             names(names, a.absorbingStates()), names(names, List.copyOf(made)), table(a.fundamental(), fmt),
             a.expectedSteps().stream().map(fmt).toList(), a.variance().stream().map(fmt).toList(),
-            table(a.probabilities(), fmt), rewards, passage, q.from(), warnings);
+            table(a.probabilities(), fmt), rewards, passage, q.from(), warnings, ct);
     }
 
     private static List<String> names(List<String> names, List<Integer> idx) {

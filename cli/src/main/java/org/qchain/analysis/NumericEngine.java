@@ -184,7 +184,7 @@ final class NumericEngine {
      * twice that many digits.
      */
     static void guardSolve(LoadedModel model, long maxDigits) {
-        RationalMatrix p = model.matrix();
+        RationalMatrix p = ChainResults.continuous(model) ? model.generator("this analysis") : model.matrix();
         int n = p.rows();
         double det = 0;
         for (int i = 0; i < n; i++) {
@@ -207,7 +207,7 @@ final class NumericEngine {
     }
 
     static List<List<Rational>> rows(LoadedModel model) {
-        RationalMatrix p = model.matrix();
+        RationalMatrix p = ChainResults.continuous(model) ? model.generator("this analysis") : model.matrix();
         List<List<Rational>> out = new ArrayList<>();
         for (int i = 0; i < p.rows(); i++) {
             out.add(List.of(p.row(i)));

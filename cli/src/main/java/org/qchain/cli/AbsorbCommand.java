@@ -31,7 +31,10 @@ import picocli.CommandLine.TypeConversionException;
         "--absorbing A,B makes states absorbing (the time to first reach them). --reward FILE (lines STATE VALUE)"
             + " adds the expected reward until absorption, the long-run average reward per step and, with"
             + " --discount V, the expected discounted reward. --steps N adds the distribution of the first-passage"
-            + " time into the absorbing states for n = 1..N."})
+            + " time into the absorbing states for n = 1..N.",
+        "A continuous chain (rates): N = (-Q)^-1 holds the expected time in each state, then the expected time"
+            + " until absorption (the mean time to failure when the down states are absorbing) and its variance,"
+            + " in the model's time unit; --discount and --steps need a discrete chain."})
 final class AbsorbCommand implements Callable<Integer> {
     /** Reads {@code --discount}: a rational strictly between 0 and 1. */
     static final class Discount implements ITypeConverter<Rational> {

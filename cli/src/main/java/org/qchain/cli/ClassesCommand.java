@@ -17,7 +17,9 @@ import picocli.CommandLine.Spec;
         "The communicating classes of a discrete chain: which are closed (the chain stays once inside) and which"
             + " transient, the period of each class, the absorbing states and the one-step graph.",
         "With parameters without a value: the structure for generic values inside their domains, and the values"
-            + " inside or on the edge of the domains that change it."})
+            + " inside or on the edge of the domains that change it.",
+        "A continuous chain (rates) has the classes of its rate graph; it is never periodic, and the table shows"
+            + " the generator."})
 final class ClassesCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;

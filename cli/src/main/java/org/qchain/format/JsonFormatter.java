@@ -501,9 +501,16 @@ final class JsonFormatter extends Layout {
         return m.stream().map(r -> r.stream().map(org.qchain.result.Formula::plain).toList()).toList();
     }
 
+    /** An object opened with its source, and {@code "kind":"continuous"} for a continuous chain (discrete: absent). */
+    private static Json kinded(String source, boolean continuous) {
+        Json j = Json.object().string("source", source);
+        return continuous ? j.string("kind", "continuous") : j;
+    }
+
     private static Json byState(List<String> states, List<org.qchain.result.Formula> values) {
         Json j = Json.object();
-        for (int i = 0; i < states.size(); i++) {
+        // values may be empty: a continuous chain's state that is never left has no mean return time
+        for (int i = 0; i < Math.min(states.size(), values.size()); i++) {
             j.string(states.get(i), values.get(i).plain());
         }
         return j;
@@ -511,8 +518,8 @@ final class JsonFormatter extends Layout {
 
     @Override
     public String classes(org.qchain.result.ClassesResult r) {
-        return Json.object().string("source", r.source()).strings("states", r.states())
-            .strings("parameters", r.parameters())
+        return kinded(r.source(), r.continuous())
+            .strings("states", r.states()).strings("parameters", r.parameters())
             .objects("classes", r.classes(), c -> Json.object().strings("states", c.states()).bool("closed", c.closed())
                 .number("period", c.period()))
             .strings("absorbing", r.absorbing()).strings("transient", r.transients())
@@ -532,8 +539,8 @@ final class JsonFormatter extends Layout {
             abs.objects(a.state(), idx, k -> Json.object().number("class", a.classes().get(k))
                 .string("probability", a.probabilities().get(k).plain()));
         }
-        Json j = Json.object().string("source", r.source()).strings("states", r.states())
-            .strings("parameters", r.parameters())
+        Json j = kinded(r.source(), r.continuous())
+            .strings("states", r.states()).strings("parameters", r.parameters())
             .objects("classes", r.classes(), c -> {
                 Json o = Json.object().strings("states", c.states()).bool("closed", c.closed())
                     .number("period", c.period());
@@ -554,8 +561,8 @@ final class JsonFormatter extends Layout {
         for (int i = 0; i < r.transients().size(); i++) {
             probs.object(r.transients().get(i), byState(r.absorbing(), r.probabilities().get(i)));
         }
-        Json j = Json.object().string("source", r.source()).strings("parameters", r.parameters())
-            .strings("transient", r.transients()).strings("absorbing", r.absorbing())
+        Json j = kinded(r.source(), r.continuous())
+            .strings("parameters", r.parameters()).strings("transient", r.transients()).strings("absorbing", r.absorbing())
             .strings("made_absorbing", r.made()).stringRows("fundamental", plain(r.fundamental()))
             .object("expected_steps", byState(r.transients(), r.expectedSteps()))
             .object("variance", byState(r.transients(), r.variance())).object("absorption", probs);

@@ -39,12 +39,19 @@ final class Sections {
         List<List<Formula>> rows = new ArrayList<>();
         for (int c = 0; c < r.classes().size(); c++) {
             ClassesResult.ChainClass k = r.classes().get(c);
-            rows.add(List.of(word(String.valueOf(c)), word(String.join(" ", k.states())),
-                word(k.closed() ? "closed" : "transient"), word(k.period() == 0 ? "-" : String.valueOf(k.period()))));
+            List<Formula> row = new ArrayList<>(List.of(word(String.valueOf(c)), word(String.join(" ", k.states())),
+                word(k.closed() ? "closed" : "transient")));
+            if (!r.continuous()) {
+                // a continuous chain has no period (the JSON says 1)
+                row.add(word(k.period() == 0 ? "-" : String.valueOf(k.period())));
+            }
+            rows.add(row);
         }
-        t.add(new Table("Communicating classes", List.of("class", "states", "kind", "period"), rows));
-        t.add(matrix("One-step graph (entry from row to column; blank: no transition)", r.states(), r.states(),
-            blankZeros(r.graph())));
+        t.add(new Table("Communicating classes", r.continuous() ? List.of("class", "states", "kind")
+            : List.of("class", "states", "kind", "period"), rows));
+        t.add(matrix(r.continuous() ? "Rates (entry from row to column; blank: no transition; diagonal: minus the"
+            + " total rate out)" : "One-step graph (entry from row to column; blank: no transition)", r.states(),
+            r.states(), blankZeros(r.graph())));
         if (!r.specialValues().isEmpty()) {
             List<List<Formula>> sv = new ArrayList<>();
             for (ClassesResult.SpecialValue v : r.specialValues()) {
@@ -67,10 +74,12 @@ final class Sections {
             }
             List<List<Formula>> rows = new ArrayList<>();
             for (int i = 0; i < k.states().size(); i++) {
-                rows.add(List.of(word(k.states().get(i)), k.stationary().get(i), k.meanRecurrence().get(i)));
+                rows.add(List.of(word(k.states().get(i)), k.stationary().get(i),
+                    i < k.meanRecurrence().size() ? k.meanRecurrence().get(i) : word("- (never left)")));
             }
-            t.add(new Table("Closed class " + c + " (period " + k.period() + "): stationary law",
-                List.of("state", "stationary", "mean recurrence"), rows));
+            t.add(new Table("Closed class " + c + (r.continuous() ? "" : " (period " + k.period() + ")")
+                + ": stationary law", List.of("state", "stationary", r.continuous() ? "mean return time"
+                : "mean recurrence"), rows));
         }
         if (!r.absorption().isEmpty()) {
             List<String> head = new ArrayList<>(List.of("from"));
@@ -85,10 +94,11 @@ final class Sections {
             }
             t.add(new Table("Probability of ending in each closed class", head, rows));
         }
-        t.add(matrix(r.cesaro() ? "Limit of the averages (P + ... + P^n)/n" : "Limit of P^n", r.states(), r.states(),
-            r.limit()));
-        r.passage().ifPresent(m -> t.add(matrix("Mean first-passage times (diagonal: mean recurrence)", r.states(),
-            r.states(), m)));
+        t.add(matrix(r.continuous() ? "Limit of P(t) as t grows" : r.cesaro()
+            ? "Limit of the averages (P + ... + P^n)/n" : "Limit of P^n", r.states(), r.states(), r.limit()));
+        r.passage().ifPresent(m -> t.add(matrix(r.continuous()
+            ? "Mean first-passage times (diagonal: mean return time)"
+            : "Mean first-passage times (diagonal: mean recurrence)", r.states(), r.states(), m)));
         return new Doc("Long run of " + r.source() + params(r.parameters()), t, List.of());
     }
 
@@ -96,7 +106,8 @@ final class Sections {
         List<Table> t = new ArrayList<>();
         List<String> rowsOf = r.from().map(List::of).orElse(r.transients());
         List<List<Formula>> steps = new ArrayList<>();
-        List<String> head = new ArrayList<>(List.of("from", "expected steps", "variance"));
+        List<String> head = new ArrayList<>(List.of("from", r.continuous() ? "expected time" : "expected steps",
+            "variance"));
         for (String a : r.absorbing()) {
             head.add("P(end in " + a + ")");
         }
@@ -111,9 +122,11 @@ final class Sections {
         for (String s : rowsOf) {
             nRows.add(r.fundamental().get(r.transients().indexOf(s)));
         }
-        t.add(matrix("Expected visits N = (I - Q)^-1", rowsOf, r.transients(), nRows));
+        t.add(matrix(r.continuous() ? "Expected time in each state N = (-Q)^-1" : "Expected visits N = (I - Q)^-1",
+            rowsOf, r.transients(), nRows));
         r.rewards().ifPresent(w -> {
-            List<String> h = new ArrayList<>(List.of("state", "reward per step", "accumulated until absorption",
+            List<String> h = new ArrayList<>(List.of("state", r.continuous() ? "reward per unit time"
+                : "reward per step", "accumulated until absorption",
                 "long-run average"));
             if (w.discount().isPresent()) {
                 h.add("discounted (v = " + w.discount().get().plain() + ")");

@@ -21,11 +21,14 @@ import java.util.Optional;
  * @param passage       the first-passage distribution, if asked
  * @param from          the one starting state to print, if chosen
  * @param warnings      warnings
+ * @param continuous    whether the chain is a continuous-time one: N holds expected times in each state, the
+ *                      expected steps are expected times to absorption (in the model's time unit)
  */
 public record AbsorbResult(String source, List<String> parameters, List<String> transients, List<String> absorbing,
                            List<String> made, List<List<Formula>> fundamental, List<Formula> expectedSteps,
                            List<Formula> variance, List<List<Formula>> probabilities, Optional<Rewards> rewards,
-                           Optional<Passage> passage, Optional<String> from, List<String> warnings) implements Result {
+                           Optional<Passage> passage, Optional<String> from, List<String> warnings,
+                           boolean continuous) implements Result {
     /** Copies the lists. */
     public AbsorbResult {
         parameters = List.copyOf(parameters);
@@ -37,6 +40,15 @@ public record AbsorbResult(String source, List<String> parameters, List<String> 
         variance = List.copyOf(variance);
         probabilities = probabilities.stream().map(List::copyOf).toList();
         warnings = List.copyOf(warnings);
+    }
+
+    /** A discrete chain's absorption (the components as above, {@code continuous} false). */
+    public AbsorbResult(String source, List<String> parameters, List<String> transients, List<String> absorbing,
+                        List<String> made, List<List<Formula>> fundamental, List<Formula> expectedSteps,
+                        List<Formula> variance, List<List<Formula>> probabilities, Optional<Rewards> rewards,
+                        Optional<Passage> passage, Optional<String> from, List<String> warnings) {
+        this(source, parameters, transients, absorbing, made, fundamental, expectedSteps, variance, probabilities,
+            rewards, passage, from, warnings, false);
     }
 
     /**

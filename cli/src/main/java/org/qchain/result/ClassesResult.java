@@ -15,10 +15,11 @@ import java.util.List;
  * @param specialValues parameter values inside or on the edge of the domains that change the structure
  * @param graph         the one-step matrix (the edges of the graph), {@code graph.get(i).get(j)} for i to j
  * @param warnings      warnings
+ * @param continuous    whether the chain is a continuous-time one (the graph then holds its rates)
  */
 public record ClassesResult(String source, List<String> states, List<String> parameters, List<ChainClass> classes,
                             List<String> absorbing, List<String> transients, List<SpecialValue> specialValues,
-                            List<List<Formula>> graph, List<String> warnings) implements Result {
+                            List<List<Formula>> graph, List<String> warnings, boolean continuous) implements Result {
     /** Copies the lists. */
     public ClassesResult {
         states = List.copyOf(states);
@@ -29,6 +30,13 @@ public record ClassesResult(String source, List<String> states, List<String> par
         specialValues = List.copyOf(specialValues);
         graph = graph.stream().map(List::copyOf).toList();
         warnings = List.copyOf(warnings);
+    }
+
+    /** A discrete chain's structure (the components as above, {@code continuous} false). */
+    public ClassesResult(String source, List<String> states, List<String> parameters, List<ChainClass> classes,
+                         List<String> absorbing, List<String> transients, List<SpecialValue> specialValues,
+                         List<List<Formula>> graph, List<String> warnings) {
+        this(source, states, parameters, classes, absorbing, transients, specialValues, graph, warnings, false);
     }
 
     /**

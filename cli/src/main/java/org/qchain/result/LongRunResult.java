@@ -17,10 +17,12 @@ import java.util.Optional;
  * @param cesaro     whether {@code limit} is the limit of the Cesàro averages (a closed class is periodic)
  * @param passage    mean first-passage times m_ij (m_ii the mean recurrence time), if asked
  * @param warnings   warnings
+ * @param continuous whether the chain is a continuous-time one (the limit is that of P(t); times in its unit)
  */
 public record LongRunResult(String source, List<String> states, List<String> parameters, List<ClassLaw> classes,
                             List<Absorption> absorption, List<List<Formula>> limit, boolean cesaro,
-                            Optional<List<List<Formula>>> passage, List<String> warnings) implements Result {
+                            Optional<List<List<Formula>>> passage, List<String> warnings, boolean continuous)
+    implements Result {
     /** Copies the lists. */
     public LongRunResult {
         states = List.copyOf(states);
@@ -30,6 +32,13 @@ public record LongRunResult(String source, List<String> states, List<String> par
         limit = limit.stream().map(List::copyOf).toList();
         passage = passage.map(m -> m.stream().map(List::copyOf).toList());
         warnings = List.copyOf(warnings);
+    }
+
+    /** A discrete chain's long run (the components as above, {@code continuous} false). */
+    public LongRunResult(String source, List<String> states, List<String> parameters, List<ClassLaw> classes,
+                         List<Absorption> absorption, List<List<Formula>> limit, boolean cesaro,
+                         Optional<List<List<Formula>>> passage, List<String> warnings) {
+        this(source, states, parameters, classes, absorption, limit, cesaro, passage, warnings, false);
     }
 
     /**

@@ -111,8 +111,40 @@ public final class ChainEngine {
      * @throws QchainException with {@link ErrorKey#NOT_APPLICABLE} if passage times are asked of a reducible chain
      */
     public static <T> LongRun<T> longRun(Arithmetic<T> f, List<List<T>> p, List<String> names, boolean passage) {
+        return longRun(f, p, names, passage, false);
+    }
+
+    /**
+     * The long run of a continuous-time chain from its generator Q: stationary laws from π Q_C = 0 on each closed
+     * class, the probability of ending in each closed class from (−Q_TT) H = R, the limit of P(t) as t grows, the
+     * mean recurrence time 1/(π_i q_i) (q_i = −Q_ii, the time from one entry into i to the next; none for a state
+     * that is never left) and, on request, mean first-passage times (via the uniformized chain
+     * P = I + Q/Λ: m_ij = m'_ij / Λ for i ≠ j, m_ii the mean recurrence time). A continuous chain is never periodic:
+     * every period is 1.
+     *
+     * <p>Sources: J. R. Norris, <i>Markov Chains</i> (1997), ch. 3.5–3.6 (invariant distributions πQ = 0, mean
+     * return times 1/(π_i q_i), hitting probabilities and expected hitting times of the jump chain and the
+     * generator); uniformization: S. M. Ross, <i>Introduction to Probability Models</i>, ch. 6.
+     *
+     * @param f       the arithmetic
+     * @param q       the generator (rows sum to 0)
+     * @param names   state names, for messages
+     * @param passage whether to compute mean first-passage times (needs an irreducible chain of two or more states)
+     * @return the long run, times in the model's time unit
+     */
+    public static <T> LongRun<T> longRunContinuous(Arithmetic<T> f, List<List<T>> q, List<String> names,
+            boolean passage) {
+        if (passage && q.size() < 2) {
+            throw new QchainException(ErrorKey.NOT_APPLICABLE, "--passage",
+                "mean first-passage times need at least two states");
+        }
+        return longRun(f, q, names, passage, true);
+    }
+
+    private static <T> LongRun<T> longRun(Arithmetic<T> f, List<List<T>> p, List<String> names, boolean passage,
+            boolean continuous) {
         int n = p.size();
-        Structure s = Structure.of(graph(f, p));
+        Structure s = Structure.of(continuous ? generatorGraph(f, p) : graph(f, p));
         if (passage && !s.irreducible()) {
             throw new QchainException(ErrorKey.NOT_APPLICABLE, "--passage",
                 "mean first-passage times between all states need an irreducible chain; this one has "
@@ -129,9 +161,9 @@ public final class ChainEngine {
                 laws.add(new ClassLaw<>(cls, false, s.periods().get(c), List.of(), List.of()));
                 continue;
             }
-            List<T> pi = stationary(f, p, cls);
+            List<T> pi = continuous ? stationaryOfGenerator(f, p, cls) : stationary(f, p, cls);
             pis.add(pi);
-            List<T> rec = pi.stream().map(x -> f.divide(f.one(), x)).toList();
+            List<T> rec = continuous ? meanReturnTimes(f, p, cls, pi) : pi.stream().map(x -> f.divide(f.one(), x)).toList();
             laws.add(new ClassLaw<>(cls, true, s.periods().get(c), pi, rec));
             cesaro |= s.periods().get(c) > 1;
             for (int i : cls) {
@@ -154,7 +186,7 @@ public final class ChainEngine {
                     r.get(a).set(c, sum);
                 }
             }
-            h = solveTransient(f, p, tr, r, names);
+            h = solveTransient(f, p, tr, r, names, continuous);
             for (int a = 0; a < tr.size(); a++) {
                 for (int c = 0; c < closedIdx.size(); c++) {
                     List<Integer> cls = s.classes().get(closedIdx.get(c));
@@ -167,7 +199,7 @@ public final class ChainEngine {
         }
         Optional<List<List<T>>> m = Optional.empty();
         if (passage) {
-            m = Optional.of(passageTimes(f, p, pis.get(0)));
+            m = Optional.of(continuous ? passageTimesContinuous(f, p, pis.get(0)) : passageTimes(f, p, pis.get(0)));
         }
         return new LongRun<>(s, laws, h, limit, cesaro, m);
     }
@@ -183,6 +215,63 @@ public final class ChainEngine {
             }
         }
         return f.leftNullVector(a);
+    }
+
+    /** The stationary law of the closed class {@code cls} of a continuous chain: π Q_C = 0, π·1 = 1. */
+    static <T> List<T> stationaryOfGenerator(Arithmetic<T> f, List<List<T>> q, List<Integer> cls) {
+        int k = cls.size();
+        List<List<T>> a = zeros(f, k, k);
+        for (int x = 0; x < k; x++) {
+            for (int y = 0; y < k; y++) {
+                a.get(x).set(y, q.get(cls.get(x)).get(cls.get(y)));
+            }
+        }
+        return f.leftNullVector(a);
+    }
+
+    /**
+     * Mean return times 1/(π_i q_i) on a closed class of a continuous chain; empty for a state that is never left
+     * (an absorbing state, the only case where q_i is zero in a closed class).
+     */
+    static <T> List<T> meanReturnTimes(Arithmetic<T> f, List<List<T>> q, List<Integer> cls, List<T> pi) {
+        List<T> out = new ArrayList<>();
+        for (int k = 0; k < cls.size(); k++) {
+            T exit = f.negate(q.get(cls.get(k)).get(cls.get(k)));
+            if (f.isZero(exit)) {
+                return List.of();
+            }
+            out.add(f.divide(f.one(), f.multiply(pi.get(k), exit)));
+        }
+        return out;
+    }
+
+    /**
+     * Mean first-passage times of an irreducible continuous chain: those of its uniformized chain P = I + Q/Λ with
+     * Λ = 1 + Σ q_i (any Λ at least the largest exit rate gives the same times), divided by Λ, since each step of
+     * the uniformized chain lasts 1/Λ on average (Wald's identity); the diagonal holds the mean return times.
+     */
+    static <T> List<List<T>> passageTimesContinuous(Arithmetic<T> f, List<List<T>> q, List<T> pi) {
+        int n = q.size();
+        T rate = f.one();
+        for (int i = 0; i < n; i++) {
+            rate = f.subtract(rate, q.get(i).get(i));
+        }
+        List<List<T>> p = zeros(f, n, n);
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                T v = f.divide(q.get(i).get(j), rate);
+                p.get(i).set(j, i == j ? f.add(f.one(), v) : v);
+            }
+        }
+        List<List<T>> m = passageTimes(f, p, pi);
+        List<T> ret = meanReturnTimes(f, q, java.util.stream.IntStream.range(0, n).boxed().toList(), pi);
+        List<List<T>> out = zeros(f, n, n);
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                out.get(i).set(j, i == j ? ret.get(i) : f.divide(m.get(i).get(j), rate));
+            }
+        }
+        return out;
     }
 
     /** m_ij = (z_jj − z_ij)/π_j, m_ii = 1/π_i, with Z = (I − P + W)^−1 (Kemeny and Snell, ch. IV). */
@@ -217,8 +306,30 @@ public final class ChainEngine {
      *                         {@link ErrorKey#SINGULAR_SYSTEM} naming the states that can never be absorbed
      */
     public static <T> Absorption<T> absorb(Arithmetic<T> f, List<List<T>> p, List<String> names, Set<Integer> extra) {
+        return absorb(f, p, names, extra, false);
+    }
+
+    /**
+     * Absorption of a continuous chain from its generator Q, in the model's time unit: N = (−Q_TT)^−1 (expected time
+     * spent in transient j from transient i), t = N·1 (expected time to absorption), its variance 2Nt − t∘t
+     * (E[T²] = 2Nt), and B = N R with R the rates into the absorbing states (J. R. Norris, <i>Markov Chains</i>,
+     * ch. 3.3; the second moment: common practice for phase-type distributions, no source).
+     *
+     * @param f     the arithmetic
+     * @param q     the generator
+     * @param names state names, for messages
+     * @param extra states to make absorbing (their rows become zero)
+     * @return N, t, variance and B
+     */
+    public static <T> Absorption<T> absorbContinuous(Arithmetic<T> f, List<List<T>> q, List<String> names,
+            Set<Integer> extra) {
+        return absorb(f, q, names, extra, true);
+    }
+
+    private static <T> Absorption<T> absorb(Arithmetic<T> f, List<List<T>> p, List<String> names, Set<Integer> extra,
+            boolean continuous) {
         int n = p.size();
-        List<List<T>> q = withAbsorbing(f, p, extra);
+        List<List<T>> q = continuous ? withZeroRows(f, p, extra) : withAbsorbing(f, p, extra);
         boolean[][] g = graph(f, q);
         TreeSet<Integer> abs = new TreeSet<>(extra);
         for (int i = 0; i < n; i++) {
@@ -255,7 +366,7 @@ public final class ChainEngine {
                 rhs.get(a).set(k + 1 + b, q.get(tr.get(a)).get(absList.get(b)));
             }
         }
-        List<List<T>> x = solveTransient(f, q, tr, rhs, names);
+        List<List<T>> x = solveTransient(f, q, tr, rhs, names, continuous);
         List<List<T>> nMat = new ArrayList<>();
         List<T> t = new ArrayList<>();
         List<List<T>> b = new ArrayList<>();
@@ -266,12 +377,15 @@ public final class ChainEngine {
         }
         List<T> variance = new ArrayList<>();
         for (int a = 0; a < k; a++) {
-            // ((2N − I) t)_a − t_a^2
+            // ((2N − I) t)_a − t_a^2, or (2N t)_a − t_a^2 in continuous time
             T s = f.zero();
             for (int c = 0; c < k; c++) {
                 s = f.add(s, f.multiply(nMat.get(a).get(c), t.get(c)));
             }
-            s = f.subtract(f.add(s, s), t.get(a));
+            s = f.add(s, s);
+            if (!continuous) {
+                s = f.subtract(s, t.get(a));
+            }
             variance.add(f.subtract(s, f.multiply(t.get(a), t.get(a))));
         }
         return new Absorption<>(tr, absList, nMat, t, variance, b);
@@ -351,19 +465,19 @@ public final class ChainEngine {
 
     /** Solves (I − Q) X = R on the transient states, naming the states if the system is singular. */
     private static <T> List<List<T>> solveTransient(Arithmetic<T> f, List<List<T>> p, List<Integer> tr,
-            List<List<T>> r, List<String> names) {
+            List<List<T>> r, List<String> names, boolean continuous) {
         int k = tr.size();
         List<List<T>> a = zeros(f, k, k);
         for (int x = 0; x < k; x++) {
             for (int y = 0; y < k; y++) {
                 T v = p.get(tr.get(x)).get(tr.get(y));
-                a.get(x).set(y, x == y ? f.subtract(f.one(), v) : f.negate(v));
+                a.get(x).set(y, continuous ? f.negate(v) : x == y ? f.subtract(f.one(), v) : f.negate(v));
             }
         }
         try {
             return f.solve(a, r);
         } catch (SingularSystemException e) {
-            throw new SingularSystemException(e.index(), "I − Q on the transient states "
+            throw new SingularSystemException(e.index(), (continuous ? "−Q" : "I − Q") + " on the transient states "
                 + tr.stream().map(names::get).collect(Collectors.joining(", ")) + " has no inverse");
         }
     }
@@ -398,6 +512,27 @@ public final class ChainEngine {
                     + " can never reach an absorbing state, so I − Q has no inverse; make a state of"
                     + " their class absorbing with --absorbing, or use qchain longrun");
         }
+    }
+
+    /**
+     * The graph of a generator: its non-zero off-diagonal rates, and a loop at every state (a continuous chain
+     * stays in each state for a while, so no class is periodic).
+     */
+    public static <T> boolean[][] generatorGraph(Arithmetic<T> f, List<List<T>> q) {
+        boolean[][] g = graph(f, q);
+        for (int i = 0; i < g.length; i++) {
+            g[i][i] = true;
+        }
+        return g;
+    }
+
+    /** A generator with the rows of {@code extra} replaced by zero rows (those states are never left). */
+    public static <T> List<List<T>> withZeroRows(Arithmetic<T> f, List<List<T>> q, Set<Integer> extra) {
+        List<List<T>> out = new ArrayList<>();
+        for (int i = 0; i < q.size(); i++) {
+            out.add(extra.contains(i) ? new ArrayList<>(Collections.nCopies(q.size(), f.zero())) : q.get(i));
+        }
+        return out;
     }
 
     /** P with the rows of {@code extra} replaced by unit rows. */
