@@ -537,6 +537,8 @@ final class SymbolicEngine {
             RatFunMatrix p, List<List<RatFun>> rows) {
         Model m = model.model();
         java.util.TreeMap<String, java.util.TreeSet<Rational>> roots = new java.util.TreeMap<>();
+        // factors not of the form (parameter - value): their zero sets are curves or surfaces, or irrational points
+        java.util.LinkedHashSet<org.qchain.symbolic.Poly> curves = new java.util.LinkedHashSet<>();
         for (List<RatFun> row : rows) {
             for (RatFun x : row) {
                 if (x.isZero() || x.numerator().isConstant()) {
@@ -546,6 +548,9 @@ final class SymbolicEngine {
                     org.qchain.symbolic.Poly b = fac.base();
                     List<String> vars = b.occurringVariables();
                     if (vars.size() != 1 || b.totalDegree() != 1) {
+                        if (!vars.isEmpty()) {
+                            curves.add(b);
+                        }
                         continue;
                     }
                     String v = vars.get(0);
@@ -573,7 +578,101 @@ final class SymbolicEngine {
                 }
             }
         }
+        for (org.qchain.symbolic.Poly c : curves) {
+            Vanishing v = vanishing(m, c);
+            if (v == Vanishing.NEVER) {
+                continue;
+            }
+            // at a generic point of {c = 0} exactly the entries whose numerator has the factor c vanish
+            boolean[][] g = graph(rows);
+            for (int i = 0; i < rows.size(); i++) {
+                for (int j = 0; j < rows.size(); j++) {
+                    RatFun x = rows.get(i).get(j);
+                    if (!x.isZero() && x.numerator().divideExact(c).isPresent()) {
+                        g[i][j] = false;
+                    }
+                }
+            }
+            org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(g);
+            if (!s.equals(generic)) {
+                out.add(new org.qchain.result.ClassesResult.SpecialValue(org.qchain.symbolic.Formulas.plain(c) + " = 0"
+                    + (v == Vanishing.UNDECIDED ? " (if it vanishes inside the domains: not decided)" : ""),
+                    effect(generic, s, model.states())));
+            }
+        }
         return out;
+    }
+
+    /** Whether an irreducible polynomial vanishes inside the box of the domains. */
+    enum Vanishing { SOMEWHERE, NEVER, UNDECIDED }
+
+    /**
+     * Decides whether the irreducible {@code c} vanishes inside the box of the domains (not only on its edge):
+     * two signs at the points of a grid on the closed box mean two signs inside too (c is continuous), hence a zero
+     * inside where c changes sign, so its zero set there is a piece of a hypersurface and the other factors do not
+     * vanish at its generic points; one sign proved inside by Bernstein coefficients
+     * ({@link org.qchain.symbolic.BoxSign}, its stated depth) means no zero inside; otherwise undecided. Zeros on
+     * the edge only (a corner, say) are left to the values of single parameters.
+     */
+    static Vanishing vanishing(Model m, org.qchain.symbolic.Poly c) {
+        List<String> vars = c.occurringVariables();
+        List<Domain> inside = new ArrayList<>();
+        List<List<Rational>> grid = new ArrayList<>();
+        for (String v : vars) {
+            Domain d = m.param(v).map(org.qchain.exact.model.ParamDecl::domain).orElse(Domain.defaultFor(m.kind()));
+            inside.add(new Domain(d.lower(), false, d.upper(), false));
+            List<Rational> pts = new ArrayList<>();
+            Rational lo = d.lower();
+            if (d.upper().isPresent()) {
+                Rational w = d.upper().get().subtract(lo);
+                for (int k = 0; k <= 8; k++) {
+                    pts.add(lo.add(w.multiply(Rational.of(k, 8))));
+                }
+            } else {
+                for (long k : new long[] {0, 1, 2, 5, 10, 100, 1000, 1_000_000}) {
+                    pts.add(lo.add(Rational.of(k)));
+                }
+                pts.add(lo.add(Rational.of(1, 2)));
+                pts.add(lo.add(Rational.of(1, 10)));
+            }
+            grid.add(pts);
+        }
+        int pos = 0;
+        int neg = 0;
+        int[] idx = new int[vars.size()];
+        int total = 1;
+        for (List<Rational> g : grid) {
+            total = Math.multiplyExact(total, g.size());
+            if (total > 100_000) {
+                break;
+            }
+        }
+        for (int n = 0; n < Math.min(total, 100_000); n++) {
+            Map<String, Rational> at = new java.util.HashMap<>();
+            int q = n;
+            for (int i = 0; i < vars.size(); i++) {
+                idx[i] = q % grid.get(i).size();
+                q /= grid.get(i).size();
+                at.put(vars.get(i), grid.get(i).get(idx[i]));
+            }
+            int sign = c.evaluate(at).signum();
+            pos += sign > 0 ? 1 : 0;
+            neg += sign < 0 ? 1 : 0;
+            if (pos > 0 && neg > 0) {
+                return Vanishing.SOMEWHERE;
+            }
+        }
+        Map<List<Integer>, Rational> terms = new java.util.HashMap<>();
+        List<String> ringVars = c.ring().variables();
+        for (org.qchain.symbolic.Poly.Term t : c.terms()) {
+            List<Integer> e = new ArrayList<>();
+            for (String v : vars) {
+                e.add(t.exponents().get(ringVars.indexOf(v)));
+            }
+            terms.merge(e, pos > 0 ? t.coefficient() : t.coefficient().negate(), Rational::add);
+        }
+        return pos + neg > 0 && org.qchain.symbolic.BoxSign.positive(terms, inside) ? Vanishing.NEVER
+            : Vanishing.UNDECIDED;
     }
 
     private static boolean[][] graph(List<List<RatFun>> rows) {
