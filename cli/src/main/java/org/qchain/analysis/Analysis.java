@@ -270,7 +270,20 @@ public final class Analysis {
      *                         times asked of a reducible chain
      */
     public static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q) {
-        return route(model, q) == Route.SYMBOLIC ? SymbolicEngine.longRun(model, q) : NumericEngine.longRun(model, q);
+        return longRun(model, q, Progress.NONE);
+    }
+
+    /**
+     * {@link #longRun(LoadedModel, LongRunQuery)}, the exact solves reporting to {@code progress}.
+     *
+     * @param model    the loaded model
+     * @param q        the query
+     * @param progress where long solves report
+     * @return the result
+     */
+    public static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q, Progress progress) {
+        return route(model, q) == Route.SYMBOLIC ? SymbolicEngine.longRun(model, q)
+            : NumericEngine.longRun(model, q, progress);
     }
 
     /**
@@ -280,7 +293,19 @@ public final class Analysis {
      *                         be absorbed (naming them), a result past the size limit
      */
     public static org.qchain.result.AbsorbResult absorb(LoadedModel model, AbsorbQuery q) {
+        return absorb(model, q, Progress.NONE);
+    }
+
+    /**
+     * {@link #absorb(LoadedModel, AbsorbQuery)}, the exact solves reporting to {@code progress}.
+     *
+     * @param model    the loaded model
+     * @param q        the query
+     * @param progress where long solves report
+     * @return the result
+     */
+    public static org.qchain.result.AbsorbResult absorb(LoadedModel model, AbsorbQuery q, Progress progress) {
         return route(model, q.limits()) == Route.SYMBOLIC ? SymbolicEngine.absorb(model, q)
-            : NumericEngine.absorb(model, q);
+            : NumericEngine.absorb(model, q, progress);
     }
 }

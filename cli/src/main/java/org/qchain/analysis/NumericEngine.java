@@ -220,15 +220,15 @@ final class NumericEngine {
             org.qchain.result.ExactValue::new, List.of(), List.of(), List.of());
     }
 
-    static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q) {
+    static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q, Progress progress) {
         guardSolve(model, q.maxDigits());
-        return ChainResults.longRun(model, q, org.qchain.exact.longrun.Arithmetic.RATIONAL, rows(model),
+        return ChainResults.longRun(model, q, org.qchain.exact.longrun.Arithmetic.rational(progress), rows(model),
             org.qchain.result.ExactValue::new, List.of(), List.of());
     }
 
-    static org.qchain.result.AbsorbResult absorb(LoadedModel model, AbsorbQuery q) {
+    static org.qchain.result.AbsorbResult absorb(LoadedModel model, AbsorbQuery q, Progress progress) {
         guardSolve(model, q.limits().maxDigits());
-        return ChainResults.absorb(model, q, org.qchain.exact.longrun.Arithmetic.RATIONAL, rows(model),
+        return ChainResults.absorb(model, q, org.qchain.exact.longrun.Arithmetic.rational(progress), rows(model),
             org.qchain.result.ExactValue::new, List.of(), List.of());
     }
 }

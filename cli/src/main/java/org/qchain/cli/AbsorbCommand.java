@@ -100,7 +100,7 @@ final class AbsorbCommand implements Callable<Integer> {
         }
         AbsorbQuery q = new AbsorbQuery(Optional.ofNullable(from), absorbing, rewards, Optional.ofNullable(discount),
             steps == null ? OptionalInt.empty() : OptionalInt.of(steps), options.query(false));
-        AbsorbResult result = root.run(spec, progress -> Analysis.absorb(loaded, q));
+        AbsorbResult result = root.run(spec, progress -> Analysis.absorb(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }

@@ -44,7 +44,7 @@ final class LongRunCommand implements Callable<Integer> {
     public Integer call() {
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
-        LongRunResult result = root.run(spec, progress -> Analysis.longRun(loaded, options.query(passage)));
+        LongRunResult result = root.run(spec, progress -> Analysis.longRun(loaded, options.query(passage), progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }

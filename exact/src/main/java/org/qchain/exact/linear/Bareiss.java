@@ -25,6 +25,10 @@ final class Bareiss {
      * @throws SingularSystemException if {@code A} is singular
      */
     static Solution solve(BigInteger[][] a, BigInteger[][] b, Thread caller) {
+        return solve(a, b, caller, org.qchain.exact.Progress.NONE);
+    }
+
+    static Solution solve(BigInteger[][] a, BigInteger[][] b, Thread caller, org.qchain.exact.Progress progress) {
         int n = a.length;
         int m = b.length == 0 ? 0 : b[0].length;
         BigInteger[][] w = new BigInteger[n][n + m];
@@ -35,6 +39,7 @@ final class Bareiss {
         BigInteger prev = BigInteger.ONE;
         for (int k = 0; k < n; k++) {
             checkInterrupt(caller);
+            progress.update("eliminating", k, n);
             pivot(w, k, n);
             BigInteger pk = w[k][k];
             BigInteger[] rk = w[k];

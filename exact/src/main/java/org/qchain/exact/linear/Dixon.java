@@ -29,10 +29,15 @@ final class Dixon {
      * @param a integer matrix with entries below 2^62 / (2^31 n) in absolute value; see {@link #fits}
      */
     static Optional<Bareiss.Solution> solve(long[][] a, BigInteger[][] b, Thread caller) {
+        return solve(a, b, caller, org.qchain.exact.Progress.NONE);
+    }
+
+    static Optional<Bareiss.Solution> solve(long[][] a, BigInteger[][] b, Thread caller,
+            org.qchain.exact.Progress progress) {
         for (long p : PRIMES) {
             Optional<ModLu> lu = ModLu.of(a, p, caller);
             if (lu.isPresent()) {
-                return Optional.of(lift(a, b, lu.get(), caller));
+                return Optional.of(lift(a, b, lu.get(), caller, progress));
             }
         }
         return Optional.empty();
@@ -44,7 +49,8 @@ final class Dixon {
         return bound < 0x1p62;
     }
 
-    private static Bareiss.Solution lift(long[][] a, BigInteger[][] b, ModLu lu, Thread caller) {
+    private static Bareiss.Solution lift(long[][] a, BigInteger[][] b, ModLu lu, Thread caller,
+            org.qchain.exact.Progress progress) {
         int n = a.length;
         int m = b[0].length;
         long p = lu.p;
@@ -100,6 +106,9 @@ final class Dixon {
             long[] rm = new long[n];
             for (int s = 0; s < steps; s++) {
                 Bareiss.checkInterrupt(caller);
+                if ((s & 15) == 0) {
+                    progress.update("lifting", (long) c * steps + s, (long) m * steps);
+                }
                 for (int i = 0; i < n; i++) {
                     rm[i] = r[i].bitLength() < 63 ? Math.floorMod(r[i].longValue(), p) : r[i].mod(bp).longValue();
                 }
@@ -123,6 +132,7 @@ final class Dixon {
                 num[i][c] = combine(digits, i, 0, steps, bp);
             }
         }
+        progress.update("lifting", (long) m * steps, (long) m * steps);
         return reconstruct(num, pk, numBound, denBound);
     }
 

@@ -2,6 +2,7 @@ package org.qchain.exact.linear;
 
 import java.math.BigInteger;
 import java.util.Optional;
+import org.qchain.exact.Progress;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 
@@ -34,6 +35,16 @@ public final class LinearSolver {
      * @throws org.qchain.exact.QchainException with key INTERRUPTED if the calling thread is interrupted
      */
     public static RationalMatrix solve(RationalMatrix a, RationalMatrix b) {
+        return solve(a, b, Progress.NONE);
+    }
+
+    /**
+     * The solution X of {@code A X = B}, reporting progress ({@code "eliminating"}: pivots done; {@code "lifting"}:
+     * p-adic lifting steps done over all right-hand sides).
+     *
+     * @see #solve(RationalMatrix, RationalMatrix)
+     */
+    public static RationalMatrix solve(RationalMatrix a, RationalMatrix b, Progress progress) {
         requireSquare(a);
         if (b.rows() != a.rows()) {
             throw new IllegalArgumentException("right-hand side has " + b.rows() + " rows, the matrix " + a.rows());
@@ -57,7 +68,7 @@ public final class LinearSolver {
                 bi[i][j] = scaled(b.get(i, j), l);
             }
         }
-        Bareiss.Solution s = solveInteger(ai, bi);
+        Bareiss.Solution s = solveInteger(ai, bi, progress);
         Rational[][] x = new Rational[n][m];
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < m; j++) {
@@ -77,6 +88,11 @@ public final class LinearSolver {
      * @throws SingularSystemException  if {@code A} is singular (the index is a row of {@code A})
      */
     public static RationalMatrix solveLeft(RationalMatrix a, RationalMatrix b) {
+        return solveLeft(a, b, Progress.NONE);
+    }
+
+    /** {@link #solveLeft(RationalMatrix, RationalMatrix)}, reporting progress as {@link #solve} does. */
+    public static RationalMatrix solveLeft(RationalMatrix a, RationalMatrix b, Progress progress) {
         requireSquare(a);
         if (b.cols() != a.rows()) {
             throw new IllegalArgumentException("right-hand side has " + b.cols() + " columns, the matrix " + a.rows());
@@ -102,7 +118,7 @@ public final class LinearSolver {
                 bt[i][r] = b.get(r, i);
             }
         }
-        RationalMatrix yt = solve(RationalMatrix.of(at), RationalMatrix.of(bt));
+        RationalMatrix yt = solve(RationalMatrix.of(at), RationalMatrix.of(bt), progress);
         Rational[][] x = new Rational[k][n];
         for (int r = 0; r < k; r++) {
             for (int i = 0; i < n; i++) {
@@ -124,6 +140,11 @@ public final class LinearSolver {
      * @throws SingularSystemException  if the solution is not unique (the null space has dimension above 1)
      */
     public static Rational[] leftNullVector(RationalMatrix a) {
+        return leftNullVector(a, Progress.NONE);
+    }
+
+    /** {@link #leftNullVector(RationalMatrix)}, reporting progress as {@link #solve} does. */
+    public static Rational[] leftNullVector(RationalMatrix a, Progress progress) {
         requireSquare(a);
         int n = a.rows();
         Rational[][] e = a.toArray();
@@ -141,7 +162,7 @@ public final class LinearSolver {
         java.util.Arrays.fill(rhs[0], Rational.ZERO);
         rhs[0][n - 1] = Rational.ONE;
         try {
-            return solveLeft(RationalMatrix.of(e), RationalMatrix.of(rhs)).row(0);
+            return solveLeft(RationalMatrix.of(e), RationalMatrix.of(rhs), progress).row(0);
         } catch (SingularSystemException ex) {
             throw new SingularSystemException(ex.index(),
                 "the null space has dimension above 1 (more than one closed class)");
@@ -183,6 +204,10 @@ public final class LinearSolver {
 
     /** Integer {@code A X = B}: p-adic lifting when the entries are word-size, Bareiss otherwise. */
     static Bareiss.Solution solveInteger(BigInteger[][] a, BigInteger[][] b) {
+        return solveInteger(a, b, Progress.NONE);
+    }
+
+    static Bareiss.Solution solveInteger(BigInteger[][] a, BigInteger[][] b, Progress progress) {
         Thread caller = Thread.currentThread();
         int n = a.length;
         if (b[0].length == 0) {
@@ -190,12 +215,12 @@ public final class LinearSolver {
         }
         Optional<long[][]> small = asLongs(a);
         if (small.isPresent() && n >= DIXON_MIN_SIZE) {
-            Optional<Bareiss.Solution> s = Dixon.solve(small.get(), b, caller);
+            Optional<Bareiss.Solution> s = Dixon.solve(small.get(), b, caller, progress);
             if (s.isPresent()) {
                 return s.get();
             }
         }
-        return Bareiss.solve(a, b, caller);
+        return Bareiss.solve(a, b, caller, progress);
     }
 
     /** Below this size fraction-free elimination is as fast and simpler. */

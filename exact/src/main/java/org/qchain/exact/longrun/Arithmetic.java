@@ -61,71 +61,81 @@ public interface Arithmetic<T> {
     List<T> leftNullVector(List<List<T>> a);
 
     /** Exact rationals with {@link LinearSolver}. */
-    Arithmetic<Rational> RATIONAL = new Arithmetic<>() {
-        @Override
-        public Rational zero() {
-            return Rational.ZERO;
-        }
+    Arithmetic<Rational> RATIONAL = rational(org.qchain.exact.Progress.NONE);
 
-        @Override
-        public Rational one() {
-            return Rational.ONE;
-        }
-
-        @Override
-        public Rational of(Rational r) {
-            return r;
-        }
-
-        @Override
-        public Rational add(Rational a, Rational b) {
-            return a.add(b);
-        }
-
-        @Override
-        public Rational subtract(Rational a, Rational b) {
-            return a.subtract(b);
-        }
-
-        @Override
-        public Rational multiply(Rational a, Rational b) {
-            return a.multiply(b);
-        }
-
-        @Override
-        public Rational divide(Rational a, Rational b) {
-            return a.divide(b);
-        }
-
-        @Override
-        public boolean isZero(Rational a) {
-            return a.isZero();
-        }
-
-        @Override
-        public List<List<Rational>> solve(List<List<Rational>> a, List<List<Rational>> b) {
-            return rows(LinearSolver.solve(matrix(a), matrix(b)));
-        }
-
-        @Override
-        public List<Rational> leftNullVector(List<List<Rational>> a) {
-            return List.of(LinearSolver.leftNullVector(matrix(a)));
-        }
-
-        private RationalMatrix matrix(List<List<Rational>> a) {
-            Rational[][] e = new Rational[a.size()][];
-            for (int i = 0; i < e.length; i++) {
-                e[i] = a.get(i).toArray(new Rational[0]);
+    /**
+     * Exact rationals with {@link LinearSolver}, its solves reporting to {@code progress}.
+     *
+     * @param progress where the solves report
+     * @return the arithmetic
+     */
+    static Arithmetic<Rational> rational(org.qchain.exact.Progress progress) {
+        return new Arithmetic<>() {
+            @Override
+            public Rational zero() {
+                return Rational.ZERO;
             }
-            return RationalMatrix.of(e);
-        }
 
-        private List<List<Rational>> rows(RationalMatrix m) {
-            List<List<Rational>> out = new ArrayList<>();
-            for (int i = 0; i < m.rows(); i++) {
-                out.add(List.of(m.row(i)));
+            @Override
+            public Rational one() {
+                return Rational.ONE;
             }
-            return out;
-        }
-    };
+
+            @Override
+            public Rational of(Rational r) {
+                return r;
+            }
+
+            @Override
+            public Rational add(Rational a, Rational b) {
+                return a.add(b);
+            }
+
+            @Override
+            public Rational subtract(Rational a, Rational b) {
+                return a.subtract(b);
+            }
+
+            @Override
+            public Rational multiply(Rational a, Rational b) {
+                return a.multiply(b);
+            }
+
+            @Override
+            public Rational divide(Rational a, Rational b) {
+                return a.divide(b);
+            }
+
+            @Override
+            public boolean isZero(Rational a) {
+                return a.isZero();
+            }
+
+            @Override
+            public List<List<Rational>> solve(List<List<Rational>> a, List<List<Rational>> b) {
+                return rows(LinearSolver.solve(matrix(a), matrix(b), progress));
+            }
+
+            @Override
+            public List<Rational> leftNullVector(List<List<Rational>> a) {
+                return List.of(LinearSolver.leftNullVector(matrix(a), progress));
+            }
+
+            private RationalMatrix matrix(List<List<Rational>> a) {
+                Rational[][] e = new Rational[a.size()][];
+                for (int i = 0; i < e.length; i++) {
+                    e[i] = a.get(i).toArray(new Rational[0]);
+                }
+                return RationalMatrix.of(e);
+            }
+
+            private List<List<Rational>> rows(RationalMatrix m) {
+                List<List<Rational>> out = new ArrayList<>();
+                for (int i = 0; i < m.rows(); i++) {
+                    out.add(List.of(m.row(i)));
+                }
+                return out;
+            }
+        };
+    }
 }
