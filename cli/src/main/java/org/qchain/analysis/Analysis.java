@@ -259,7 +259,8 @@ public final class Analysis {
      * @throws QchainException for a bad model
      */
     public static org.qchain.result.ClassesResult classes(LoadedModel model, LongRunQuery q) {
-        return route(model, q) == Route.SYMBOLIC ? SymbolicEngine.classes(model) : NumericEngine.classes(model);
+        return route(model, q) == Route.SYMBOLIC ? SymbolicEngine.classes(model, q.brief())
+            : NumericEngine.classes(model, q.brief());
     }
 
     /**

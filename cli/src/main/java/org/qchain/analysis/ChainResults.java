@@ -29,7 +29,7 @@ final class ChainResults {
     static final int MAX_STEPS = 100_000;
 
     static <T> ClassesResult classes(LoadedModel model, Arithmetic<T> f, List<List<T>> p, Function<T, Formula> fmt,
-            List<String> parameters, List<ClassesResult.SpecialValue> special, List<String> warnings) {
+            List<String> parameters, List<ClassesResult.SpecialValue> special, List<String> warnings, boolean brief) {
         List<String> names = model.states();
         boolean ct = continuous(model);
         Structure s = Structure.of(ct ? ChainEngine.generatorGraph(f, p) : ChainEngine.graph(f, p));
@@ -39,7 +39,7 @@ final class ChainResults {
                 s.periods().get(c)));
         }
         return new ClassesResult(model.source(), names, parameters, cls, names(names, s.absorbing()),
-            names(names, s.transients()), special, table(p, fmt), warnings, ct);
+            names(names, s.transients()), special, brief ? List.of() : table(p, fmt), warnings, ct, brief);
     }
 
     /** Whether the model is a continuous-time chain (its matrix is then the generator). */
@@ -70,8 +70,9 @@ final class ChainResults {
             warnings.add("a closed class is periodic: P^n has no limit; the limit shown is that of the averages"
                 + " (P + P^2 + ... + P^n)/n");
         }
-        return new LongRunResult(model.source(), names, parameters, laws, abs, table(lr.limit(), fmt), lr.cesaro(),
-            lr.passage().map(m -> table(m, fmt)), warnings, ct);
+        return new LongRunResult(model.source(), names, parameters, laws, abs,
+            q.brief() ? List.of() : table(lr.limit(), fmt), lr.cesaro(), lr.passage().map(m -> table(m, fmt)),
+            warnings, ct, q.brief());
     }
 
     static <T> AbsorbResult absorb(LoadedModel model, AbsorbQuery q, Arithmetic<T> f, List<List<T>> p,
@@ -99,8 +100,9 @@ final class ChainResults {
                 "the first-passage distribution counts steps and needs a discrete chain; for a continuous chain"
                     + " qchain avail gives the reliability and qchain step -t the probabilities at given times");
         }
-        ChainEngine.Absorption<T> a = ct ? ChainEngine.absorbContinuous(f, p, names, made)
-            : ChainEngine.absorb(f, p, names, made);
+        boolean brief = q.limits().brief();
+        ChainEngine.Absorption<T> a = brief ? ChainEngine.absorbBrief(f, p, names, made, ct)
+            : ct ? ChainEngine.absorbContinuous(f, p, names, made) : ChainEngine.absorb(f, p, names, made);
         if (from.isPresent() && !a.transientStates().contains(from.get())) {
             throw new QchainException(ErrorKey.BAD_ARGUMENT, "--from", names.get(from.get()),
                 "is absorbing; choose one of " + String.join(", ", names(names, a.transientStates())));
@@ -116,7 +118,7 @@ final class ChainResults {
                 : ChainEngine.longRun(f, pm, names, false);
             List<T> disc = q.discount().map(v -> ChainEngine.discountedReward(f, pm, r, f.of(v))).orElse(List.of());
             rewards = Optional.of(new AbsorbResult.Rewards(names, r.stream().map(fmt).toList(),
-                ChainEngine.accumulatedReward(f, a, r).stream().map(fmt).toList(),
+                ChainEngine.accumulatedReward(f, p, a, r, names, ct).stream().map(fmt).toList(),
                 ChainEngine.longRunAverageReward(f, lr, r).stream().map(fmt).toList(),
                 q.discount().map(v -> fmt.apply(f.of(v))), disc.stream().map(fmt).toList()));
         }
@@ -140,7 +142,7 @@ final class ChainResults {
         return new AbsorbResult(model.source(), parameters, names(names, a.transientStates()),
             names(names, a.absorbingStates()), names(names, List.copyOf(made)), table(a.fundamental(), fmt),
             a.expectedSteps().stream().map(fmt).toList(), a.variance().stream().map(fmt).toList(),
-            table(a.probabilities(), fmt), rewards, passage, q.from(), warnings, ct);
+            table(a.probabilities(), fmt), rewards, passage, q.from(), warnings, ct, brief);
     }
 
     private static List<String> names(List<String> names, List<Integer> idx) {

@@ -7,8 +7,15 @@ package org.qchain.analysis;
  * @param symbolic  whether to keep every parameter symbolic even where values are known
  * @param maxDigits refuse exact results estimated past this many digits
  * @param maxStates refuse symbolic solves of more states than this
+ * @param brief     leave out the n x n tables (the graph, the limit of P^n, the fundamental matrix N): for large
+ *                  chains, whose per-state figures are wanted and whose full matrices would be most of the work
  */
-public record LongRunQuery(boolean passage, boolean symbolic, long maxDigits, int maxStates) {
+public record LongRunQuery(boolean passage, boolean symbolic, long maxDigits, int maxStates, boolean brief) {
+    /** With every table. */
+    public LongRunQuery(boolean passage, boolean symbolic, long maxDigits, int maxStates) {
+        this(passage, symbolic, maxDigits, maxStates, false);
+    }
+
     /** The default limit on the digits of an exact result. */
     public static final long DEFAULT_MAX_DIGITS = org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS;
     /** The default limit on the states of a symbolic solve. */

@@ -215,9 +215,9 @@ final class NumericEngine {
         return out;
     }
 
-    static org.qchain.result.ClassesResult classes(LoadedModel model) {
+    static org.qchain.result.ClassesResult classes(LoadedModel model, boolean brief) {
         return ChainResults.classes(model, org.qchain.exact.longrun.Arithmetic.RATIONAL, rows(model),
-            org.qchain.result.ExactValue::new, List.of(), List.of(), List.of());
+            org.qchain.result.ExactValue::new, List.of(), List.of(), List.of(), brief);
     }
 
     static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q, Progress progress) {

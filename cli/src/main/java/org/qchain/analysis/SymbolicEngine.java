@@ -507,12 +507,12 @@ final class SymbolicEngine {
         }
     }
 
-    static org.qchain.result.ClassesResult classes(LoadedModel model) {
+    static org.qchain.result.ClassesResult classes(LoadedModel model, boolean brief) {
         RatFunMatrix p = substituted(model);
         org.qchain.symbolic.linear.RatFunArithmetic f = org.qchain.symbolic.linear.RatFunArithmetic.of(p.ring());
         List<List<RatFun>> rows = rows(p);
         return ChainResults.classes(model, f, rows, x -> new RatFunFormula(x, false), p.occurringVariables(),
-            specialValues(model, p, rows), checked(model).warnings());
+            specialValues(model, p, rows), checked(model).warnings(), brief);
     }
 
     static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q) {

@@ -18,7 +18,11 @@ final class LongRunOptions {
         description = "Refuse symbolic solves of more than S states (default: ${DEFAULT-VALUE}).")
     int maxStates = LongRunQuery.DEFAULT_MAX_STATES;
 
+    @Option(names = "--brief", description = "Leave out the n x n tables (classes: the graph; longrun: the limit"
+        + " matrix; absorb: the fundamental matrix N) and keep the figures per state: for large chains.")
+    boolean brief;
+
     LongRunQuery query(boolean passage) {
-        return new LongRunQuery(passage, symbolic, maxDigits, maxStates);
+        return new LongRunQuery(passage, symbolic, maxDigits, maxStates, brief);
     }
 }

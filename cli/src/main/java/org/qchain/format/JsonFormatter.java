@@ -501,6 +501,11 @@ final class JsonFormatter extends Layout {
         return m.stream().map(r -> r.stream().map(org.qchain.result.Formula::plain).toList()).toList();
     }
 
+    /** With {@code --brief}: {@code "left_out":[field]} (the field itself stays, empty). */
+    private static Json leftOut(Json j, boolean brief, String field) {
+        return brief ? j.strings("left_out", List.of(field)) : j;
+    }
+
     /** An object opened with its source, and {@code "kind":"continuous"} for a continuous chain (discrete: absent). */
     private static Json kinded(String source, boolean continuous) {
         Json j = Json.object().string("source", source);
@@ -518,14 +523,15 @@ final class JsonFormatter extends Layout {
 
     @Override
     public String classes(org.qchain.result.ClassesResult r) {
-        return kinded(r.source(), r.continuous())
+        Json j = kinded(r.source(), r.continuous())
             .strings("states", r.states()).strings("parameters", r.parameters())
             .objects("classes", r.classes(), c -> Json.object().strings("states", c.states()).bool("closed", c.closed())
                 .number("period", c.period()))
             .strings("absorbing", r.absorbing()).strings("transient", r.transients())
             .objects("special_values", r.specialValues(), v -> Json.object().string("condition", v.condition())
                 .string("effect", v.effect()))
-            .stringRows("graph", plain(r.graph())).strings("warnings", r.warnings()).close() + "\n";
+            .stringRows("graph", plain(r.graph()));
+        return leftOut(j, r.brief(), "graph").strings("warnings", r.warnings()).close() + "\n";
     }
 
     @Override
@@ -552,6 +558,7 @@ final class JsonFormatter extends Layout {
             })
             .object("absorption_into_classes", abs).stringRows("limit", plain(r.limit())).bool("cesaro", r.cesaro());
         r.passage().ifPresent(m -> j.stringRows("passage", plain(m)));
+        leftOut(j, r.brief(), "limit");
         return j.strings("warnings", r.warnings()).close() + "\n";
     }
 
@@ -584,6 +591,7 @@ final class JsonFormatter extends Layout {
             }
             j.object("first_passage", Json.object().object("exactly", ex).object("within", wi));
         });
+        leftOut(j, r.brief(), "fundamental");
         return j.strings("warnings", r.warnings()).close() + "\n";
     }
 }

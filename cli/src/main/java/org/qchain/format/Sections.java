@@ -49,9 +49,11 @@ final class Sections {
         }
         t.add(new Table("Communicating classes", r.continuous() ? List.of("class", "states", "kind")
             : List.of("class", "states", "kind", "period"), rows));
-        t.add(matrix(r.continuous() ? "Rates (entry from row to column; blank: no transition; diagonal: minus the"
-            + " total rate out)" : "One-step graph (entry from row to column; blank: no transition)", r.states(),
-            r.states(), blankZeros(r.graph())));
+        if (!r.brief()) {
+            t.add(matrix(r.continuous() ? "Rates (entry from row to column; blank: no transition; diagonal: minus"
+                + " the total rate out)" : "One-step graph (entry from row to column; blank: no transition)",
+                r.states(), r.states(), blankZeros(r.graph())));
+        }
         if (!r.specialValues().isEmpty()) {
             List<List<Formula>> sv = new ArrayList<>();
             for (ClassesResult.SpecialValue v : r.specialValues()) {
@@ -62,6 +64,9 @@ final class Sections {
         List<String> notes = new ArrayList<>();
         notes.add("absorbing: " + (r.absorbing().isEmpty() ? "(none)" : String.join(", ", r.absorbing())));
         notes.add("transient: " + (r.transients().isEmpty() ? "(none)" : String.join(", ", r.transients())));
+        if (r.brief()) {
+            notes.add("left out (--brief): the " + (r.continuous() ? "rate table" : "one-step graph"));
+        }
         return new Doc("Structure of " + r.source() + params(r.parameters()), t, notes);
     }
 
@@ -94,12 +99,16 @@ final class Sections {
             }
             t.add(new Table("Probability of ending in each closed class", head, rows));
         }
-        t.add(matrix(r.continuous() ? "Limit of P(t) as t grows" : r.cesaro()
-            ? "Limit of the averages (P + ... + P^n)/n" : "Limit of P^n", r.states(), r.states(), r.limit()));
+        if (!r.brief()) {
+            t.add(matrix(r.continuous() ? "Limit of P(t) as t grows" : r.cesaro()
+                ? "Limit of the averages (P + ... + P^n)/n" : "Limit of P^n", r.states(), r.states(), r.limit()));
+        }
         r.passage().ifPresent(m -> t.add(matrix(r.continuous()
             ? "Mean first-passage times (diagonal: mean return time)"
             : "Mean first-passage times (diagonal: mean recurrence)", r.states(), r.states(), m)));
-        return new Doc("Long run of " + r.source() + params(r.parameters()), t, List.of());
+        return new Doc("Long run of " + r.source() + params(r.parameters()), t, r.brief()
+            ? List.of("left out (--brief): the limit matrix (each row is the probability of ending in each closed"
+                + " class times its stationary law)") : List.of());
     }
 
     static Doc of(AbsorbResult r) {
@@ -118,12 +127,14 @@ final class Sections {
             steps.add(row);
         }
         t.add(new Table("Until absorption", head, steps));
-        List<List<Formula>> nRows = new ArrayList<>();
-        for (String s : rowsOf) {
-            nRows.add(r.fundamental().get(r.transients().indexOf(s)));
+        if (!r.brief()) {
+            List<List<Formula>> nRows = new ArrayList<>();
+            for (String s : rowsOf) {
+                nRows.add(r.fundamental().get(r.transients().indexOf(s)));
+            }
+            t.add(matrix(r.continuous() ? "Expected time in each state N = (-Q)^-1"
+                : "Expected visits N = (I - Q)^-1", rowsOf, r.transients(), nRows));
         }
-        t.add(matrix(r.continuous() ? "Expected time in each state N = (-Q)^-1" : "Expected visits N = (I - Q)^-1",
-            rowsOf, r.transients(), nRows));
         r.rewards().ifPresent(w -> {
             List<String> h = new ArrayList<>(List.of("state", r.continuous() ? "reward per unit time"
                 : "reward per step", "accumulated until absorption",
@@ -165,6 +176,9 @@ final class Sections {
         List<String> notes = new ArrayList<>();
         if (!r.made().isEmpty()) {
             notes.add("made absorbing: " + String.join(", ", r.made()));
+        }
+        if (r.brief()) {
+            notes.add("left out (--brief): the fundamental matrix N");
         }
         return new Doc("Absorption in " + r.source() + params(r.parameters()), t, notes);
     }

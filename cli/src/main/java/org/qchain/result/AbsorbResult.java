@@ -23,12 +23,13 @@ import java.util.Optional;
  * @param warnings      warnings
  * @param continuous    whether the chain is a continuous-time one: N holds expected times in each state, the
  *                      expected steps are expected times to absorption (in the model's time unit)
+ * @param brief the fundamental matrix N was left out on request ({@code --brief})
  */
 public record AbsorbResult(String source, List<String> parameters, List<String> transients, List<String> absorbing,
                            List<String> made, List<List<Formula>> fundamental, List<Formula> expectedSteps,
                            List<Formula> variance, List<List<Formula>> probabilities, Optional<Rewards> rewards,
                            Optional<Passage> passage, Optional<String> from, List<String> warnings,
-                           boolean continuous) implements Result {
+                           boolean continuous, boolean brief) implements Result {
     /** Copies the lists. */
     public AbsorbResult {
         parameters = List.copyOf(parameters);
@@ -48,7 +49,7 @@ public record AbsorbResult(String source, List<String> parameters, List<String> 
                         List<Formula> variance, List<List<Formula>> probabilities, Optional<Rewards> rewards,
                         Optional<Passage> passage, Optional<String> from, List<String> warnings) {
         this(source, parameters, transients, absorbing, made, fundamental, expectedSteps, variance, probabilities,
-            rewards, passage, from, warnings, false);
+            rewards, passage, from, warnings, false, false);
     }
 
     /**

@@ -16,10 +16,12 @@ import java.util.List;
  * @param graph         the one-step matrix (the edges of the graph), {@code graph.get(i).get(j)} for i to j
  * @param warnings      warnings
  * @param continuous    whether the chain is a continuous-time one (the graph then holds its rates)
+ * @param brief the one-step graph (or rate) table was left out on request ({@code --brief})
  */
 public record ClassesResult(String source, List<String> states, List<String> parameters, List<ChainClass> classes,
                             List<String> absorbing, List<String> transients, List<SpecialValue> specialValues,
-                            List<List<Formula>> graph, List<String> warnings, boolean continuous) implements Result {
+                            List<List<Formula>> graph, List<String> warnings, boolean continuous, boolean brief)
+    implements Result {
     /** Copies the lists. */
     public ClassesResult {
         states = List.copyOf(states);
@@ -36,7 +38,7 @@ public record ClassesResult(String source, List<String> states, List<String> par
     public ClassesResult(String source, List<String> states, List<String> parameters, List<ChainClass> classes,
                          List<String> absorbing, List<String> transients, List<SpecialValue> specialValues,
                          List<List<Formula>> graph, List<String> warnings) {
-        this(source, states, parameters, classes, absorbing, transients, specialValues, graph, warnings, false);
+        this(source, states, parameters, classes, absorbing, transients, specialValues, graph, warnings, false, false);
     }
 
     /**

@@ -18,10 +18,11 @@ import java.util.Optional;
  * @param passage    mean first-passage times m_ij (m_ii the mean recurrence time), if asked
  * @param warnings   warnings
  * @param continuous whether the chain is a continuous-time one (the limit is that of P(t); times in its unit)
+ * @param brief the limit matrix was left out on request ({@code --brief})
  */
 public record LongRunResult(String source, List<String> states, List<String> parameters, List<ClassLaw> classes,
                             List<Absorption> absorption, List<List<Formula>> limit, boolean cesaro,
-                            Optional<List<List<Formula>>> passage, List<String> warnings, boolean continuous)
+                            Optional<List<List<Formula>>> passage, List<String> warnings, boolean continuous, boolean brief)
     implements Result {
     /** Copies the lists. */
     public LongRunResult {
@@ -38,7 +39,7 @@ public record LongRunResult(String source, List<String> states, List<String> par
     public LongRunResult(String source, List<String> states, List<String> parameters, List<ClassLaw> classes,
                          List<Absorption> absorption, List<List<Formula>> limit, boolean cesaro,
                          Optional<List<List<Formula>>> passage, List<String> warnings) {
-        this(source, states, parameters, classes, absorption, limit, cesaro, passage, warnings, false);
+        this(source, states, parameters, classes, absorption, limit, cesaro, passage, warnings, false, false);
     }
 
     /**

@@ -306,7 +306,20 @@ public final class ChainEngine {
      *                         {@link ErrorKey#SINGULAR_SYSTEM} naming the states that can never be absorbed
      */
     public static <T> Absorption<T> absorb(Arithmetic<T> f, List<List<T>> p, List<String> names, Set<Integer> extra) {
-        return absorb(f, p, names, extra, false);
+        return absorb(f, p, names, extra, false, true);
+    }
+
+    /**
+     * Absorption without the fundamental matrix (its list is then empty): t, the variance and B from two solves with
+     * one and 1 + (absorbing states) right-hand sides instead of one with n more, for large chains.
+     *
+     * @param continuous whether {@code p} is a generator
+     * @see #absorb(Arithmetic, List, List, Set)
+     * @see #absorbContinuous(Arithmetic, List, List, Set)
+     */
+    public static <T> Absorption<T> absorbBrief(Arithmetic<T> f, List<List<T>> p, List<String> names,
+            Set<Integer> extra, boolean continuous) {
+        return absorb(f, p, names, extra, continuous, false);
     }
 
     /**
@@ -323,11 +336,11 @@ public final class ChainEngine {
      */
     public static <T> Absorption<T> absorbContinuous(Arithmetic<T> f, List<List<T>> q, List<String> names,
             Set<Integer> extra) {
-        return absorb(f, q, names, extra, true);
+        return absorb(f, q, names, extra, true, true);
     }
 
     private static <T> Absorption<T> absorb(Arithmetic<T> f, List<List<T>> p, List<String> names, Set<Integer> extra,
-            boolean continuous) {
+            boolean continuous, boolean withN) {
         int n = p.size();
         List<List<T>> q = continuous ? withZeroRows(f, p, extra) : withAbsorbing(f, p, extra);
         boolean[][] g = graph(f, q);
@@ -357,13 +370,16 @@ public final class ChainEngine {
         }
         requireReach(g, tr, abs, names);
         int k = tr.size();
-        // one solve for N, t (right-hand side 1) and B (right-hand side R)
-        List<List<T>> rhs = zeros(f, k, k + 1 + absList.size());
+        // one solve for N (right-hand sides I, unless left out), t (right-hand side 1) and B (right-hand side R)
+        int w = withN ? k : 0;
+        List<List<T>> rhs = zeros(f, k, w + 1 + absList.size());
         for (int a = 0; a < k; a++) {
-            rhs.get(a).set(a, f.one());
-            rhs.get(a).set(k, f.one());
+            if (withN) {
+                rhs.get(a).set(a, f.one());
+            }
+            rhs.get(a).set(w, f.one());
             for (int b = 0; b < absList.size(); b++) {
-                rhs.get(a).set(k + 1 + b, q.get(tr.get(a)).get(absList.get(b)));
+                rhs.get(a).set(w + 1 + b, q.get(tr.get(a)).get(absList.get(b)));
             }
         }
         List<List<T>> x = solveTransient(f, q, tr, rhs, names, continuous);
@@ -371,17 +387,35 @@ public final class ChainEngine {
         List<T> t = new ArrayList<>();
         List<List<T>> b = new ArrayList<>();
         for (List<T> row : x) {
-            nMat.add(row.subList(0, k));
-            t.add(row.get(k));
-            b.add(row.subList(k + 1, row.size()));
+            if (withN) {
+                nMat.add(row.subList(0, k));
+            }
+            t.add(row.get(w));
+            b.add(row.subList(w + 1, row.size()));
+        }
+        // N t: from N, or from one more solve (I − Q) y = t
+        List<T> nt = new ArrayList<>();
+        if (withN) {
+            for (int a = 0; a < k; a++) {
+                T s = f.zero();
+                for (int c = 0; c < k; c++) {
+                    s = f.add(s, f.multiply(nMat.get(a).get(c), t.get(c)));
+                }
+                nt.add(s);
+            }
+        } else {
+            List<List<T>> tc = zeros(f, k, 1);
+            for (int a = 0; a < k; a++) {
+                tc.get(a).set(0, t.get(a));
+            }
+            for (List<T> row : solveTransient(f, q, tr, tc, names, continuous)) {
+                nt.add(row.get(0));
+            }
         }
         List<T> variance = new ArrayList<>();
         for (int a = 0; a < k; a++) {
             // ((2N − I) t)_a − t_a^2, or (2N t)_a − t_a^2 in continuous time
-            T s = f.zero();
-            for (int c = 0; c < k; c++) {
-                s = f.add(s, f.multiply(nMat.get(a).get(c), t.get(c)));
-            }
+            T s = nt.get(a);
             s = f.add(s, s);
             if (!continuous) {
                 s = f.subtract(s, t.get(a));
@@ -395,6 +429,21 @@ public final class ChainEngine {
      * Expected reward accumulated until absorption, {@code N r} on the transient states (a reward is earned for each
      * step spent in a state, counting the start).
      */
+    public static <T> List<T> accumulatedReward(Arithmetic<T> f, List<List<T>> p, Absorption<T> a, List<T> reward,
+            List<String> names, boolean continuous) {
+        if (!a.fundamental().isEmpty() || a.transientStates().isEmpty()) {
+            return accumulatedReward(f, a, reward);
+        }
+        List<List<T>> r = zeros(f, a.transientStates().size(), 1);
+        for (int i = 0; i < r.size(); i++) {
+            r.get(i).set(0, reward.get(a.transientStates().get(i)));
+        }
+        List<List<T>> q = continuous ? withZeroRows(f, p, new TreeSet<>(a.absorbingStates()))
+            : withAbsorbing(f, p, new TreeSet<>(a.absorbingStates()));
+        return solveTransient(f, q, a.transientStates(), r, names, continuous).stream().map(row -> row.get(0)).toList();
+    }
+
+    /** {@code N r}, from the fundamental matrix (which must be present). */
     public static <T> List<T> accumulatedReward(Arithmetic<T> f, Absorption<T> a, List<T> reward) {
         List<T> out = new ArrayList<>();
         for (List<T> row : a.fundamental()) {
