@@ -69,6 +69,27 @@ final class Dixon {
                 logNum[c] += 0.5 * (Math.max(ls, 2.0 * b[i][c].bitLength()) + 1);
             }
         }
+        // Hadamard's bound by columns as well: |det| <= prod_k |col_k|, and with column j replaced by b,
+        // |b| prod_{k != j} |col_k| <= |b| prod_k |col_k| (a non-zero integer column has norm >= 1). A right-hand
+        // side of many digits then counts once, not once per row as in the bound by rows.
+        double logCols = 0;
+        for (int j = 0; j < n; j++) {
+            double s = 0;
+            for (int i = 0; i < n; i++) {
+                s += (double) a[i][j] * a[i][j];
+            }
+            logCols += 0.5 * Math.log(Math.max(s, 1)) / Math.log(2);
+        }
+        logDet = Math.min(logDet, logCols);
+        for (int c = 0; c < m; c++) {
+            int maxBits = 0;
+            for (int i = 0; i < n; i++) {
+                maxBits = Math.max(maxBits, b[i][c].bitLength());
+            }
+            // log2 |b| <= maxBits + log2(n) / 2
+            double byCols = logCols + maxBits + 0.5 * Math.log(Math.max(n, 1)) / Math.log(2) + 1;
+            logNum[c] = Math.min(logNum[c], byCols);
+        }
         double maxNum = 0;
         for (double v : logNum) {
             maxNum = Math.max(maxNum, v);
@@ -137,6 +158,17 @@ final class Dixon {
     }
 
     /** {@code sum_s digits[s][i] p^(s - lo)} for s in [lo, hi), split in halves so the products stay balanced. */
+    /** Powers of the lifting primes up to p^4096 (at most a few MB), shared by all entries: the splits repeat the same few exponents. */
+    private static final java.util.concurrent.ConcurrentHashMap<Long, BigInteger> POWERS =
+        new java.util.concurrent.ConcurrentHashMap<>();
+
+    private static BigInteger power(BigInteger p, int e) {
+        if (p.bitLength() > 31 || e > 4096) {
+            return p.pow(e);
+        }
+        return POWERS.computeIfAbsent(p.longValue() << 21 | e, k -> p.pow(e));
+    }
+
     private static BigInteger combine(long[][] digits, int i, int lo, int hi, BigInteger p) {
         if (hi - lo <= 16) {
             BigInteger s = BigInteger.ZERO;
@@ -146,7 +178,7 @@ final class Dixon {
             return s;
         }
         int mid = (lo + hi) >>> 1;
-        return combine(digits, i, mid, hi, p).multiply(p.pow(mid - lo)).add(combine(digits, i, lo, mid, p));
+        return combine(digits, i, mid, hi, p).multiply(power(p, mid - lo)).add(combine(digits, i, lo, mid, p));
     }
 
     /**

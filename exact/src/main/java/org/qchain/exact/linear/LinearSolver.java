@@ -53,26 +53,36 @@ public final class LinearSolver {
         int m = b.cols();
         BigInteger[][] ai = new BigInteger[n][n];
         BigInteger[][] bi = new BigInteger[n][m];
+        // each row of A times the lcm of its denominators (A stays word-size where it was), the right-hand sides
+        // times the same row factor and then by one common denominator D of them all: (L A)(D X) = D L B, so a
+        // right-hand side with large denominators (an earlier solution) does not blow up A
+        Rational[][] lb = new Rational[n][m];
+        BigInteger d = BigInteger.ONE;
         for (int i = 0; i < n; i++) {
             BigInteger l = BigInteger.ONE;
             for (int j = 0; j < n; j++) {
                 l = lcm(l, a.get(i, j).denominator());
             }
-            for (int j = 0; j < m; j++) {
-                l = lcm(l, b.get(i, j).denominator());
-            }
             for (int j = 0; j < n; j++) {
                 ai[i][j] = scaled(a.get(i, j), l);
             }
+            Rational rl = Rational.of(l);
             for (int j = 0; j < m; j++) {
-                bi[i][j] = scaled(b.get(i, j), l);
+                lb[i][j] = b.get(i, j).multiply(rl);
+                d = lcm(d, lb[i][j].denominator());
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < m; j++) {
+                bi[i][j] = scaled(lb[i][j], d);
             }
         }
         Bareiss.Solution s = solveInteger(ai, bi, progress);
+        BigInteger den = s.denominator().multiply(d);
         Rational[][] x = new Rational[n][m];
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < m; j++) {
-                x[i][j] = Rational.of(s.numerators()[i][j], s.denominator());
+                x[i][j] = Rational.of(s.numerators()[i][j], den);
             }
         }
         return RationalMatrix.of(x);
