@@ -719,7 +719,7 @@ function _picocli_qchain_classes() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
+  local flag_opts="'--symbolic' '--brief' '-h' '--help' '-V' '--version'"
   local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
@@ -780,7 +780,7 @@ function _picocli_qchain_longrun() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'--passage' '--symbolic' '-h' '--help' '-V' '--version'"
+  local flag_opts="'--passage' '--symbolic' '--brief' '-h' '--help' '-V' '--version'"
   local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
@@ -841,7 +841,7 @@ function _picocli_qchain_absorb() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
+  local flag_opts="'--symbolic' '--brief' '-h' '--help' '-V' '--version'"
   local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--absorbing' '--reward' '--discount' '--steps' '--format' '--digits' '-o' '--output' '--max-digits' '--max-states'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
