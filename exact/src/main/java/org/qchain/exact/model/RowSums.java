@@ -1,9 +1,12 @@
 package org.qchain.exact.model;
 
+import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
@@ -57,6 +60,10 @@ public final class RowSums {
         }
         List<String> names = model.params().stream().map(ParamDecl::name).toList();
         Guard guard = new Guard();
+        // large models repeat their expressions from row to row: each distinct one is mapped once, and a row whose
+        // expressions were all proved together before is not proved again
+        Map<String, Frac> mapped = new HashMap<>();
+        Set<List<String>> proved = new HashSet<>();
         for (int i = 0; i < model.size(); i++) {
             List<Transition> ts = model.outgoing(i);
             if (ts.isEmpty() || model.listed(i, i).isEmpty()) {
@@ -65,18 +72,54 @@ public final class RowSums {
             if (!constantRows && ts.stream().allMatch(t -> t.expr().variables().isEmpty())) {
                 continue;
             }
+            List<String> texts = new ArrayList<>(ts.size());
+            for (Transition t : ts) {
+                texts.add(Expr.toPlain(t.expr()));
+            }
+            if (proved.contains(texts)) {
+                continue;
+            }
             Transition last = ts.get(ts.size() - 1);
             String state = model.states().get(i);
             guard.at(last.pos(), state);
             Frac sum = null;
-            for (Transition t : ts) {
-                Frac f = fraction(t.expr(), names, guard);
+            for (int k = 0; k < ts.size(); k++) {
+                Frac f = mapped.get(texts.get(k));
+                if (f == null) {
+                    f = fraction(ts.get(k).expr(), names, guard);
+                    mapped.put(texts.get(k), f);
+                }
                 sum = sum == null ? f : sum.add(f, guard);
             }
+            proved.add(texts);
             if (!sum.isOne()) {
-                throw new QchainException(last.pos(), ErrorKey.SYMBOLIC_ROW_SUM, state, sum.plain(names));
+                throw new QchainException(last.pos(), ErrorKey.SYMBOLIC_ROW_SUM, state, shortened(sum.plain(names)));
             }
         }
+    }
+
+    /** The longest row sum a message shows whole. */
+    static final int MAX_MESSAGE_FORMULA = 200;
+
+    /**
+     * A row sum for a one-line message: whole up to {@value #MAX_MESSAGE_FORMULA} characters, else its start cut at
+     * a term and its length ({@code 3/2 + 100*a + ... (5151 terms, 212004 characters)}).
+     */
+    static String shortened(String formula) {
+        if (formula.length() <= MAX_MESSAGE_FORMULA) {
+            return formula;
+        }
+        int cut = Math.max(formula.lastIndexOf(" + ", MAX_MESSAGE_FORMULA / 2),
+            formula.lastIndexOf(" - ", MAX_MESSAGE_FORMULA / 2));
+        int terms = 1;
+        for (int i = formula.indexOf(" + "); i >= 0; i = formula.indexOf(" + ", i + 3)) {
+            terms++;
+        }
+        for (int i = formula.indexOf(" - "); i >= 0; i = formula.indexOf(" - ", i + 3)) {
+            terms++;
+        }
+        return formula.substring(0, cut > 0 ? cut : MAX_MESSAGE_FORMULA / 2) + " ... (" + terms + " terms, "
+            + formula.length() + " characters)";
     }
 
     /**

@@ -58,8 +58,22 @@ final class SparsePoly {
         this.terms = terms;
     }
 
+    /** The shared constant 1 for small numbers of variables (immutable, so sharing is safe). */
+    private static final SparsePoly[] ONES = new SparsePoly[16];
+
+    static {
+        for (int v = 0; v < ONES.length; v++) {
+            Map<Mono, Rational> t = new HashMap<>();
+            t.put(new Mono(new int[v]), Rational.ONE);
+            ONES[v] = new SparsePoly(v, t);
+        }
+    }
+
     /** The constant {@code c} in {@code vars} variables. */
     static SparsePoly constant(int vars, Rational c) {
+        if (c.isOne() && vars < ONES.length) {
+            return ONES[vars];
+        }
         Map<Mono, Rational> t = new HashMap<>();
         if (!c.isZero()) {
             t.put(new Mono(new int[vars]), c);
@@ -122,6 +136,9 @@ final class SparsePoly {
     }
 
     boolean isOne() {
+        if (vars < ONES.length && this == ONES[vars]) {
+            return true;
+        }
         return constantValue().map(Rational::isOne).orElse(false);
     }
 
@@ -162,6 +179,12 @@ final class SparsePoly {
     }
 
     SparsePoly multiply(SparsePoly o) {
+        if (o.isOne()) {
+            return this;
+        }
+        if (isOne()) {
+            return o;
+        }
         Optional<Rational> c = o.constantValue();
         if (c.isPresent()) {
             return scale(c.get());
@@ -326,7 +349,7 @@ final class SparsePoly {
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof SparsePoly p && p.vars == vars && p.terms.equals(terms);
+        return o == this || o instanceof SparsePoly p && p.vars == vars && p.terms.equals(terms);
     }
 
     @Override

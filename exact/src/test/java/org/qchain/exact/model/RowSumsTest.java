@@ -77,6 +77,18 @@ class RowSumsTest {
     }
 
     @Test
+    void aLongSumIsShortenedInTheMessage() {
+        Model m = model("A A (1 + a)^100\nA B 1/2\nB A 1\n");
+        QchainException e = assertThrows(QchainException.class, () -> RowSums.requireIdenticallyOne(m, true));
+        // (1 + a)^100 + 1/2 has 101 terms; binomial coefficients C(100, k) (common practice, no source)
+        assertTrue(e.getMessage().startsWith("m.chain:6:1: row A sums to 3/2 + 100*a + 4950*a^2 + 161700*a^3"),
+            e.getMessage());
+        assertTrue(e.getMessage().endsWith(" ... (101 terms, " + RowSums.plain(
+            expr("(1 + a)^100 + 1/2"), AB).length() + " characters), not identically 1"), e.getMessage());
+        assertTrue(e.getMessage().length() < 200, e.getMessage());
+    }
+
+    @Test
     void aDivisionByAnIdenticallyZeroExpressionIsLocated() {
         Model m = model("A A a/(a - a)\nA B 1/2\nB A 1\n");
         QchainException e = assertThrows(QchainException.class, () -> RowSums.requireIdenticallyOne(m, true));

@@ -56,9 +56,11 @@ public final class ClosedForms {
      *
      * @param model  a discrete-time model
      * @param at     values for some parameters (may be empty)
-     * @param limits the size limit for the powers P^1 .. P^s the method multiplies out
+     * @param limits the size limit for the powers P^1 .. P^s the method multiplies out, which the caller's guard
+     *               checks first ({@link #estimate})
      * @return the closed form
-     * @throws QchainException as {@link #of(Model, Map)}
+     * @throws QchainException as {@link #of(Model, Map)}, except the size refusal
+     * @throws IllegalStateException past the limit (the guard did not run)
      */
     public static ClosedForm of(Model model, Map<String, Rational> at, SymbolicLimits limits) {
         return of(matrix(model, at), model.states(), limits, Progress.NONE);
@@ -98,8 +100,8 @@ public final class ClosedForms {
      * @param progress receives progress reports ({@link Progress#NONE} for none)
      * @return the closed form
      * @throws IllegalArgumentException if the number of names differs from the size
-     * @throws QchainException          with {@link ErrorKey#SYMBOLIC_TOO_LARGE} if P^s is estimated past the
-     *                                  limit
+     * @throws IllegalStateException    if P^s is estimated past the limit: the caller's size guard
+     *                                  ({@code p.estimatePower(p.size()).requireTermsWithin(limits)}) refuses it first
      */
     public static ClosedForm of(RatFunMatrix p, List<String> states, SymbolicLimits limits, Progress progress) {
         return interruptible(() -> new ClosedForm(Series.of(guarded(p, states, limits), limits, progress), states,
