@@ -287,7 +287,9 @@ final class SparsePoly {
 
     /**
      * The plain one-line text, as the symbolic module prints an expanded polynomial: terms in {@link #PRINT_ORDER},
-     * {@code 3/4*a*b^2}, {@code " - "} between terms with negative coefficients.
+     * {@code 3/4*a*b^2}, {@code " - "} between terms with negative coefficients. It mirrors the symbolic module's
+     * {@code PlainText} on purpose (this module cannot use it); {@code RowSumsAgainstJasTest} checks that both print
+     * the same text.
      *
      * @param names the variables' names, in index order
      * @return the text; {@code 0} for the zero polynomial
