@@ -51,11 +51,40 @@ final class SparsePoly {
     }
 
     private final int vars;
-    private final Map<Mono, Rational> terms;
+    /**
+     * Integer coefficients over the common denominator {@link #den}: the polynomial is {@code sum terms / den}, with
+     * {@code den > 0} and no common factor of {@code den} and every coefficient (so equal polynomials have equal
+     * fields). Products and sums then need integer arithmetic only, and one gcd pass per result.
+     */
+    private final Map<Mono, BigInteger> terms;
+    private final BigInteger den;
 
-    private SparsePoly(int vars, Map<Mono, Rational> terms) {
+    private SparsePoly(int vars, Map<Mono, BigInteger> terms, BigInteger den) {
         this.vars = vars;
         this.terms = terms;
+        this.den = den;
+    }
+
+    /** Builds a polynomial from integer coefficients over a positive denominator, reduced. */
+    private static SparsePoly reduced(int vars, Map<Mono, BigInteger> terms, BigInteger den) {
+        if (terms.isEmpty()) {
+            return new SparsePoly(vars, terms, BigInteger.ONE);
+        }
+        if (den.equals(BigInteger.ONE)) {
+            return new SparsePoly(vars, terms, den);
+        }
+        BigInteger g = den;
+        for (BigInteger c : terms.values()) {
+            g = g.gcd(c);
+            if (g.equals(BigInteger.ONE)) {
+                return new SparsePoly(vars, terms, den);
+            }
+        }
+        Map<Mono, BigInteger> t = new HashMap<>(terms.size() * 2);
+        for (Map.Entry<Mono, BigInteger> x : terms.entrySet()) {
+            t.put(x.getKey(), x.getValue().divide(g));
+        }
+        return new SparsePoly(vars, t, den.divide(g));
     }
 
     /** The shared constant 1 for small numbers of variables (immutable, so sharing is safe). */
@@ -63,9 +92,9 @@ final class SparsePoly {
 
     static {
         for (int v = 0; v < ONES.length; v++) {
-            Map<Mono, Rational> t = new HashMap<>();
-            t.put(new Mono(new int[v]), Rational.ONE);
-            ONES[v] = new SparsePoly(v, t);
+            Map<Mono, BigInteger> t = new HashMap<>();
+            t.put(new Mono(new int[v]), BigInteger.ONE);
+            ONES[v] = new SparsePoly(v, t, BigInteger.ONE);
         }
     }
 
@@ -74,20 +103,21 @@ final class SparsePoly {
         if (c.isOne() && vars < ONES.length) {
             return ONES[vars];
         }
-        Map<Mono, Rational> t = new HashMap<>();
-        if (!c.isZero()) {
-            t.put(new Mono(new int[vars]), c);
+        Map<Mono, BigInteger> t = new HashMap<>();
+        if (c.isZero()) {
+            return new SparsePoly(vars, t, BigInteger.ONE);
         }
-        return new SparsePoly(vars, t);
+        t.put(new Mono(new int[vars]), c.numerator());
+        return new SparsePoly(vars, t, c.denominator());
     }
 
     /** The variable of index {@code i}. */
     static SparsePoly variable(int vars, int i) {
         int[] e = new int[vars];
         e[i] = 1;
-        Map<Mono, Rational> t = new HashMap<>();
-        t.put(new Mono(e), Rational.ONE);
-        return new SparsePoly(vars, t);
+        Map<Mono, BigInteger> t = new HashMap<>();
+        t.put(new Mono(e), BigInteger.ONE);
+        return new SparsePoly(vars, t, BigInteger.ONE);
     }
 
     private static int degree(int[] e) {
@@ -117,6 +147,17 @@ final class SparsePoly {
         return d;
     }
 
+    /** The degree in each variable, by index. */
+    int[] degrees() {
+        int[] d = new int[vars];
+        for (Mono m : terms.keySet()) {
+            for (int i = 0; i < vars; i++) {
+                d[i] = Math.max(d[i], m.e[i]);
+            }
+        }
+        return d;
+    }
+
     boolean isZero() {
         return terms.isEmpty();
     }
@@ -127,9 +168,9 @@ final class SparsePoly {
             return Optional.of(Rational.ZERO);
         }
         if (terms.size() == 1) {
-            Map.Entry<Mono, Rational> t = terms.entrySet().iterator().next();
+            Map.Entry<Mono, BigInteger> t = terms.entrySet().iterator().next();
             if (degree(t.getKey().e) == 0) {
-                return Optional.of(t.getValue());
+                return Optional.of(Rational.of(t.getValue(), den));
             }
         }
         return Optional.empty();
@@ -139,24 +180,59 @@ final class SparsePoly {
         if (vars < ONES.length && this == ONES[vars]) {
             return true;
         }
-        return constantValue().map(Rational::isOne).orElse(false);
+        return den.equals(BigInteger.ONE) && isConstant() && terms.values().iterator().next().equals(BigInteger.ONE);
+    }
+
+    /** Whether this is a non-zero constant. */
+    private boolean isConstant() {
+        return terms.size() == 1 && degree(terms.keySet().iterator().next().e) == 0;
+    }
+
+    /** This times {@code a/b}, {@code b > 0}. */
+    private SparsePoly scale(BigInteger a, BigInteger b) {
+        if (a.signum() == 0) {
+            return constant(vars, Rational.ZERO);
+        }
+        Map<Mono, BigInteger> t = new HashMap<>(terms.size() * 2);
+        boolean one = a.equals(BigInteger.ONE);
+        for (Map.Entry<Mono, BigInteger> x : terms.entrySet()) {
+            t.put(x.getKey(), one ? x.getValue() : x.getValue().multiply(a));
+        }
+        return reduced(vars, t, den.multiply(b));
     }
 
     SparsePoly add(SparsePoly o) {
-        Map<Mono, Rational> t = new HashMap<>(terms);
-        for (Map.Entry<Mono, Rational> x : o.terms.entrySet()) {
-            t.merge(x.getKey(), x.getValue(), SparsePoly::sumOrNull);
+        if (o.terms.isEmpty()) {
+            return this;
         }
-        return new SparsePoly(vars, t);
+        if (terms.isEmpty()) {
+            return o;
+        }
+        BigInteger g = den.gcd(o.den);
+        BigInteger mine = o.den.divide(g);
+        BigInteger theirs = den.divide(g);
+        Map<Mono, BigInteger> t = new HashMap<>((terms.size() + o.terms.size()) * 2);
+        for (Map.Entry<Mono, BigInteger> x : terms.entrySet()) {
+            t.put(x.getKey(), mine.equals(BigInteger.ONE) ? x.getValue() : x.getValue().multiply(mine));
+        }
+        for (Map.Entry<Mono, BigInteger> x : o.terms.entrySet()) {
+            BigInteger v = theirs.equals(BigInteger.ONE) ? x.getValue() : x.getValue().multiply(theirs);
+            t.merge(x.getKey(), v, SparsePoly::sumOrNull);
+        }
+        return reduced(vars, t, den.multiply(mine));
     }
 
-    private static Rational sumOrNull(Rational a, Rational b) {
-        Rational s = a.add(b);
-        return s.isZero() ? null : s;
+    private static BigInteger sumOrNull(BigInteger a, BigInteger b) {
+        BigInteger s = a.add(b);
+        return s.signum() == 0 ? null : s;
     }
 
     SparsePoly negate() {
-        return scale(Rational.ONE.negate());
+        Map<Mono, BigInteger> t = new HashMap<>(terms.size() * 2);
+        for (Map.Entry<Mono, BigInteger> x : terms.entrySet()) {
+            t.put(x.getKey(), x.getValue().negate());
+        }
+        return new SparsePoly(vars, t, den);
     }
 
     SparsePoly subtract(SparsePoly o) {
@@ -171,11 +247,7 @@ final class SparsePoly {
         if (c.isOne()) {
             return this;
         }
-        Map<Mono, Rational> t = new HashMap<>(terms.size() * 2);
-        for (Map.Entry<Mono, Rational> x : terms.entrySet()) {
-            t.put(x.getKey(), x.getValue().multiply(c));
-        }
-        return new SparsePoly(vars, t);
+        return scale(c.numerator(), c.denominator());
     }
 
     SparsePoly multiply(SparsePoly o) {
@@ -185,32 +257,37 @@ final class SparsePoly {
         if (isOne()) {
             return o;
         }
-        Optional<Rational> c = o.constantValue();
-        if (c.isPresent()) {
-            return scale(c.get());
+        if (o.terms.isEmpty() || terms.isEmpty()) {
+            return constant(vars, Rational.ZERO);
         }
-        c = constantValue();
-        if (c.isPresent()) {
-            return o.scale(c.get());
+        if (o.isConstant()) {
+            return scale(o.terms.values().iterator().next(), o.den);
         }
-        Map<Mono, Rational> t = new HashMap<>();
-        for (Map.Entry<Mono, Rational> x : terms.entrySet()) {
+        if (isConstant()) {
+            return o.scale(terms.values().iterator().next(), den);
+        }
+        Map<Mono, BigInteger> t = new HashMap<>();
+        for (Map.Entry<Mono, BigInteger> x : terms.entrySet()) {
             int[] ex = x.getKey().e;
-            for (Map.Entry<Mono, Rational> y : o.terms.entrySet()) {
+            BigInteger cx = x.getValue();
+            for (Map.Entry<Mono, BigInteger> y : o.terms.entrySet()) {
                 int[] ey = y.getKey().e;
                 int[] e = new int[vars];
                 for (int i = 0; i < vars; i++) {
                     e[i] = ex[i] + ey[i];
                 }
-                t.merge(new Mono(e), x.getValue().multiply(y.getValue()), SparsePoly::sumOrNull);
+                t.merge(new Mono(e), cx.multiply(y.getValue()), SparsePoly::sumOrNull);
             }
         }
-        return new SparsePoly(vars, t);
+        return reduced(vars, t, den.multiply(o.den));
     }
 
-    /** The terms sorted in {@link #PRINT_ORDER}. */
+    /** The terms with their rational coefficients, sorted in {@link #PRINT_ORDER}. */
     private List<Map.Entry<Mono, Rational>> sorted() {
-        List<Map.Entry<Mono, Rational>> list = new ArrayList<>(terms.entrySet());
+        List<Map.Entry<Mono, Rational>> list = new ArrayList<>(terms.size());
+        for (Map.Entry<Mono, BigInteger> x : terms.entrySet()) {
+            list.add(Map.entry(x.getKey(), Rational.of(x.getValue(), den)));
+        }
         list.sort((x, y) -> PRINT_ORDER.compare(x.getKey().e, y.getKey().e));
         return list;
     }
@@ -218,24 +295,22 @@ final class SparsePoly {
     /**
      * The unit that makes this polynomial primitive with a positive first term in {@link #PRINT_ORDER}: the gcd of
      * the coefficients' numerators over the lcm of their denominators, with the first term's sign (the symbolic
-     * module normalises denominators the same way). 1 for the zero polynomial.
+     * module normalises denominators the same way). With the coefficients over one reduced denominator it is their
+     * content over that denominator. 1 for the zero polynomial.
      */
     Rational normalizingUnit() {
         if (terms.isEmpty()) {
             return Rational.ONE;
         }
         BigInteger g = BigInteger.ZERO;
-        BigInteger l = BigInteger.ONE;
-        Map.Entry<Mono, Rational> first = null;
-        for (Map.Entry<Mono, Rational> x : terms.entrySet()) {
-            g = g.gcd(x.getValue().numerator());
-            BigInteger d = x.getValue().denominator();
-            l = l.divide(l.gcd(d)).multiply(d);
+        Map.Entry<Mono, BigInteger> first = null;
+        for (Map.Entry<Mono, BigInteger> x : terms.entrySet()) {
+            g = g.gcd(x.getValue());
             if (first == null || PRINT_ORDER.compare(x.getKey().e, first.getKey().e) < 0) {
                 first = x;
             }
         }
-        Rational c = Rational.of(g, l);
+        Rational c = Rational.of(g, den);
         return first.getValue().signum() < 0 ? c.negate() : c;
     }
 
@@ -249,8 +324,9 @@ final class SparsePoly {
      * @return the quotient, or empty if there is a remainder
      */
     Optional<SparsePoly> divideExact(SparsePoly d) {
-        Map.Entry<Mono, Rational> lead = leading(d.terms);
-        Map<Mono, Rational> r = new HashMap<>(terms);
+        Map<Mono, Rational> dt = d.rationalTerms();
+        Map.Entry<Mono, Rational> lead = leading(dt);
+        Map<Mono, Rational> r = rationalTerms();
         Map<Mono, Rational> q = new HashMap<>();
         while (!r.isEmpty()) {
             Map.Entry<Mono, Rational> lt = leading(r);
@@ -263,15 +339,32 @@ final class SparsePoly {
             }
             Rational c = lt.getValue().divide(lead.getValue());
             q.put(new Mono(e), c);
-            for (Map.Entry<Mono, Rational> y : d.terms.entrySet()) {
+            for (Map.Entry<Mono, Rational> y : dt.entrySet()) {
                 int[] s = new int[vars];
                 for (int i = 0; i < vars; i++) {
                     s[i] = e[i] + y.getKey().e[i];
                 }
-                r.merge(new Mono(s), y.getValue().multiply(c).negate(), SparsePoly::sumOrNull);
+                r.merge(new Mono(s), y.getValue().multiply(c).negate(), (a, b) -> {
+                    Rational x = a.add(b);
+                    return x.isZero() ? null : x;
+                });
             }
         }
-        return Optional.of(new SparsePoly(vars, q));
+        SparsePoly out = constant(vars, Rational.ZERO);
+        for (Map.Entry<Mono, Rational> x : q.entrySet()) {
+            Map<Mono, BigInteger> t = new HashMap<>();
+            t.put(x.getKey(), x.getValue().numerator());
+            out = out.add(new SparsePoly(vars, t, x.getValue().denominator()));
+        }
+        return Optional.of(out);
+    }
+
+    private Map<Mono, Rational> rationalTerms() {
+        Map<Mono, Rational> t = new HashMap<>(terms.size() * 2);
+        for (Map.Entry<Mono, BigInteger> x : terms.entrySet()) {
+            t.put(x.getKey(), Rational.of(x.getValue(), den));
+        }
+        return t;
     }
 
     /** The last term in {@link #PRINT_ORDER} (highest degree). */
@@ -336,8 +429,8 @@ final class SparsePoly {
         if (terms.size() != 1) {
             return false;
         }
-        Map.Entry<Mono, Rational> t = terms.entrySet().iterator().next();
-        if (!t.getValue().isOne()) {
+        Map.Entry<Mono, BigInteger> t = terms.entrySet().iterator().next();
+        if (!t.getValue().equals(BigInteger.ONE) || !den.equals(BigInteger.ONE)) {
             return false;
         }
         int nonZero = 0;
@@ -351,12 +444,12 @@ final class SparsePoly {
 
     @Override
     public boolean equals(Object o) {
-        return o == this || o instanceof SparsePoly p && p.vars == vars && p.terms.equals(terms);
+        return o == this || o instanceof SparsePoly p && p.vars == vars && p.den.equals(den) && p.terms.equals(terms);
     }
 
     @Override
     public int hashCode() {
-        return terms.hashCode();
+        return terms.hashCode() * 31 + den.hashCode();
     }
 
     @Override
