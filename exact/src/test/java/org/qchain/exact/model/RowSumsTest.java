@@ -77,6 +77,14 @@ class RowSumsTest {
     }
 
     @Test
+    void aPowerInOneVariableIsEstimatedByThatVariableAlone() {
+        // (1 - a)^400 has 401 terms; counted as if b also occurred it would be C(402, 2) = 80601 (and refused
+        // in a ring of three variables)
+        List<String> abc = List.of("a", "b", "c");
+        assertTrue(RowSums.isIdenticallyOne(expr("(1 - a)^400 - (1 - a)^200*(1 - a)^200 + 1"), abc));
+    }
+
+    @Test
     void aLongSumIsShortenedInTheMessage() {
         Model m = model("A A (1 + a)^100\nA B 1/2\nB A 1\n");
         QchainException e = assertThrows(QchainException.class, () -> RowSums.requireIdenticallyOne(m, true));
