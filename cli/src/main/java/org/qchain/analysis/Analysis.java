@@ -1,7 +1,6 @@
 package org.qchain.analysis;
 
 import java.util.Optional;
-import java.util.OptionalInt;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.ctmc.Generators;
 import org.qchain.exact.Progress;
@@ -17,7 +16,8 @@ import org.qchain.result.VerifyResult;
 /**
  * Runs queries on loaded models: the one way from a query to a typed result, for the command line and for Java
  * users alike. Each method picks the route (numeric or symbolic), runs the query's size guard before any engine and
- * calls the engine; nothing here prints.
+ * calls the engine; nothing here prints. The size decisions of {@code step}, {@code sens} and {@code closed} are
+ * {@link SizeGuard}'s, made before any engine runs (the engines only assert them).
  *
  * <p>Routes: {@code step} is numeric when every used parameter has a nominal value and symbolic is not asked for
  * (values given for parameters without a nominal value are the point where a symbolic result is evaluated);
@@ -95,15 +95,13 @@ public final class Analysis {
                 throw new QchainException(ErrorKey.BAD_ARGUMENT, "option", "--certified", "needs numeric values for"
                     + " every parameter (certified decimals are of numbers, not formulas)");
             }
-            if (model.complete()) {
-                // the values at the point come from the exact engine too: its estimate first
-                NumericEngine.guard(model, q);
-            }
+            SizeGuard.check(model, q);
             return Interrupts.guarded(() -> SymbolicEngine.step(model, q, progress));
         }
         if (q.certified()) {
             return NumericEngine.certifiedStep(model, q, progress);
         }
+        SizeGuard.check(model, q);
         return NumericEngine.step(model, q, progress);
     }
 
@@ -118,11 +116,7 @@ public final class Analysis {
      */
     public static SensResult sens(LoadedModel model, SensQuery q, Progress progress) {
         model.requireDiscrete("qchain sens needs a discrete chain (continuous chains are not supported yet)");
-        if (model.complete()) {
-            // the value at the point is checked against the exact engine's entry: its estimate first
-            NumericEngine.guard(model, new StepQuery(q.n(), Optional.of(q.from()), Optional.of(q.to()),
-                OptionalInt.empty(), q.maxDigits(), Long.MAX_VALUE, true, q.factor(), q.maxTerms()));
-        }
+        SizeGuard.check(model, q);
         return Interrupts.guarded(() -> SymbolicEngine.sens(model, q, progress));
     }
 
@@ -137,6 +131,7 @@ public final class Analysis {
      */
     public static ClosedResult closed(LoadedModel model, ClosedQuery q, Progress progress) {
         model.requireDiscrete("closed forms in n are for discrete-time chains");
+        SizeGuard.check(model, q);
         return Interrupts.guarded(() -> SymbolicEngine.closed(model, q, progress));
     }
 

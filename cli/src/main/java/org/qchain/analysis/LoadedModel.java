@@ -17,6 +17,7 @@ import org.qchain.exact.model.Chains;
 import org.qchain.exact.model.Model;
 import org.qchain.exact.model.ModelParser;
 import org.qchain.exact.model.ParamDecl;
+import org.qchain.exact.model.RowSums;
 import org.qchain.result.Point;
 
 /**
@@ -26,8 +27,10 @@ import org.qchain.result.Point;
  *
  * <p>Validation: a discrete model whose used parameters all have a value is evaluated exactly at that point through
  * {@link Chains#sparseTransitionMatrix(Model, Map)} (entries in [0, 1], rows summing to exactly 1); the dense matrix
- * is built from it when a query first needs it, after the dense-size refusal. A model with a
- * parameter without a value is checked with its parameters symbolic (rows summing to 1 identically, ranges over the
+ * is built from it when a query first needs it, after the dense-size refusal. Every discrete model with parameters
+ * must also have rows that sum to 1 identically in them, not only at the point: {@link RowSums} proves it without the
+ * symbolic module, so every command refuses the same models with the same message. A model with a
+ * parameter without a value is then checked with its parameters symbolic (ranges over the
  * parameter domains); that check sits behind {@link SymbolicValidation}, so loading a model with values for every
  * parameter loads no JAS or Symja class. Continuous models are parsed and resolved; the queries that need a discrete
  * chain refuse them.
@@ -59,9 +62,16 @@ public final class LoadedModel {
             // the numeric check: throws, located, for an entry outside [0, 1] or a row not summing to 1; stored
             // sparse, so a large model with few transitions a state needs no dense matrix unless a query asks for one
             this.sparse = Optional.of(Chains.sparseTransitionMatrix(model, given));
+            if (!model.usedParameters().isEmpty()) {
+                // rows must sum to 1 identically, not only at this point: the same refusal as the symbolic route,
+                // proved without JAS (rows without parameters were just checked exactly)
+                RowSums.requireIdenticallyOne(model, false);
+            }
         } else {
             this.sparse = Optional.empty();
             if (model.kind() == ChainKind.DISCRETE) {
+                Chains.requireDense(model);
+                RowSums.requireIdenticallyOne(model, true);
                 symbolic();
             }
         }

@@ -16,6 +16,7 @@ import org.qchain.exact.model.Chains;
 import org.qchain.exact.model.Domain;
 import org.qchain.exact.model.Model;
 import org.qchain.symbolic.Formulas;
+import org.qchain.symbolic.PowerEstimate;
 import org.qchain.symbolic.RatFun;
 import org.qchain.symbolic.RatFunMatrix;
 import org.qchain.symbolic.SymbolicLimits;
@@ -76,6 +77,28 @@ final class SymbolicEngine {
 
     private static Checked checked(LoadedModel model) {
         return (Checked) model.symbolic();
+    }
+
+    // --- size estimates, for the analysis layer's one guard (SizeGuard), before any engine runs ------------------
+
+    /** Refuses a symbolic step whose power (or row of it) is estimated past the query's limits. */
+    static void requireWithin(LoadedModel model, StepQuery q) {
+        RatFunMatrix p = checked(model).p();
+        PowerEstimate e = p.estimatePower(q.n());
+        (q.from().isPresent() ? e.row(p.size()) : e).requireWithin(new SymbolicLimits(q.maxTerms(), q.maxDigits()));
+    }
+
+    /** Refuses a sensitivity whose row of the power is estimated past the query's limits. */
+    static void requireWithin(LoadedModel model, SensQuery q) {
+        RatFunMatrix p = checked(model).p();
+        p.estimatePower(q.n()).row(p.size()).requireWithin(new SymbolicLimits(q.maxTerms(), q.maxDigits()));
+    }
+
+    /** Refuses closed forms whose powers P^1 .. P^s are estimated past the query's term limit. */
+    static void requireWithin(LoadedModel model, ClosedQuery q) {
+        checked(model);
+        ClosedForms.estimate(model.model(), model.given())
+            .requireTermsWithin(new SymbolicLimits(q.maxTerms(), q.maxDigits()));
     }
 
     private static LongConsumer multiplying(Progress progress, long n) {

@@ -5,6 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.nio.file.Path;
 import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalInt;
 import org.junit.jupiter.api.Test;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.Progress;
@@ -36,6 +38,56 @@ class SizeGuardTest {
         QchainException e = assertThrows(QchainException.class,
             () -> Analysis.step(pump, StepQuery.row(50_000_000, "Up").withSymbolic(true), NO_ENGINE));
         assertEquals(ErrorKey.RESULT_TOO_LARGE, e.key());
+    }
+
+    private static final Path FREE = Path.of("src/test/resources/models/free.chain");
+
+    @Test
+    void aSymbolicPowerPastTheTermLimitIsRefusedBeforeTheSymbolicEngine() {
+        // the term limit of the symbolic power is the analysis layer's decision now, not RatFunMatrix.power's
+        LoadedModel pump = LoadedModel.load(MODEL, Map.of());
+        StepQuery q = StepQuery.matrix(40).withSymbolic(true);
+        StepQuery few = new StepQuery(q.n(), q.from(), q.to(), q.paths(), q.maxDigits(), q.maxPathDigits(), true,
+            false, 100);
+        QchainException e = assertThrows(QchainException.class, () -> Analysis.step(pump, few, NO_ENGINE));
+        assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE, e.key());
+        assertEquals("the symbolic P^40 would have up to about 7749 polynomial terms in total (entries of degree up"
+            + " to 40), more than the limit 100; raise it with --max-terms", e.getMessage());
+        QchainException row = assertThrows(QchainException.class, () -> Analysis.run(pump,
+            new StepQuery(40, Optional.of("Up"), Optional.empty(), OptionalInt.empty(), q.maxDigits(),
+                q.maxPathDigits(), true, false, 100), NO_ENGINE));
+        assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE, row.key());
+    }
+
+    @Test
+    void aSymbolicPowerPastTheDigitLimitIsRefusedBeforeTheSymbolicEngine() {
+        LoadedModel free = LoadedModel.load(FREE, Map.of());
+        StepQuery q = new StepQuery(400, Optional.empty(), Optional.empty(), OptionalInt.empty(), 1000,
+            Long.MAX_VALUE, true, false, StepQuery.DEFAULT_MAX_TERMS);
+        QchainException e = assertThrows(QchainException.class, () -> Analysis.run(free, q, NO_ENGINE));
+        assertEquals(ErrorKey.SYMBOLIC_DIGITS_TOO_LARGE, e.key());
+    }
+
+    @Test
+    void aSensitivityPastTheTermLimitIsRefusedBeforeTheSymbolicEngine() {
+        LoadedModel pump = LoadedModel.load(MODEL, Map.of());
+        SensQuery q = new SensQuery(60, "Up", "Down", "p", Optional.empty(), false, 100, 50_000_000);
+        QchainException e = assertThrows(QchainException.class, () -> Analysis.run(pump, q, NO_ENGINE));
+        assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE, e.key());
+    }
+
+    @Test
+    void closedFormsPastTheTermLimitAreRefusedBeforeTheClosedFormEngine() {
+        // the closed forms' guard on P^1 .. P^s sat inside ClosedForms; it is the analysis layer's now
+        LoadedModel free = LoadedModel.load(FREE, Map.of());
+        ClosedQuery q = new ClosedQuery(org.qchain.result.ClosedResult.Form.MATRIX, Optional.empty(), "--from",
+            Optional.empty(), 2, 12);
+        QchainException e = assertThrows(QchainException.class, () -> Analysis.run(free, q, NO_ENGINE));
+        assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE, e.key());
+        ClosedQuery series = new ClosedQuery(org.qchain.result.ClosedResult.Form.GF, Optional.empty(),
+            "--from", Optional.empty(), 2, 12);
+        assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE,
+            assertThrows(QchainException.class, () -> Analysis.run(free, series, NO_ENGINE)).key());
     }
 
     @Test

@@ -176,7 +176,12 @@ public enum ErrorKey implements MessageKey {
      */
     TRANSIENT_TOO_LARGE("P(t) would take about {0} multiplications of {1}-bit numbers ({2} states, {3} rates, {4} times,"
         + " uniformization rate times time up to {5}), more than the limit {6}; raise it with {7}, or ask for fewer"
-        + " digits or times");
+        + " digits or times"),
+
+    // --- row sums proved identically without the symbolic module (appended) ---
+    /** {0}: the state, {1}: estimated term multiplications, {2}: estimated terms of the largest polynomial, {3}: limit. */
+    ROW_SUM_CHECK_TOO_LARGE("checking that row {0} sums to 1 identically would take about {1} term multiplications"
+        + " (polynomials of up to about {2} terms), more than the limit {3}; simplify the row''s expressions");
 
     private final String pattern;
 

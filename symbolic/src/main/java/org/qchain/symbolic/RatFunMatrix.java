@@ -286,17 +286,6 @@ public final class RatFunMatrix {
         return Math.log10(x.shiftRight(bits - 64).doubleValue()) + (bits - 64) * Math.log10(2);
     }
 
-    private static void check(PowerEstimate est, SymbolicLimits limits, long terms, long digits) {
-        if (terms > limits.maxTerms()) {
-            throw new QchainException(ErrorKey.SYMBOLIC_TOO_LARGE, est.n(), terms, est.degree(), limits.maxTerms(),
-                SymbolicLimits.OPTION);
-        }
-        if (digits > limits.maxDigits()) {
-            throw new QchainException(ErrorKey.SYMBOLIC_DIGITS_TOO_LARGE, est.n(), digits, limits.maxDigits(),
-                SymbolicLimits.DIGITS_OPTION);
-        }
-    }
-
     private static long sat(long x, long y) {
         if (y != 0 && x > Long.MAX_VALUE / y) {
             return Long.MAX_VALUE;
@@ -327,23 +316,24 @@ public final class RatFunMatrix {
      *                         {@link ErrorKey#BAD_ARGUMENT} for a negative {@code n}
      */
     public RatFunMatrix power(long n) {
+        estimatePower(n).requireWithin(SymbolicLimits.DEFAULT);
         return power(n, SymbolicLimits.DEFAULT, x -> { });
     }
 
     /**
-     * {@code P^n}: the size is estimated first ({@link #estimatePower(long)}) and refused past the limit.
+     * {@code P^n}. The caller's size guard decides first ({@code estimatePower(n).requireWithin(limits)}, which
+     * refuses with the estimate); this method only asserts that the estimate is within the limits.
      *
      * @param n        the power, at least 0
      * @param limits   the size limit
      * @param progress told the number of multiplications done so far (for a progress display); may do nothing
      * @return {@code P^n}, every entry canonical
-     * @throws QchainException {@link ErrorKey#SYMBOLIC_TOO_LARGE} or {@link ErrorKey#SYMBOLIC_DIGITS_TOO_LARGE} with
-     *                         the estimate if it exceeds a limit, {@link ErrorKey#BAD_ARGUMENT} for a negative {@code n},
+     * @throws QchainException {@link ErrorKey#BAD_ARGUMENT} for a negative {@code n},
      *                         {@link ErrorKey#INTERRUPTED} if the thread is interrupted meanwhile
+     * @throws IllegalStateException if the estimate exceeds a limit (the guard did not run)
      */
     public RatFunMatrix power(long n, SymbolicLimits limits, LongConsumer progress) {
-        PowerEstimate est = estimatePower(n);
-        check(est, limits, est.totalTerms(), est.digits());
+        PowerEstimate.assertGuarded(estimatePower(n).isWithin(limits), "P^" + n);
         int s = size();
         if (n == 0) {
             return identity(ring, s);
@@ -360,19 +350,18 @@ public final class RatFunMatrix {
      *
      * @param from     the row, 0-based
      * @param n        the power, at least 0
-     * @param limits   the size limit (the estimate of the full power divided by the number of rows)
+     * @param limits   the size limit (the estimate of the full power divided by the number of rows,
+     *                 {@code estimatePower(n).row(size())}, which the caller's guard checks first)
      * @param progress told the number of products done so far
      * @return the row, canonical entries
      * @throws QchainException as {@link #power(long, SymbolicLimits, LongConsumer)}
+     * @throws IllegalStateException as {@link #power(long, SymbolicLimits, LongConsumer)}
      * @throws IndexOutOfBoundsException if {@code from} is out of range
      */
     public List<RatFun> powerRow(int from, long n, SymbolicLimits limits, LongConsumer progress) {
         int s = size();
         java.util.Objects.checkIndex(from, s);
-        PowerEstimate est = estimatePower(n);
-        long rowTerms = est.totalTerms() == Long.MAX_VALUE ? Long.MAX_VALUE : est.totalTerms() / s;
-        long rowDigits = est.digits() == Long.MAX_VALUE ? Long.MAX_VALUE : est.digits() / s;
-        check(est, limits, rowTerms, rowDigits);
+        PowerEstimate.assertGuarded(estimatePower(n).row(s).isWithin(limits), "row " + from + " of P^" + n);
         if (n == 0) {
             return List.of(identity(ring, s).a[from]);
         }

@@ -10,7 +10,10 @@ import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.model.Model;
 
-/** The size estimate bounds the real result, and large powers are refused before any work. */
+/**
+ * The size estimate bounds the real result; large powers are refused by the estimate's decision before any work, and
+ * the engine asserts that the decision ran.
+ */
 class SizeGuardTest {
     private final Model birthDeath = TestChains.discrete(List.of("a", "b"), new String[][] {
         {"*", "a", "0"}, {"b", "*", "a"}, {"0", "b", "*"}});
@@ -51,17 +54,21 @@ class SizeGuardTest {
             PowerEstimate e = p.estimatePower(n);
             assertTrue(digits <= e.digits(), n + ": " + digits + " digits > " + e);
         }
-        QchainException e = assertThrows(QchainException.class,
-            () -> p.power(40, new SymbolicLimits(1_000_000, 1000), x -> { }));
+        SymbolicLimits few = new SymbolicLimits(1_000_000, 1000);
+        QchainException e = assertThrows(QchainException.class, () -> p.estimatePower(40).requireWithin(few));
         assertEquals(ErrorKey.SYMBOLIC_DIGITS_TOO_LARGE, e.key());
+        // the engine itself only asserts that the guard ran
+        assertThrows(IllegalStateException.class, () -> p.power(40, few, x -> { }));
         assertTrue(e.getMessage().endsWith("more than the limit 1000; raise it with --max-digits"), e.getMessage());
     }
 
     @Test
     void powersPastTheLimitAreRefusedWithTheEstimate() {
         QchainException e = assertThrows(QchainException.class,
-            () -> p.power(20, new SymbolicLimits(1000), x -> { }));
+            () -> p.estimatePower(20).requireWithin(new SymbolicLimits(1000)));
         assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE, e.key());
+        assertThrows(IllegalStateException.class, () -> p.power(20, new SymbolicLimits(1000), x -> { }));
+        assertThrows(IllegalStateException.class, () -> p.powerRow(0, 60, new SymbolicLimits(1000), x -> { }));
         assertEquals("the symbolic P^20 would have up to about 2079 polynomial terms in total (entries of degree up to 20),"
             + " more than the limit 1000; raise it with --max-terms", e.getMessage());
         assertThrows(QchainException.class, () -> p.power(100_000_000L));

@@ -11,7 +11,9 @@
  * {@link org.qchain.exact.model.Chains} evaluates a model at rational parameter values and validates the numbers
  * (probabilities in [0, 1], rows summing to exactly 1, non-negative rates), returning a
  * {@link org.qchain.exact.RationalMatrix}: the one-step matrix of a discrete chain or the generator of a
- * continuous one.
+ * continuous one. {@link org.qchain.exact.model.RowSums} proves that the rows of a discrete chain sum to 1
+ * identically in its parameters (exact rational-function identities over sparse polynomials, no JAS), so numeric
+ * runs refuse the same models as symbolic ones.
  *
  * <pre>{@code
  * Model m = ModelParser.parse("pump.chain", """

@@ -47,6 +47,7 @@ public final class ClosedForms {
      *                         {@link ErrorKey#SYMBOLIC_TOO_LARGE} if P^s is estimated past the limit
      */
     public static ClosedForm of(Model model, Map<String, Rational> at) {
+        estimate(model, at).requireTermsWithin(SymbolicLimits.DEFAULT);
         return of(model, at, SymbolicLimits.DEFAULT);
     }
 
@@ -55,9 +56,11 @@ public final class ClosedForms {
      *
      * @param model  a discrete-time model
      * @param at     values for some parameters (may be empty)
-     * @param limits the size limit for the powers P^1 .. P^s the method multiplies out
+     * @param limits the size limit for the powers P^1 .. P^s the method multiplies out, which the caller's guard
+     *               checks first ({@link #estimate})
      * @return the closed form
-     * @throws QchainException as {@link #of(Model, Map)}
+     * @throws QchainException as {@link #of(Model, Map)}, except the size refusal
+     * @throws IllegalStateException past the limit (the guard did not run)
      */
     public static ClosedForm of(Model model, Map<String, Rational> at, SymbolicLimits limits) {
         return of(matrix(model, at), model.states(), limits, Progress.NONE);
@@ -97,8 +100,8 @@ public final class ClosedForms {
      * @param progress receives progress reports ({@link Progress#NONE} for none)
      * @return the closed form
      * @throws IllegalArgumentException if the number of names differs from the size
-     * @throws QchainException          with {@link ErrorKey#SYMBOLIC_TOO_LARGE} if P^s is estimated past the
-     *                                  limit
+     * @throws IllegalStateException    if P^s is estimated past the limit: the caller's size guard
+     *                                  ({@code p.estimatePower(p.size()).requireTermsWithin(limits)}) refuses it first
      */
     public static ClosedForm of(RatFunMatrix p, List<String> states, SymbolicLimits limits, Progress progress) {
         return interruptible(() -> new ClosedForm(Series.of(guarded(p, states, limits), limits, progress), states,
@@ -162,8 +165,23 @@ public final class ClosedForms {
     }
 
     /**
-     * Refuses a matrix whose powers up to P^s (all that the method multiplies out) are estimated past the limit,
-     * before any work.
+     * The size estimate of the powers P^1 .. P^s that the closed forms multiply out (s states), for the caller's
+     * size guard: {@code estimate(model, at).requireTermsWithin(limits)} refuses, with the estimate, before any
+     * work. The closed-form methods only assert that it holds.
+     *
+     * @param model a discrete-time model
+     * @param at    values for some parameters (may be empty)
+     * @return the estimate of P^s
+     * @throws QchainException as {@link #of(Model, Map)} for a continuous model or an undeclared parameter
+     */
+    public static PowerEstimate estimate(Model model, Map<String, Rational> at) {
+        RatFunMatrix p = matrix(model, at);
+        return p.estimatePower(p.size());
+    }
+
+    /**
+     * Asserts that the caller's guard ran: a matrix whose powers up to P^s (all that the method multiplies out)
+     * are estimated past the limit is a programming error here, refused first by {@link #estimate}.
      */
     private static RatFunMatrix guarded(RatFunMatrix p, List<String> states, SymbolicLimits limits) {
         int s = p.size();
@@ -172,8 +190,8 @@ public final class ClosedForms {
         }
         PowerEstimate e = p.estimatePower(s);
         if (e.totalTerms() > limits.maxTerms()) {
-            throw new QchainException(ErrorKey.SYMBOLIC_TOO_LARGE, s, e.totalTerms(), e.degree(),
-                limits.maxTerms(), SymbolicLimits.OPTION);
+            throw new IllegalStateException("P^" + s + " is past the size limit: the size guard"
+                + " (ClosedForms.estimate(...).requireTermsWithin) must refuse it before the engine runs");
         }
         return p;
     }

@@ -24,11 +24,12 @@ public final class Sensitivity {
      * @param from     row index
      * @param to       column index
      * @param wrt      the parameter
-     * @param limits   the size limit
+     * @param limits   the size limit of the row of the power, which the caller's guard checks first
+     *                 ({@code p.estimatePower(n).row(p.size()).requireWithin(limits)})
      * @param progress told the number of products done
      * @return the formulas
-     * @throws QchainException {@link ErrorKey#UNKNOWN_PARAMETER} if {@code wrt} is not a parameter of the ring,
-     *                         {@link ErrorKey#SYMBOLIC_TOO_LARGE} past the limit
+     * @throws QchainException {@link ErrorKey#UNKNOWN_PARAMETER} if {@code wrt} is not a parameter of the ring
+     * @throws IllegalStateException past the limit (the guard did not run)
      */
     public static EntrySensitivity of(RatFunMatrix p, long n, int from, int to, String wrt, SymbolicLimits limits,
                                       LongConsumer progress) {

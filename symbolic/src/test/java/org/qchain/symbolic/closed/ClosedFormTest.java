@@ -248,9 +248,12 @@ class ClosedFormTest {
 
     @Test
     void sizeGuardRefusesBeforeWork() {
+        // the decision is the caller's guard's (the analysis layer runs it before any engine); the engine asserts
+        org.qchain.symbolic.SymbolicLimits tiny = new org.qchain.symbolic.SymbolicLimits(3);
         QchainException e = assertThrows(QchainException.class,
-            () -> ClosedForms.of(TWO_STATE, Map.of(), new org.qchain.symbolic.SymbolicLimits(3)));
+            () -> ClosedForms.estimate(TWO_STATE, Map.of()).requireTermsWithin(tiny));
         assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE, e.key());
+        assertThrows(IllegalStateException.class, () -> ClosedForms.of(TWO_STATE, Map.of(), tiny));
     }
 
     @Test

@@ -1,0 +1,65 @@
+package org.qchain.analysis;
+
+import java.util.Optional;
+import java.util.OptionalInt;
+
+/**
+ * The analysis layer's one size guard: for each query, every estimate of the work and of the result is checked
+ * against the query's limits, and refused with the estimate and the option that raises the limit, before any engine
+ * runs (and so before any progress report). The engines only assert that it ran. {@link Analysis} calls it first
+ * in every query method, so {@link Analysis#run} never reaches an engine past a limit.
+ *
+ * <p>The decisions: a numeric step's digits (whole power, or the row an entry is computed through) and its path
+ * search's work ({@link NumericEngine#guard}); a symbolic step's terms and digits of the power or of one row, a
+ * sensitivity's row, closed forms' powers P^1 .. P^s (estimates from degrees and coefficient heights, in
+ * {@link SymbolicEngine}, which alone names symbolic types). Where a symbolic query is also evaluated at a point,
+ * the exact engine's estimate of that value comes first. The closed forms' estimate of their printed digits needs
+ * the factors of the characteristic polynomial, so it stays with the closed-form engine, after its first phase.
+ */
+final class SizeGuard {
+    private SizeGuard() {
+    }
+
+    /** A step query on its route. */
+    static void check(LoadedModel model, StepQuery q) {
+        if (Analysis.route(model, q) == Route.NUMERIC) {
+            NumericEngine.guard(model, q);
+            return;
+        }
+        if (model.complete()) {
+            // the values at the point come from the exact engine too: its estimate first
+            NumericEngine.guard(model, q);
+        }
+        q.from().ifPresent(f -> model.state("--from", f));
+        q.to().ifPresent(t -> model.state("--to", t));
+        Interrupts.guarded(() -> {
+            SymbolicEngine.requireWithin(model, q);
+            return null;
+        });
+    }
+
+    /** A sensitivity query. */
+    static void check(LoadedModel model, SensQuery q) {
+        if (model.complete()) {
+            // the value at the point is checked against the exact engine's entry: its estimate first
+            NumericEngine.guard(model, new StepQuery(q.n(), Optional.of(q.from()), Optional.of(q.to()),
+                OptionalInt.empty(), q.maxDigits(), Long.MAX_VALUE, true, q.factor(), q.maxTerms()));
+        }
+        model.state("--from", q.from());
+        model.state("--to", q.to());
+        Interrupts.guarded(() -> {
+            SymbolicEngine.requireWithin(model, q);
+            return null;
+        });
+    }
+
+    /** A closed-form query. */
+    static void check(LoadedModel model, ClosedQuery q) {
+        q.from().ifPresent(s -> model.state(q.fromName(), s));
+        q.to().ifPresent(s -> model.state("--to", s));
+        Interrupts.guarded(() -> {
+            SymbolicEngine.requireWithin(model, q);
+            return null;
+        });
+    }
+}
