@@ -20,6 +20,11 @@ import org.qchain.exact.model.Domain;
  * end, {@code (lo, inf)}, is first mapped onto {@code [0, 1)} by {@code x = lo + y/(1 - y)} and the polynomial
  * multiplied by {@code (1 - y)^d} (d its degree in x), which keeps its sign. The closed ends of the domains are
  * faces of the box, each checked as a box of its own.
+ *
+ * <p>Before the subdivision, a polynomial of total degree 2 is tried as completed squares plus an affine
+ * remainder, and after it, a reducible polynomial by the signs of its factors (products of squares): see
+ * {@link Squares}. These catch zeros that no halving ever puts on a corner, such as
+ * {@code (5p + 5r - 1)^2 + 20r} at {@code p = 1/5} on the open end {@code r = 0}.
  */
 public final class BoxSign {
     /** The most halvings of one box (the stated depth of the subdivision). */
@@ -49,7 +54,8 @@ public final class BoxSign {
      * @return true if proved
      */
     public static boolean positive(Map<List<Integer>, Rational> terms, List<Domain> domains) {
-        return of(terms, domains).positiveOnDomains(domains);
+        return Squares.completed(terms, domains, true) || of(terms, domains).positiveOnDomains(domains)
+            || Squares.products(terms, domains, true);
     }
 
     /**
@@ -67,6 +73,11 @@ public final class BoxSign {
      * @see #positive(Map, List)
      */
     public static boolean nonNegative(Map<List<Integer>, Rational> terms, List<Domain> domains) {
+        return Squares.completed(terms, domains, false) || bernsteinNonNegative(terms, domains)
+            || Squares.products(terms, domains, false);
+    }
+
+    private static boolean bernsteinNonNegative(Map<List<Integer>, Rational> terms, List<Domain> domains) {
         BoxSign b = of(terms, domains);
         Rational[] lo = new Rational[b.k];
         Rational[] hi = new Rational[b.k];
