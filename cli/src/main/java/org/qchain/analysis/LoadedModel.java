@@ -63,6 +63,10 @@ public final class LoadedModel {
             this.sparse = Optional.empty();
             if (model.kind() == ChainKind.DISCRETE) {
                 symbolic();
+            } else if (complete()) {
+                // a continuous chain is validated (negative rates, division by zero) before any command looks at
+                // its kind, so every command refuses a broken one with the same located message
+                Chains.sparseTransitionMatrix(model, given);
             }
         }
     }

@@ -124,6 +124,21 @@ class BoxSignTest {
     }
 
     @Test
+    void positiveCoefficientsAfterTheObviousSubstitution() {
+        // p^2 - p on p in [1, 2] or (1, inf): with p = 1 + t it is t + t^2, positive coefficients in t >= 0
+        // (common practice, no source)
+        Map<List<Integer>, Rational> q = poly("1", e(2), "-1", e(1));
+        Domain oneTwo = new Domain(Rational.ONE, true, Optional.of(Rational.of(2)), true);
+        Domain fromOne = new Domain(Rational.ONE, false, Optional.empty(), false);
+        assertTrue(BoxSign.nonNegative(q, List.of(oneTwo)));
+        assertFalse(BoxSign.positive(q, List.of(oneTwo))); // 0 at p = 1
+        assertTrue(BoxSign.positive(q, List.of(fromOne)));
+        // and on [1/2, 2] it is negative at p = 3/4: not proved
+        assertFalse(BoxSign.nonNegative(q, List.of(new Domain(Rational.of(1, 2), true, Optional.of(Rational.of(2)),
+            true))));
+    }
+
+    @Test
     void weightedSquaresWithTheirZeroOnAnOpenEnd() {
         // 3(p - 1/3)^2 + 2q^2 + q: 0 only at (1/3, 0), outside q > 0; no halving puts p = 1/3 on a corner
         Map<List<Integer>, Rational> w = poly("3", e(2, 0), "-2", e(1, 0), "1/3", e(0, 0), "2", e(0, 2), "1", e(0, 1));
