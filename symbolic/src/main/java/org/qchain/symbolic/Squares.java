@@ -243,6 +243,9 @@ final class Squares {
      * @see #completed(Map, List, boolean)
      */
     static boolean products(Map<List<Integer>, Rational> terms, List<Domain> domains, boolean strict) {
+        if (totalDegree(terms) <= 1) {
+            return false; // constants and affine polynomials are irreducible: no factorisation needed
+        }
         int k = domains.size();
         List<String> names = new ArrayList<>();
         for (int i = 0; i < k; i++) {
