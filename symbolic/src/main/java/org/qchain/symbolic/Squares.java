@@ -22,6 +22,12 @@ import org.qchain.exact.model.Domain;
  *       is handed back to {@link BoxSign}: R > 0 on the domains proves p > 0, R >= 0 on their closure proves
  *       p >= 0. Example: {@code 1 - 10p + 10r + 25p^2 + 50pr + 25r^2 = (5p + 5r - 1)^2 + 20r}, positive for
  *       r > 0.</li>
+ *   <li><b>A square in one variable</b>: where p has degree 2 in a variable x, {@code p = A x^2 + B x + C} with
+ *       A, B, C polynomials in the others; {@code C > 0} (or {@code A > 0}) and {@code 4AC - B^2 > 0} on the
+ *       others' domains make p positive for every real x; {@code A, C, 4AC - B^2 >= 0} make it at least 0. The
+ *       coefficients are decided by completed squares and Bernstein coefficients only ({@link BoxSign#basic}),
+ *       so the work stays bounded. Example: {@code (p - q^2 - 1/3)^2 + q}, whose discriminant in p is
+ *       {@code -4q}.</li>
  *   <li><b>Products of squares</b>: p is factored over Q ({@link Poly#factor()}); a factor of even multiplicity
  *       is at least 0 and must only be shown nonzero (for {@code p > 0}) or nothing (for {@code p >= 0}); a factor
  *       of odd multiplicity must have one sign; the signs and the constant must multiply to +1.</li>
@@ -233,6 +239,65 @@ final class Squares {
             x[i] = m[i][n].divide(m[i][i]);
         }
         return x;
+    }
+
+    // --- a square in one variable --------------------------------------------------------------------------------
+
+    /**
+     * p > 0 on the domains (strict) or p >= 0 on their closure, by the discriminant of p in one variable of
+     * degree 2.
+     *
+     * @see #completed(Map, List, boolean)
+     */
+    static boolean quadraticIn(Map<List<Integer>, Rational> terms, List<Domain> domains, boolean strict) {
+        int k = domains.size();
+        for (int j = 0; j < k; j++) {
+            int deg = 0;
+            for (Map.Entry<List<Integer>, Rational> t : terms.entrySet()) {
+                if (!t.getValue().isZero()) {
+                    deg = Math.max(deg, t.getKey().get(j));
+                }
+            }
+            if (deg != 2 || totalDegree(terms) <= 2) {
+                continue; // total degree 2 is the completed squares' case
+            }
+            List<Map<List<Integer>, Rational>> abc = List.of(new HashMap<>(), new HashMap<>(), new HashMap<>());
+            for (Map.Entry<List<Integer>, Rational> t : terms.entrySet()) {
+                List<Integer> e = new ArrayList<>(t.getKey());
+                int power = e.get(j);
+                e.set(j, 0);
+                abc.get(2 - power).merge(List.copyOf(e), t.getValue(), Rational::add);
+            }
+            Map<List<Integer>, Rational> a = abc.get(0);
+            Map<List<Integer>, Rational> b = abc.get(1);
+            Map<List<Integer>, Rational> c = abc.get(2);
+            Map<List<Integer>, Rational> disc = times(Rational.of(4), a, c);
+            times(Rational.of(-1), b, b).forEach((e, v) -> disc.merge(e, v, Rational::add));
+            boolean ok = strict
+                ? (BoxSign.basic(c, domains, true) || BoxSign.basic(a, domains, true)) && BoxSign.basic(disc, domains, true)
+                : BoxSign.basic(a, domains, false) && BoxSign.basic(c, domains, false)
+                    && BoxSign.basic(disc, domains, false);
+            if (ok) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** w * x * y for polynomials as exponent maps. */
+    private static Map<List<Integer>, Rational> times(Rational w, Map<List<Integer>, Rational> x,
+                                                      Map<List<Integer>, Rational> y) {
+        Map<List<Integer>, Rational> out = new HashMap<>();
+        for (Map.Entry<List<Integer>, Rational> s : x.entrySet()) {
+            for (Map.Entry<List<Integer>, Rational> t : y.entrySet()) {
+                List<Integer> e = new ArrayList<>();
+                for (int i = 0; i < s.getKey().size(); i++) {
+                    e.add(s.getKey().get(i) + t.getKey().get(i));
+                }
+                out.merge(e, w.multiply(s.getValue()).multiply(t.getValue()), Rational::add);
+            }
+        }
+        return out;
     }
 
     // --- products of squares -------------------------------------------------------------------------------------

@@ -149,6 +149,21 @@ class BoxSignTest {
     }
 
     @Test
+    void aSquareInOneVariable() {
+        // (p - q^2 - 1/3)^2 + q = p^2 - 2(q^2 + 1/3) p + (q^2 + 1/3)^2 + q: degree 4, its discriminant in p is -4q
+        // (by hand: common practice, no source); 0 only at (1/3, 0), outside q > 0
+        Map<List<Integer>, Rational> s = poly("1", e(2, 0), "-2", e(1, 2), "-2/3", e(1, 0), "1", e(0, 4),
+            "2/3", e(0, 2), "1/9", e(0, 0), "1", e(0, 1));
+        assertTrue(BoxSign.positive(s, List.of(OPEN, OPEN)));
+        assertTrue(BoxSign.nonNegative(s, List.of(CLOSED, CLOSED)));
+        assertFalse(BoxSign.positive(s, List.of(OPEN, CLOSED)));
+        // with - q instead of + q it is negative at p = q^2 + 1/3, inside the box
+        Map<List<Integer>, Rational> m = new HashMap<>(s);
+        m.put(List.of(0, 1), Rational.of(-1));
+        assertFalse(BoxSign.nonNegative(m, List.of(CLOSED, CLOSED)));
+    }
+
+    @Test
     void productsOfSquares() {
         // (3p - 1)^2 (1 + q) >= 0 on [0, 1]^2 and 0 on p = 1/3: non-negative, never positive
         Map<List<Integer>, Rational> prod = poly("9", e(2, 0), "-6", e(1, 0), "1", e(0, 0), "9", e(2, 1),
@@ -173,7 +188,20 @@ class BoxSignTest {
         int proved = 0;
         for (int trial = 0; trial < 300; trial++) {
             Map<List<Integer>, Rational> p = new HashMap<>();
-            if (trial % 2 == 0) {
+            if (trial % 3 == 2) {
+                // w (p - s q^2 - c)^2 + d q + f: degree 4, a square in p
+                Rational w = Rational.of(1 + rnd.nextInt(3));
+                Rational sq = Rational.of(rnd.nextInt(5) - 2, 1 + rnd.nextInt(3));
+                Rational c = Rational.of(rnd.nextInt(7) - 1, 1 + rnd.nextInt(7));
+                p.merge(List.of(2, 0), w, Rational::add);
+                p.merge(List.of(1, 2), w.multiply(sq).multiply(Rational.of(-2)), Rational::add);
+                p.merge(List.of(1, 0), w.multiply(c).multiply(Rational.of(-2)), Rational::add);
+                p.merge(List.of(0, 4), w.multiply(sq).multiply(sq), Rational::add);
+                p.merge(List.of(0, 2), w.multiply(sq).multiply(c).multiply(Rational.of(2)), Rational::add);
+                p.merge(List.of(0, 0), w.multiply(c).multiply(c).add(Rational.of(rnd.nextInt(5) - 2, 50)),
+                    Rational::add);
+                p.merge(List.of(0, 1), Rational.of(rnd.nextInt(5) - 2, 10), Rational::add);
+            } else if (trial % 2 == 0) {
                 for (int t = 0; t < 5; t++) {
                     int i = rnd.nextInt(3);
                     p.merge(List.of(i, rnd.nextInt(3 - i)), Rational.of(rnd.nextInt(13) - 6, 1 + rnd.nextInt(4)),
