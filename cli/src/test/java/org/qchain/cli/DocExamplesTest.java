@@ -18,8 +18,9 @@ import org.junit.jupiter.api.TestFactory;
  * a fenced block, followed by the output) is run, and its output must be the text shown, so the pages cannot drift
  * from the program: stderr then stdout if the page shows a {@code qchain:} message line, else stdout; a line
  * {@code ...} stands for lines left out and {@code ...} in a line for text left out; the caution footer is not shown
- * on the pages. A command shown without output (a list of commands) is not run. The model paths are relative to the
- * repository root, as on the pages, and every file a shown command names must exist in the repository (a bundled
+ * on the pages. A command shown without output (a list of commands) is not run, but its files are checked too. The
+ * model paths are relative to the repository root, as on the pages, and every file a shown command reads must exist
+ * in the repository (a bundled
  * example in {@code docs/examples} or a test model in {@code cli/src/test/resources}): a block that is illustrative
  * only (its model is a name on the page) is marked by the line {@code <!-- illustrative -->} just before its fence,
  * and is not run. Normalisation: {@code \r\n} is read as {@code \n}, nothing else.
@@ -175,6 +176,13 @@ class DocExamplesTest {
             }
             String cmd = line.startsWith("$ qchain ") ? line.substring(9)
                 : line.startsWith("$ ./qchain ") ? line.substring(11) : null;
+            if (fenced && !illustrative && cmd == null) {
+                // a command shown without its output (a list of commands): its files must exist all the same
+                java.util.regex.Matcher q = java.util.regex.Pattern.compile("(?:^|\\s)(?:\\./)?qchain (.*)$").matcher(line);
+                if (q.find()) {
+                    requireFiles(ROOT.relativize(page) + ":" + (i + 1), words(q.group(1).split(" #")[0]));
+                }
+            }
             if (!fenced || cmd == null || illustrative) {
                 continue;
             }
@@ -186,19 +194,24 @@ class DocExamplesTest {
             }
             List<String> args = words(cmd);
             String where = ROOT.relativize(page) + ":" + (i + 1);
-            for (int k = 0; k < args.size(); k++) {
-                String a = args.get(k);
-                boolean written = k > 0 && List.of("-o", "--output", "--save-model").contains(args.get(k - 1));
-                if (!written && a.matches("[^-=\\s]+\\.(chain|csv|json)")) {
-                    assertTrue(Files.exists(ROOT.resolve(a)), where + ": the page's command names " + a
-                        + ", which is not in the repository; use a bundled file or mark the block " + ILLUSTRATIVE);
-                }
-            }
+            requireFiles(where, args);
             if (shown.length() > 0) {
                 out.add(new Example(where, args, shown.toString()));
             }
         }
         return out;
+    }
+
+    /** The files a shown command reads must be in the repository (what it writes, after -o or >, need not). */
+    private static void requireFiles(String where, List<String> args) {
+        for (int k = 0; k < args.size(); k++) {
+            String a = args.get(k);
+            boolean written = k > 0 && List.of("-o", "--output", "--save-model", ">").contains(args.get(k - 1));
+            if (!written && a.matches("[^-=\\s>]+\\.(chain|csv|json)")) {
+                assertTrue(Files.exists(ROOT.resolve(a)), where + ": the page's command names " + a
+                    + ", which is not in the repository; use a bundled file or mark the block " + ILLUSTRATIVE);
+            }
+        }
     }
 
     /** Splits a shell command line into words; double quotes group. */
