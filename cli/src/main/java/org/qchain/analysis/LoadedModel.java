@@ -73,6 +73,10 @@ public final class LoadedModel {
                 Chains.requireDense(model);
                 RowSums.requireIdenticallyOne(model, true);
                 symbolic();
+            } else if (complete()) {
+                // a continuous chain is validated (negative rates, division by zero) before any command looks at
+                // its kind, so every command refuses a broken one with the same located message
+                Chains.sparseTransitionMatrix(model, given);
             }
         }
     }

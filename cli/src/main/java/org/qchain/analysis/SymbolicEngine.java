@@ -68,11 +68,31 @@ final class SymbolicEngine {
         RatFunMatrix p = RatFunMatrix.fromModel(m);
         CheckReport report = ParameterCheck.check(m, p);
         report.throwIfErrors();
-        List<String> warnings = new ArrayList<>();
-        for (Finding f : report.warnings()) {
-            warnings.add(f.located());
+        return new Checked(p, grouped(report.warnings()));
+    }
+
+    /**
+     * The warnings, each once: entries with the same formula, condition and explanation make one warning, at the
+     * first entry's position, that names the others ({@code ...; the same for B->B (m.chain:8:1)}).
+     */
+    static List<String> grouped(List<Finding> findings) {
+        Map<String, List<Finding>> groups = new LinkedHashMap<>();
+        for (Finding f : findings) {
+            String key = f.formula() + "\n" + f.condition() + "\n" + f.detail() + "\n"
+                + (f.message().startsWith(f.entry()) ? f.message().substring(f.entry().length()) : f.message());
+            groups.computeIfAbsent(key, k -> new ArrayList<>()).add(f);
         }
-        return new Checked(p, warnings);
+        List<String> out = new ArrayList<>();
+        for (List<Finding> g : groups.values()) {
+            StringBuilder sb = new StringBuilder(g.get(0).located());
+            for (int k = 1; k < g.size(); k++) {
+                Finding f = g.get(k);
+                sb.append(k == 1 ? "; the same for " : ", ").append(f.entry());
+                f.pos().ifPresent(pos -> sb.append(" (").append(pos).append(')'));
+            }
+            out.add(sb.toString());
+        }
+        return out;
     }
 
     private static Checked checked(LoadedModel model) {

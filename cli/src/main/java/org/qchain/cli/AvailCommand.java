@@ -20,9 +20,9 @@ import picocli.CommandLine.Spec;
 @Command(name = "avail", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
         "Figures of merit of a repairable system: a continuous chain whose 'up' line marks the operating states.",
-        "Exact: steady-state availability and unavailability, down hours per year, failure frequency (failures per",
-        "unit of time in the long run), mean up and down time per cycle, mean time to failure (MTTF: expected time",
-        "to first reach a down state) from each up state, and the long-run share of every state.",
+        "Exact: steady-state availability and unavailability, down hours per year, failure frequency (failures per"
+            + " unit of time in the long run), mean up and down time per cycle, mean time to failure (MTTF: expected"
+            + " time to first reach a down state) from each up state, and the long-run share of every state.",
         "With -t: point availability A(t) from --from (default: the first up state) as certified decimals."})
 final class AvailCommand implements Callable<Integer> {
     @Spec

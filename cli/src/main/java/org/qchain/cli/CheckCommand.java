@@ -38,8 +38,9 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         LoadedModel loaded = model.load();
         CheckResult result = Analysis.check(loaded, new CheckQuery(symbolic));
-        Emitter.emit(spec, OutputFormat.TEXT.formatter(digits.digits).format(result), result.warnings(),
-            Optional.empty());
+        // a symbolic check's conditions are its report (the "Conditions" section on stdout): not again on stderr
+        Emitter.emit(spec, OutputFormat.TEXT.formatter(digits.digits).format(result),
+            result instanceof CheckResult.Symbolic ? java.util.List.of() : result.warnings(), Optional.empty());
         return ExitCodes.OK;
     }
 }

@@ -21,10 +21,10 @@ import picocli.CommandLine.Spec;
 @Command(name = "convert", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     sortOptions = false,
     description = {
-        "Writes a continuous chain as a discrete model file, so every discrete command runs on it.",
+        "Write a continuous chain as a discrete model file, so every discrete command runs on it.",
         "--to jump: the embedded jump chain (where the chain goes at its next transition, q_ij / q_i).",
-        "--to uniformized: I + Q/R for a rate R at least the largest total rate out of a state (default: that",
-        "largest rate); P(t) = sum over k of e^(-Rt) (Rt)^k / k! times the k-step matrix of this chain."})
+        "--to uniformized: I + Q/R for a rate R at least the largest total rate out of a state (default: that"
+            + " largest rate); P(t) = sum over k of e^(-Rt) (Rt)^k / k! times the k-step matrix of this chain."})
 final class ConvertCommand implements Callable<Integer> {
     /** The targets, as written on the command line. */
     enum To {

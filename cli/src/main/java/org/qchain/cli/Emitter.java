@@ -73,9 +73,10 @@ final class Emitter {
         }
     }
 
+    /** Each warning once, in order, even if two parts of a computation reported the same one. */
     private static void warn(CommandSpec spec, List<String> warnings) {
         PrintWriter err = spec.commandLine().getErr();
-        for (String w : warnings) {
+        for (String w : new java.util.LinkedHashSet<>(warnings)) {
             err.println("qchain: warning: " + w);
         }
         err.flush();

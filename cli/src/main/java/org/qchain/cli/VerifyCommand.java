@@ -22,7 +22,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "verify", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     sortOptions = false,
     description = {
-        "Checks floating-point results from another tool (your code, a spreadsheet, a numerical library) against"
+        "Check floating-point results from another tool (your code, a spreadsheet, a numerical library) against"
             + " the exact values.",
         "Each number in FILE is read exactly and subtracted exactly from the truth; only the errors are rounded,"
             + " for display. Prints the worst entries first, then a summary; exits 0 when every value meets the"

@@ -119,6 +119,20 @@ class ClosedCommandTest {
     }
 
     @Test
+    void conditionsThatAlwaysHoldAreNotReportedAsNotShown() {
+        // regression (issue 8): the press model's radicand 1 - 10p + 10r + 25p^2 + 50pr + 25r^2 is
+        // (5p + 5r - 1)^2 + 20r > 0 on the open domains (by hand: common practice, no source); a condition with a
+        // zero inside the domains (18 - 9p - 10r, 0 at p = 8/9, r = 1) is still reported
+        Cli.Result r = Cli.run("closed", Cli.model("press.chain"));
+        assertEquals(0, r.code(), r::toString);
+        String first = r.out().lines().filter(l -> l.startsWith("Valid for")).findFirst().orElseThrow();
+        assertEquals("Valid for n >= 0 where 1 - 10*p + 10*r + 25*p^2 + 50*p*r + 25*r^2 != 0. It always holds"
+            + " inside the parameters' domains.", first);
+        assertTrue(r.out().contains("Not shown to hold throughout the parameters' domains: 18 - 9*p - 10*r != 0."),
+            r.out());
+    }
+
+    @Test
     void hugeInputIsRefusedWithTheEstimate() {
         assertUsage("the symbolic P^2 would have up to about 24 polynomial terms in total (entries of degree up to 2),"
             + " more than the limit 3; raise it with --max-terms", "closed", BEACON, "--max-terms", "3");

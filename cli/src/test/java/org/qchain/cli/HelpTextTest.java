@@ -36,4 +36,44 @@ class HelpTextTest {
         Cli.Result csv = Cli.run("closed", Cli.model("plant.chain"), "--format", "csv");
         assertEquals(2, csv.code(), csv::toString);
     }
+
+    /**
+     * Regression (issue 8): every paragraph of every command's description, and every option's and parameter's
+     * description, is whole sentences: it ends with a full stop (or a colon before a list), and none starts
+     * lower-case in the middle of a sentence that the previous paragraph began.
+     */
+    @Test
+    void noDescriptionBreaksMidSentence() {
+        picocli.CommandLine root = QchainCommand.newCommandLine(false);
+        java.util.List<String> bad = new java.util.ArrayList<>();
+        java.util.List<picocli.CommandLine> all = new java.util.ArrayList<>(java.util.List.of(root));
+        all.addAll(root.getSubcommands().values());
+        for (picocli.CommandLine cl : all) {
+            picocli.CommandLine.Model.CommandSpec spec = cl.getCommandSpec();
+            String name = spec.qualifiedName();
+            paragraphs(name + " description", spec.usageMessage().description(), bad);
+            for (picocli.CommandLine.Model.OptionSpec o : spec.options()) {
+                paragraphs(name + " " + o.longestName(), o.description(), bad);
+            }
+            for (picocli.CommandLine.Model.PositionalParamSpec pp : spec.positionalParameters()) {
+                paragraphs(name + " " + pp.paramLabel(), pp.description(), bad);
+            }
+        }
+        assertEquals(java.util.List.of(), bad);
+    }
+
+    private static void paragraphs(String where, String[] texts, java.util.List<String> bad) {
+        for (int k = 0; k < texts.length; k++) {
+            String t = texts[k].replace("%n", "").strip();
+            if (t.isEmpty()) {
+                continue;
+            }
+            if (!(t.endsWith(".") || t.endsWith(":"))) {
+                bad.add(where + ": ends mid-sentence: " + t);
+            }
+            if (k > 0 && Character.isLowerCase(t.charAt(0))) {
+                bad.add(where + ": starts mid-sentence: " + t);
+            }
+        }
+    }
 }

@@ -20,6 +20,11 @@ import org.qchain.exact.model.Domain;
  * end, {@code (lo, inf)}, is first mapped onto {@code [0, 1)} by {@code x = lo + y/(1 - y)} and the polynomial
  * multiplied by {@code (1 - y)^d} (d its degree in x), which keeps its sign. The closed ends of the domains are
  * faces of the box, each checked as a box of its own.
+ *
+ * <p>Before the subdivision, a polynomial of total degree 2 is tried as completed squares plus an affine
+ * remainder; after it, a polynomial of degree 2 in one variable by its discriminant in the others, and a reducible
+ * polynomial by the signs of its factors (products of squares): see {@link Squares}. These catch zeros that no halving ever puts on a corner, such as
+ * {@code (5p + 5r - 1)^2 + 20r} at {@code p = 1/5} on the open end {@code r = 0}.
  */
 public final class BoxSign {
     /** The most halvings of one box (the stated depth of the subdivision). */
@@ -49,7 +54,18 @@ public final class BoxSign {
      * @return true if proved
      */
     public static boolean positive(Map<List<Integer>, Rational> terms, List<Domain> domains) {
-        return of(terms, domains).positiveOnDomains(domains);
+        return !refutedAtSamples(terms, domains, true) && (basic(terms, domains, true)
+            || Squares.quadraticIn(terms, domains, true) || Squares.products(terms, domains, true));
+    }
+
+    /**
+     * Completed squares, then Bernstein coefficients with subdivision: {@code p > 0} on the domains (strict) or
+     * {@code p >= 0} on their closure. The one-variable discriminant argument of {@link Squares} uses only these
+     * on its coefficients, so the work stays bounded.
+     */
+    static boolean basic(Map<List<Integer>, Rational> terms, List<Domain> domains, boolean strict) {
+        return Squares.completed(terms, domains, strict)
+            || (strict ? of(terms, domains).positiveOnDomains(domains) : bernsteinNonNegative(terms, domains));
     }
 
     /**
@@ -67,6 +83,69 @@ public final class BoxSign {
      * @see #positive(Map, List)
      */
     public static boolean nonNegative(Map<List<Integer>, Rational> terms, List<Domain> domains) {
+        return !refutedAtSamples(terms, domains, false) && (basic(terms, domains, false)
+            || Squares.quadraticIn(terms, domains, false) || Squares.products(terms, domains, false));
+    }
+
+    /** Sample values inside a domain: 1/7, 1/2 and 6/7 of the way across, or lo + 1/2, 1, 10 if unbounded. */
+    private static final Rational[] FRACTIONS = {Rational.of(1, 7), Rational.of(1, 2), Rational.of(6, 7)};
+    private static final Rational[] STEPS = {Rational.of(1, 2), Rational.ONE, Rational.of(10)};
+
+    /**
+     * A quick refutation before any proof: a value below 0 (or, for strict positivity, at most 0) at one of a few
+     * interior points of the domains (3 per variable that occurs, at most 3^5 points) is a counterexample.
+     */
+    static boolean refutedAtSamples(Map<List<Integer>, Rational> terms, List<Domain> domains, boolean strict) {
+        int k = domains.size();
+        List<Integer> used = new java.util.ArrayList<>();
+        for (int i = 0; i < k; i++) {
+            for (Map.Entry<List<Integer>, Rational> t : terms.entrySet()) {
+                if (t.getKey().get(i) > 0 && !t.getValue().isZero()) {
+                    used.add(i);
+                    break;
+                }
+            }
+        }
+        if (used.size() > 5) {
+            return false;
+        }
+        Rational[][] values = new Rational[k][];
+        for (int i : used) {
+            Domain d = domains.get(i);
+            values[i] = new Rational[3];
+            for (int s = 0; s < 3; s++) {
+                values[i][s] = d.upper().isPresent()
+                    ? d.lower().add(d.upper().get().subtract(d.lower()).multiply(FRACTIONS[s]))
+                    : d.lower().add(STEPS[s]);
+            }
+        }
+        int points = 1;
+        for (int u = 0; u < used.size(); u++) {
+            points *= 3;
+        }
+        for (int pt = 0; pt < points; pt++) {
+            Rational[] x = new Rational[k];
+            int code = pt;
+            for (int i : used) {
+                x[i] = values[i][code % 3];
+                code /= 3;
+            }
+            Rational v = Rational.ZERO;
+            for (Map.Entry<List<Integer>, Rational> t : terms.entrySet()) {
+                Rational m = t.getValue();
+                for (int i : used) {
+                    m = m.multiply(x[i].pow(t.getKey().get(i)));
+                }
+                v = v.add(m);
+            }
+            if (strict ? v.signum() <= 0 : v.signum() < 0) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static boolean bernsteinNonNegative(Map<List<Integer>, Rational> terms, List<Domain> domains) {
         BoxSign b = of(terms, domains);
         Rational[] lo = new Rational[b.k];
         Rational[] hi = new Rational[b.k];

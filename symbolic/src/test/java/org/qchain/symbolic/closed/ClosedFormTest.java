@@ -277,6 +277,24 @@ class ClosedFormTest {
     }
 
     @Test
+    void aDiscriminantThatIsASquarePlusAPositiveTermIsProved() {
+        // regression (issue 8): a press chain (Good -> Worn p, Worn -> Good r, Worn -> Failed 1/5); the radicand of
+        // its quadratic pair, 1 - 10p + 10r + 25p^2 + 50pr + 25r^2 = (5p + 5r - 1)^2 + 20r (expanded by hand: common
+        // practice, no source), is positive for r > 0, so its condition holds on (0, 1)^2; on [0, 1]^2 it fails at
+        // p = 1/5, r = 0 and stays reported
+        Model m = Chains.model(List.of("p", "r"), new String[][] {
+            {"1 - p", "p", "0"}, {"r", "4/5 - r", "1/5"}, {"0", "0", "1"}});
+        ClosedForm cf = ClosedForms.of(m);
+        String disc = "1 - 10*p + 10*r + 25*p^2 + 50*p*r + 25*r^2 != 0";
+        assertTrue(cf.conditions().contains(disc), cf.conditions().toString());
+        org.qchain.exact.model.Domain unit = org.qchain.exact.model.Domain.probability();
+        assertFalse(cf.conditionsNotProved(Map.of("p", unit, "r", unit)).contains(disc));
+        org.qchain.exact.model.Domain closed = new org.qchain.exact.model.Domain(Rational.ZERO, true,
+            java.util.Optional.of(Rational.ONE), true);
+        assertTrue(cf.conditionsNotProved(Map.of("p", closed, "r", closed)).contains(disc));
+    }
+
+    @Test
     void conditionsAreCheckedAgainstTheDomains() {
         org.qchain.exact.model.Domain unit = org.qchain.exact.model.Domain.probability();
         // a + b > 0 on (0, 1)^2: proved by the sign argument

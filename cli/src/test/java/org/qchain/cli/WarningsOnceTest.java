@@ -1,0 +1,55 @@
+package org.qchain.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Arrays;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Regression (issue 8): each warning once, not once per entry, and not again on stdout. The model has the same
+ * entry {@code 1 - p - r} on two rows (lines 7 and 9), which needs {@code p + r <= 1} on the parameter domains.
+ */
+class WarningsOnceTest {
+    private static final String MODEL = Cli.model("twin-wear.chain");
+    private static final String WARNING = "qchain: warning: " + MODEL + ":7:1: LineA->LineA is 1 - p - r: needs"
+        + " p + r <= 1; fails near p=1, r=1 (a corner of the domain); holds at the nominal values p=1/10, r=1/4;"
+        + " the same for LineB->LineB (" + MODEL + ":9:1)";
+
+    private static long count(String text, String part) {
+        return Arrays.stream(text.split("\n", -1)).filter(l -> l.contains(part)).count();
+    }
+
+    @Test
+    void symbolicCommandsWarnOnceForEntriesThatShareACondition() {
+        for (String[] args : new String[][] {
+            {"step", MODEL, "-n", "2", "--symbolic"},
+            {"step", MODEL, "-n", "2", "--symbolic", "--format", "csv"},
+            {"sens", MODEL, "-n", "2", "--from", "LineA", "--to", "LineB", "--wrt", "p"}}) {
+            Cli.Result r = Cli.run(args);
+            assertEquals(0, r.code(), r::toString);
+            assertEquals(WARNING + "\n", r.err(), String.join(" ", args));
+            assertEquals(0, count(r.out(), "needs p + r <= 1"), "not again on stdout: " + String.join(" ", args));
+        }
+    }
+
+    @Test
+    void jsonListsTheWarningOnce() {
+        Cli.Result r = Cli.run("step", MODEL, "-n", "2", "--symbolic", "--format", "json");
+        assertEquals(0, r.code(), r::toString);
+        assertEquals(WARNING + "\n", r.err());
+        // the JSON "warnings" array is part of the output's shape: one element
+        String warnings = r.out().substring(r.out().indexOf("\"warnings\":["));
+        assertEquals(1, warnings.split("needs p \\+ r <= 1", -1).length - 1, r.out());
+    }
+
+    @Test
+    void checkPrintsItsConditionsOnceInItsReport() {
+        Cli.Result r = Cli.run("check", MODEL, "--symbolic");
+        assertEquals(0, r.code(), r::toString);
+        assertEquals("", r.err(), "the conditions are the report, not again on stderr");
+        assertEquals(1, count(r.out(), "needs p + r <= 1"), r.out());
+        assertTrue(r.out().contains("\n  " + WARNING.substring("qchain: warning: ".length()) + "\n"), r.out());
+        assertTrue(r.out().endsWith("rows sum to 1 identically; 1 condition on the parameters (above)\n"), r.out());
+    }
+}
