@@ -464,7 +464,8 @@ function _picocli_qchain_check() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--format' '--digits' '-o' '--output'"
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
@@ -478,8 +479,19 @@ function _picocli_qchain_check() {
     '--max-dense-states')
       return
       ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
     '--digits')
       return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
       ;;
   esac
 
