@@ -227,7 +227,7 @@ function _picocli_qchain_step() {
 
   local commands=""
   local flag_opts="'--certified' '--symbolic' '--factor' '--double' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '-t' '--time' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-work' '--max-terms'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '-t' '--time' '--from' '--to' '--start' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-work' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -252,6 +252,9 @@ function _picocli_qchain_step() {
       return
       ;;
     '--to')
+      return
+      ;;
+    '--start')
       return
       ;;
     '--paths')

@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -261,6 +262,28 @@ final class CsvFormatter extends Layout {
                 for (int c = 1; c < row.size(); c++) {
                     Text.csvRecord(sb, List.of(t.title(), row.get(0).plain(), t.header().get(c), row.get(c).plain()));
                 }
+            }
+        }
+        return sb.toString();
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    /** {@code n,from,to,value,decimal} as for a row or an entry; a series is one record per n and column. */
+    @Override
+    public String distribution(DistributionResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, entryHeader());
+        String from = Distributions.startField(r);
+        for (DistributionResult.Line line : r.lines()) {
+            if (r.to().isEmpty()) {
+                for (int j = 0; j < r.states().size(); j++) {
+                    Rational e = line.distribution().get(j);
+                    Text.csvRecord(sb, entryRecord(line.n(), from, r.states().get(j), e, e.toString()));
+                }
+            } else {
+                Rational v = line.total().orElseThrow();
+                Text.csvRecord(sb, entryRecord(line.n(), from, Distributions.toField(r), v, v.toString()));
             }
         }
         return sb.toString();

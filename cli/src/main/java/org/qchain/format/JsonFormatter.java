@@ -14,6 +14,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Point;
 import org.qchain.result.SensResult;
@@ -578,5 +579,42 @@ final class JsonFormatter extends Layout {
             j.object("first_passage", Json.object().object("exactly", ex).object("within", wi));
         });
         return j.strings("warnings", r.warnings()).close() + "\n";
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    @Override
+    public String distribution(DistributionResult r) {
+        if (!r.series()) {
+            return distributionStep(r, r.lines().get(0)).close() + "\n";
+        }
+        Json j = Json.object().string("kind", "series")
+            .numbers("n", r.lines().stream().map(DistributionResult.Line::n).toList());
+        j.objects("steps", r.lines(), line -> distributionStep(r, line));
+        return j.number("digits", digits).string("model", r.source()).strings("warnings", r.warnings()).close() + "\n";
+    }
+
+    /**
+     * One n as the row shape ({@code n, from, start, states, row, decimals, kind, ...}) or the entry shape
+     * ({@code n, from, start, to, to_states, value, decimal, kind, ...}) of {@code step}, with the start added.
+     */
+    private Json distributionStep(DistributionResult r, DistributionResult.Line line) {
+        Json j = Json.object().number("n", line.n());
+        r.from().ifPresent(f -> j.string("from", f));
+        Json start = Json.object();
+        r.start().forEach((k, v) -> start.string(k, v.toString()));
+        j.object("start", start);
+        if (r.to().isEmpty()) {
+            j.strings("states", r.states())
+                .strings("row", line.distribution().stream().map(DecimalText::toString).toList())
+                .strings("decimals", line.distribution().stream().map(this::dec).toList());
+        } else {
+            Rational v = line.total().orElseThrow();
+            j.string("to", String.join(",", r.to())).strings("to_states", r.to())
+                .string("value", DecimalText.toString(v)).string("decimal", dec(v));
+        }
+        j.string("kind", r.kind());
+        r.point().ifPresent(p -> j.object("at", point(p)));
+        return j.number("digits", digits).string("model", r.source()).strings("warnings", r.warnings());
     }
 }

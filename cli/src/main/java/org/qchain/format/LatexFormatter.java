@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -396,6 +397,47 @@ final class LatexFormatter extends Layout {
             for (List<org.qchain.result.Formula> row : t.rows()) {
                 sb.append(String.join(" & ", row.stream().map(f -> f.plain().isEmpty() ? "" : "$" + f.latex() + "$")
                     .toList())).append(" \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+        }
+        return caution(sb);
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    @Override
+    public String distribution(DistributionResult r) {
+        StringBuilder sb = new StringBuilder();
+        String at = Distributions.point(r);
+        sb.append("% ").append(Text.comment(Distributions.what(r, Distributions.steps(r))))
+            .append(" for ").append(Text.comment(r.source())).append(" (")
+            .append(r.kind()).append(" chain), ").append(Text.comment(Distributions.start(r)))
+            .append(at.isEmpty() ? "" : "; parameters " + Text.comment(at)).append("; decimals: ")
+            .append(Text.digits(digits)).append('\n');
+        List<String> cols = Distributions.columns(r);
+        if (!r.series()) {
+            sb.append("\\begin{tabular}{l|rr}\n");
+            sb.append("to & exact & decimal \\\\ \\hline\n");
+            List<Rational> cells = Distributions.cells(r, r.lines().get(0));
+            for (int j = 0; j < cols.size(); j++) {
+                Rational e = cells.get(j);
+                sb.append(Text.latex(cols.get(j))).append(" & ").append(cell(e, true)).append(" & ")
+                    .append(cell(e, false)).append(" \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+            return caution(sb);
+        }
+        for (boolean exact : new boolean[] {true, false}) {
+            if (!exact) {
+                sb.append("% decimals: ").append(Text.digits(digits)).append('\n');
+            }
+            sb.append("\\begin{tabular}{r|").append("r".repeat(cols.size())).append("}\n$n$");
+            cols.forEach(c -> sb.append(" & ").append(Text.latex(c)));
+            sb.append(" \\\\ \\hline\n");
+            for (DistributionResult.Line l : r.lines()) {
+                sb.append(l.n());
+                Distributions.cells(r, l).forEach(e -> sb.append(" & ").append(cell(e, exact)));
+                sb.append(" \\\\\n");
             }
             sb.append("\\end{tabular}\n");
         }

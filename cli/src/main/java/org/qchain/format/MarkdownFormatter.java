@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -405,5 +406,45 @@ final class MarkdownFormatter extends Layout {
             return Text.markdown(f.plain());
         }
         return f.plain().isEmpty() ? "" : "`" + Text.code(f.plain()) + "`";
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    @Override
+    public String distribution(DistributionResult r) {
+        StringBuilder sb = new StringBuilder();
+        String what = Distributions.what(r, Distributions.steps(r));
+        sb.append(Character.toUpperCase(what.charAt(0))).append(Text.markdown(what.substring(1)))
+            .append(" for `").append(Text.code(r.source())).append("` (")
+            .append(r.kind()).append(" chain), ").append(Text.markdown(Distributions.start(r)));
+        String at = Distributions.point(r);
+        sb.append(at.isEmpty() ? "" : "; parameters " + Text.markdown(at)).append(".\n\n");
+        List<String> cols = Distributions.columns(r);
+        if (!r.series()) {
+            line(sb, List.of("to", "exact", "decimal"));
+            line(sb, separator(3));
+            List<Rational> cells = Distributions.cells(r, r.lines().get(0));
+            for (int j = 0; j < cols.size(); j++) {
+                Rational e = cells.get(j);
+                line(sb, List.of(Text.markdown(cols.get(j)), Text.markdown(e.toString()), dec(e)));
+            }
+        } else {
+            for (boolean exact : new boolean[] {true, false}) {
+                sb.append(exact ? "Exact:\n\n" : "\nDecimal:\n\n");
+                List<String> head = new ArrayList<>();
+                head.add("n");
+                cols.forEach(c -> head.add(Text.markdown(c)));
+                line(sb, head);
+                line(sb, separator(head.size()));
+                for (DistributionResult.Line l : r.lines()) {
+                    List<String> row = new ArrayList<>();
+                    row.add(String.valueOf(l.n()));
+                    Distributions.cells(r, l).forEach(e -> row.add(exact ? Text.markdown(e.toString()) : dec(e)));
+                    line(sb, row);
+                }
+            }
+        }
+        sb.append("\nDecimals: ").append(Text.digits(digits)).append(".\n");
+        return caution(sb);
     }
 }

@@ -12,6 +12,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -596,5 +597,72 @@ final class TextFormatter extends Layout {
 
     private String cell(org.qchain.result.Formula f) {
         return Sections.exact(f).filter(r -> !r.isInteger()).map(r -> r + " (" + dec(r) + ")").orElse(f.plain());
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    @Override
+    public String distribution(DistributionResult r) {
+        StringBuilder sb = new StringBuilder();
+        String steps = Distributions.steps(r);
+        String what = Distributions.what(r, steps);
+        sb.append(Distributions.title(r)).append(" for ").append(r.source()).append(" (").append(r.kind())
+            .append(" chain)\n");
+        sb.append(Character.toUpperCase(what.charAt(0))).append(what.substring(1)).append(", ")
+            .append(Distributions.start(r)).append(".\n");
+        String at = Distributions.point(r);
+        if (!at.isEmpty()) {
+            sb.append("Parameters ").append(at).append(".\n");
+        }
+        List<String> cols = Distributions.columns(r);
+        if (!r.series()) {
+            DistributionResult.Line line = r.lines().get(0);
+            if (r.to().isEmpty()) {
+                sb.append("Decimals: ").append(Text.digits(digits)).append(".\n\n");
+                TextTable t = new TextTable().addRow("to", "decimal", "exact");
+                for (int j = 0; j < cols.size(); j++) {
+                    Rational e = line.distribution().get(j);
+                    t.addRow(cols.get(j), dec(e), DecimalText.toString(e));
+                }
+                sb.append(t.render());
+            } else {
+                Rational v = line.total().orElseThrow();
+                sb.append("  exact    ").append(DecimalText.toString(v)).append('\n');
+                sb.append("  decimal  ").append(dec(v)).append("  (").append(Text.digits(digits)).append(")\n");
+            }
+            return end(sb);
+        }
+        if (r.to().isEmpty()) {
+            sb.append("\nDecimals (").append(Text.digits(digits)).append("):\n");
+            TextTable overview = new TextTable();
+            List<String> head = new ArrayList<>();
+            head.add("n");
+            head.addAll(cols);
+            overview.addRow(head);
+            for (DistributionResult.Line line : r.lines()) {
+                List<String> row = new ArrayList<>();
+                row.add(String.valueOf(line.n()));
+                line.distribution().forEach(e -> row.add(dec(e)));
+                overview.addRow(row);
+            }
+            sb.append(overview.render()).append("\nExact values:\n");
+            TextTable list = new TextTable().addRow("n", "to", "decimal", "exact");
+            for (DistributionResult.Line line : r.lines()) {
+                for (int j = 0; j < cols.size(); j++) {
+                    Rational e = line.distribution().get(j);
+                    list.addRow(String.valueOf(line.n()), cols.get(j), dec(e), DecimalText.toString(e));
+                }
+            }
+            sb.append(list.render());
+        } else {
+            sb.append("Decimals: ").append(Text.digits(digits)).append(".\n\n");
+            TextTable t = new TextTable().addRow("n", "decimal", "exact");
+            for (DistributionResult.Line line : r.lines()) {
+                Rational v = line.total().orElseThrow();
+                t.addRow(String.valueOf(line.n()), dec(v), DecimalText.toString(v));
+            }
+            sb.append(t.render());
+        }
+        return end(sb);
     }
 }
