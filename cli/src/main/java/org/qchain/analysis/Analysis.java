@@ -146,7 +146,7 @@ public final class Analysis {
         model.requireDiscrete("qchain sens needs a discrete chain (continuous chains are not supported yet)");
         if (model.complete()) {
             // the value at the point is checked against the exact engine's entry: its estimate first
-            NumericEngine.guard(model, new StepQuery(q.n(), Optional.of(q.from()), Optional.of(q.to()),
+            NumericEngine.guard(model, new StepQuery(q.n(), Optional.of(q.from()), Optional.of(q.toStates().get(0)),
                 OptionalInt.empty(), q.maxDigits(), Long.MAX_VALUE, true, q.factor(), q.maxTerms()));
         }
         return Interrupts.guarded(() -> SymbolicEngine.sens(model, q, progress));

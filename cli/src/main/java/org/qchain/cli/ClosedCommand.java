@@ -87,6 +87,10 @@ final class ClosedCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state) or --start (the"
                 + " initial state)");
         }
+        if (to != null && to.contains(",")) {
+            throw new ParameterException(spec.commandLine(), "closed --to takes one state: the closed form of the"
+                + " probability of a set of states is not computed (step and sens take --to " + to + ")");
+        }
         if (startOptions.given() && from != null) {
             throw new ParameterException(spec.commandLine(), "--start and --from both name the starting state; give one");
         }

@@ -170,11 +170,24 @@ final class CsvFormatter extends Layout {
         Text.csvRecord(sb, List.of("quantity", "formula", "value", "decimal"));
         if (s.at().isEmpty()) {
             Text.csvRecord(sb, List.of("P", s.probability().plain(), "", ""));
-            Text.csvRecord(sb, List.of("dP/d" + s.wrt(), s.derivative().plain(), "", ""));
+            for (SensResult.Partial g : s.gradient()) {
+                Text.csvRecord(sb, List.of("dP/d" + g.wrt(), g.derivative().plain(), "", ""));
+            }
             return sb.toString();
         }
         SensResult.AtPoint a = s.at().get();
         Text.csvRecord(sb, List.of("P", s.probability().plain(), a.probability().toString(), dec(a.probability())));
+        if (s.isGradient()) {
+            for (SensResult.Partial g : s.gradient()) {
+                Rational d = g.value().orElseThrow();
+                Text.csvRecord(sb, List.of("dP/d" + g.wrt(), g.derivative().plain(), d.toString(), dec(d)));
+            }
+            for (SensResult.Partial g : s.gradient()) {
+                g.elasticity().ifPresent(e -> Text.csvRecord(sb, List.of("elasticity " + g.wrt(), "", e.toString(),
+                    dec(e))));
+            }
+            return sb.toString();
+        }
         Text.csvRecord(sb, List.of("dP/d" + s.wrt(), s.derivative().plain(), a.derivative().toString(),
             dec(a.derivative())));
         a.elasticity().ifPresent(e -> Text.csvRecord(sb, List.of("elasticity", "", e.toString(), dec(e))));

@@ -229,6 +229,19 @@ final class JsonFormatter extends Layout {
                     .string("elasticity_decimal", dec(a.elasticity().get()));
             }
         }
+        if (s.toStates().size() > 1) {
+            j.strings("to_states", s.toStates());
+        }
+        if (s.isGradient()) {
+            j.objects("gradient", s.gradient(), g -> {
+                Json o = Json.object().string("wrt", g.wrt()).string("derivative", g.derivative().plain());
+                g.value().ifPresent(v -> o.string("derivative_value", v.toString())
+                    .string("derivative_decimal", dec(v)));
+                g.elasticity().ifPresent(e -> o.string("elasticity", e.toString())
+                    .string("elasticity_decimal", dec(e)));
+                return o;
+            });
+        }
         if (s.sweep().isPresent()) {
             SensResult.Sweep w = s.sweep().get();
             Json sw = Json.object().string("parameter", w.parameter()).string("start", w.start().toString())

@@ -167,21 +167,33 @@ final class LatexFormatter extends Layout {
     @Override
     public String sens(SensResult s) {
         StringBuilder sb = new StringBuilder();
-        String p = "P^{" + s.n() + "}(\\text{" + Text.latex(s.from()) + "}, \\text{" + Text.latex(s.to()) + "})";
+        String toTex = s.toStates().size() == 1 ? "\\text{" + Text.latex(s.to()) + "}"
+            : "\\{" + String.join(", ", s.toStates().stream().map(t -> "\\text{" + Text.latex(t) + "}").toList())
+                + "\\}";
+        String p = "P^{" + s.n() + "}(\\text{" + Text.latex(s.from()) + "}, " + toTex + ")";
         String w = s.wrtLatex();
-        sb.append("% sensitivity to ").append(s.wrt()).append(" for ").append(Text.comment(s.source())).append(" (")
-            .append(s.kind()).append(" chain)\n\\begin{align*}\n");
+        sb.append("% sensitivity to ").append(String.join(", ", s.gradient().stream().map(SensResult.Partial::wrt)
+            .toList())).append(" for ").append(Text.comment(s.source())).append(" (")
+            .append(s.kind()).append(" chain)");
+        s.at().ifPresent(a -> sb.append("; values at ").append(Text.comment(a.point().text())).append(" (")
+            .append(a.point().origin()).append(')'));
+        sb.append("\n\\begin{align*}\n");
         List<String> lines = new ArrayList<>();
         lines.add(p + " &= " + s.probability().latex());
-        lines.add("\\frac{\\partial " + p + "}{\\partial " + w + "} &= " + s.derivative().latex());
+        for (SensResult.Partial g : s.gradient()) {
+            lines.add("\\frac{\\partial " + p + "}{\\partial " + g.wrtLatex() + "} &= " + g.derivative().latex());
+        }
         if (s.at().isPresent()) {
             SensResult.AtPoint a = s.at().get();
             lines.add("\\text{at } " + Text.latex(a.point().text()) + ": \\quad P &= "
                 + Text.frac(a.probability()) + " \\approx " + dec(a.probability()));
-            lines.add("\\frac{\\partial P}{\\partial " + w + "} &= " + Text.frac(a.derivative()) + " \\approx "
-                + dec(a.derivative()));
-            a.elasticity().ifPresent(e -> lines.add("\\frac{" + w + "}{P}\\frac{\\partial P}{\\partial " + w
-                + "} &= " + Text.frac(e) + " \\approx " + dec(e)));
+            for (SensResult.Partial g : s.gradient()) {
+                String x = g.wrtLatex();
+                Rational d = g.value().orElseThrow();
+                lines.add("\\frac{\\partial P}{\\partial " + x + "} &= " + Text.frac(d) + " \\approx " + dec(d));
+                g.elasticity().ifPresent(e -> lines.add("\\frac{" + x + "}{P}\\frac{\\partial P}{\\partial " + x
+                    + "} &= " + Text.frac(e) + " \\approx " + dec(e)));
+            }
         }
         sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
         if (s.sweep().isPresent()) {

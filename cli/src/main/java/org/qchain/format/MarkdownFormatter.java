@@ -172,20 +172,36 @@ final class MarkdownFormatter extends Layout {
     @Override
     public String sens(SensResult s) {
         StringBuilder sb = new StringBuilder();
-        sb.append("Sensitivity of **").append(Symbolic.entryName(s)).append("** to `").append(Text.code(s.wrt()))
-            .append("` for `").append(Text.code(s.source())).append("` (").append(s.kind()).append(" chain).\n\n");
+        sb.append("Sensitivity of **").append(Text.markdown(Symbolic.entryName(s))).append("** to ")
+            .append(String.join(", ", s.gradient().stream().map(g -> "`" + Text.code(g.wrt()) + "`").toList()))
+            .append(" for `").append(Text.code(s.source())).append("` (").append(s.kind()).append(" chain).\n\n");
         sb.append("| quantity | formula |\n| --- | --- |\n");
         sb.append("| P | `").append(Text.code(s.probability().plain())).append("` |\n");
-        sb.append("| dP/d").append(s.wrt()).append(" | `").append(Text.code(s.derivative().plain())).append("` |\n");
+        for (SensResult.Partial g : s.gradient()) {
+            sb.append("| dP/d").append(g.wrt()).append(" | `").append(Text.code(g.derivative().plain()))
+                .append("` |\n");
+        }
         if (s.at().isPresent()) {
             SensResult.AtPoint a = s.at().get();
-            sb.append("\nAt ").append(a.point().text()).append(":\n\n");
+            sb.append("\nAt ").append(a.point().text()).append(" (").append(a.point().origin()).append("):\n\n");
             sb.append("| quantity | exact | decimal |\n| --- | --- | --- |\n");
             sb.append("| P | ").append(a.probability()).append(" | ").append(dec(a.probability())).append(" |\n");
-            sb.append("| dP/d").append(s.wrt()).append(" | ").append(a.derivative()).append(" | ")
-                .append(dec(a.derivative())).append(" |\n");
-            a.elasticity().ifPresent(e -> sb.append("| elasticity | ").append(e).append(" | ").append(dec(e))
-                .append(" |\n"));
+            if (s.isGradient()) {
+                sb.append("\nGradient, one row per parameter x; elasticity (x/P) dP/dx:\n\n");
+                sb.append("| x | dP/dx exact | dP/dx | elasticity exact | elasticity |\n"
+                    + "| --- | --- | --- | --- | --- |\n");
+                for (SensResult.Partial g : s.gradient()) {
+                    Rational d = g.value().orElseThrow();
+                    sb.append("| ").append(g.wrt()).append(" | ").append(d).append(" | ").append(dec(d)).append(" | ")
+                        .append(g.elasticity().map(Rational::toString).orElse("")).append(" | ")
+                        .append(g.elasticity().map(this::dec).orElse("undefined (P = 0)")).append(" |\n");
+                }
+            } else {
+                sb.append("| dP/d").append(s.wrt()).append(" | ").append(a.derivative()).append(" | ")
+                    .append(dec(a.derivative())).append(" |\n");
+                a.elasticity().ifPresent(e -> sb.append("| elasticity | ").append(e).append(" | ").append(dec(e))
+                    .append(" |\n"));
+            }
         }
         if (s.sweep().isPresent()) {
             SensResult.Sweep w = s.sweep().get();

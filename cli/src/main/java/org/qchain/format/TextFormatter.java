@@ -285,12 +285,32 @@ final class TextFormatter extends Layout {
     @Override
     public String sens(SensResult s) {
         StringBuilder sb = new StringBuilder();
-        sb.append("Sensitivity of ").append(Symbolic.entryName(s)).append(" to ").append(s.wrt()).append(" for ")
+        sb.append("Sensitivity of ").append(Symbolic.entryName(s)).append(" to ")
+            .append(String.join(", ", s.gradient().stream().map(SensResult.Partial::wrt).toList())).append(" for ")
             .append(s.source()).append(" (").append(s.kind()).append(" chain), parameters ")
             .append(String.join(", ", s.parameters())).append('\n');
-        sb.append(new TextTable().addRow("P", "= " + s.probability().plain())
-            .addRow("dP/d" + s.wrt(), "= " + s.derivative().plain()).render());
-        if (s.at().isPresent()) {
+        if (s.toStates().size() > 1) {
+            sb.append("P is the probability of being in one of ").append(s.toText()).append(" after ")
+                .append(Text.steps(s.n())).append(", starting in ").append(s.from()).append(".\n");
+        }
+        TextTable formulas = new TextTable().addRow("P", "= " + s.probability().plain());
+        s.gradient().forEach(g -> formulas.addRow("dP/d" + g.wrt(), "= " + g.derivative().plain()));
+        sb.append(formulas.render());
+        if (s.isGradient() && s.at().isPresent()) {
+            SensResult.AtPoint a = s.at().get();
+            sb.append("\nAt ").append(a.point().text()).append(" (").append(a.point().origin()).append("):\n");
+            sb.append(new TextTable().addRow("", "decimal", "exact")
+                .addRow("P", dec(a.probability()), a.probability().toString()).render());
+            sb.append("\nGradient, one row per parameter x:\n");
+            TextTable t = new TextTable().addRow("x", "dP/dx", "elasticity", "dP/dx exact", "elasticity exact");
+            for (SensResult.Partial g : s.gradient()) {
+                Rational d = g.value().orElseThrow();
+                t.addRow(g.wrt(), dec(d), g.elasticity().map(this::dec).orElse("undefined (P = 0)"), d.toString(),
+                    g.elasticity().map(Rational::toString).orElse(""));
+            }
+            sb.append(t.render());
+            sb.append("Elasticity: (x/P) dP/dx, the relative change of P per relative change of x.\n");
+        } else if (s.at().isPresent()) {
             SensResult.AtPoint a = s.at().get();
             sb.append("\nAt ").append(a.point().text()).append(" (").append(a.point().origin()).append("):\n");
             TextTable t = new TextTable().addRow("", "decimal", "exact");
