@@ -25,6 +25,11 @@ final class ChainResults {
     private ChainResults() {
     }
 
+    /** The values the numeric route used and where they came from; none on the symbolic route (free parameters). */
+    private static Optional<org.qchain.result.Point> at(LoadedModel model, List<String> parameters) {
+        return parameters.isEmpty() ? model.point().filter(p -> !p.isEmpty()) : Optional.empty();
+    }
+
     /** The largest N for the first-passage distribution. */
     static final int MAX_STEPS = 100_000;
 
@@ -38,7 +43,7 @@ final class ChainResults {
                 s.periods().get(c)));
         }
         return new ClassesResult(model.source(), names, parameters, cls, names(names, s.absorbing()),
-            names(names, s.transients()), special, table(p, fmt), warnings);
+            names(names, s.transients()), special, table(p, fmt), warnings, at(model, parameters));
     }
 
     static <T> LongRunResult longRun(LoadedModel model, LongRunQuery q, Arithmetic<T> f, List<List<T>> p,
@@ -63,7 +68,7 @@ final class ChainResults {
                 + " (P + P^2 + ... + P^n)/n");
         }
         return new LongRunResult(model.source(), names, parameters, laws, abs, table(lr.limit(), fmt), lr.cesaro(),
-            lr.passage().map(m -> table(m, fmt)), warnings);
+            lr.passage().map(m -> table(m, fmt)), warnings, at(model, parameters));
     }
 
     static <T> AbsorbResult absorb(LoadedModel model, AbsorbQuery q, Arithmetic<T> f, List<List<T>> p,
@@ -120,7 +125,7 @@ final class ChainResults {
         return new AbsorbResult(model.source(), parameters, names(names, a.transientStates()),
             names(names, a.absorbingStates()), names(names, List.copyOf(made)), table(a.fundamental(), fmt),
             a.expectedSteps().stream().map(fmt).toList(), a.variance().stream().map(fmt).toList(),
-            table(a.probabilities(), fmt), rewards, passage, q.from(), warnings);
+            table(a.probabilities(), fmt), rewards, passage, q.from(), warnings, at(model, parameters));
     }
 
     private static List<String> names(List<String> names, List<Integer> idx) {

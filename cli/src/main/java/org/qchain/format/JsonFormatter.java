@@ -126,6 +126,7 @@ final class JsonFormatter extends Layout {
     }
 
     private Json common(Json j, StepResult.Header h) {
+        h.point().ifPresent(p -> j.object("at", point(p)));
         return j.number("digits", digits).string("model", h.source()).strings("warnings", h.warnings());
     }
 
@@ -475,8 +476,9 @@ final class JsonFormatter extends Layout {
                 .string("t", p.t().toString())
                 .string("decimal", p.value().text())
                 .string("status", p.value().status().name().toLowerCase(java.util.Locale.ROOT))
-                .string("bound", Continuous.bound(p.value().enclosure().width())))
-            .number("digits", digits)
+                .string("bound", Continuous.bound(p.value().enclosure().width())));
+        r.at().ifPresent(p -> j.object("at", point(p)));
+        j.number("digits", digits)
             .string("model", r.source())
             .strings("warnings", r.warnings())
             .string("caution", Caution.TEXT);
@@ -525,14 +527,16 @@ final class JsonFormatter extends Layout {
 
     @Override
     public String classes(org.qchain.result.ClassesResult r) {
-        return Json.object().string("source", r.source()).strings("states", r.states())
+        Json j = Json.object().string("source", r.source()).strings("states", r.states())
             .strings("parameters", r.parameters())
             .objects("classes", r.classes(), c -> Json.object().strings("states", c.states()).bool("closed", c.closed())
                 .number("period", c.period()))
             .strings("absorbing", r.absorbing()).strings("transient", r.transients())
             .objects("special_values", r.specialValues(), v -> Json.object().string("condition", v.condition())
                 .string("effect", v.effect()))
-            .stringRows("graph", plain(r.graph())).strings("warnings", r.warnings()).close() + "\n";
+            .stringRows("graph", plain(r.graph()));
+        r.at().ifPresent(p -> j.object("at", point(p)));
+        return j.strings("warnings", r.warnings()).close() + "\n";
     }
 
     @Override
@@ -559,6 +563,7 @@ final class JsonFormatter extends Layout {
             })
             .object("absorption_into_classes", abs).stringRows("limit", plain(r.limit())).bool("cesaro", r.cesaro());
         r.passage().ifPresent(m -> j.stringRows("passage", plain(m)));
+        r.at().ifPresent(p -> j.object("at", point(p)));
         return j.strings("warnings", r.warnings()).close() + "\n";
     }
 
@@ -591,6 +596,7 @@ final class JsonFormatter extends Layout {
             }
             j.object("first_passage", Json.object().object("exactly", ex).object("within", wi));
         });
+        r.at().ifPresent(p -> j.object("at", point(p)));
         return j.strings("warnings", r.warnings()).close() + "\n";
     }
 

@@ -27,6 +27,11 @@ final class LatexFormatter extends Layout {
         super(digits);
     }
 
+    /** {@code % parameters at w=1/10 (given with --at)}, or nothing without parameters. */
+    private static String parameters(StepResult.Header h) {
+        return h.point().map(p -> "% parameters at " + Text.comment(p.text()) + " (" + p.origin() + ")\n").orElse("");
+    }
+
     private static String caution(StringBuilder sb) {
         return sb.append("% ").append(Caution.TEXT).append('\n').toString();
     }
@@ -39,7 +44,7 @@ final class LatexFormatter extends Layout {
         StringBuilder sb = new StringBuilder();
         sb.append("% ").append(Text.power(h.n())).append(" for ").append(Text.comment(h.source())).append(" (")
             .append(h.kind()).append(" chain): row = state at the start, column = state after ")
-            .append(Text.steps(h.n())).append('\n');
+            .append(Text.steps(h.n())).append('\n').append(parameters(h));
         grid(sb, m, true);
         sb.append("% decimals: ").append(Text.digits(digits)).append('\n');
         grid(sb, m, false);
@@ -74,7 +79,7 @@ final class LatexFormatter extends Layout {
         StringBuilder sb = new StringBuilder();
         sb.append("% row ").append(Text.comment(r.from())).append(" of ").append(Text.power(h.n())).append(" for ")
             .append(Text.comment(h.source())).append(" (").append(h.kind()).append(" chain); decimals: ")
-            .append(Text.digits(digits)).append('\n');
+            .append(Text.digits(digits)).append('\n').append(parameters(h));
         sb.append("\\begin{tabular}{l|rr}\n");
         sb.append("to & exact & decimal \\\\ \\hline\n");
         for (int j = 0; j < r.states().size(); j++) {
@@ -91,7 +96,7 @@ final class LatexFormatter extends Layout {
         StepResult.Header h = s.header();
         StringBuilder sb = new StringBuilder();
         sb.append("% ").append(Text.comment(h.source())).append(" (").append(h.kind()).append(" chain); decimals: ")
-            .append(Text.digits(digits)).append('\n');
+            .append(Text.digits(digits)).append('\n').append(parameters(h));
         sb.append("$P^{").append(h.n()).append("}(\\text{").append(Text.latex(s.from())).append("}, \\text{")
             .append(Text.latex(s.to())).append("}) = ").append(Text.frac(s.value())).append(" \\approx ")
             .append(dec(s.value())).append("$\n");
@@ -367,7 +372,9 @@ final class LatexFormatter extends Layout {
     public String availability(AvailabilityResult r) {
         StringBuilder sb = new StringBuilder();
         sb.append("% Availability of ").append(Text.comment(r.source())).append("; up: ")
-            .append(Text.comment(String.join(", ", r.up()))).append('\n');
+            .append(Text.comment(String.join(", ", r.up())))
+            .append(r.at().map(p -> "; parameters at " + Text.comment(p.text()) + " (" + p.origin() + ")").orElse(""))
+            .append('\n');
         sb.append("\\begin{tabular}{lll}\n figure & exact & decimal \\\\ \\hline\n");
         for (List<String> f : Continuous.figures(r, digits)) {
             sb.append(Text.latex(f.get(0))).append(" & ").append(Text.latex(f.get(1))).append(" & ")

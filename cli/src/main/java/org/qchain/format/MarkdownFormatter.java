@@ -28,6 +28,12 @@ final class MarkdownFormatter extends Layout {
         return sb.append("\n*").append(Caution.TEXT).append("*\n").toString();
     }
 
+    /** {@code Parameters at w=1/10 (given with --at).} and a blank line, or nothing without parameters. */
+    private static String parameters(StepResult.Header h) {
+        return h.point().map(p -> "Parameters at " + Text.markdown(p.text()) + " (" + p.origin() + ").\n\n")
+            .orElse("");
+    }
+
     private static List<String> separator(int n) {
         List<String> out = new ArrayList<>();
         for (int i = 0; i < n; i++) {
@@ -48,7 +54,7 @@ final class MarkdownFormatter extends Layout {
         StringBuilder sb = new StringBuilder();
         sb.append("**").append(Text.power(h.n())).append("** for `").append(Text.code(h.source())).append("` (")
             .append(h.kind()).append(" chain): row = state at the start, column = state after ")
-            .append(Text.steps(h.n())).append(".\n\n");
+            .append(Text.steps(h.n())).append(".\n\n").append(parameters(h));
         sb.append("Exact:\n\n");
         grid(sb, m, true);
         sb.append("\nDecimal (").append(Text.digits(digits)).append("):\n\n");
@@ -81,7 +87,7 @@ final class MarkdownFormatter extends Layout {
         sb.append("Row **").append(Text.markdown(r.from())).append("** of **").append(Text.power(h.n()))
             .append("** for `").append(Text.code(h.source())).append("` (").append(h.kind())
             .append(" chain): probability of each state after ").append(Text.steps(h.n()))
-            .append(".\n\n");
+            .append(".\n\n").append(parameters(h));
         line(sb, List.of("to", "exact", "decimal"));
         line(sb, separator(3));
         for (int j = 0; j < r.states().size(); j++) {
@@ -95,7 +101,7 @@ final class MarkdownFormatter extends Layout {
     @Override
     public String stepSingle(StepResult.Single s) {
         StepResult.Header h = s.header();
-        StringBuilder sb = new StringBuilder();
+        StringBuilder sb = new StringBuilder(parameters(h));
         line(sb, List.of("model", "n", "from", "to", "exact", "decimal"));
         line(sb, separator(6));
         line(sb, List.of("`" + Text.code(h.source()) + "`", String.valueOf(h.n()), Text.markdown(s.from()),
@@ -375,7 +381,9 @@ final class MarkdownFormatter extends Layout {
     public String availability(AvailabilityResult r) {
         StringBuilder sb = new StringBuilder();
         sb.append("**Availability** of `").append(Text.code(r.source())).append("` (up: ")
-            .append(Text.markdown(String.join(", ", r.up()))).append(")\n\n");
+            .append(Text.markdown(String.join(", ", r.up()))).append(")")
+            .append(r.at().map(p -> "; parameters at " + Text.markdown(p.text()) + " (" + p.origin() + ")").orElse(""))
+            .append("\n\n");
         line(sb, List.of("figure", "exact", "decimal"));
         line(sb, separator(3));
         Continuous.figures(r, digits).forEach(f -> line(sb, f.stream().map(Text::markdown).toList()));

@@ -55,7 +55,7 @@ final class Sections {
         List<String> notes = new ArrayList<>();
         notes.add("absorbing: " + (r.absorbing().isEmpty() ? "(none)" : String.join(", ", r.absorbing())));
         notes.add("transient: " + (r.transients().isEmpty() ? "(none)" : String.join(", ", r.transients())));
-        return new Doc("Structure of " + r.source() + params(r.parameters()), t, notes);
+        return new Doc("Structure of " + r.source() + params(r.parameters()) + at(r.at()), t, notes);
     }
 
     static Doc of(LongRunResult r) {
@@ -89,7 +89,7 @@ final class Sections {
             r.limit()));
         r.passage().ifPresent(m -> t.add(matrix("Mean first-passage times (diagonal: mean recurrence)", r.states(),
             r.states(), m)));
-        return new Doc("Long run of " + r.source() + params(r.parameters()), t, List.of());
+        return new Doc("Long run of " + r.source() + params(r.parameters()) + at(r.at()), t, List.of());
     }
 
     static Doc of(AbsorbResult r) {
@@ -153,7 +153,12 @@ final class Sections {
         if (!r.made().isEmpty()) {
             notes.add("made absorbing: " + String.join(", ", r.made()));
         }
-        return new Doc("Absorption in " + r.source() + params(r.parameters()), t, notes);
+        return new Doc("Absorption in " + r.source() + params(r.parameters()) + at(r.at()), t, notes);
+    }
+
+    /** {@code "; parameters at p=1/10 (given with --at)"}, or nothing: where the values came from. */
+    private static String at(java.util.Optional<org.qchain.result.Point> point) {
+        return point.map(p -> "; parameters at " + p.text() + " (" + p.origin() + ")").orElse("");
     }
 
     private static String params(List<String> p) {

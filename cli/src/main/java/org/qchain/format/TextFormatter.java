@@ -36,6 +36,14 @@ final class TextFormatter extends Layout {
         return close(sb).toString();
     }
 
+    /**
+     * The line that says where the parameter values came from, {@code Parameters at w=1/10 (given with --at).}, or
+     * nothing for a model without parameters: the same words in every command.
+     */
+    static String parameters(java.util.Optional<org.qchain.result.Point> point) {
+        return point.map(p -> "Parameters at " + p.text() + " (" + p.origin() + ").\n").orElse("");
+    }
+
     /** Appends the caution that ends every text layout. */
     private static StringBuilder close(StringBuilder sb) {
         return sb.append('\n').append(Caution.wrapped(WIDTH)).append('\n');
@@ -56,7 +64,7 @@ final class TextFormatter extends Layout {
             .append(" chain, ").append(m.states().size()).append(m.states().size() == 1 ? " state)" : " states)")
             .append('\n');
         sb.append("Row i, column j: probability of being in state j after ").append(Text.steps(h.n()))
-            .append(", starting in state i.\n\n");
+            .append(", starting in state i.\n").append(parameters(h.point())).append('\n');
         sb.append("Decimals (").append(Text.digits(digits)).append("):\n");
         List<List<String>> decimals = new ArrayList<>();
         for (List<Rational> row : m.entries()) {
@@ -140,7 +148,8 @@ final class TextFormatter extends Layout {
         sb.append("Row ").append(r.from()).append(" of ").append(Text.power(h.n())).append(" for ").append(h.source())
             .append(" (").append(h.kind()).append(" chain)\n");
         sb.append("Probability of being in each state after ").append(Text.steps(h.n())).append(", starting in ")
-            .append(r.from()).append("; decimals to ").append(Text.digits(digits)).append(".\n\n");
+            .append(r.from()).append("; decimals to ").append(Text.digits(digits)).append(".\n")
+            .append(parameters(h.point())).append('\n');
         TextTable t = new TextTable().addRow("to", "decimal");
         for (int j = 0; j < r.states().size(); j++) {
             t.addRow(r.states().get(j), dec(r.entries().get(j)));
@@ -157,6 +166,7 @@ final class TextFormatter extends Layout {
         StringBuilder sb = new StringBuilder();
         String name = Text.power(h.n()) + "(" + s.from() + " -> " + s.to() + ")";
         sb.append(name).append(" for ").append(h.source()).append(" (").append(h.kind()).append(" chain)\n");
+        sb.append(parameters(h.point()));
         sb.append("Probability of being in ").append(s.to()).append(" after ").append(Text.steps(h.n()))
             .append(", starting in ").append(s.from()).append(":\n");
         // not a table: a long exact value must not push the decimal's note to the right
@@ -568,7 +578,8 @@ final class TextFormatter extends Layout {
     public String availability(AvailabilityResult r) {
         StringBuilder sb = new StringBuilder();
         sb.append("Availability of ").append(r.source()).append(" (continuous chain; up: ")
-            .append(String.join(", ", r.up())).append("; every other state is down)\n\n");
+            .append(String.join(", ", r.up())).append("; every other state is down)\n").append(parameters(r.at()))
+            .append('\n');
         TextTable table = new TextTable().addRow("figure", "decimal", "exact");
         for (List<String> f : Continuous.figures(r, digits)) {
             table.addRow(f.get(0), f.get(2), f.get(1));
@@ -630,10 +641,7 @@ final class TextFormatter extends Layout {
             .append(" chain)\n");
         sb.append(Character.toUpperCase(what.charAt(0))).append(what.substring(1)).append(", ")
             .append(Distributions.start(r)).append(".\n");
-        String at = Distributions.point(r);
-        if (!at.isEmpty()) {
-            sb.append("Parameters ").append(at).append(".\n");
-        }
+        sb.append(parameters(r.point()));
         List<String> cols = Distributions.columns(r);
         if (!r.series()) {
             DistributionResult.Line line = r.lines().get(0);

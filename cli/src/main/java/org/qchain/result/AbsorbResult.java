@@ -21,11 +21,13 @@ import java.util.Optional;
  * @param passage       the first-passage distribution, if asked
  * @param from          the one starting state to print, if chosen
  * @param warnings      warnings
+ * @param at the parameter values used and where they came from (nominal or {@code --at}); absent for a model
+ *           without parameters and on the symbolic route
  */
 public record AbsorbResult(String source, List<String> parameters, List<String> transients, List<String> absorbing,
                            List<String> made, List<List<Formula>> fundamental, List<Formula> expectedSteps,
                            List<Formula> variance, List<List<Formula>> probabilities, Optional<Rewards> rewards,
-                           Optional<Passage> passage, Optional<String> from, List<String> warnings) implements Result {
+                           Optional<Passage> passage, Optional<String> from, List<String> warnings, Optional<Point> at) implements Result {
     /** Copies the lists. */
     public AbsorbResult {
         parameters = List.copyOf(parameters);
@@ -37,6 +39,30 @@ public record AbsorbResult(String source, List<String> parameters, List<String> 
         variance = List.copyOf(variance);
         probabilities = probabilities.stream().map(List::copyOf).toList();
         warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * The result without parameter values (a model without parameters, or one kept symbolic).
+     *
+     * @param source as in the record
+     * @param parameters as in the record
+     * @param transients as in the record
+     * @param absorbing as in the record
+     * @param made as in the record
+     * @param fundamental as in the record
+     * @param expectedSteps as in the record
+     * @param variance as in the record
+     * @param probabilities as in the record
+     * @param rewards as in the record
+     * @param passage as in the record
+     * @param from as in the record
+     * @param warnings as in the record
+     */
+    public AbsorbResult(String source, List<String> parameters, List<String> transients, List<String> absorbing,
+        List<String> made, List<List<Formula>> fundamental, List<Formula> expectedSteps, List<Formula> variance,
+        List<List<Formula>> probabilities, Optional<Rewards> rewards, Optional<Passage> passage,
+        Optional<String> from, List<String> warnings) {
+        this(source, parameters, transients, absorbing, made, fundamental, expectedSteps, variance, probabilities, rewards, passage, from, warnings, Optional.empty());
     }
 
     /**

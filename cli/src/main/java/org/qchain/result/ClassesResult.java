@@ -1,6 +1,7 @@
 package org.qchain.result;
 
 import java.util.List;
+import java.util.Optional;
 
 /**
  * The communicating classes of a chain ({@code classes}). For free parameters, the structure for generic values
@@ -15,10 +16,12 @@ import java.util.List;
  * @param specialValues parameter values inside or on the edge of the domains that change the structure
  * @param graph         the one-step matrix (the edges of the graph), {@code graph.get(i).get(j)} for i to j
  * @param warnings      warnings
+ * @param at the parameter values used and where they came from (nominal or {@code --at}); absent for a model
+ *           without parameters and on the symbolic route
  */
 public record ClassesResult(String source, List<String> states, List<String> parameters, List<ChainClass> classes,
                             List<String> absorbing, List<String> transients, List<SpecialValue> specialValues,
-                            List<List<Formula>> graph, List<String> warnings) implements Result {
+                            List<List<Formula>> graph, List<String> warnings, Optional<Point> at) implements Result {
     /** Copies the lists. */
     public ClassesResult {
         states = List.copyOf(states);
@@ -29,6 +32,25 @@ public record ClassesResult(String source, List<String> states, List<String> par
         specialValues = List.copyOf(specialValues);
         graph = graph.stream().map(List::copyOf).toList();
         warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * The result without parameter values (a model without parameters, or one kept symbolic).
+     *
+     * @param source as in the record
+     * @param states as in the record
+     * @param parameters as in the record
+     * @param classes as in the record
+     * @param absorbing as in the record
+     * @param transients as in the record
+     * @param specialValues as in the record
+     * @param graph as in the record
+     * @param warnings as in the record
+     */
+    public ClassesResult(String source, List<String> states, List<String> parameters, List<ChainClass> classes,
+        List<String> absorbing, List<String> transients, List<SpecialValue> specialValues, List<List<Formula>> graph,
+        List<String> warnings) {
+        this(source, states, parameters, classes, absorbing, transients, specialValues, graph, warnings, Optional.empty());
     }
 
     /**

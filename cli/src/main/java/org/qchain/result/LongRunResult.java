@@ -17,10 +17,12 @@ import java.util.Optional;
  * @param cesaro     whether {@code limit} is the limit of the Cesàro averages (a closed class is periodic)
  * @param passage    mean first-passage times m_ij (m_ii the mean recurrence time), if asked
  * @param warnings   warnings
+ * @param at the parameter values used and where they came from (nominal or {@code --at}); absent for a model
+ *           without parameters and on the symbolic route
  */
 public record LongRunResult(String source, List<String> states, List<String> parameters, List<ClassLaw> classes,
                             List<Absorption> absorption, List<List<Formula>> limit, boolean cesaro,
-                            Optional<List<List<Formula>>> passage, List<String> warnings) implements Result {
+                            Optional<List<List<Formula>>> passage, List<String> warnings, Optional<Point> at) implements Result {
     /** Copies the lists. */
     public LongRunResult {
         states = List.copyOf(states);
@@ -30,6 +32,25 @@ public record LongRunResult(String source, List<String> states, List<String> par
         limit = limit.stream().map(List::copyOf).toList();
         passage = passage.map(m -> m.stream().map(List::copyOf).toList());
         warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * The result without parameter values (a model without parameters, or one kept symbolic).
+     *
+     * @param source as in the record
+     * @param states as in the record
+     * @param parameters as in the record
+     * @param classes as in the record
+     * @param absorption as in the record
+     * @param limit as in the record
+     * @param cesaro as in the record
+     * @param passage as in the record
+     * @param warnings as in the record
+     */
+    public LongRunResult(String source, List<String> states, List<String> parameters, List<ClassLaw> classes,
+        List<Absorption> absorption, List<List<Formula>> limit, boolean cesaro,
+        Optional<List<List<Formula>>> passage, List<String> warnings) {
+        this(source, states, parameters, classes, absorption, limit, cesaro, passage, warnings, Optional.empty());
     }
 
     /**

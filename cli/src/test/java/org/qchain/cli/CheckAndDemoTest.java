@@ -53,7 +53,8 @@ class CheckAndDemoTest {
         assertEquals("{\"kind\":\"discrete\",\"n\":1,\"states\":[\"Up\",\"Worn\",\"Down\"],"
             + "\"matrix\":[[\"19/20\",\"1/20\",\"0\"],[\"1/4\",\"18/25\",\"3/100\"],[\"1/2\",\"0\",\"1/2\"]],"
             + "\"decimals\":[[\"0.950\",\"0.0500\",\"0\"],[\"0.250\",\"0.720\",\"0.0300\"],[\"0.500\",\"0\",\"0.500\"]],"
-            + "\"digits\":3,\"model\":\"src/test/resources/models/plant.chain\",\"warnings\":[]}\n", r.out());
+            + "\"at\":{\"w\":\"1/20\"},\"digits\":3,\"model\":\"src/test/resources/models/plant.chain\","
+            + "\"warnings\":[]}\n", r.out());
     }
 
     @Test
@@ -75,7 +76,7 @@ class CheckAndDemoTest {
         Cli.Result md = Cli.run("check", Cli.model("plant.chain"), "--format", "markdown");
         assertEquals(0, md.code(), md::toString);
         assertTrue(md.out().startsWith("**P^1** for `src/test/resources/models/plant.chain` (discrete chain): row ="
-            + " state at the start, column = state after 1 step.\n\nExact:\n\n| from \\ to | Up | Worn | Down |\n"
+            + " state at the start, column = state after 1 step.\n\nParameters at w=1/20 (nominal values).\n\nExact:\n\n| from \\ to | Up | Worn | Down |\n"
             + "| --- | --- | --- | --- |\n| **Up** | 19/20 | 1/20 | 0 |\n"), md::toString);
         Cli.Result tex = Cli.run("check", Cli.model("plant.chain"), "--format", "latex");
         assertEquals(0, tex.code(), tex::toString);
