@@ -227,7 +227,7 @@ function _picocli_qchain_step() {
 
   local commands=""
   local flag_opts="'--certified' '--symbolic' '--factor' '--double' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '-t' '--time' '--from' '--to' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-work' '--max-terms'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-n' '--steps' '-t' '--time' '--from' '--to' '--start' '--paths' '--format' '--digits' '-o' '--output' '--max-digits' '--max-path-digits' '--max-work' '--max-terms'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -252,6 +252,9 @@ function _picocli_qchain_step() {
       return
       ;;
     '--to')
+      return
+      ;;
+    '--start')
       return
       ;;
     '--paths')
@@ -464,7 +467,8 @@ function _picocli_qchain_check() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--format' '--digits' '-o' '--output'"
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
@@ -478,8 +482,19 @@ function _picocli_qchain_check() {
     '--max-dense-states')
       return
       ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
     '--digits')
       return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
       ;;
   esac
 

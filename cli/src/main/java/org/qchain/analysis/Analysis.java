@@ -60,6 +60,9 @@ public final class Analysis {
         if (query instanceof VerifyQuery q) {
             return verify(model, q, progress);
         }
+        if (query instanceof DistributionQuery q) {
+            return distribution(model, q, progress);
+        }
         return check(model, (CheckQuery) query);
     }
 
@@ -103,6 +106,29 @@ public final class Analysis {
         }
         SizeGuard.check(model, q);
         return NumericEngine.step(model, q, progress);
+    }
+
+    /**
+     * Where the chain is after n steps from a start (a state or a distribution): the distribution, or the total
+     * probability of a set of states, for one n or a series of n. The whole series is estimated before any work; the
+     * series shares its work (each n continues from the one before).
+     *
+     * @param model    the loaded model; every used parameter needs a value (nominal or given)
+     * @param q        the query
+     * @param progress told about long work (one report per n)
+     * @return the result
+     * @throws QchainException for a continuous chain, a parameter without a value, an unknown state, a series past
+     *                         the size limit (with the estimate), an interruption
+     */
+    public static org.qchain.result.DistributionResult distribution(LoadedModel model, DistributionQuery q,
+                                                                    Progress progress) {
+        model.requireDiscrete("qchain step -n needs a discrete chain; for a continuous chain give the time: qchain step MODEL -t T");
+        if (!model.complete()) {
+            String what = q.start().option().equals("--start") ? "--start"
+                : q.to().size() > 1 ? "a --to set" : "a list or range of n";
+            throw new QchainException(AnalysisKey.DISTRIBUTION_NEEDS_VALUES, what, String.join(", ", model.free()));
+        }
+        return DistributionEngine.run(model, q, progress);
     }
 
     /**

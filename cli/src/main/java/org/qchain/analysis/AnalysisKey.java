@@ -9,7 +9,10 @@ import org.qchain.exact.MessageKey;
 public enum AnalysisKey implements MessageKey {
     /** {0}: how many paths were asked for. */
     PATHS_NEED_VALUES("the {0} most probable paths need numeric values for every parameter (the most probable paths"
-        + " of a symbolic chain depend on the parameters)");
+        + " of a symbolic chain depend on the parameters)"),
+    /** {0}: what was asked ({@code --start}, a {@code --to} set, a list of n); {1}: the parameters without a value. */
+    DISTRIBUTION_NEEDS_VALUES("{0} needs a value for every parameter (parameters without a value: {1}; give them"
+        + " with --at NAME=VALUE); formulas in the parameters are given for one n from one --from state");
 
     private final String pattern;
 

@@ -25,6 +25,11 @@ final class ChainResults {
     private ChainResults() {
     }
 
+    /** The values the numeric route used and where they came from; none on the symbolic route (free parameters). */
+    private static Optional<org.qchain.result.Point> at(LoadedModel model, List<String> parameters) {
+        return parameters.isEmpty() ? model.point().filter(p -> !p.isEmpty()) : Optional.empty();
+    }
+
     /** The largest N for the first-passage distribution. */
     static final int MAX_STEPS = 100_000;
 
@@ -39,7 +44,7 @@ final class ChainResults {
                 s.periods().get(c)));
         }
         return new ClassesResult(model.source(), names, parameters, cls, names(names, s.absorbing()),
-            names(names, s.transients()), special, brief ? List.of() : table(p, fmt), warnings, ct, brief);
+            names(names, s.transients()), special, brief ? List.of() : table(p, fmt), warnings, at(model, parameters), ct, brief);
     }
 
     /** Whether the model is a continuous-time chain (its matrix is then the generator). */
@@ -72,7 +77,7 @@ final class ChainResults {
         }
         return new LongRunResult(model.source(), names, parameters, laws, abs,
             q.brief() ? List.of() : table(lr.limit(), fmt), lr.cesaro(), lr.passage().map(m -> table(m, fmt)),
-            warnings, ct, q.brief());
+            warnings, at(model, parameters), ct, q.brief());
     }
 
     static <T> AbsorbResult absorb(LoadedModel model, AbsorbQuery q, Arithmetic<T> f, List<List<T>> p,
@@ -142,7 +147,7 @@ final class ChainResults {
         return new AbsorbResult(model.source(), parameters, names(names, a.transientStates()),
             names(names, a.absorbingStates()), names(names, List.copyOf(made)), table(a.fundamental(), fmt),
             a.expectedSteps().stream().map(fmt).toList(), a.variance().stream().map(fmt).toList(),
-            table(a.probabilities(), fmt), rewards, passage, q.from(), warnings, ct, brief);
+            table(a.probabilities(), fmt), rewards, passage, q.from(), warnings, at(model, parameters), ct, brief);
     }
 
     private static List<String> names(List<String> names, List<Integer> idx) {

@@ -90,7 +90,7 @@ final class ContinuousEngine {
         }
         return new AvailabilityResult(model.source(), upNames, states, pi, f.availability(), f.unavailability(),
             mttf, f.meanUpTime(), f.meanDownTime(), f.failureFrequency(), f.hoursPerYear(), f.downHoursPerYear(),
-            from, point, q.digits(), List.of());
+            from, point, q.digits(), List.of(), model.point().filter(p -> !p.isEmpty()));
     }
 
     /** Refuses, before any work, a P(t) whose estimated multiplications pass the query's limit. */

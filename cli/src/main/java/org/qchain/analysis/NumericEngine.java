@@ -91,7 +91,8 @@ final class NumericEngine {
     }
 
     private static StepResult.Header header(LoadedModel model, long n, List<String> warnings) {
-        return new StepResult.Header(model.source(), model.model().kind().word(), n, warnings);
+        return new StepResult.Header(model.source(), model.model().kind().word(), n, warnings,
+            model.point().filter(p -> !p.isEmpty()));
     }
 
     /**

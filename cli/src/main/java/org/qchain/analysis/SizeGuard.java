@@ -42,11 +42,13 @@ final class SizeGuard {
     static void check(LoadedModel model, SensQuery q) {
         if (model.complete()) {
             // the value at the point is checked against the exact engine's entry: its estimate first
-            NumericEngine.guard(model, new StepQuery(q.n(), Optional.of(q.from()), Optional.of(q.to()),
+            NumericEngine.guard(model, new StepQuery(q.n(), Optional.of(q.from()), Optional.of(q.toStates().get(0)),
                 OptionalInt.empty(), q.maxDigits(), Long.MAX_VALUE, true, q.factor(), q.maxTerms()));
         }
         model.state("--from", q.from());
-        model.state("--to", q.to());
+        for (String t : q.toStates()) {
+            model.state("--to", t);
+        }
         Interrupts.guarded(() -> {
             SymbolicEngine.requireWithin(model, q);
             return null;

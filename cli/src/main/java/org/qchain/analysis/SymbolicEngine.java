@@ -227,30 +227,73 @@ final class SymbolicEngine {
 
     static SensResult sens(LoadedModel model, SensQuery q, Progress progress) {
         Model m = model.model();
-        if (m.param(q.wrt()).isEmpty()) {
-            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--wrt", q.wrt(), m.params().isEmpty()
-                ? "the model declares no parameters"
-                : "not a parameter of " + m.source() + " (parameters: "
-                    + String.join(", ", m.params().stream().map(d -> d.name()).toList()) + ")");
+        for (String wrt : q.gradient()) {
+            if (m.param(wrt).isEmpty()) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "--wrt", wrt, m.params().isEmpty()
+                    ? "the model declares no parameters"
+                    : "not a parameter of " + m.source() + " (parameters: "
+                        + String.join(", ", m.params().stream().map(d -> d.name()).toList()) + ")");
+            }
+        }
+        if (q.sweep().isPresent() && q.gradient().size() > 1) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--sweep", q.sweep().get(), "a sweep tabulates one"
+                + " derivative; give one --wrt parameter with --sweep (asked: " + String.join(", ", q.gradient())
+                + "), or the gradient without --sweep");
         }
         Optional<SweepRange> range = q.sweep().map(text -> sweep(m, text));
         Checked ctx = checked(model);
         int from = model.state("--from", q.from());
-        int to = model.state("--to", q.to());
+        int[] to = q.toStates().stream().mapToInt(t -> model.state("--to", t)).toArray();
         Map<String, Rational> others = range.map(r -> others(model, r, q.sweep().get())).orElse(Map.of());
         SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
-        EntrySensitivity s = Sensitivity.of(ctx.p(), q.n(), from, to, q.wrt(), limits, multiplying(progress, q.n()));
+        List<EntrySensitivity> partials = new ArrayList<>();
+        if (to.length == 1 && q.gradient().size() == 1) {
+            partials.add(Sensitivity.of(ctx.p(), q.n(), from, to[0], q.wrt(), limits, multiplying(progress, q.n())));
+        } else {
+            for (String wrt : q.gradient()) {
+                if (ctx.p().ring().indexOf(wrt).isEmpty()) {
+                    throw new QchainException(ErrorKey.UNKNOWN_PARAMETER, wrt);
+                }
+            }
+            // one row of the power serves every final state and every parameter
+            List<RatFun> row = ctx.p().powerRow(from, q.n(), limits, multiplying(progress, q.n()));
+            RatFun sum = row.get(to[0]);
+            for (int k = 1; k < to.length; k++) {
+                sum = sum.add(row.get(to[k]));
+            }
+            for (String wrt : q.gradient()) {
+                partials.add(new EntrySensitivity(q.n(), from, to[0], wrt, sum, sum.derivative(wrt)));
+            }
+        }
+        EntrySensitivity s = partials.get(0);
         Optional<SensResult.AtPoint> at = Optional.empty();
+        List<Optional<PointSensitivity>> atEach = new ArrayList<>();
         Optional<Point> point = model.point();
-        if (point.isPresent() && model.known().containsKey(q.wrt())) {
+        if (point.isPresent() && q.gradient().stream().allMatch(model.known()::containsKey)) {
             Map<String, Rational> pt = new LinkedHashMap<>(point.get().values());
-            pt.put(q.wrt(), model.known().get(q.wrt()));
-            PointSensitivity ps = s.at(pt);
+            q.gradient().forEach(w -> pt.put(w, model.known().get(w)));
+            for (EntrySensitivity e : partials) {
+                atEach.add(Optional.of(e.at(pt)));
+            }
+            PointSensitivity ps = atEach.get(0).orElseThrow();
             // the formula's value must equal the exact engine's value of the substituted chain
-            requireEqual(ps.probability(),
-                MatrixPowers.entryOfPower(Chains.transitionMatrix(m, point.get().values()), from, to, q.n()));
+            Rational[] exactRow = MatrixPowers.rowOfPower(Chains.transitionMatrix(m, point.get().values()), from,
+                q.n());
+            Rational exact = Rational.ZERO;
+            for (int j : to) {
+                exact = exact.add(exactRow[j]);
+            }
+            requireEqual(ps.probability(), exact);
             at = Optional.of(new SensResult.AtPoint(new Point(pt, point.get().given()), ps.probability(), ps.derivative(),
                 ps.elasticity()));
+        }
+        List<SensResult.Partial> gradient = new ArrayList<>();
+        for (int k = 0; k < partials.size(); k++) {
+            EntrySensitivity e = partials.get(k);
+            Optional<PointSensitivity> ps = atEach.isEmpty() ? Optional.empty() : atEach.get(k);
+            gradient.add(new SensResult.Partial(e.parameter(), Formulas.latexName(e.parameter()),
+                new RatFunFormula(e.derivative(), q.factor()), ps.map(PointSensitivity::derivative),
+                ps.flatMap(PointSensitivity::elasticity)));
         }
         Optional<SensResult.Sweep> sweep = Optional.empty();
         if (range.isPresent()) {
@@ -274,7 +317,7 @@ final class SymbolicEngine {
         }
         return new SensResult(m.source(), m.kind().word(), q.n(), q.from(), q.to(), q.wrt(),
             Formulas.latexName(q.wrt()), m.usedParameters(), new RatFunFormula(s.probability(), q.factor()),
-            new RatFunFormula(s.derivative(), q.factor()), at, sweep, ctx.warnings());
+            new RatFunFormula(s.derivative(), q.factor()), at, sweep, ctx.warnings(), q.toStates(), gradient);
     }
 
     private static SweepRange sweep(Model m, String text) {

@@ -5,7 +5,6 @@ import java.util.concurrent.Callable;
 import org.qchain.analysis.Analysis;
 import org.qchain.analysis.CheckQuery;
 import org.qchain.analysis.LoadedModel;
-import org.qchain.format.OutputFormat;
 import org.qchain.result.CheckResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -17,7 +16,9 @@ import picocli.CommandLine.Spec;
 @Command(name = "check", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
         "Validate a model file and print its one-step matrix (exact and decimal).",
-        "The last line is \"OK: ...\" when the model is valid; any error is reported as file:line:col."})
+        "The last line is \"OK: ...\" when the model is valid (text); any error is reported as file:line:col.",
+        "--format json, csv, markdown or latex lay the same matrix out as step does (n = 1); -o FILE writes it"
+            + " atomically, never over the model file."})
 final class CheckCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -26,7 +27,7 @@ final class CheckCommand implements Callable<Integer> {
     ModelOptions model;
 
     @Mixin
-    DigitsOption digits;
+    OutputOptions output;
 
     @Option(names = "--symbolic",
         description = "Keep the parameters symbolic: print the entries as formulas and check, over the parameter"
@@ -36,11 +37,12 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         CheckResult result = Analysis.check(loaded, new CheckQuery(symbolic));
         // a symbolic check's conditions are its report (the "Conditions" section on stdout): not again on stderr
-        Emitter.emit(spec, OutputFormat.TEXT.formatter(digits.digits).format(result),
-            result instanceof CheckResult.Symbolic ? java.util.List.of() : result.warnings(), Optional.empty());
+        Emitter.emit(spec, output.formatter().format(result),
+            result instanceof CheckResult.Symbolic ? java.util.List.of() : result.warnings(), output.output());
         return ExitCodes.OK;
     }
 }

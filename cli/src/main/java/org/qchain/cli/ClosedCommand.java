@@ -5,6 +5,7 @@ import java.util.concurrent.Callable;
 import org.qchain.analysis.Analysis;
 import org.qchain.analysis.ClosedQuery;
 import org.qchain.analysis.LoadedModel;
+import org.qchain.analysis.Start;
 import org.qchain.format.OutputFormat;
 import org.qchain.result.ClosedResult;
 import picocli.CommandLine.Command;
@@ -61,9 +62,9 @@ final class ClosedCommand implements Callable<Integer> {
     @Option(names = "--to", paramLabel = "STATE", description = "Final state (needs --from): print one entry.")
     String to;
 
-    @Option(names = "--start", paramLabel = "STATE", description = "Start distribution concentrated on STATE: print"
-        + " its row (where the chain is after n steps).")
-    String start;
+    /** {@code --start}, shared with {@code step}; closed forms take one initial state. */
+    @Mixin
+    StartOptions startOptions;
 
     @Option(names = "--form", paramLabel = "FORM", converter = FormConverter.class, defaultValue = "matrix",
         description = "What to print: matrix (closed form in n, the default), gf (generating function in z) or"
@@ -82,11 +83,23 @@ final class ClosedCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (to != null && from == null) {
-            throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state)");
+        if (to != null && from == null && !startOptions.given()) {
+            throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state) or --start (the"
+                + " initial state)");
         }
-        if (start != null && from != null) {
+        if (to != null && to.contains(",")) {
+            throw new ParameterException(spec.commandLine(), "closed --to takes one state: the closed form of the"
+                + " probability of a set of states is not computed (step and sens take --to " + to + ")");
+        }
+        if (startOptions.given() && from != null) {
             throw new ParameterException(spec.commandLine(), "--start and --from both name the starting state; give one");
+        }
+        String start = null;
+        if (startOptions.given()) {
+            Start s = startOptions.start().orElseThrow();
+            start = s.single().orElseThrow(() -> new ParameterException(spec.commandLine(), "closed --start takes one"
+                + " initial state (--start Healthy); the closed form from an initial distribution is not computed"
+                + " (step --start gives its exact values for given n)"));
         }
         if (output.format == OutputFormat.CSV) {
             throw new ParameterException(spec.commandLine(),

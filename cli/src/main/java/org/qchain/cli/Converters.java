@@ -61,6 +61,81 @@ final class Converters {
         }
     }
 
+    /**
+     * Numbers of steps: one ({@code 12}), a list ({@code 1,5,10}), a range ({@code 1..30}), a stepped range in the
+     * sweep's words ({@code "0..100 by 10"}), or a mix ({@code 1..5,10,20}); sorted, each value once, at most
+     * {@value #MAX} values.
+     */
+    static final class StepSeries implements ITypeConverter<StepList> {
+        /** The most step counts one option may give. */
+        static final int MAX = 10_000;
+
+        @Override
+        public StepList convert(String value) {
+            java.util.TreeSet<Long> out = new java.util.TreeSet<>();
+            String[] items = value.split(",", -1);
+            boolean series = items.length > 1;
+            for (String raw : items) {
+                String item = raw.strip();
+                int dots = item.indexOf("..");
+                if (dots < 0) {
+                    out.add(steps(item, value));
+                } else {
+                    series = true;
+                    String rest = item.substring(dots + 2);
+                    String where = item.equals(value.strip()) ? "'" + item + "'" : "'" + item + "' in '" + value + "'";
+                    String[] byParts = rest.split("\\s+by\\s+", -1);
+                    if (byParts.length > 2 || rest.strip().startsWith("by") || rest.strip().endsWith("by")) {
+                        throw new TypeConversionException(where + ": a range is A..B or"
+                            + " \"A..B by STEP\", e.g. 1..30 or \"0..100 by 10\"");
+                    }
+                    long a = steps(item.substring(0, dots), value);
+                    long b = steps(byParts[0], value);
+                    long step = byParts.length == 2 ? whole(byParts[1].strip(), "steps", 1, Long.MAX_VALUE,
+                        "in '" + value + "': the step of a range must be at least 1") : 1;
+                    if (b < a) {
+                        throw new TypeConversionException(where + ": a range A..B needs A <= B");
+                    }
+                    for (long n = a; n <= b; n += step) {
+                        out.add(n);
+                        if (out.size() > MAX) {
+                            break;
+                        }
+                        if (n > Long.MAX_VALUE - step) {
+                            break;
+                        }
+                    }
+                }
+                if (out.size() > MAX) {
+                    throw new TypeConversionException("'" + value + "' gives more than " + MAX + " numbers of steps");
+                }
+            }
+            return new StepList(java.util.List.copyOf(out), series);
+        }
+
+        private static long steps(String text, String value) {
+            String t = text.strip();
+            if (t.isEmpty()) {
+                throw new TypeConversionException("'" + value + "': a number of steps is missing (write e.g. 1,5,10,"
+                    + " 1..30 or \"0..100 by 10\")");
+            }
+            return whole(t, "steps", 0, Long.MAX_VALUE, "is negative; the number of steps must be 0 or more");
+        }
+    }
+
+    /**
+     * The step counts an option gave, increasing, and whether it was a list or a range (one table over n).
+     *
+     * @param ns     the step counts
+     * @param series whether they were given as a list or a range, even of one value
+     */
+    record StepList(java.util.List<Long> ns, boolean series) {
+        /** The one step count of an option that gave one. */
+        long single() {
+            return ns.get(0);
+        }
+    }
+
     /** A limit on digits: an integer {@code >= 1}. */
     static final class DigitLimit implements ITypeConverter<Long> {
         @Override

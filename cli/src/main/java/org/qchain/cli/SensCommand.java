@@ -1,5 +1,7 @@
 package org.qchain.cli;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.qchain.analysis.Analysis;
@@ -47,12 +49,15 @@ final class SensCommand implements Callable<Integer> {
     @Option(names = "--from", paramLabel = "STATE", description = "Starting state.")
     String from;
 
-    @Option(names = "--to", paramLabel = "STATE", description = "State after n steps; for --of entry.")
-    String to;
+    @Option(names = "--to", paramLabel = "STATE", split = ",", splitSynopsisLabel = ",",
+        description = "State after n steps; for --of entry. Several (--to Up,Worn): P is the probability of being in"
+            + " one of them.")
+    List<String> to = new ArrayList<>();
 
-    @Option(names = "--wrt", required = true, paramLabel = "PARAM",
-        description = "The parameter p of the derivative dP/dp.")
-    String wrt;
+    @Option(names = "--wrt", required = true, paramLabel = "PARAM", split = ",", splitSynopsisLabel = ",",
+        description = "The parameter p of the derivative dP/dp; several (--wrt p,r): the gradient, one derivative and"
+            + " elasticity per parameter.")
+    List<String> wrt = new ArrayList<>();
 
     @Option(names = "--sweep", paramLabel = "\"NAME in [LOW, HIGH] by STEP\"",
         description = "A table of P and dP/dp over exact values of NAME, in the model file's interval syntax:"
@@ -74,13 +79,19 @@ final class SensCommand implements Callable<Integer> {
         if (!of.equals("entry")) {
             return figure();
         }
-        if (n == null || from == null || to == null) {
-            throw new ParameterException(spec.commandLine(), "--of entry needs -n N, --from STATE and --to STATE");
+        if (n == null || from == null || to.isEmpty()) {
+            throw new ParameterException(spec.commandLine(), to.isEmpty() || from != null
+                ? "--of entry needs -n N, --from STATE and --to STATE"
+                : "--to needs --from (the starting state; sens has no --start: for a start distribution, the"
+                    + " sensitivity is the weighted sum of those of its states)");
+        }
+        if (to.stream().distinct().count() != to.size() || wrt.stream().distinct().count() != wrt.size()) {
+            throw new ParameterException(spec.commandLine(), "a state of --to or a parameter of --wrt is given twice");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
-        SensQuery q = new SensQuery(n, from, to, wrt, Optional.ofNullable(sweep), symbolicOptions.factor,
-            symbolicOptions.maxTerms(), digitLimit.maxDigits);
+        SensQuery q = new SensQuery(n, from, String.join(",", to), wrt.get(0), Optional.ofNullable(sweep),
+            symbolicOptions.factor, symbolicOptions.maxTerms(), digitLimit.maxDigits, to, wrt);
         SensResult result = root.run(spec, progress -> Analysis.sens(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
@@ -91,13 +102,17 @@ final class SensCommand implements Callable<Integer> {
         org.qchain.exact.ctmc.RateSensitivity.Figure f = org.qchain.analysis.Figures.of(of).orElseThrow(() ->
             new ParameterException(spec.commandLine(), "--of '" + of + "': expected entry, availability,"
                 + " unavailability, mttf or failure-frequency"));
-        if (n != null || to != null || sweep != null || symbolicOptions.factor) {
+        if (wrt.size() > 1) {
+            throw new ParameterException(spec.commandLine(), "--of " + of + " takes one --wrt parameter (the gradient"
+                + " is for --of entry)");
+        }
+        if (n != null || !to.isEmpty() || sweep != null || symbolicOptions.factor) {
             throw new ParameterException(spec.commandLine(), "--of " + of + " takes --wrt, --from, --at, --digits,"
                 + " --format and --output (-n, --to, --sweep and --factor are for --of entry)");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
-        org.qchain.analysis.RateSensQuery q = new org.qchain.analysis.RateSensQuery(f, wrt, Optional.ofNullable(from));
+        org.qchain.analysis.RateSensQuery q = new org.qchain.analysis.RateSensQuery(f, wrt.get(0), Optional.ofNullable(from));
         org.qchain.result.Result result = root.run(spec, progress -> Analysis.rateSens(loaded, q));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

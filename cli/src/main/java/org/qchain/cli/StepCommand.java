@@ -1,9 +1,13 @@
 package org.qchain.cli;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import org.qchain.analysis.Analysis;
+import org.qchain.analysis.DistributionQuery;
+import org.qchain.analysis.Start;
 import org.qchain.analysis.LoadedModel;
 import org.qchain.analysis.Route;
 import org.qchain.analysis.StepQuery;
@@ -23,7 +27,11 @@ import picocli.CommandLine.Spec;
     description = {
         "Exact n-step transition probabilities P^n of a discrete chain, as fractions with decimals beside them.",
         "Without --from: the whole matrix. With --from: that row (where the chain may be after n steps).",
-        "With --from and --to: one probability; add --paths K for its K most probable paths.",
+        "With --from and --to: one probability; add --paths K for its K most probable paths. --to Up,Worn: the"
+            + " probability of being in one of those states (the sum of their entries).",
+        "--start Healthy=3/5 --start Ill=2/5 (or --start Healthy): the distribution after n steps from that start,"
+            + " the row vector start P^n.",
+        "-n 1,5,10, -n 1..30 or -n \"0..100 by 10\" (with --from or --start): one table over n, one row per n.",
         "A model with a parameter that has no value (or --symbolic) gives each entry as an exact rational function"
             + " of the parameters (--factor: factored), with its value at the nominal or --at point when every"
             + " parameter has one.",
@@ -42,9 +50,10 @@ final class StepCommand implements Callable<Integer> {
     @Mixin
     ModelOptions model;
 
-    @Option(names = {"-n", "--steps"}, paramLabel = "N", converter = Converters.Steps.class,
-        description = "Number of steps (0 or more); discrete chains.")
-    Long n;
+    @Option(names = {"-n", "--steps"}, paramLabel = "N", converter = Converters.StepSeries.class,
+        description = "Number of steps (0 or more); discrete chains. With --from or --start also a list (1,5,10), a"
+            + " range (1..30) or a stepped range (\"0..100 by 10\"): one table over n.")
+    Converters.StepList n;
 
     @Option(names = {"-t", "--time"}, paramLabel = "T", converter = Converters.Times.class,
         description = "Time(s) for a continuous chain: T, T1,T2,... or A..B:STEP (rationals, 0 or more).")
@@ -53,8 +62,13 @@ final class StepCommand implements Callable<Integer> {
     @Option(names = "--from", paramLabel = "STATE", description = "Starting state: print only its row of P^n.")
     String from;
 
-    @Option(names = "--to", paramLabel = "STATE", description = "Final state (needs --from): print one entry.")
-    String to;
+    @Option(names = "--to", paramLabel = "STATE", split = ",", splitSynopsisLabel = ",",
+        description = "Final state (needs --from or --start): print one probability; several (--to Up,Worn): the"
+            + " probability of being in one of them.")
+    List<String> to = new ArrayList<>();
+
+    @Mixin
+    StartOptions startOptions;
 
     @Option(names = "--paths", paramLabel = "K", converter = Converters.PathCount.class,
         description = "Also list the K most probable paths of n steps from --from to --to, with their exact"
@@ -108,10 +122,17 @@ final class StepCommand implements Callable<Integer> {
         if (times != null) {
             return continuous();
         }
-        if (to != null && from == null) {
-            throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state)");
+        if (!to.isEmpty() && from == null && !startOptions.given()) {
+            throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state) or --start (the"
+                + " initial state or distribution)");
         }
-        if (paths != null && (from == null || to == null)) {
+        if (startOptions.given() && from != null) {
+            throw new ParameterException(spec.commandLine(), "--start and --from both name the start; give one");
+        }
+        if (startOptions.given() || to.size() > 1 || n.series()) {
+            return distribution();
+        }
+        if (paths != null && (from == null || to.isEmpty())) {
             throw new ParameterException(spec.commandLine(), "--paths needs both --from and --to");
         }
         if (certified && paths != null) {
@@ -131,7 +152,7 @@ final class StepCommand implements Callable<Integer> {
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
-        StepQuery q = new StepQuery(n, Optional.ofNullable(from), Optional.ofNullable(to),
+        StepQuery q = new StepQuery(n.single(), Optional.ofNullable(from), to.stream().findFirst(),
             paths == null ? OptionalInt.empty() : OptionalInt.of(paths), digitLimit.maxDigits, maxPathDigits, symbolic,
             symbolicOptions.factor, symbolicOptions.maxTerms(), certified, output.digits(), maxWork);
         if (Analysis.route(loaded, q) == Route.SYMBOLIC) {
@@ -152,11 +173,38 @@ final class StepCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
+    /**
+     * {@code --start}, a {@code --to} set or a list of n: the distribution (or a set's probability) after n steps,
+     * one table over n for a list.
+     */
+    private Integer distribution() {
+        String what = startOptions.given() ? "--start" : to.size() > 1 ? "a --to set" : "a list or range of -n";
+        if (from == null && !startOptions.given()) {
+            throw new ParameterException(spec.commandLine(), what + " needs --from or --start: one table over n of a"
+                + " row, an entry or a distribution (the whole matrix is printed for one n)");
+        }
+        if (paths != null) {
+            throw new ParameterException(spec.commandLine(), "--paths lists the paths of one entry: one n, one --from"
+                + " state and one --to state (not " + what + ")");
+        }
+        if (certified || symbolic || symbolicOptions.factor || doubles) {
+            throw new ParameterException(spec.commandLine(), what + " gives exact values and decimals; it does not"
+                + " combine with --certified, --symbolic, --factor or --double");
+        }
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
+        Start start = startOptions.start().orElseGet(() -> Start.state(from, "--from"));
+        LoadedModel loaded = model.load();
+        DistributionQuery q = new DistributionQuery(n.ns(), n.series(), start, to, digitLimit.maxDigits);
+        Result result = root.run(spec, progress -> Analysis.distribution(loaded, q, progress));
+        Emitter.emit(spec, output.formatter(), result, output.output());
+        return ExitCodes.OK;
+    }
+
     /** {@code -t}: P(t) of a continuous chain as certified decimals. */
     private Integer continuous() {
-        if (to != null || paths != null || symbolic || symbolicOptions.factor) {
+        if (!to.isEmpty() || startOptions.given() || paths != null || symbolic || symbolicOptions.factor) {
             throw new ParameterException(spec.commandLine(), "-t takes --from, --digits, --max-work, --format and --output;"
-                + " --to, --paths, --symbolic and --factor are for discrete chains");
+                + " --to, --start, --paths, --symbolic and --factor are for discrete chains");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();

@@ -130,7 +130,7 @@ final class Closed {
 
     /** Where the decimals are taken: {@code " at p=1/20, r=1/4"} or empty for a chain without parameters. */
     static String pointNote(ClosedResult r) {
-        return r.point().map(p -> " at " + p.text()).orElse("");
+        return r.point().map(p -> " at " + p.text() + " (" + p.origin() + ")").orElse("");
     }
 
     /** The rate sentence: what the number means, or that the long run is reached exactly. */

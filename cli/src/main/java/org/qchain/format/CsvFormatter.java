@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -169,11 +170,24 @@ final class CsvFormatter extends Layout {
         Text.csvRecord(sb, List.of("quantity", "formula", "value", "decimal"));
         if (s.at().isEmpty()) {
             Text.csvRecord(sb, List.of("P", s.probability().plain(), "", ""));
-            Text.csvRecord(sb, List.of("dP/d" + s.wrt(), s.derivative().plain(), "", ""));
+            for (SensResult.Partial g : s.gradient()) {
+                Text.csvRecord(sb, List.of("dP/d" + g.wrt(), g.derivative().plain(), "", ""));
+            }
             return sb.toString();
         }
         SensResult.AtPoint a = s.at().get();
         Text.csvRecord(sb, List.of("P", s.probability().plain(), a.probability().toString(), dec(a.probability())));
+        if (s.isGradient()) {
+            for (SensResult.Partial g : s.gradient()) {
+                Rational d = g.value().orElseThrow();
+                Text.csvRecord(sb, List.of("dP/d" + g.wrt(), g.derivative().plain(), d.toString(), dec(d)));
+            }
+            for (SensResult.Partial g : s.gradient()) {
+                g.elasticity().ifPresent(e -> Text.csvRecord(sb, List.of("elasticity " + g.wrt(), "", e.toString(),
+                    dec(e))));
+            }
+            return sb.toString();
+        }
         Text.csvRecord(sb, List.of("dP/d" + s.wrt(), s.derivative().plain(), a.derivative().toString(),
             dec(a.derivative())));
         a.elasticity().ifPresent(e -> Text.csvRecord(sb, List.of("elasticity", "", e.toString(), dec(e))));
@@ -261,6 +275,28 @@ final class CsvFormatter extends Layout {
                 for (int c = 1; c < row.size(); c++) {
                     Text.csvRecord(sb, List.of(t.title(), row.get(0).plain(), t.header().get(c), row.get(c).plain()));
                 }
+            }
+        }
+        return sb.toString();
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    /** {@code n,from,to,value,decimal} as for a row or an entry; a series is one record per n and column. */
+    @Override
+    public String distribution(DistributionResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, entryHeader());
+        String from = Distributions.startField(r);
+        for (DistributionResult.Line line : r.lines()) {
+            if (r.to().isEmpty()) {
+                for (int j = 0; j < r.states().size(); j++) {
+                    Rational e = line.distribution().get(j);
+                    Text.csvRecord(sb, entryRecord(line.n(), from, r.states().get(j), e, e.toString()));
+                }
+            } else {
+                Rational v = line.total().orElseThrow();
+                Text.csvRecord(sb, entryRecord(line.n(), from, Distributions.toField(r), v, v.toString()));
             }
         }
         return sb.toString();

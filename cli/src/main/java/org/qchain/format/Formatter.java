@@ -69,6 +69,9 @@ public interface Formatter {
         if (result instanceof org.qchain.result.AbsorbResult a) {
             return absorb(a);
         }
+        if (result instanceof org.qchain.result.DistributionResult d) {
+            return distribution(d);
+        }
         return check((CheckResult) result);
     }
 
@@ -129,4 +132,7 @@ public interface Formatter {
 
     /** Absorption. */
     String absorb(org.qchain.result.AbsorbResult r);
+
+    /** Where the chain is after n steps from a start: a distribution, or the probability of a set of states. */
+    String distribution(org.qchain.result.DistributionResult r);
 }

@@ -45,6 +45,17 @@ public final class Json {
         return this;
     }
 
+    /** Appends an array of integers (mutates). */
+    public Json numbers(String key, List<Long> values) {
+        key(key);
+        sb.append('[');
+        for (int i = 0; i < values.size(); i++) {
+            sb.append(i > 0 ? "," : "").append(values.get(i));
+        }
+        sb.append(']');
+        return this;
+    }
+
     /** Appends a boolean member (mutates). */
     public Json bool(String key, boolean value) {
         key(key);

@@ -14,6 +14,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Point;
 import org.qchain.result.SensResult;
@@ -125,6 +126,7 @@ final class JsonFormatter extends Layout {
     }
 
     private Json common(Json j, StepResult.Header h) {
+        h.point().ifPresent(p -> j.object("at", point(p)));
         return j.number("digits", digits).string("model", h.source()).strings("warnings", h.warnings());
     }
 
@@ -227,6 +229,19 @@ final class JsonFormatter extends Layout {
                 j.string("elasticity", a.elasticity().get().toString())
                     .string("elasticity_decimal", dec(a.elasticity().get()));
             }
+        }
+        if (s.toStates().size() > 1) {
+            j.strings("to_states", s.toStates());
+        }
+        if (s.isGradient()) {
+            j.objects("gradient", s.gradient(), g -> {
+                Json o = Json.object().string("wrt", g.wrt()).string("derivative", g.derivative().plain());
+                g.value().ifPresent(v -> o.string("derivative_value", v.toString())
+                    .string("derivative_decimal", dec(v)));
+                g.elasticity().ifPresent(e -> o.string("elasticity", e.toString())
+                    .string("elasticity_decimal", dec(e)));
+                return o;
+            });
         }
         if (s.sweep().isPresent()) {
             SensResult.Sweep w = s.sweep().get();
@@ -461,8 +476,9 @@ final class JsonFormatter extends Layout {
                 .string("t", p.t().toString())
                 .string("decimal", p.value().text())
                 .string("status", p.value().status().name().toLowerCase(java.util.Locale.ROOT))
-                .string("bound", Continuous.bound(p.value().enclosure().width())))
-            .number("digits", digits)
+                .string("bound", Continuous.bound(p.value().enclosure().width())));
+        r.at().ifPresent(p -> j.object("at", point(p)));
+        j.number("digits", digits)
             .string("model", r.source())
             .strings("warnings", r.warnings())
             .string("caution", Caution.TEXT);
@@ -531,6 +547,7 @@ final class JsonFormatter extends Layout {
             .objects("special_values", r.specialValues(), v -> Json.object().string("condition", v.condition())
                 .string("effect", v.effect()))
             .stringRows("graph", plain(r.graph()));
+        r.at().ifPresent(p -> j.object("at", point(p)));
         return leftOut(j, r.brief(), "graph").strings("warnings", r.warnings()).close() + "\n";
     }
 
@@ -558,6 +575,7 @@ final class JsonFormatter extends Layout {
             })
             .object("absorption_into_classes", abs).stringRows("limit", plain(r.limit())).bool("cesaro", r.cesaro());
         r.passage().ifPresent(m -> j.stringRows("passage", plain(m)));
+        r.at().ifPresent(p -> j.object("at", point(p)));
         leftOut(j, r.brief(), "limit");
         return j.strings("warnings", r.warnings()).close() + "\n";
     }
@@ -591,7 +609,45 @@ final class JsonFormatter extends Layout {
             }
             j.object("first_passage", Json.object().object("exactly", ex).object("within", wi));
         });
+        r.at().ifPresent(p -> j.object("at", point(p)));
         leftOut(j, r.brief(), "fundamental");
         return j.strings("warnings", r.warnings()).close() + "\n";
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    @Override
+    public String distribution(DistributionResult r) {
+        if (!r.series()) {
+            return distributionStep(r, r.lines().get(0)).close() + "\n";
+        }
+        Json j = Json.object().string("kind", "series")
+            .numbers("n", r.lines().stream().map(DistributionResult.Line::n).toList());
+        j.objects("steps", r.lines(), line -> distributionStep(r, line));
+        return j.number("digits", digits).string("model", r.source()).strings("warnings", r.warnings()).close() + "\n";
+    }
+
+    /**
+     * One n as the row shape ({@code n, from, start, states, row, decimals, kind, ...}) or the entry shape
+     * ({@code n, from, start, to, to_states, value, decimal, kind, ...}) of {@code step}, with the start added.
+     */
+    private Json distributionStep(DistributionResult r, DistributionResult.Line line) {
+        Json j = Json.object().number("n", line.n());
+        r.from().ifPresent(f -> j.string("from", f));
+        Json start = Json.object();
+        r.start().forEach((k, v) -> start.string(k, v.toString()));
+        j.object("start", start);
+        if (r.to().isEmpty()) {
+            j.strings("states", r.states())
+                .strings("row", line.distribution().stream().map(DecimalText::toString).toList())
+                .strings("decimals", line.distribution().stream().map(this::dec).toList());
+        } else {
+            Rational v = line.total().orElseThrow();
+            j.string("to", String.join(",", r.to())).strings("to_states", r.to())
+                .string("value", DecimalText.toString(v)).string("decimal", dec(v));
+        }
+        j.string("kind", r.kind());
+        r.point().ifPresent(p -> j.object("at", point(p)));
+        return j.number("digits", digits).string("model", r.source()).strings("warnings", r.warnings());
     }
 }

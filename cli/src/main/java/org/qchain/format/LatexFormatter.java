@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -26,6 +27,11 @@ final class LatexFormatter extends Layout {
         super(digits);
     }
 
+    /** {@code % parameters at w=1/10 (given with --at)}, or nothing without parameters. */
+    private static String parameters(StepResult.Header h) {
+        return h.point().map(p -> "% parameters at " + Text.comment(p.text()) + " (" + p.origin() + ")\n").orElse("");
+    }
+
     private static String caution(StringBuilder sb) {
         return sb.append("% ").append(Caution.TEXT).append('\n').toString();
     }
@@ -38,7 +44,7 @@ final class LatexFormatter extends Layout {
         StringBuilder sb = new StringBuilder();
         sb.append("% ").append(Text.power(h.n())).append(" for ").append(Text.comment(h.source())).append(" (")
             .append(h.kind()).append(" chain): row = state at the start, column = state after ")
-            .append(Text.steps(h.n())).append('\n');
+            .append(Text.steps(h.n())).append('\n').append(parameters(h));
         grid(sb, m, true);
         sb.append("% decimals: ").append(Text.digits(digits)).append('\n');
         grid(sb, m, false);
@@ -73,7 +79,7 @@ final class LatexFormatter extends Layout {
         StringBuilder sb = new StringBuilder();
         sb.append("% row ").append(Text.comment(r.from())).append(" of ").append(Text.power(h.n())).append(" for ")
             .append(Text.comment(h.source())).append(" (").append(h.kind()).append(" chain); decimals: ")
-            .append(Text.digits(digits)).append('\n');
+            .append(Text.digits(digits)).append('\n').append(parameters(h));
         sb.append("\\begin{tabular}{l|rr}\n");
         sb.append("to & exact & decimal \\\\ \\hline\n");
         for (int j = 0; j < r.states().size(); j++) {
@@ -90,7 +96,7 @@ final class LatexFormatter extends Layout {
         StepResult.Header h = s.header();
         StringBuilder sb = new StringBuilder();
         sb.append("% ").append(Text.comment(h.source())).append(" (").append(h.kind()).append(" chain); decimals: ")
-            .append(Text.digits(digits)).append('\n');
+            .append(Text.digits(digits)).append('\n').append(parameters(h));
         sb.append("$P^{").append(h.n()).append("}(\\text{").append(Text.latex(s.from())).append("}, \\text{")
             .append(Text.latex(s.to())).append("}) = ").append(Text.frac(s.value())).append(" \\approx ")
             .append(dec(s.value())).append("$\n");
@@ -166,21 +172,33 @@ final class LatexFormatter extends Layout {
     @Override
     public String sens(SensResult s) {
         StringBuilder sb = new StringBuilder();
-        String p = "P^{" + s.n() + "}(\\text{" + Text.latex(s.from()) + "}, \\text{" + Text.latex(s.to()) + "})";
+        String toTex = s.toStates().size() == 1 ? "\\text{" + Text.latex(s.to()) + "}"
+            : "\\{" + String.join(", ", s.toStates().stream().map(t -> "\\text{" + Text.latex(t) + "}").toList())
+                + "\\}";
+        String p = "P^{" + s.n() + "}(\\text{" + Text.latex(s.from()) + "}, " + toTex + ")";
         String w = s.wrtLatex();
-        sb.append("% sensitivity to ").append(s.wrt()).append(" for ").append(Text.comment(s.source())).append(" (")
-            .append(s.kind()).append(" chain)\n\\begin{align*}\n");
+        sb.append("% sensitivity to ").append(String.join(", ", s.gradient().stream().map(SensResult.Partial::wrt)
+            .toList())).append(" for ").append(Text.comment(s.source())).append(" (")
+            .append(s.kind()).append(" chain)");
+        s.at().ifPresent(a -> sb.append("; values at ").append(Text.comment(a.point().text())).append(" (")
+            .append(a.point().origin()).append(')'));
+        sb.append("\n\\begin{align*}\n");
         List<String> lines = new ArrayList<>();
         lines.add(p + " &= " + s.probability().latex());
-        lines.add("\\frac{\\partial " + p + "}{\\partial " + w + "} &= " + s.derivative().latex());
+        for (SensResult.Partial g : s.gradient()) {
+            lines.add("\\frac{\\partial " + p + "}{\\partial " + g.wrtLatex() + "} &= " + g.derivative().latex());
+        }
         if (s.at().isPresent()) {
             SensResult.AtPoint a = s.at().get();
             lines.add("\\text{at } " + Text.latex(a.point().text()) + ": \\quad P &= "
                 + Text.frac(a.probability()) + " \\approx " + dec(a.probability()));
-            lines.add("\\frac{\\partial P}{\\partial " + w + "} &= " + Text.frac(a.derivative()) + " \\approx "
-                + dec(a.derivative()));
-            a.elasticity().ifPresent(e -> lines.add("\\frac{" + w + "}{P}\\frac{\\partial P}{\\partial " + w
-                + "} &= " + Text.frac(e) + " \\approx " + dec(e)));
+            for (SensResult.Partial g : s.gradient()) {
+                String x = g.wrtLatex();
+                Rational d = g.value().orElseThrow();
+                lines.add("\\frac{\\partial P}{\\partial " + x + "} &= " + Text.frac(d) + " \\approx " + dec(d));
+                g.elasticity().ifPresent(e -> lines.add("\\frac{" + x + "}{P}\\frac{\\partial P}{\\partial " + x
+                    + "} &= " + Text.frac(e) + " \\approx " + dec(e)));
+            }
         }
         sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
         if (s.sweep().isPresent()) {
@@ -354,7 +372,9 @@ final class LatexFormatter extends Layout {
     public String availability(AvailabilityResult r) {
         StringBuilder sb = new StringBuilder();
         sb.append("% Availability of ").append(Text.comment(r.source())).append("; up: ")
-            .append(Text.comment(String.join(", ", r.up()))).append('\n');
+            .append(Text.comment(String.join(", ", r.up())))
+            .append(r.at().map(p -> "; parameters at " + Text.comment(p.text()) + " (" + p.origin() + ")").orElse(""))
+            .append('\n');
         sb.append("\\begin{tabular}{lll}\n figure & exact & decimal \\\\ \\hline\n");
         for (List<String> f : Continuous.figures(r, digits)) {
             sb.append(Text.latex(f.get(0))).append(" & ").append(Text.latex(f.get(1))).append(" & ")
@@ -396,6 +416,47 @@ final class LatexFormatter extends Layout {
             for (List<org.qchain.result.Formula> row : t.rows()) {
                 sb.append(String.join(" & ", row.stream().map(f -> f.plain().isEmpty() ? "" : "$" + f.latex() + "$")
                     .toList())).append(" \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+        }
+        return caution(sb);
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    @Override
+    public String distribution(DistributionResult r) {
+        StringBuilder sb = new StringBuilder();
+        String at = Distributions.point(r);
+        sb.append("% ").append(Text.comment(Distributions.what(r, Distributions.steps(r))))
+            .append(" for ").append(Text.comment(r.source())).append(" (")
+            .append(r.kind()).append(" chain), ").append(Text.comment(Distributions.start(r)))
+            .append(at.isEmpty() ? "" : "; parameters " + Text.comment(at)).append("; decimals: ")
+            .append(Text.digits(digits)).append('\n');
+        List<String> cols = Distributions.columns(r);
+        if (!r.series()) {
+            sb.append("\\begin{tabular}{l|rr}\n");
+            sb.append("to & exact & decimal \\\\ \\hline\n");
+            List<Rational> cells = Distributions.cells(r, r.lines().get(0));
+            for (int j = 0; j < cols.size(); j++) {
+                Rational e = cells.get(j);
+                sb.append(Text.latex(cols.get(j))).append(" & ").append(cell(e, true)).append(" & ")
+                    .append(cell(e, false)).append(" \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+            return caution(sb);
+        }
+        for (boolean exact : new boolean[] {true, false}) {
+            if (!exact) {
+                sb.append("% decimals: ").append(Text.digits(digits)).append('\n');
+            }
+            sb.append("\\begin{tabular}{r|").append("r".repeat(cols.size())).append("}\n$n$");
+            cols.forEach(c -> sb.append(" & ").append(Text.latex(c)));
+            sb.append(" \\\\ \\hline\n");
+            for (DistributionResult.Line l : r.lines()) {
+                sb.append(l.n());
+                Distributions.cells(r, l).forEach(e -> sb.append(" & ").append(cell(e, exact)));
+                sb.append(" \\\\\n");
             }
             sb.append("\\end{tabular}\n");
         }

@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -25,6 +26,12 @@ final class MarkdownFormatter extends Layout {
 
     private static String caution(StringBuilder sb) {
         return sb.append("\n*").append(Caution.TEXT).append("*\n").toString();
+    }
+
+    /** {@code Parameters at w=1/10 (given with --at).} and a blank line, or nothing without parameters. */
+    private static String parameters(StepResult.Header h) {
+        return h.point().map(p -> "Parameters at " + Text.markdown(p.text()) + " (" + p.origin() + ").\n\n")
+            .orElse("");
     }
 
     private static List<String> separator(int n) {
@@ -47,7 +54,7 @@ final class MarkdownFormatter extends Layout {
         StringBuilder sb = new StringBuilder();
         sb.append("**").append(Text.power(h.n())).append("** for `").append(Text.code(h.source())).append("` (")
             .append(h.kind()).append(" chain): row = state at the start, column = state after ")
-            .append(Text.steps(h.n())).append(".\n\n");
+            .append(Text.steps(h.n())).append(".\n\n").append(parameters(h));
         sb.append("Exact:\n\n");
         grid(sb, m, true);
         sb.append("\nDecimal (").append(Text.digits(digits)).append("):\n\n");
@@ -80,7 +87,7 @@ final class MarkdownFormatter extends Layout {
         sb.append("Row **").append(Text.markdown(r.from())).append("** of **").append(Text.power(h.n()))
             .append("** for `").append(Text.code(h.source())).append("` (").append(h.kind())
             .append(" chain): probability of each state after ").append(Text.steps(h.n()))
-            .append(".\n\n");
+            .append(".\n\n").append(parameters(h));
         line(sb, List.of("to", "exact", "decimal"));
         line(sb, separator(3));
         for (int j = 0; j < r.states().size(); j++) {
@@ -94,7 +101,7 @@ final class MarkdownFormatter extends Layout {
     @Override
     public String stepSingle(StepResult.Single s) {
         StepResult.Header h = s.header();
-        StringBuilder sb = new StringBuilder();
+        StringBuilder sb = new StringBuilder(parameters(h));
         line(sb, List.of("model", "n", "from", "to", "exact", "decimal"));
         line(sb, separator(6));
         line(sb, List.of("`" + Text.code(h.source()) + "`", String.valueOf(h.n()), Text.markdown(s.from()),
@@ -171,20 +178,36 @@ final class MarkdownFormatter extends Layout {
     @Override
     public String sens(SensResult s) {
         StringBuilder sb = new StringBuilder();
-        sb.append("Sensitivity of **").append(Symbolic.entryName(s)).append("** to `").append(Text.code(s.wrt()))
-            .append("` for `").append(Text.code(s.source())).append("` (").append(s.kind()).append(" chain).\n\n");
+        sb.append("Sensitivity of **").append(Text.markdown(Symbolic.entryName(s))).append("** to ")
+            .append(String.join(", ", s.gradient().stream().map(g -> "`" + Text.code(g.wrt()) + "`").toList()))
+            .append(" for `").append(Text.code(s.source())).append("` (").append(s.kind()).append(" chain).\n\n");
         sb.append("| quantity | formula |\n| --- | --- |\n");
         sb.append("| P | `").append(Text.code(s.probability().plain())).append("` |\n");
-        sb.append("| dP/d").append(s.wrt()).append(" | `").append(Text.code(s.derivative().plain())).append("` |\n");
+        for (SensResult.Partial g : s.gradient()) {
+            sb.append("| dP/d").append(g.wrt()).append(" | `").append(Text.code(g.derivative().plain()))
+                .append("` |\n");
+        }
         if (s.at().isPresent()) {
             SensResult.AtPoint a = s.at().get();
-            sb.append("\nAt ").append(a.point().text()).append(":\n\n");
+            sb.append("\nAt ").append(a.point().text()).append(" (").append(a.point().origin()).append("):\n\n");
             sb.append("| quantity | exact | decimal |\n| --- | --- | --- |\n");
             sb.append("| P | ").append(a.probability()).append(" | ").append(dec(a.probability())).append(" |\n");
-            sb.append("| dP/d").append(s.wrt()).append(" | ").append(a.derivative()).append(" | ")
-                .append(dec(a.derivative())).append(" |\n");
-            a.elasticity().ifPresent(e -> sb.append("| elasticity | ").append(e).append(" | ").append(dec(e))
-                .append(" |\n"));
+            if (s.isGradient()) {
+                sb.append("\nGradient, one row per parameter x; elasticity (x/P) dP/dx:\n\n");
+                sb.append("| x | dP/dx exact | dP/dx | elasticity exact | elasticity |\n"
+                    + "| --- | --- | --- | --- | --- |\n");
+                for (SensResult.Partial g : s.gradient()) {
+                    Rational d = g.value().orElseThrow();
+                    sb.append("| ").append(g.wrt()).append(" | ").append(d).append(" | ").append(dec(d)).append(" | ")
+                        .append(g.elasticity().map(Rational::toString).orElse("")).append(" | ")
+                        .append(g.elasticity().map(this::dec).orElse("undefined (P = 0)")).append(" |\n");
+                }
+            } else {
+                sb.append("| dP/d").append(s.wrt()).append(" | ").append(a.derivative()).append(" | ")
+                    .append(dec(a.derivative())).append(" |\n");
+                a.elasticity().ifPresent(e -> sb.append("| elasticity | ").append(e).append(" | ").append(dec(e))
+                    .append(" |\n"));
+            }
         }
         if (s.sweep().isPresent()) {
             SensResult.Sweep w = s.sweep().get();
@@ -358,7 +381,9 @@ final class MarkdownFormatter extends Layout {
     public String availability(AvailabilityResult r) {
         StringBuilder sb = new StringBuilder();
         sb.append("**Availability** of `").append(Text.code(r.source())).append("` (up: ")
-            .append(Text.markdown(String.join(", ", r.up()))).append(")\n\n");
+            .append(Text.markdown(String.join(", ", r.up()))).append(")")
+            .append(r.at().map(p -> "; parameters at " + Text.markdown(p.text()) + " (" + p.origin() + ")").orElse(""))
+            .append("\n\n");
         line(sb, List.of("figure", "exact", "decimal"));
         line(sb, separator(3));
         Continuous.figures(r, digits).forEach(f -> line(sb, f.stream().map(Text::markdown).toList()));
@@ -405,5 +430,45 @@ final class MarkdownFormatter extends Layout {
             return Text.markdown(f.plain());
         }
         return f.plain().isEmpty() ? "" : "`" + Text.code(f.plain()) + "`";
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    @Override
+    public String distribution(DistributionResult r) {
+        StringBuilder sb = new StringBuilder();
+        String what = Distributions.what(r, Distributions.steps(r));
+        sb.append(Character.toUpperCase(what.charAt(0))).append(Text.markdown(what.substring(1)))
+            .append(" for `").append(Text.code(r.source())).append("` (")
+            .append(r.kind()).append(" chain), ").append(Text.markdown(Distributions.start(r)));
+        String at = Distributions.point(r);
+        sb.append(at.isEmpty() ? "" : "; parameters " + Text.markdown(at)).append(".\n\n");
+        List<String> cols = Distributions.columns(r);
+        if (!r.series()) {
+            line(sb, List.of("to", "exact", "decimal"));
+            line(sb, separator(3));
+            List<Rational> cells = Distributions.cells(r, r.lines().get(0));
+            for (int j = 0; j < cols.size(); j++) {
+                Rational e = cells.get(j);
+                line(sb, List.of(Text.markdown(cols.get(j)), Text.markdown(e.toString()), dec(e)));
+            }
+        } else {
+            for (boolean exact : new boolean[] {true, false}) {
+                sb.append(exact ? "Exact:\n\n" : "\nDecimal:\n\n");
+                List<String> head = new ArrayList<>();
+                head.add("n");
+                cols.forEach(c -> head.add(Text.markdown(c)));
+                line(sb, head);
+                line(sb, separator(head.size()));
+                for (DistributionResult.Line l : r.lines()) {
+                    List<String> row = new ArrayList<>();
+                    row.add(String.valueOf(l.n()));
+                    Distributions.cells(r, l).forEach(e -> row.add(exact ? Text.markdown(e.toString()) : dec(e)));
+                    line(sb, row);
+                }
+            }
+        }
+        sb.append("\nDecimals: ").append(Text.digits(digits)).append(".\n");
+        return caution(sb);
     }
 }

@@ -67,7 +67,7 @@ final class Sections {
         if (r.brief()) {
             notes.add("left out (--brief): the " + (r.continuous() ? "rate table" : "one-step graph"));
         }
-        return new Doc("Structure of " + r.source() + params(r.parameters()), t, notes);
+        return new Doc("Structure of " + r.source() + params(r.parameters()) + at(r.at()), t, notes);
     }
 
     static Doc of(LongRunResult r) {
@@ -106,7 +106,7 @@ final class Sections {
         r.passage().ifPresent(m -> t.add(matrix(r.continuous()
             ? "Mean first-passage times (diagonal: mean return time)"
             : "Mean first-passage times (diagonal: mean recurrence)", r.states(), r.states(), m)));
-        return new Doc("Long run of " + r.source() + params(r.parameters()), t, r.brief()
+        return new Doc("Long run of " + r.source() + params(r.parameters()) + at(r.at()), t, r.brief()
             ? List.of("left out (--brief): the limit matrix (each row is the probability of ending in each closed"
                 + " class times its stationary law)") : List.of());
     }
@@ -180,7 +180,12 @@ final class Sections {
         if (r.brief()) {
             notes.add("left out (--brief): the fundamental matrix N");
         }
-        return new Doc("Absorption in " + r.source() + params(r.parameters()), t, notes);
+        return new Doc("Absorption in " + r.source() + params(r.parameters()) + at(r.at()), t, notes);
+    }
+
+    /** {@code "; parameters at p=1/10 (given with --at)"}, or nothing: where the values came from. */
+    private static String at(java.util.Optional<org.qchain.result.Point> point) {
+        return point.map(p -> "; parameters at " + p.text() + " (" + p.origin() + ")").orElse("");
     }
 
     private static String params(List<String> p) {

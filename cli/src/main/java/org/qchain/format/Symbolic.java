@@ -41,7 +41,7 @@ final class Symbolic {
     }
 
     static String entryName(SensResult s) {
-        return "P^" + s.n() + "(" + s.from() + " -> " + s.to() + ")";
+        return "P^" + s.n() + "(" + s.from() + " -> " + s.toText() + ")";
     }
 
     /** The plain forms of a grid of formulas. */

@@ -12,6 +12,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -35,6 +36,14 @@ final class TextFormatter extends Layout {
         return close(sb).toString();
     }
 
+    /**
+     * The line that says where the parameter values came from, {@code Parameters at w=1/10 (given with --at).}, or
+     * nothing for a model without parameters: the same words in every command.
+     */
+    static String parameters(java.util.Optional<org.qchain.result.Point> point) {
+        return point.map(p -> "Parameters at " + p.text() + " (" + p.origin() + ").\n").orElse("");
+    }
+
     /** Appends the caution that ends every text layout. */
     private static StringBuilder close(StringBuilder sb) {
         return sb.append('\n').append(Caution.wrapped(WIDTH)).append('\n');
@@ -55,7 +64,7 @@ final class TextFormatter extends Layout {
             .append(" chain, ").append(m.states().size()).append(m.states().size() == 1 ? " state)" : " states)")
             .append('\n');
         sb.append("Row i, column j: probability of being in state j after ").append(Text.steps(h.n()))
-            .append(", starting in state i.\n\n");
+            .append(", starting in state i.\n").append(parameters(h.point())).append('\n');
         sb.append("Decimals (").append(Text.digits(digits)).append("):\n");
         List<List<String>> decimals = new ArrayList<>();
         for (List<Rational> row : m.entries()) {
@@ -139,7 +148,8 @@ final class TextFormatter extends Layout {
         sb.append("Row ").append(r.from()).append(" of ").append(Text.power(h.n())).append(" for ").append(h.source())
             .append(" (").append(h.kind()).append(" chain)\n");
         sb.append("Probability of being in each state after ").append(Text.steps(h.n())).append(", starting in ")
-            .append(r.from()).append("; decimals to ").append(Text.digits(digits)).append(".\n\n");
+            .append(r.from()).append("; decimals to ").append(Text.digits(digits)).append(".\n")
+            .append(parameters(h.point())).append('\n');
         TextTable t = new TextTable().addRow("to", "decimal");
         for (int j = 0; j < r.states().size(); j++) {
             t.addRow(r.states().get(j), dec(r.entries().get(j)));
@@ -156,6 +166,7 @@ final class TextFormatter extends Layout {
         StringBuilder sb = new StringBuilder();
         String name = Text.power(h.n()) + "(" + s.from() + " -> " + s.to() + ")";
         sb.append(name).append(" for ").append(h.source()).append(" (").append(h.kind()).append(" chain)\n");
+        sb.append(parameters(h.point()));
         sb.append("Probability of being in ").append(s.to()).append(" after ").append(Text.steps(h.n()))
             .append(", starting in ").append(s.from()).append(":\n");
         // not a table: a long exact value must not push the decimal's note to the right
@@ -284,12 +295,32 @@ final class TextFormatter extends Layout {
     @Override
     public String sens(SensResult s) {
         StringBuilder sb = new StringBuilder();
-        sb.append("Sensitivity of ").append(Symbolic.entryName(s)).append(" to ").append(s.wrt()).append(" for ")
+        sb.append("Sensitivity of ").append(Symbolic.entryName(s)).append(" to ")
+            .append(String.join(", ", s.gradient().stream().map(SensResult.Partial::wrt).toList())).append(" for ")
             .append(s.source()).append(" (").append(s.kind()).append(" chain), parameters ")
             .append(String.join(", ", s.parameters())).append('\n');
-        sb.append(new TextTable().addRow("P", "= " + s.probability().plain())
-            .addRow("dP/d" + s.wrt(), "= " + s.derivative().plain()).render());
-        if (s.at().isPresent()) {
+        if (s.toStates().size() > 1) {
+            sb.append("P is the probability of being in one of ").append(s.toText()).append(" after ")
+                .append(Text.steps(s.n())).append(", starting in ").append(s.from()).append(".\n");
+        }
+        TextTable formulas = new TextTable().addRow("P", "= " + s.probability().plain());
+        s.gradient().forEach(g -> formulas.addRow("dP/d" + g.wrt(), "= " + g.derivative().plain()));
+        sb.append(formulas.render());
+        if (s.isGradient() && s.at().isPresent()) {
+            SensResult.AtPoint a = s.at().get();
+            sb.append("\nAt ").append(a.point().text()).append(" (").append(a.point().origin()).append("):\n");
+            sb.append(new TextTable().addRow("", "decimal", "exact")
+                .addRow("P", dec(a.probability()), a.probability().toString()).render());
+            sb.append("\nGradient, one row per parameter x:\n");
+            TextTable t = new TextTable().addRow("x", "dP/dx", "elasticity", "dP/dx exact", "elasticity exact");
+            for (SensResult.Partial g : s.gradient()) {
+                Rational d = g.value().orElseThrow();
+                t.addRow(g.wrt(), dec(d), g.elasticity().map(this::dec).orElse("undefined (P = 0)"), d.toString(),
+                    g.elasticity().map(Rational::toString).orElse(""));
+            }
+            sb.append(t.render());
+            sb.append("Elasticity: (x/P) dP/dx, the relative change of P per relative change of x.\n");
+        } else if (s.at().isPresent()) {
             SensResult.AtPoint a = s.at().get();
             sb.append("\nAt ").append(a.point().text()).append(" (").append(a.point().origin()).append("):\n");
             TextTable t = new TextTable().addRow("", "decimal", "exact");
@@ -547,7 +578,8 @@ final class TextFormatter extends Layout {
     public String availability(AvailabilityResult r) {
         StringBuilder sb = new StringBuilder();
         sb.append("Availability of ").append(r.source()).append(" (continuous chain; up: ")
-            .append(String.join(", ", r.up())).append("; every other state is down)\n\n");
+            .append(String.join(", ", r.up())).append("; every other state is down)\n").append(parameters(r.at()))
+            .append('\n');
         TextTable table = new TextTable().addRow("figure", "decimal", "exact");
         for (List<String> f : Continuous.figures(r, digits)) {
             table.addRow(f.get(0), f.get(2), f.get(1));
@@ -596,5 +628,69 @@ final class TextFormatter extends Layout {
 
     private String cell(org.qchain.result.Formula f) {
         return Sections.exact(f).filter(r -> !r.isInteger()).map(r -> r + " (" + dec(r) + ")").orElse(f.plain());
+    }
+
+    // --- distributions after n steps -----------------------------------------------------------------------------
+
+    @Override
+    public String distribution(DistributionResult r) {
+        StringBuilder sb = new StringBuilder();
+        String steps = Distributions.steps(r);
+        String what = Distributions.what(r, steps);
+        sb.append(Distributions.title(r)).append(" for ").append(r.source()).append(" (").append(r.kind())
+            .append(" chain)\n");
+        sb.append(Character.toUpperCase(what.charAt(0))).append(what.substring(1)).append(", ")
+            .append(Distributions.start(r)).append(".\n");
+        sb.append(parameters(r.point()));
+        List<String> cols = Distributions.columns(r);
+        if (!r.series()) {
+            DistributionResult.Line line = r.lines().get(0);
+            if (r.to().isEmpty()) {
+                sb.append("Decimals: ").append(Text.digits(digits)).append(".\n\n");
+                TextTable t = new TextTable().addRow("to", "decimal", "exact");
+                for (int j = 0; j < cols.size(); j++) {
+                    Rational e = line.distribution().get(j);
+                    t.addRow(cols.get(j), dec(e), DecimalText.toString(e));
+                }
+                sb.append(t.render());
+            } else {
+                Rational v = line.total().orElseThrow();
+                sb.append("  exact    ").append(DecimalText.toString(v)).append('\n');
+                sb.append("  decimal  ").append(dec(v)).append("  (").append(Text.digits(digits)).append(")\n");
+            }
+            return end(sb);
+        }
+        if (r.to().isEmpty()) {
+            sb.append("\nDecimals (").append(Text.digits(digits)).append("):\n");
+            TextTable overview = new TextTable();
+            List<String> head = new ArrayList<>();
+            head.add("n");
+            head.addAll(cols);
+            overview.addRow(head);
+            for (DistributionResult.Line line : r.lines()) {
+                List<String> row = new ArrayList<>();
+                row.add(String.valueOf(line.n()));
+                line.distribution().forEach(e -> row.add(dec(e)));
+                overview.addRow(row);
+            }
+            sb.append(overview.render()).append("\nExact values:\n");
+            TextTable list = new TextTable().addRow("n", "to", "decimal", "exact");
+            for (DistributionResult.Line line : r.lines()) {
+                for (int j = 0; j < cols.size(); j++) {
+                    Rational e = line.distribution().get(j);
+                    list.addRow(String.valueOf(line.n()), cols.get(j), dec(e), DecimalText.toString(e));
+                }
+            }
+            sb.append(list.render());
+        } else {
+            sb.append("Decimals: ").append(Text.digits(digits)).append(".\n\n");
+            TextTable t = new TextTable().addRow("n", "decimal", "exact");
+            for (DistributionResult.Line line : r.lines()) {
+                Rational v = line.total().orElseThrow();
+                t.addRow(String.valueOf(line.n()), dec(v), DecimalText.toString(v));
+            }
+            sb.append(t.render());
+        }
+        return end(sb);
     }
 }

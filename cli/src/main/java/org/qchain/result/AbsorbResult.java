@@ -21,6 +21,8 @@ import java.util.Optional;
  * @param passage       the first-passage distribution, if asked
  * @param from          the one starting state to print, if chosen
  * @param warnings      warnings
+ * @param at the parameter values used and where they came from (nominal or {@code --at}); absent for a model
+ *           without parameters and on the symbolic route
  * @param continuous    whether the chain is a continuous-time one: N holds expected times in each state, the
  *                      expected steps are expected times to absorption (in the model's time unit)
  * @param brief the fundamental matrix N was left out on request ({@code --brief})
@@ -29,7 +31,7 @@ public record AbsorbResult(String source, List<String> parameters, List<String> 
                            List<String> made, List<List<Formula>> fundamental, List<Formula> expectedSteps,
                            List<Formula> variance, List<List<Formula>> probabilities, Optional<Rewards> rewards,
                            Optional<Passage> passage, Optional<String> from, List<String> warnings,
-                           boolean continuous, boolean brief) implements Result {
+                           Optional<Point> at, boolean continuous, boolean brief) implements Result {
     /** Copies the lists. */
     public AbsorbResult {
         parameters = List.copyOf(parameters);
@@ -49,7 +51,7 @@ public record AbsorbResult(String source, List<String> parameters, List<String> 
                         List<Formula> variance, List<List<Formula>> probabilities, Optional<Rewards> rewards,
                         Optional<Passage> passage, Optional<String> from, List<String> warnings) {
         this(source, parameters, transients, absorbing, made, fundamental, expectedSteps, variance, probabilities,
-            rewards, passage, from, warnings, false, false);
+            rewards, passage, from, warnings, Optional.empty(), false, false);
     }
 
     /**

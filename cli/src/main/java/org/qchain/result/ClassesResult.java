@@ -1,6 +1,7 @@
 package org.qchain.result;
 
 import java.util.List;
+import java.util.Optional;
 
 /**
  * The communicating classes of a chain ({@code classes}). For free parameters, the structure for generic values
@@ -15,12 +16,15 @@ import java.util.List;
  * @param specialValues parameter values inside or on the edge of the domains that change the structure
  * @param graph         the one-step matrix (the edges of the graph), {@code graph.get(i).get(j)} for i to j
  * @param warnings      warnings
+ * @param at the parameter values used and where they came from (nominal or {@code --at}); absent for a model
+ *           without parameters and on the symbolic route
  * @param continuous    whether the chain is a continuous-time one (the graph then holds its rates)
  * @param brief the one-step graph (or rate) table was left out on request ({@code --brief})
  */
 public record ClassesResult(String source, List<String> states, List<String> parameters, List<ChainClass> classes,
                             List<String> absorbing, List<String> transients, List<SpecialValue> specialValues,
-                            List<List<Formula>> graph, List<String> warnings, boolean continuous, boolean brief)
+                            List<List<Formula>> graph, List<String> warnings,
+    Optional<Point> at, boolean continuous, boolean brief)
     implements Result {
     /** Copies the lists. */
     public ClassesResult {
@@ -38,7 +42,7 @@ public record ClassesResult(String source, List<String> states, List<String> par
     public ClassesResult(String source, List<String> states, List<String> parameters, List<ChainClass> classes,
                          List<String> absorbing, List<String> transients, List<SpecialValue> specialValues,
                          List<List<Formula>> graph, List<String> warnings) {
-        this(source, states, parameters, classes, absorbing, transients, specialValues, graph, warnings, false, false);
+        this(source, states, parameters, classes, absorbing, transients, specialValues, graph, warnings, Optional.empty(), false, false);
     }
 
     /**

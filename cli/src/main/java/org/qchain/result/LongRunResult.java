@@ -17,12 +17,15 @@ import java.util.Optional;
  * @param cesaro     whether {@code limit} is the limit of the Cesàro averages (a closed class is periodic)
  * @param passage    mean first-passage times m_ij (m_ii the mean recurrence time), if asked
  * @param warnings   warnings
+ * @param at the parameter values used and where they came from (nominal or {@code --at}); absent for a model
+ *           without parameters and on the symbolic route
  * @param continuous whether the chain is a continuous-time one (the limit is that of P(t); times in its unit)
  * @param brief the limit matrix was left out on request ({@code --brief})
  */
 public record LongRunResult(String source, List<String> states, List<String> parameters, List<ClassLaw> classes,
                             List<Absorption> absorption, List<List<Formula>> limit, boolean cesaro,
-                            Optional<List<List<Formula>>> passage, List<String> warnings, boolean continuous, boolean brief)
+                            Optional<List<List<Formula>>> passage, List<String> warnings,
+    Optional<Point> at, boolean continuous, boolean brief)
     implements Result {
     /** Copies the lists. */
     public LongRunResult {
@@ -39,7 +42,7 @@ public record LongRunResult(String source, List<String> states, List<String> par
     public LongRunResult(String source, List<String> states, List<String> parameters, List<ClassLaw> classes,
                          List<Absorption> absorption, List<List<Formula>> limit, boolean cesaro,
                          Optional<List<List<Formula>>> passage, List<String> warnings) {
-        this(source, states, parameters, classes, absorption, limit, cesaro, passage, warnings, false, false);
+        this(source, states, parameters, classes, absorption, limit, cesaro, passage, warnings, Optional.empty(), false, false);
     }
 
     /**

@@ -21,14 +21,68 @@ import org.qchain.exact.Rational;
  * @param at          values at the point, if every parameter has a value
  * @param sweep       the sweep table, if asked for
  * @param warnings    warnings
+ * @param toStates    the final states (several: P is the probability of being in one of them); {@code to} joins them
+ *                    with commas
+ * @param gradient    one derivative per parameter asked for, the first being {@code wrt}'s
  */
 public record SensResult(String source, String kind, long n, String from, String to, String wrt, String wrtLatex,
                          List<String> parameters, Formula probability, Formula derivative, Optional<AtPoint> at,
-                         Optional<Sweep> sweep, List<String> warnings) implements Result {
+                         Optional<Sweep> sweep, List<String> warnings, List<String> toStates,
+                         List<Partial> gradient) implements Result {
     /** Copies the lists. */
     public SensResult {
         parameters = List.copyOf(parameters);
         warnings = List.copyOf(warnings);
+        toStates = List.copyOf(toStates);
+        gradient = List.copyOf(gradient);
+    }
+
+    /**
+     * The sensitivity to one parameter of the probability of one final state.
+     *
+     * @param source      the model file name
+     * @param kind        the chain kind word
+     * @param n           steps
+     * @param from        start state
+     * @param to          end state
+     * @param wrt         the parameter of the derivative
+     * @param wrtLatex    its LaTeX name
+     * @param parameters  the parameters the formulas are in
+     * @param probability P^n(from, to) as a formula
+     * @param derivative  its derivative
+     * @param at          values at the point
+     * @param sweep       the sweep table
+     * @param warnings    warnings
+     */
+    public SensResult(String source, String kind, long n, String from, String to, String wrt, String wrtLatex,
+                      List<String> parameters, Formula probability, Formula derivative, Optional<AtPoint> at,
+                      Optional<Sweep> sweep, List<String> warnings) {
+        this(source, kind, n, from, to, wrt, wrtLatex, parameters, probability, derivative, at, sweep, warnings,
+            List.of(to), List.of(new Partial(wrt, wrtLatex, derivative, at.map(AtPoint::derivative),
+                at.flatMap(AtPoint::elasticity))));
+    }
+
+    /** Whether derivatives with respect to several parameters were asked for (a gradient). */
+    public boolean isGradient() {
+        return gradient.size() > 1;
+    }
+
+    /** {@code Down}, or {@code {Up, Worn}} for several final states. */
+    public String toText() {
+        return toStates.size() == 1 ? toStates.get(0) : "{" + String.join(", ", toStates) + "}";
+    }
+
+    /**
+     * The derivative with respect to one parameter of a gradient.
+     *
+     * @param wrt          the parameter
+     * @param wrtLatex     its LaTeX name
+     * @param derivative   dP/d(wrt) as a formula
+     * @param value        its exact value at the point, if there is one
+     * @param elasticity   (wrt/P) dP/d(wrt) at the point; empty without a point or where P = 0
+     */
+    public record Partial(String wrt, String wrtLatex, Formula derivative, Optional<Rational> value,
+                          Optional<Rational> elasticity) {
     }
 
     /**

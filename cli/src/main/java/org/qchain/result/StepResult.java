@@ -30,11 +30,25 @@ public sealed interface StepResult extends Result permits StepResult.Matrix, Ste
      * @param kind     the chain kind word ({@code discrete})
      * @param n        the number of steps
      * @param warnings warnings for the user
+     * @param point    the parameter values used and where they came from (nominal or {@code --at}); absent for a
+     *                 model without parameters
      */
-    record Header(String source, String kind, long n, List<String> warnings) {
+    record Header(String source, String kind, long n, List<String> warnings, Optional<Point> point) {
         /** Copies the warnings. */
         public Header {
             warnings = List.copyOf(warnings);
+        }
+
+        /**
+         * A header without parameter values (a model without parameters).
+         *
+         * @param source   the model file name
+         * @param kind     the chain kind word
+         * @param n        the number of steps
+         * @param warnings warnings for the user
+         */
+        public Header(String source, String kind, long n, List<String> warnings) {
+            this(source, kind, n, warnings, Optional.empty());
         }
     }
 

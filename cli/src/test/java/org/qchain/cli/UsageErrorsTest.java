@@ -138,7 +138,7 @@ class UsageErrorsTest {
     @Test
     void toWithoutFromIsRefused() {
         assertUsageError(Cli.run("step", MODEL, "-n", "2", "--to", "Down"),
-            "qchain: --to needs --from (the starting state)", "qchain step");
+            "qchain: --to needs --from (the starting state) or --start (the initial state or distribution)", "qchain step");
     }
 
     @Test
