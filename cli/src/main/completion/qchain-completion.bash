@@ -616,7 +616,7 @@ function _picocli_qchain_avail() {
 
   local commands=""
   local flag_opts="'-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-t' '--time' '--from' '--hours-per-year' '--format' '--digits' '-o' '--output'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-t' '--time' '--from' '--hours-per-year' '--max-work' '--format' '--digits' '-o' '--output'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -638,6 +638,9 @@ function _picocli_qchain_avail() {
       return
       ;;
     '--hours-per-year')
+      return
+      ;;
+    '--max-work')
       return
       ;;
     '--format')

@@ -15,9 +15,11 @@ import org.qchain.exact.ctmc.Availability;
  * @param hoursPerYear hours per year for the down time, positive
  * @param digits       significant digits of the certified decimals
  * @param maxBits      the largest working precision for them, in bits
+ * @param maxWork      refuse point availabilities whose estimated work (multiplications of fixed-point numbers, as
+ *                     for {@code step -t}) passes this
  */
 public record AvailabilityQuery(Optional<String> from, List<Rational> times, Rational hoursPerYear, int digits,
-                                int maxBits) implements Query {
+                                int maxBits, long maxWork) implements Query {
     /**
      * Checks the ranges.
      *
@@ -28,6 +30,12 @@ public record AvailabilityQuery(Optional<String> from, List<Rational> times, Rat
         if (times.stream().anyMatch(t -> t.signum() < 0) || hoursPerYear.signum() <= 0 || digits < 1) {
             throw new IllegalArgumentException("need times >= 0, hours per year > 0, digits >= 1");
         }
+    }
+
+    /** With the default work limit. */
+    public AvailabilityQuery(Optional<String> from, List<Rational> times, Rational hoursPerYear, int digits,
+                             int maxBits) {
+        this(from, times, hoursPerYear, digits, maxBits, CertifiedPowers.DEFAULT_MAX_WORK);
     }
 
     /** The steady-state figures only, with 8766 hours per year and 12 digits. */

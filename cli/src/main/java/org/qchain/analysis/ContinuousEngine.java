@@ -21,9 +21,6 @@ import org.qchain.result.TransientResult;
 
 /** The numeric engine calls for continuous chains (exact and certified; no symbolic types). */
 final class ContinuousEngine {
-    /** Refuse a transient solve of more states than this (dense bounds: states squared entries per product). */
-    static final int MAX_TRANSIENT_STATES = 2000;
-
     private ContinuousEngine() {
     }
 
@@ -68,7 +65,7 @@ final class ContinuousEngine {
         int start = model.state("--from", from);
         List<AvailabilityResult.PointAvailability> point = new ArrayList<>();
         if (!q.times().isEmpty()) {
-            guard(g.rows());
+            guardWork(g, q.times(), q.digits(), q.maxWork());
         }
         for (int k = 0; k < q.times().size(); k++) {
             Rational t = q.times().get(k);
@@ -95,19 +92,17 @@ final class ContinuousEngine {
 
     /** Refuses, before any work, a P(t) whose estimated multiplications pass the query's limit. */
     static void guardWork(RationalMatrix g, TransientQuery q) {
-        CertifiedTransient.WorkEstimate e = CertifiedTransient.estimate(g, q.times(), q.digits());
-        if (e.multiplications() > q.maxWork()) {
-            throw new QchainException(ErrorKey.TRANSIENT_TOO_LARGE,
-                CertifiedTransient.WorkEstimate.roughly(e.multiplications()), e.bits(), e.states(), e.rates(),
-                e.times(), CertifiedTransient.WorkEstimate.roughly(e.largestRateTime()), q.maxWork(),
-                NumericEngine.MAX_WORK_OPTION);
-        }
+        guardWork(g, q.times(), q.digits(), q.maxWork());
     }
 
-    static void guard(int n) {
-        if (n > MAX_TRANSIENT_STATES) {
-            throw new QchainException(ErrorKey.BAD_ARGUMENT, "MODEL", n + " states",
-                "transient probabilities are computed for at most " + MAX_TRANSIENT_STATES + " states");
+    /** Refuses, before any work, a P(t) at these times whose estimated multiplications pass {@code maxWork}. */
+    static void guardWork(RationalMatrix g, List<Rational> times, int digits, long maxWork) {
+        CertifiedTransient.WorkEstimate e = CertifiedTransient.estimate(g, times, digits);
+        if (e.multiplications() > maxWork) {
+            throw new QchainException(ErrorKey.TRANSIENT_TOO_LARGE,
+                CertifiedTransient.WorkEstimate.roughly(e.multiplications()), e.bits(), e.states(), e.rates(),
+                e.times(), CertifiedTransient.WorkEstimate.roughly(e.largestRateTime()), maxWork,
+                NumericEngine.MAX_WORK_OPTION);
         }
     }
 

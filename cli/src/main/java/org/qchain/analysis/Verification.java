@@ -139,7 +139,8 @@ final class Verification {
      */
     private static VerifyResult transientCheck(LoadedModel model, VerifyQuery q, Progress progress) {
         RationalMatrix g = model.generator("qchain verify -t");
-        ContinuousEngine.guard(g.rows());
+        // the work of P(t) at the working precision (77 digits = 256 bits), refused past the default limit
+        ContinuousEngine.guardWork(g, List.of(q.t().get()), 77, org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_WORK);
         if (!isPower(q.what())) {
             throw new QchainException(ErrorKey.NOT_APPLICABLE, "verify -t",
                 "-t checks P(t), its rows or entries (--what matrix, row or entry), not " + q.what().word());

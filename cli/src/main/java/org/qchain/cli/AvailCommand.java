@@ -48,6 +48,12 @@ final class AvailCommand implements Callable<Integer> {
             + " rates must then be per hour).")
     Rational hoursPerYear;
 
+    @Option(names = "--max-work", paramLabel = "W", converter = Converters.WorkLimit.class,
+        defaultValue = "" + CertifiedPowers.DEFAULT_MAX_WORK,
+        description = "With -t: refuse point availabilities estimated to need more than W multiplications of"
+            + " fixed-point numbers (default: ${DEFAULT-VALUE}).")
+    long maxWork = CertifiedPowers.DEFAULT_MAX_WORK;
+
     @Mixin
     OutputOptions output;
 
@@ -57,7 +63,7 @@ final class AvailCommand implements Callable<Integer> {
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         AvailabilityQuery q = new AvailabilityQuery(Optional.ofNullable(from),
-            times == null ? List.of() : times.times(), h, output.digits(), CertifiedPowers.DEFAULT_MAX_BITS);
+            times == null ? List.of() : times.times(), h, output.digits(), CertifiedPowers.DEFAULT_MAX_BITS, maxWork);
         Result result = root.run(spec, progress -> Analysis.availability(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

@@ -30,11 +30,13 @@ class BriefTablesTest {
         assertEquals("{\"source\":\"" + Cli.model("beacon.chain") + "\",\"states\":[\"Lit\",\"Dark\"],"
             + "\"parameters\":[],\"classes\":[{\"states\":[\"Lit\",\"Dark\"],\"closed\":true,\"period\":1,"
             + "\"stationary\":{\"Lit\":\"3/7\",\"Dark\":\"4/7\"},\"mean_recurrence\":{\"Lit\":\"7/3\",\"Dark\":\"7/4\"}}],"
-            + "\"absorption_into_classes\":{},\"limit\":[],\"cesaro\":false,\"left_out\":[\"limit\"],\"warnings\":[]}\n",
+            + "\"absorption_into_classes\":{},\"limit\":[],\"cesaro\":false,\"at\":{\"a\":\"1/3\",\"b\":\"1/4\"},"
+            + "\"left_out\":[\"limit\"],\"warnings\":[]}\n",
             r.out());
         Cli.Result c = Cli.run("classes", Cli.model("beacon.chain"), "--at", "a=1/3", "--at", "b=1/4", "--brief");
         assertEquals(0, c.code(), c::toString);
-        assertEquals("Structure of " + Cli.model("beacon.chain") + "\nabsorbing: (none)\ntransient: (none)\n"
+        assertEquals("Structure of " + Cli.model("beacon.chain") + "; parameters at a=1/3, b=1/4 (given with --at)\n"
+            + "absorbing: (none)\ntransient: (none)\n"
             + "left out (--brief): the one-step graph\n\nCommunicating classes\n  class  states    kind    period\n"
             + "  0      Lit Dark  closed  1\n\nCaution: results are only as good as the model; safety-critical use"
             + " follows the applicable standards, local codes and licensed engineering review.\n", c.out());

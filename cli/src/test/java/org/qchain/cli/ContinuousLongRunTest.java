@@ -30,7 +30,8 @@ class ContinuousLongRunTest {
     void classesOfARateGraph() {
         Cli.Result r = Cli.run("classes", GEN);
         assertEquals(0, r.code(), r::toString);
-        assertEquals("Structure of " + GEN + "\nabsorbing: (none)\ntransient: (none)\n\n"
+        assertEquals("Structure of " + GEN + "; parameters at lam=1/500, mu=1/12 (nominal values)\n"
+            + "absorbing: (none)\ntransient: (none)\n\n"
             + "Communicating classes\n  class  states         kind\n  0      Both One None  closed\n\n"
             + "Rates (entry from row to column; blank: no transition; diagonal: minus the total rate out)\n"
             + "        Both                        One                         None\n"
