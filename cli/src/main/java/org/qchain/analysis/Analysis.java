@@ -60,6 +60,15 @@ public final class Analysis {
         if (query instanceof VerifyQuery q) {
             return verify(model, q, progress);
         }
+        if (query instanceof LongRunQuery q) {
+            return longRun(model, q);
+        }
+        if (query instanceof AbsorbQuery q) {
+            return absorb(model, q);
+        }
+        if (query instanceof ClassesQuery q) {
+            return classes(model, q.limits());
+        }
         return check(model, (CheckQuery) query);
     }
 

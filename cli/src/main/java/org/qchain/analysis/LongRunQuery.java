@@ -8,7 +8,7 @@ package org.qchain.analysis;
  * @param maxDigits refuse exact results estimated past this many digits
  * @param maxStates refuse symbolic solves of more states than this
  */
-public record LongRunQuery(boolean passage, boolean symbolic, long maxDigits, int maxStates) {
+public record LongRunQuery(boolean passage, boolean symbolic, long maxDigits, int maxStates) implements Query {
     /** The default limit on the digits of an exact result. */
     public static final long DEFAULT_MAX_DIGITS = org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS;
     /** The default limit on the states of a symbolic solve. */
