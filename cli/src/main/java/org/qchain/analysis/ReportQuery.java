@@ -27,16 +27,21 @@ import org.qchain.exact.Rational;
  * @param digits     significant digits of the decimals
  * @param maxTerms   the symbolic term limit of the queries that take one
  * @param maxDigits  the digit limit of the queries that take one
+ * @param closedMaxStates the closed form is derived for chains of at most this many states; larger chains get a
+ *                   note instead (the closed form of a dense 20-state chain takes about half a minute)
  */
 public record ReportQuery(Set<ReportSection> sections, List<Long> steps, List<Rational> times, Optional<String> from,
                           List<String> to, long plotSteps, Optional<Rational> plotTime, Optional<String> sensTo,
-                          OptionalLong sensSteps, Optional<String> sweep, int digits, long maxTerms, long maxDigits) {
+                          OptionalLong sensSteps, Optional<String> sweep, int digits, long maxTerms, long maxDigits,
+                          int closedMaxStates) {
     /** Curves of a P^n plot when no target is chosen: every state up to this many states. */
     public static final int MAX_DEFAULT_CURVES = 6;
     /** The default last n of the P^n plot. */
     public static final long DEFAULT_PLOT_STEPS = 30;
     /** Points of a continuous plot. */
     public static final int CONTINUOUS_POINTS = 41;
+    /** The default of {@code closedMaxStates}: a dense 12-state chain's closed form takes a few seconds. */
+    public static final int DEFAULT_CLOSED_MAX_STATES = 12;
     /** The default n of the n-step results. */
     public static final List<Long> DEFAULT_STEPS = List.of(1L, 5L, 10L);
     /** The default times of P(t). */
@@ -62,13 +67,14 @@ public record ReportQuery(Set<ReportSection> sections, List<Long> steps, List<Ra
     public static ReportQuery defaults() {
         return new ReportQuery(EnumSet.allOf(ReportSection.class), DEFAULT_STEPS, DEFAULT_TIMES, Optional.empty(),
             List.of(), DEFAULT_PLOT_STEPS, Optional.empty(), Optional.empty(), OptionalLong.empty(), Optional.empty(),
-            12, StepQuery.DEFAULT_MAX_TERMS, org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS);
+            12, StepQuery.DEFAULT_MAX_TERMS, org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS,
+            DEFAULT_CLOSED_MAX_STATES);
     }
 
     /** This query with only the given sections. */
     public ReportQuery withSections(Set<ReportSection> s) {
         return new ReportQuery(s, steps, times, from, to, plotSteps, plotTime, sensTo, sensSteps, sweep, digits,
-            maxTerms, maxDigits);
+            maxTerms, maxDigits, closedMaxStates);
     }
 
     /** Whether the section is included. */

@@ -167,7 +167,9 @@ final class ReportCommand implements Callable<Integer> {
             to == null ? List.of() : to, plotSteps == null ? defaults.plotSteps() : Math.max(1, plotSteps),
             Optional.ofNullable(plotTime), Optional.ofNullable(sensTo),
             sensSteps == null ? OptionalLong.empty() : OptionalLong.of(sensSteps), Optional.ofNullable(sweep),
-            digitsOption.digits, termLimit.maxTerms, digitLimit.maxDigits);
+            digitsOption.digits, termLimit.maxTerms, digitLimit.maxDigits,
+            sections != null && chosen.contains(ReportSection.CLOSED) ? Integer.MAX_VALUE
+                : ReportQuery.DEFAULT_CLOSED_MAX_STATES);
         ReportResult result = root.run(spec, progress -> Report.run(loaded, q, progress));
         ReportLayout.Files files = f.layout(digitsOption.digits).render(result, base);
         List<Path> written = new ArrayList<>();

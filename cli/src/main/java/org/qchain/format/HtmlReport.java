@@ -31,8 +31,8 @@ final class HtmlReport extends ReportWriter {
 
     @Override
     void begin(String title) {
-        out.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
-            .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n<title>")
+        out.append("<!DOCTYPE html>\n<html xmlns=\"http://www.w3.org/1999/xhtml\" lang=\"en\">\n<head>\n<meta charset=\"utf-8\"/>\n")
+            .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\"/>\n<title>")
             .append(esc(title)).append("</title>\n<style>\n").append(STYLE).append("</style>\n</head>\n<body>\n<main>\n")
             .append("<h1>").append(esc(title)).append("</h1>\n");
     }

@@ -25,15 +25,22 @@ final class SvgPlot {
     /** The plot as an {@code <svg>} element. */
     static String svg(ReportResult.Plot plot) {
         PlotAxes a = PlotAxes.of(plot);
+        int rows = 0;
+        for (ReportResult.Series s : plot.series()) {
+            rows += s.limit().isPresent() ? 2 : 1;
+        }
+        // the legend sits below the axis label, two entries a line
+        int legendLines = (rows + 1) / 2;
+        int height = HEIGHT + legendLines * 18 + 8;
         double w = WIDTH - LEFT - RIGHT;
         double h = HEIGHT - TOP - BOTTOM;
         StringBuilder sb = new StringBuilder();
         sb.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"plot\" id=\"plot-").append(xml(plot.id()))
-            .append("\" width=\"").append(WIDTH).append("\" height=\"").append(HEIGHT).append("\" viewBox=\"0 0 ")
-            .append(WIDTH).append(' ').append(HEIGHT).append("\" role=\"img\" aria-label=\"").append(xml(plot.title()))
+            .append("\" width=\"").append(WIDTH).append("\" height=\"").append(height).append("\" viewBox=\"0 0 ")
+            .append(WIDTH).append(' ').append(height).append("\" role=\"img\" aria-label=\"").append(xml(plot.title()))
             .append("\" font-family=\"sans-serif\" font-size=\"12\">\n");
         sb.append("<title>").append(xml(plot.title())).append("</title>\n");
-        sb.append("<rect x=\"0\" y=\"0\" width=\"").append(WIDTH).append("\" height=\"").append(HEIGHT)
+        sb.append("<rect x=\"0\" y=\"0\" width=\"").append(WIDTH).append("\" height=\"").append(height)
             .append("\" fill=\"#ffffff\"/>\n");
         sb.append("<text x=\"").append(WIDTH / 2).append("\" y=\"22\" text-anchor=\"middle\" font-size=\"14\">")
             .append(xml(plot.title())).append("</text>\n");
@@ -77,38 +84,29 @@ final class SvgPlot {
             }
             sb.append("\"/>\n");
         }
-        // legend, top right inside the frame
-        int lx = LEFT + (int) w - 10;
-        int ly = TOP + 16;
-        int rows = 0;
-        for (ReportResult.Series s : plot.series()) {
-            rows += s.limit().isPresent() ? 2 : 1;
-        }
-        int boxW = 230;
-        sb.append("<g class=\"legend\"><rect x=\"").append(lx - boxW).append("\" y=\"").append(ly - 12)
-            .append("\" width=\"").append(boxW).append("\" height=\"").append(rows * 16 + 6)
-            .append("\" fill=\"#ffffff\" fill-opacity=\"0.85\" stroke=\"#999999\"/>\n");
-        int row = 0;
+        // legend below the frame: a solid line per curve, a dashed one per limit
+        sb.append("<g class=\"legend\">\n");
+        int item = 0;
         for (int k = 0; k < plot.series().size(); k++) {
             ReportResult.Series s = plot.series().get(k);
             String c = COLOURS[k % COLOURS.length];
-            int y = ly + row * 16;
-            sb.append("<line x1=\"").append(lx - boxW + 8).append("\" y1=\"").append(y - 4).append("\" x2=\"")
-                .append(lx - boxW + 32).append("\" y2=\"").append(y - 4).append("\" stroke=\"").append(c)
-                .append("\" stroke-width=\"2\"/><text x=\"").append(lx - boxW + 38).append("\" y=\"").append(y)
-                .append("\">").append(xml(s.label())).append("</text>\n");
-            row++;
+            item = legendItem(sb, item, c, false, xml(s.label()));
             if (s.limit().isPresent()) {
-                y = ly + row * 16;
-                sb.append("<line x1=\"").append(lx - boxW + 8).append("\" y1=\"").append(y - 4).append("\" x2=\"")
-                    .append(lx - boxW + 32).append("\" y2=\"").append(y - 4).append("\" stroke=\"").append(c)
-                    .append("\" stroke-dasharray=\"6 4\"/><text x=\"").append(lx - boxW + 38).append("\" y=\"")
-                    .append(y).append("\">limit ").append(decimal(s.limit().get())).append("</text>\n");
-                row++;
+                item = legendItem(sb, item, c, true, "limit " + decimal(s.limit().get()));
             }
         }
         sb.append("</g>\n</svg>");
         return sb.toString();
+    }
+
+    private static int legendItem(StringBuilder sb, int item, String colour, boolean dashed, String text) {
+        int x = LEFT + (item % 2) * 280;
+        int y = HEIGHT + 8 + (item / 2) * 18;
+        sb.append("<line x1=\"").append(x).append("\" y1=\"").append(y - 4).append("\" x2=\"").append(x + 24)
+            .append("\" y2=\"").append(y - 4).append("\" stroke=\"").append(colour).append("\" stroke-width=\"2\"")
+            .append(dashed ? " stroke-dasharray=\"6 4\"" : "").append("/><text x=\"").append(x + 30).append("\" y=\"")
+            .append(y).append("\">").append(text).append("</text>\n");
+        return item + 1;
     }
 
     static String decimal(Rational r) {
