@@ -71,13 +71,30 @@ final class LatexReport extends ReportWriter {
         out.append(level <= 2 ? "\\section*{" : "\\subsection*{").append(text(s)).append("}\n\n");
     }
 
+    /** Formulas longer than this many characters of LaTeX are set so that lines may break inside them. */
+    static final int LONG_FORMULA = 160;
+
+    /**
+     * Math that TeX may break across lines: {@code \left( \right)} groups (which never break) become plain
+     * parentheses, so the binary operators inside them are break points of the paragraph.
+     */
+    static String breakable(String latex) {
+        return latex.replace("\\left(", "(").replace("\\right)", ")").replace("\\left|", "|")
+            .replace("\\right|", "|");
+    }
+
     private String spans(List<Span> spans) {
+        return spans(spans, false);
+    }
+
+    private String spans(List<Span> spans, boolean inTable) {
         StringBuilder sb = new StringBuilder();
         for (Span s : spans) {
             if (s instanceof Txt x) {
                 sb.append(text(x.text()));
             } else if (s instanceof Math m) {
-                sb.append('$').append(m.formula().latex()).append('$');
+                String l = m.formula().latex();
+                sb.append('$').append(inTable || l.length() <= LONG_FORMULA ? l : breakable(l)).append('$');
             } else if (s instanceof Code c) {
                 sb.append("\\texttt{").append(Text.latex(c.text())).append('}');
             }
@@ -109,7 +126,7 @@ final class LatexReport extends ReportWriter {
         out.append(" \\\\\n\\midrule\n");
         for (List<List<Span>> row : rows) {
             for (int k = 0; k < row.size(); k++) {
-                out.append(k > 0 ? " & " : "").append(spans(row.get(k)));
+                out.append(k > 0 ? " & " : "").append(spans(row.get(k), true));
             }
             out.append(" \\\\\n");
         }
@@ -118,6 +135,11 @@ final class LatexReport extends ReportWriter {
 
     @Override
     void display(Formula f) {
+        if (f.latex().length() > LONG_FORMULA) {
+            // too long for one line at a readable size: a ragged paragraph whose lines break at the operators
+            out.append("\\begin{flushleft}\n$").append(breakable(f.latex())).append("$\n\\end{flushleft}\n\n");
+            return;
+        }
         out.append("\\begin{center}\n").append(FIT).append("$\\displaystyle ").append(f.latex()).append("$}\n")
             .append("\\end{center}\n\n");
     }
