@@ -114,7 +114,9 @@ final class HtmlReport extends ReportWriter {
     @Override
     void diagram(String title, ReportResult.DiagramSection d) {
         out.append("<figure class=\"diagram\">\n").append(StateDiagram.svg(title, d)).append("\n<figcaption>")
-            .append(esc(title)).append(" (edge labels: the one-step probabilities or rates)</figcaption>\n</figure>\n");
+            .append(esc(title)).append(StateDiagram.labelled(d) ? " (edge labels: the one-step probabilities or rates)"
+                : " (" + d.edges().size() + " transitions, drawn without labels; the DOT text below has them)")
+            .append("</figcaption>\n</figure>\n");
     }
 
     @Override

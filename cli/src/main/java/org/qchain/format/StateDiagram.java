@@ -44,9 +44,18 @@ final class StateDiagram {
         return new double[] {c + r * Math.cos(a), c + r * Math.sin(a)};
     }
 
+    /** Past this many edges the drawing leaves the labels out (they would cover each other); the DOT text has them. */
+    static final int MAX_LABELLED_EDGES = 60;
+
+    /** Whether the drawing of these edges carries their labels. */
+    static boolean labelled(ReportResult.DiagramSection d) {
+        return d.edges().size() <= MAX_LABELLED_EDGES;
+    }
+
     /** The diagram as an {@code <svg>} element. */
     static String svg(String title, ReportResult.DiagramSection d) {
         int n = d.states().size();
+        boolean labels = labelled(d);
         StringBuilder sb = new StringBuilder();
         sb.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"diagram\" width=\"").append(SIZE)
             .append("\" height=\"").append(SIZE).append("\" viewBox=\"0 0 ").append(SIZE).append(' ').append(SIZE)
@@ -88,7 +97,9 @@ final class StateDiagram {
                     .append(f(c1x)).append(' ').append(f(c1y)).append(", ").append(f(c2x)).append(' ').append(f(c2y))
                     .append(", ").append(f(tx)).append(' ').append(f(ty))
                     .append("\" fill=\"none\" stroke=\"#333333\" marker-end=\"url(#arrow)\"/>\n");
-                sb.append(text(p[0] + ux * 68, p[1] + uy * 68 + 4, label));
+                if (labels) {
+                    sb.append(text(p[0] + ux * 68, p[1] + uy * 68 + 4, label));
+                }
                 continue;
             }
             double[] q = position(e.to(), n);
@@ -113,7 +124,9 @@ final class StateDiagram {
             // the quadratic curve's midpoint lies halfway between the chord's midpoint and the control point
             double lx = ((sx + tx) / 2 + mx) / 2 + nx * 8;
             double ly = ((sy + ty) / 2 + my) / 2 + ny * 8 + 4;
-            sb.append(text(lx, ly, label));
+            if (labels) {
+                sb.append(text(lx, ly, label));
+            }
         }
         for (int i = 0; i < n; i++) {
             double[] p = position(i, n);

@@ -73,6 +73,54 @@ class ReportLayoutTest {
                 }
             }
         }
+        // each format prints that very formula: LaTeX in .md and .tex, MathML in .html
+        String latex = c.cells().get(0).get(b).latex();
+        String md = ReportFormat.MARKDOWN.layout(12).render(r, "two").main();
+        assertTrue(md.contains("$P^{n}(\\text{A} \\to \\text{B}) = " + latex + "$"), md);
+        String tex = ReportFormat.LATEX.layout(12).render(r, "two").main();
+        assertTrue(tex.contains("P^{n}(\\text{A} \\to \\text{B}) = " + latex + "$"), tex);
+        String mathml = c.cells().get(0).get(b).mathml();
+        String html = ReportFormat.HTML.layout(12).render(r, "two").main();
+        assertTrue(html.contains(mathml.substring(mathml.indexOf('>') + 1)), "the MathML of the closed form");
+    }
+
+    @Test
+    void chainWithAnAbsorbingStateGetsAbsorptionTables() throws Exception {
+        ReportResult r = report("press.chain");
+        Document d = xml(ReportFormat.HTML.layout(12).render(r, "press").main());
+        Element steps = tableWithCaption(d, "Steps until absorption into {Failed}");
+        assertEquals(3, steps.getElementsByTagName("tr").getLength(), "a header and the two transient states");
+        tableWithCaption(d, "Absorption probabilities");
+    }
+
+    @Test
+    void progressCountsUpToItsTotal() {
+        List<long[]> seen = new ArrayList<>();
+        Report.run(LoadedModel.load(Path.of(MODELS + "pump-nominal.chain"), Optional.empty()), ReportQuery.defaults(),
+            (phase, done, total) -> seen.add(new long[] {done, total}));
+        assertTrue(seen.size() > 30, "one report a query: " + seen.size());
+        long total = seen.get(0)[1];
+        for (int i = 1; i < seen.size(); i++) {
+            assertTrue(seen.get(i)[0] >= seen.get(i - 1)[0] && seen.get(i)[0] <= total, "monotone, within the total");
+        }
+        assertEquals(total, seen.get(seen.size() - 1)[0]);
+    }
+
+    @Test
+    void denseDiagramLeavesTheLabelsToTheDotText() throws Exception {
+        List<String> states = new ArrayList<>();
+        List<ReportResult.Edge> edges = new ArrayList<>();
+        for (int i = 0; i < 9; i++) {
+            states.add("S" + i);
+            for (int j = 0; j < 9; j++) {
+                edges.add(new ReportResult.Edge(i, j, new org.qchain.result.ExactValue(Rational.of(1, 9))));
+            }
+        }
+        ReportResult.DiagramSection d = new ReportResult.DiagramSection(states, edges, List.of());
+        Document svg = xml(StateDiagram.svg("dense", d));
+        assertEquals(81, svg.getElementsByTagName("path").getLength() - 1);
+        assertEquals(9, svg.getElementsByTagName("text").getLength(), "state names only");
+        assertEquals(81, StateDiagram.dot("dense", d).split("label=", -1).length - 1);
     }
 
     @Test
