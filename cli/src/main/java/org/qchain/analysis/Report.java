@@ -183,7 +183,12 @@ public final class Report {
             return new ExactValue(n.value());
         }
         String plain = Expr.toPlain(e);
-        return Formula.of(plain, FormulaTree.parse(plain).latex());
+        try {
+            return Formula.of(plain, FormulaTree.parse(plain).latex());
+        } catch (IllegalArgumentException unread) {
+            // not in the formulas' plain syntax: shown as text
+            return Formula.of(plain, "\\text{" + plain.replace("\\", "").replace("{", "").replace("}", "") + "}");
+        }
     }
 
     private ReportResult.ModelSection modelSection() {
