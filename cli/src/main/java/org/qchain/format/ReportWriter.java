@@ -344,8 +344,8 @@ abstract class ReportWriter implements ReportLayout {
             bullets(c.conditions().stream().map(cond -> List.of(formula(cond))).toList());
         }
         if (!c.notProved().isEmpty()) {
-            paragraph(t("Not shown to hold throughout the parameters' domains: " + String.join("; ", c.notProved())
-                + "."));
+            paragraph(t("Not shown to hold throughout the parameters' domains:"));
+            bullets(c.notProved().stream().map(cond -> List.of(formula(cond))).toList());
         }
         String n = c.names().step();
         for (int i = 0; i < c.rows().size(); i++) {
