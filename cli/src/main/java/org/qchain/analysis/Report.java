@@ -136,7 +136,7 @@ public final class Report {
         from();
         targets();
         List<ReportResult.Section> sections = new ArrayList<>();
-        Map<String, LongRunResult> longRun = new LinkedHashMap<>();
+        Optional<LongRunResult> longRun = Optional.empty();
         Optional<AvailabilityResult> avail = Optional.empty();
         ReportResult.ModelSection modelSection = modelSection();
         if (q.has(ReportSection.MODEL)) {
@@ -153,7 +153,7 @@ public final class Report {
         }
         if (q.has(ReportSection.LONGRUN)) {
             ReportResult.LongRunSection s = continuous() ? availability() : longRun();
-            s.longRun().ifPresent(l -> longRun.put("", l));
+            longRun = s.longRun();
             avail = s.availability();
             sections.add(s);
         }
@@ -163,7 +163,7 @@ public final class Report {
             sections.add(sens);
         }
         if (q.has(ReportSection.PLOTS)) {
-            sections.add(plots(longRun.values().stream().findFirst(), avail, Optional.ofNullable(sens)));
+            sections.add(plots(longRun, avail, Optional.ofNullable(sens)));
         }
         progress.update("report", total, total);
         List<ReportResult.Parameter> params = new ArrayList<>();
@@ -403,10 +403,10 @@ public final class Report {
         if (d.domain().upper().isPresent() && hi.compareTo(d.domain().upper().get()) > 0) {
             hi = d.domain().upper().get();
         }
-        String lo = d.domain().lower().toString();
-        return p + " in " + (d.domain().lowerClosed() ? "[" : "(") + lo + ", " + hi
-            + (d.domain().upper().filter(u -> u.equals(model.known().get(p).add(model.known().get(p))))
-                .isPresent() && !d.domain().upperClosed() ? ")" : "]") + " with 11 points";
+        Rational top = hi;
+        boolean openTop = d.domain().upper().filter(top::equals).isPresent() && !d.domain().upperClosed();
+        return p + " in " + (d.domain().lowerClosed() ? "[" : "(") + d.domain().lower() + ", " + hi
+            + (openTop ? ")" : "]") + " with 11 points";
     }
 
     private ReportResult.SensitivitySection rateSensitivity() {

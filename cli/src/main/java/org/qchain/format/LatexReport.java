@@ -30,6 +30,13 @@ final class LatexReport extends ReportWriter {
             }
             if (c == '^') {
                 int j = i + 1;
+                if (j < s.length() && s.charAt(j) == '(' && s.indexOf(')', j) > 0) {
+                    // P^(2m + 1): the parenthesised exponent, without its parentheses
+                    int close = s.indexOf(')', j);
+                    sb.append("\\textsuperscript{").append(Text.latex(s.substring(j + 1, close))).append('}');
+                    i = close + 1;
+                    continue;
+                }
                 while (j < s.length() && (Character.isLetterOrDigit(s.charAt(j)))) {
                     j++;
                 }

@@ -312,6 +312,20 @@ class ReportLayoutTest {
         assertTrue(tex.contains("P^{n}(\\text{A} \\to \\text{B}) = "));
     }
 
+    @Test
+    void latexTextRaisesPowersAndWritesArrowsAsMath() {
+        assertEquals("P\\textsuperscript{10}(Up $\\to$ Down)", LatexReport.text("P^10(Up -> Down)"));
+        assertEquals("Limit of P\\textsuperscript{2m + 1}:", LatexReport.text("Limit of P^(2m + 1):"));
+        assertEquals("a $\\approx$ 0.5, 50\\% \\textless{} 1", LatexReport.text("a ≈ 0.5, 50% < 1"));
+    }
+
+    @Test
+    void periodicChainGetsItsSubsequenceLimits() {
+        ReportResult r = report("closed-periodic.chain");
+        String tex = ReportFormat.LATEX.layout(12).render(r, "p").main();
+        assertTrue(tex.contains("Limit of P\\textsuperscript{"), tex);
+    }
+
     private static int count(String s, String what) {
         return s.split(Pattern.quote(what), -1).length - 1;
     }
