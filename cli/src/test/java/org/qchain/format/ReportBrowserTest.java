@@ -117,9 +117,6 @@ class ReportBrowserTest {
         assumeTrue(browser.isPresent(), "skipped: no browser installed (Debian: apt-get install chromium; .ci/run"
             + " installs it)");
         Files.createDirectories(DIR);
-        ReportResult r = ReportLayoutTest.report("pump-nominal.chain");
-        Path html = DIR.resolve("report.html");
-        Files.writeString(html, ReportFormat.HTML.layout(12).render(r, "report").main(), StandardCharsets.UTF_8);
         Path profile = Files.createTempDirectory(DIR, "profile");
         Process p = new ProcessBuilder(browser.get().toString(), "--headless", "--no-sandbox", "--disable-gpu",
             "--disable-dev-shm-usage", "--no-first-run", "--remote-debugging-port=0", "--user-data-dir=" + profile,
@@ -131,7 +128,28 @@ class ReportBrowserTest {
             Matcher t = Pattern.compile("\"targetId\":\"([^\"]+)\"").matcher(created);
             assertTrue(t.find(), created);
             String base = ws.substring(0, ws.indexOf("/devtools/"));
-            Session page = Session.open(base + "/devtools/page/" + t.group(1));
+            // a discrete chain (closed form, sensitivity, P^n plot) and a continuous one (availability, A(t) plot)
+            check(base + "/devtools/page/" + t.group(1), "pump-nominal.chain", "report");
+            check(base + "/devtools/page/" + t.group(1), "generator-set.chain", "report-continuous");
+            browserSession.close();
+        } finally {
+            p.destroy();
+            if (!p.waitFor(10, TimeUnit.SECONDS)) {
+                p.destroyForcibly();
+            }
+            try (var files = Files.walk(profile)) {
+                files.sorted(java.util.Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
+            }
+        }
+    }
+
+    /** Loads one model's HTML report in the page and checks it; the screenshot is NAME-screenshot.png. */
+    private static void check(String pageUrl, String model, String name) throws Exception {
+        ReportResult r = ReportLayoutTest.report(model);
+        Path html = DIR.resolve(name + ".html");
+        Files.writeString(html, ReportFormat.HTML.layout(12).render(r, name).main(), StandardCharsets.UTF_8);
+        {
+            Session page = Session.open(pageUrl);
             page.send("Runtime.enable", "{}");
             page.send("Log.enable", "{}");
             page.send("Page.enable", "{}");
@@ -172,7 +190,7 @@ class ReportBrowserTest {
                 + "\"clip\":{\"x\":0,\"y\":0,\"width\":" + WIDTH + ",\"height\":" + height + ",\"scale\":1}}");
             Matcher d = Pattern.compile("\"data\":\"([^\"]+)\"").matcher(shot);
             assertTrue(d.find());
-            Path png = DIR.resolve("report-screenshot.png");
+            Path png = DIR.resolve(name + "-screenshot.png");
             Files.write(png, Base64.getDecoder().decode(d.group(1)));
             BufferedImage img = ImageIO.read(png.toFile());
             assertEquals(WIDTH, img.getWidth());
@@ -196,15 +214,6 @@ class ReportBrowserTest {
             assertTrue(drawn > total / 50, "drawn pixels: " + drawn + " of " + total);
             assertTrue(curve > 500, "pixels in the first curve's colour: " + curve);
             page.close();
-            browserSession.close();
-        } finally {
-            p.destroy();
-            if (!p.waitFor(10, TimeUnit.SECONDS)) {
-                p.destroyForcibly();
-            }
-            try (var files = Files.walk(profile)) {
-                files.sorted(java.util.Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
-            }
         }
     }
 

@@ -61,7 +61,7 @@ class ReportToolsTest {
             + " texlive-latex-recommended, texlive-pictures)");
         Files.createDirectories(DIR);
         for (String model : List.of("two-state-nominal.chain", "two-state-symbolic.chain", "generator-set.chain",
-            "pump-params.chain")) {
+            "pump-params.chain", "pump-nominal.chain", "press.chain", "closed-periodic.chain")) {
             ReportResult r = ReportLayoutTest.report(model);
             String base = model.replace(".chain", "");
             Files.writeString(DIR.resolve(base + ".tex"), ReportFormat.LATEX.layout(12).render(r, base).main(),
