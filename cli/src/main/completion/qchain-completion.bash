@@ -164,6 +164,7 @@ function _complete_qchain() {
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} classes" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} longrun" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} absorb" ];    then _picocli_qchain; return $?; fi
+  if [ "${COMP_LINE}" = "${COMP_WORDS[0]} report" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} demo" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} completion" ];    then _picocli_qchain; return $?; fi
   if [ "${COMP_LINE}" = "${COMP_WORDS[0]} help" ];    then _picocli_qchain; return $?; fi
@@ -179,13 +180,15 @@ function _complete_qchain() {
   local cmds7=(classes)
   local cmds8=(longrun)
   local cmds9=(absorb)
-  local cmds10=(demo)
-  local cmds11=(completion)
-  local cmds12=(help)
+  local cmds10=(report)
+  local cmds11=(demo)
+  local cmds12=(completion)
+  local cmds13=(help)
 
-  if CompWordsContainsArray "${cmds12[@]}"; then _picocli_qchain_help; return $?; fi
-  if CompWordsContainsArray "${cmds11[@]}"; then _picocli_qchain_completion; return $?; fi
-  if CompWordsContainsArray "${cmds10[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds13[@]}"; then _picocli_qchain_help; return $?; fi
+  if CompWordsContainsArray "${cmds12[@]}"; then _picocli_qchain_completion; return $?; fi
+  if CompWordsContainsArray "${cmds11[@]}"; then _picocli_qchain_demo; return $?; fi
+  if CompWordsContainsArray "${cmds10[@]}"; then _picocli_qchain_report; return $?; fi
   if CompWordsContainsArray "${cmds9[@]}"; then _picocli_qchain_absorb; return $?; fi
   if CompWordsContainsArray "${cmds8[@]}"; then _picocli_qchain_longrun; return $?; fi
   if CompWordsContainsArray "${cmds7[@]}"; then _picocli_qchain_classes; return $?; fi
@@ -206,7 +209,7 @@ function _picocli_qchain() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens closed check verify avail convert classes longrun absorb demo completion help"
+  local commands="step sens closed check verify avail convert classes longrun absorb report demo completion help"
   local flag_opts="'-h' '--help' '-V' '--version'"
   local arg_opts=""
 
@@ -931,6 +934,100 @@ function _picocli_qchain_absorb() {
   fi
 }
 
+# Generates completions for the options and subcommands of the `report` subcommand.
+function _picocli_qchain_report() {
+  # Get completion data
+  local curr_word=${COMP_WORDS[COMP_CWORD]}
+  local prev_word=${COMP_WORDS[COMP_CWORD-1]}
+
+  local commands=""
+  local flag_opts="'-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-o' '--output' '--format' '--sections' '--skip' '-n' '--steps' '-t' '--time' '--from' '--to' '--plot-steps' '--plot-time' '--sens-to' '--sens-steps' '--sweep' '--digits' '--max-digits' '--max-terms'"
+  local FORMAT_option_args=("HTML" "MARKDOWN" "LATEX") # --format values
+
+  type compopt &>/dev/null && compopt +o default
+
+  case ${prev_word} in
+    '--at')
+      return
+      ;;
+    '--max-input-digits')
+      return
+      ;;
+    '--max-dense-states')
+      return
+      ;;
+    '-o'|'--output')
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      COMPREPLY=( $( compgen -f -- "${curr_word}" ) ) # files
+      return $?
+      ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
+    '--sections')
+      return
+      ;;
+    '--skip')
+      return
+      ;;
+    '-n'|'--steps')
+      return
+      ;;
+    '-t'|'--time')
+      return
+      ;;
+    '--from')
+      return
+      ;;
+    '--to')
+      return
+      ;;
+    '--plot-steps')
+      return
+      ;;
+    '--plot-time')
+      return
+      ;;
+    '--sens-to')
+      return
+      ;;
+    '--sens-steps')
+      return
+      ;;
+    '--sweep')
+      return
+      ;;
+    '--digits')
+      return
+      ;;
+    '--max-digits')
+      return
+      ;;
+    '--max-terms')
+      return
+      ;;
+  esac
+
+  if [[ "${curr_word}" == -* ]]; then
+    COMPREPLY=( $(compgen -W "${flag_opts} ${arg_opts}" -- "${curr_word}") )
+  else
+    local positionals=""
+    local currIndex
+    currIndex=$(currentPositionalIndex "report" "${arg_opts}" "${flag_opts}")
+    if (( currIndex >= 0 && currIndex <= 0 )); then
+      local IFS=$'\n'
+      type compopt &>/dev/null && compopt -o filenames
+      positionals=$( compgen -f -- "${curr_word}" ) # files
+    fi
+    local IFS=$'\n'
+    COMPREPLY=( $(compgen -W "${commands// /$'\n'}${IFS}${positionals}" -- "${curr_word}") )
+  fi
+}
+
 # Generates completions for the options and subcommands of the `demo` subcommand.
 function _picocli_qchain_demo() {
   # Get completion data
@@ -984,7 +1081,7 @@ function _picocli_qchain_help() {
   # Get completion data
   local curr_word=${COMP_WORDS[COMP_CWORD]}
 
-  local commands="step sens closed check verify avail convert classes longrun absorb demo completion"
+  local commands="step sens closed check verify avail convert classes longrun absorb report demo completion"
   local flag_opts="'-h' '--help'"
   local arg_opts=""
 

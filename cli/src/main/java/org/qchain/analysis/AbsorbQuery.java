@@ -17,7 +17,8 @@ import org.qchain.exact.Rational;
  * @param limits    size limits (as for {@code longrun})
  */
 public record AbsorbQuery(Optional<String> from, List<String> absorbing, Map<String, Rational> rewards,
-                          Optional<Rational> discount, OptionalInt steps, LongRunQuery limits) {
+                          Optional<Rational> discount, OptionalInt steps, LongRunQuery limits)
+    implements Query {
     /** Copies. */
     public AbsorbQuery {
         absorbing = List.copyOf(absorbing);

@@ -63,6 +63,15 @@ public final class Analysis {
         if (query instanceof DistributionQuery q) {
             return distribution(model, q, progress);
         }
+        if (query instanceof LongRunQuery q) {
+            return longRun(model, q, progress);
+        }
+        if (query instanceof AbsorbQuery q) {
+            return absorb(model, q, progress);
+        }
+        if (query instanceof ClassesQuery q) {
+            return classes(model, q.limits());
+        }
         return check(model, (CheckQuery) query);
     }
 

@@ -10,7 +10,8 @@ package org.qchain.analysis;
  * @param brief     leave out the n x n tables (the graph, the limit of P^n, the fundamental matrix N): for large
  *                  chains, whose per-state figures are wanted and whose full matrices would be most of the work
  */
-public record LongRunQuery(boolean passage, boolean symbolic, long maxDigits, int maxStates, boolean brief) {
+public record LongRunQuery(boolean passage, boolean symbolic, long maxDigits, int maxStates, boolean brief)
+    implements Query {
     /** With every table. */
     public LongRunQuery(boolean passage, boolean symbolic, long maxDigits, int maxStates) {
         this(passage, symbolic, maxDigits, maxStates, false);

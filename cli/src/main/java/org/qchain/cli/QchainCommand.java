@@ -40,7 +40,7 @@ public final class QchainCommand implements Callable<Integer> {
      */
     static final List<Class<?>> SUBCOMMANDS = List.of(StepCommand.class, SensCommand.class, ClosedCommand.class,
         CheckCommand.class, VerifyCommand.class, AvailCommand.class, ConvertCommand.class, ClassesCommand.class,
-        LongRunCommand.class, AbsorbCommand.class, DemoCommand.class, CompletionCommand.class, HelpCommand.class);
+        LongRunCommand.class, AbsorbCommand.class, ReportCommand.class, DemoCommand.class, CompletionCommand.class, HelpCommand.class);
     /** Commands that need the whole tree: the demo, the completion script and help on other commands. */
     private static final List<String> NEED_ALL = List.of("demo", "completion", "help");
 

@@ -13,6 +13,19 @@ public interface Formula {
     String latex();
 
     /**
+     * A MathML {@code <math>} element (presentation markup), printed from {@link #plain()} by {@link FormulaTree};
+     * text that is not in the plain syntax is shown as {@code <mtext>}.
+     */
+    default String mathml() {
+        try {
+            return FormulaTree.parse(plain()).mathml();
+        } catch (IllegalArgumentException e) {
+            return "<math xmlns=\"http://www.w3.org/1998/Math/MathML\"><mtext>"
+                + plain().replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;") + "</mtext></math>";
+        }
+    }
+
+    /**
      * A formula given by its two printed forms.
      *
      * @param plain the plain form

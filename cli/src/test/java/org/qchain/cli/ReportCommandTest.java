@@ -1,0 +1,127 @@
+package org.qchain.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Optional;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.qchain.analysis.LoadedModel;
+import org.qchain.analysis.Report;
+import org.qchain.analysis.ReportQuery;
+import org.qchain.exact.ErrorKey;
+import org.qchain.exact.Progress;
+import org.qchain.exact.QchainException;
+import org.qchain.format.ReportFormat;
+
+/** {@code qchain report}: formats by file ending, section choice, refusals, atomic files, Ctrl-C. */
+class ReportCommandTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void writesTheLayoutsTextIntoTheFileNamedByItsEnding() throws Exception {
+        Path out = dir.resolve("pump.html");
+        Cli.Result r = Cli.run("report", Cli.model("pump-nominal.chain"), "-o", out.toString());
+        assertEquals(0, r.code(), r::toString);
+        assertEquals("", r.out());
+        // the same text as the layout of the same queries
+        LoadedModel m = LoadedModel.load(Path.of(Cli.model("pump-nominal.chain")), Optional.empty());
+        String expected = ReportFormat.HTML.layout(12).render(Report.run(m, ReportQuery.defaults(), Progress.NONE),
+            "pump").main();
+        assertEquals(expected, Files.readString(out, StandardCharsets.UTF_8));
+    }
+
+    @Test
+    void markdownWritesItsDrawingsBesideTheDocument() throws Exception {
+        Path out = dir.resolve("two.md");
+        Cli.Result r = Cli.run("report", Cli.model("two-state-nominal.chain"), "-o", out.toString());
+        assertEquals(0, r.code(), r::toString);
+        assertTrue(Files.readString(out).startsWith("# Report: "));
+        for (String f : new String[] {"two-diagram.svg", "two-plot-steps.svg", "two-plot-sweep.svg"}) {
+            assertTrue(Files.readString(dir.resolve(f)).startsWith("<svg "), f);
+        }
+    }
+
+    @Test
+    void formatOptionOverridesTheEnding() throws Exception {
+        Path out = dir.resolve("report.txt");
+        Cli.Result r = Cli.run("report", Cli.model("two-state-nominal.chain"), "-o", out.toString(), "--format",
+            "latex", "--sections", "model,steps", "-n", "2,3");
+        assertEquals(0, r.code(), r::toString);
+        String tex = Files.readString(out);
+        assertTrue(tex.startsWith("\\documentclass{article}"));
+        assertTrue(tex.contains("\\section*{The model}"));
+        assertTrue(tex.contains("\\subsection*{P\\textsuperscript{3} (3 steps)}"), tex);
+        assertTrue(!tex.contains("Long run") && !tex.contains("State diagram"), "only the chosen sections");
+    }
+
+    @Test
+    void unknownEndingIsAUsageError() {
+        Cli.Result r = Cli.run("report", Cli.model("two-state-nominal.chain"), "-o", dir.resolve("r.txt").toString());
+        assertEquals(2, r.code());
+        assertTrue(r.err().startsWith("qchain: -o " + dir.resolve("r.txt") + ": give a file ending in .html,"
+            + " .md or .tex, or choose the format with --format html|markdown|latex\n"), r.err());
+    }
+
+    @Test
+    void unknownSectionIsAUsageError() {
+        Cli.Result r = Cli.run("report", Cli.model("two-state-nominal.chain"), "-o", dir.resolve("r.md").toString(),
+            "--skip", "plots,charts");
+        assertEquals(2, r.code());
+        assertTrue(r.err().startsWith("qchain: --skip 'charts': not a section (the sections are: model,"
+            + " diagram, steps, closed, longrun, sensitivity, plots)\n"), r.err());
+    }
+
+    @Test
+    void failureLeavesAnExistingFileUntouched() throws Exception {
+        Path out = dir.resolve("keep.html");
+        Files.writeString(out, "earlier report\n");
+        Cli.Result r = Cli.run("report", Cli.model("two-state-nominal.chain"), "-o", out.toString(), "--from",
+            "Nowhere");
+        assertEquals(2, r.code(), r::toString);
+        assertTrue(r.err().contains("--from 'Nowhere'") || r.err().contains("Nowhere"), r.err());
+        assertEquals("earlier report\n", Files.readString(out));
+        try (var files = Files.list(dir)) {
+            assertEquals(1, files.count(), "no temporary file left");
+        }
+    }
+
+    @Test
+    void neverWritesOverTheModel() throws Exception {
+        Path model = dir.resolve("m.md");
+        Files.copy(Path.of(Cli.model("two-state-nominal.chain")), model);
+        String before = Files.readString(model);
+        Cli.Result r = Cli.run("report", model.toString(), "-o", model.toString());
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("it is the input model"), r.err());
+        assertEquals(before, Files.readString(model));
+    }
+
+    @Test
+    void interruptionEndsTheReport() {
+        LoadedModel m = LoadedModel.load(Path.of(Cli.model("pump-nominal.chain")), Optional.empty());
+        try {
+            QchainException e = org.junit.jupiter.api.Assertions.assertThrows(QchainException.class,
+                () -> Report.run(m, ReportQuery.defaults(), (phase, done, total) -> Thread.currentThread().interrupt()));
+            assertEquals(ErrorKey.INTERRUPTED, e.key());
+        } finally {
+            Thread.interrupted();
+        }
+    }
+
+    @Test
+    void continuousChainGetsAvailabilityAndTheClosedFormNote() throws Exception {
+        Path out = dir.resolve("gen.md");
+        Cli.Result r = Cli.run("report", Cli.model("generator-set.chain"), "-o", out.toString(), "-t", "1,24");
+        assertEquals(0, r.code(), r::toString);
+        String md = Files.readString(out);
+        assertTrue(md.contains("## Transition probabilities P(t)"));
+        assertTrue(md.contains("### P(t) at t = 24"));
+        assertTrue(md.contains("A closed form of P(t) = exp(Qt) in t is not available yet for continuous chains"));
+        assertTrue(md.contains("| steady-state availability | $\\frac{16375}{16393}$ ≈ 0.998901970353 |"), md);
+    }
+}
