@@ -71,9 +71,13 @@ final class SymbolicEngine {
         return new Checked(p, grouped(report.warnings()));
     }
 
+    /** How many further entries one grouped warning names before it only counts the rest. */
+    static final int NAMED_ALIKE = 5;
+
     /**
      * The warnings, each once: entries with the same formula, condition and explanation make one warning, at the
-     * first entry's position, that names the others ({@code ...; the same for B->B (m.chain:8:1)}).
+     * first entry's position, that names the others ({@code ...; the same for B->B (m.chain:8:1)}), at most
+     * {@link #NAMED_ALIKE} of them ({@code ... and 12 more entries}).
      */
     static List<String> grouped(List<Finding> findings) {
         Map<String, List<Finding>> groups = new LinkedHashMap<>();
@@ -85,10 +89,13 @@ final class SymbolicEngine {
         List<String> out = new ArrayList<>();
         for (List<Finding> g : groups.values()) {
             StringBuilder sb = new StringBuilder(g.get(0).located());
-            for (int k = 1; k < g.size(); k++) {
+            for (int k = 1; k < Math.min(g.size(), 1 + NAMED_ALIKE); k++) {
                 Finding f = g.get(k);
                 sb.append(k == 1 ? "; the same for " : ", ").append(f.entry());
                 f.pos().ifPresent(pos -> sb.append(" (").append(pos).append(')'));
+            }
+            if (g.size() > 1 + NAMED_ALIKE) {
+                sb.append(" and ").append(g.size() - 1 - NAMED_ALIKE).append(" more entries");
             }
             out.add(sb.toString());
         }

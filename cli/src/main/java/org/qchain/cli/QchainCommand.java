@@ -162,7 +162,7 @@ public final class QchainCommand implements Callable<Integer> {
         Map<String, String> codes = new LinkedHashMap<>();
         codes.put(" " + ExitCodes.OK, "success");
         codes.put(" " + ExitCodes.INTERNAL, "internal error (set QCHAIN_DEBUG=1 for a stack trace)");
-        codes.put(" " + ExitCodes.INPUT, "bad input or usage: the message names file:line:col or the option");
+        codes.put(" " + ExitCodes.INPUT, "bad input or usage: the message names file:line:col or the bad option");
         codes.put(" " + ExitCodes.OVER_TOLERANCE, "verify: a value is outside the tolerance");
         codes.put(ExitCodes.INTERRUPTED + "", "interrupted (Ctrl-C); no partial output file is left");
         Deque<CommandLine> todo = new ArrayDeque<>();

@@ -120,7 +120,8 @@ class DocExamplesTest {
     void everyQuotedErrorMessageIsTheRealOne() throws IOException {
         Path bad = ROOT.resolve("cli/src/test/resources/models/bad");
         String readme = Files.readString(ROOT.resolve("README.md"), StandardCharsets.UTF_8);
-        java.util.regex.Matcher rm = java.util.regex.Pattern.compile("the message would be\\s+`([^`]*)`").matcher(readme);
+        java.util.regex.Matcher rm = java.util.regex.Pattern.compile("the message would be\\s+`([^`]*)`")
+            .matcher(readme);
         assertTrue(rm.find());
         String readmeMessage = rm.group(1);
         java.util.regex.Pattern quoted = java.util.regex.Pattern.compile(
@@ -178,7 +179,8 @@ class DocExamplesTest {
                 : line.startsWith("$ ./qchain ") ? line.substring(11) : null;
             if (fenced && !illustrative && cmd == null) {
                 // a command shown without its output (a list of commands): its files must exist all the same
-                java.util.regex.Matcher q = java.util.regex.Pattern.compile("(?:^|\\s)(?:\\./)?qchain (.*)$").matcher(line);
+                java.util.regex.Matcher q = java.util.regex.Pattern.compile("(?:^|\\s)(?:\\./)?qchain (.*)$")
+                    .matcher(line);
                 if (q.find()) {
                     requireFiles(ROOT.relativize(page) + ":" + (i + 1), words(q.group(1).split(" #")[0]));
                 }

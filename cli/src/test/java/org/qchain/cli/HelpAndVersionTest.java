@@ -19,7 +19,7 @@ class HelpAndVersionTest {
     private static final String EXIT_CODES = "Exit codes:\n"
         + "   0    success\n"
         + "   1    internal error (set QCHAIN_DEBUG=1 for a stack trace)\n"
-        + "   2    bad input or usage: the message names file:line:col or the option\n"
+        + "   2    bad input or usage: the message names file:line:col or the bad option\n"
         + "   3    verify: a value is outside the tolerance\n"
         + "  130   interrupted (Ctrl-C); no partial output file is left\n";
 

@@ -34,6 +34,18 @@ class WarningsOnceTest {
     }
 
     @Test
+    void manyAlikeEntriesAreNamedUpToFiveThenCounted() {
+        // eight lines L1..L8, each L_i -> L_i = 1 - p - r (lines 7, 9, ..., 21 of the model)
+        String model = Cli.model("eight-lines.chain");
+        Cli.Result r = Cli.run("step", model, "-n", "1", "--symbolic");
+        assertEquals(0, r.code(), r::toString);
+        assertEquals("qchain: warning: " + model + ":7:1: L1->L1 is 1 - p - r: needs p + r <= 1; fails near p=1, r=1"
+            + " (a corner of the domain); holds at the nominal values p=1/10, r=1/4; the same for L2->L2 (" + model
+            + ":9:1), L3->L3 (" + model + ":11:1), L4->L4 (" + model + ":13:1), L5->L5 (" + model + ":15:1), L6->L6 ("
+            + model + ":17:1) and 2 more entries\n", r.err());
+    }
+
+    @Test
     void jsonListsTheWarningOnce() {
         Cli.Result r = Cli.run("step", MODEL, "-n", "2", "--symbolic", "--format", "json");
         assertEquals(0, r.code(), r::toString);

@@ -21,10 +21,12 @@ import org.qchain.exact.model.Domain;
  * multiplied by {@code (1 - y)^d} (d its degree in x), which keeps its sign. The closed ends of the domains are
  * faces of the box, each checked as a box of its own.
  *
- * <p>Before the subdivision, a polynomial of total degree 2 is tried as completed squares plus an affine
- * remainder; after it, a polynomial of degree 2 in one variable by its discriminant in the others, and a reducible
- * polynomial by the signs of its factors (products of squares): see {@link Squares}. These catch zeros that no halving ever puts on a corner, such as
- * {@code (5p + 5r - 1)^2 + 20r} at {@code p = 1/5} on the open end {@code r = 0}.
+ * <p>Before the subdivision, a polynomial of total degree 2 is tried as completed squares plus an affine remainder;
+ * after it, a polynomial of degree 2 in one variable by its discriminant in the others, and a reducible polynomial by
+ * the signs of its factors (products of squares): see {@link Squares}. These catch zeros that no halving ever puts on
+ * a corner, such as {@code (5p + 5r - 1)^2 + 20r} at {@code p = 1/5} on the open end {@code r = 0}. First of all,
+ * the polynomial is evaluated at a few interior points ({@link #refutedAtSamples}): a value that breaks the bound is
+ * a counterexample, and no proof is tried.
  */
 public final class BoxSign {
     /** The most halvings of one box (the stated depth of the subdivision). */

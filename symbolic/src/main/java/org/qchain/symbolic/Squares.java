@@ -16,10 +16,9 @@ import org.qchain.exact.model.Domain;
  *   <li><b>Completed squares</b> (total degree 2): the quadratic part {@code x^T A x} is split by Lagrange's
  *       reduction into {@code sum d_i L_i^2} with every {@code d_i > 0} (if a pivot is negative, or a zero pivot
  *       has a nonzero row, A is not positive semidefinite and nothing is claimed). Then
- *       {@code p = sum d_i (L_i + c_i)^2 + R} with R affine; the shifts {@code c_i} of some of the squares are chosen so
- *       that R loses its terms in as many variables (each choice one small linear system, for at most
- *       {@link #MAX_VARIABLES} variables), and R
- *       is handed back to {@link BoxSign}: R > 0 on the domains proves p > 0, R >= 0 on their closure proves
+ *       {@code p = sum d_i (L_i + c_i)^2 + R} with R affine; the shifts {@code c_i} of some of the squares are
+ *       chosen so that R loses its terms in as many variables (each choice one small linear system, for at most
+ *       {@link #MAX_VARIABLES} variables), and R is handed back to {@link BoxSign}: R > 0 on the domains proves p > 0, R >= 0 on their closure proves
  *       p >= 0. Example: {@code 1 - 10p + 10r + 25p^2 + 50pr + 25r^2 = (5p + 5r - 1)^2 + 20r}, positive for
  *       r > 0.</li>
  *   <li><b>A square in one variable</b>: where p has degree 2 in a variable x, {@code p = A x^2 + B x + C} with
@@ -274,7 +273,8 @@ final class Squares {
             Map<List<Integer>, Rational> disc = times(Rational.of(4), a, c);
             times(Rational.of(-1), b, b).forEach((e, v) -> disc.merge(e, v, Rational::add));
             boolean ok = strict
-                ? (BoxSign.basic(c, domains, true) || BoxSign.basic(a, domains, true)) && BoxSign.basic(disc, domains, true)
+                ? (BoxSign.basic(c, domains, true) || BoxSign.basic(a, domains, true))
+                    && BoxSign.basic(disc, domains, true)
                 : BoxSign.basic(a, domains, false) && BoxSign.basic(c, domains, false)
                     && BoxSign.basic(disc, domains, false);
             if (ok) {

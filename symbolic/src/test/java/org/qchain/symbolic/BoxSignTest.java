@@ -251,6 +251,33 @@ class BoxSignTest {
         assertTrue(proved > 50, "proved " + proved);
     }
 
+    @Test
+    void onAnUnboundedDomainNothingNegativeIsProved() {
+        // property (fixed seed): p in (0, 1), q in (0, inf); random quadratics, some completed squares; a value <= 0
+        // at a sample point (q up to 40) forbids a proof of p > 0
+        Random rnd = new Random(811L);
+        int proved = 0;
+        for (int trial = 0; trial < 200; trial++) {
+            Map<List<Integer>, Rational> p = new HashMap<>();
+            for (int t = 0; t < 5; t++) {
+                int i = rnd.nextInt(3);
+                p.merge(List.of(i, rnd.nextInt(3 - i)), Rational.of(rnd.nextInt(11) - 4, 1 + rnd.nextInt(4)),
+                    Rational::add);
+            }
+            boolean positive = BoxSign.positive(p, List.of(OPEN, RATE));
+            proved += positive ? 1 : 0;
+            for (int i = 1; i < 20 && positive; i++) {
+                for (int j = 1; j <= 80; j++) {
+                    Rational x = Rational.of(i, 20);
+                    Rational y = Rational.of(j, 2);
+                    assertTrue(value(p, x, y).signum() > 0, p + " at " + x + ", " + y);
+                    assertTrue(value(p, x, Rational.of(1, 10 * j)).signum() > 0, p + " at " + x + ", 1/" + 10 * j);
+                }
+            }
+        }
+        assertTrue(proved > 20, "proved " + proved);
+    }
+
     private static Rational value(Map<List<Integer>, Rational> p, Rational x, Rational y) {
         Rational v = Rational.ZERO;
         for (Map.Entry<List<Integer>, Rational> t : p.entrySet()) {
