@@ -129,6 +129,12 @@ final class StepCommand implements Callable<Integer> {
         if (startOptions.given() && from != null) {
             throw new ParameterException(spec.commandLine(), "--start and --from both name the start; give one");
         }
+        for (int k = 0; k < to.size(); k++) {
+            if (to.subList(0, k).contains(to.get(k))) {
+                throw new ParameterException(spec.commandLine(), "--to names " + to.get(k) + " twice; give each state"
+                    + " once");
+            }
+        }
         if (startOptions.given() || to.size() > 1 || n.series()) {
             return distribution();
         }

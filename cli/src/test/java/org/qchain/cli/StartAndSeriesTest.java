@@ -141,6 +141,12 @@ class StartAndSeriesTest {
     }
 
     @Test
+    void aStateTwiceInTheSetIsAUsageError() {
+        assertEquals("qchain: --to names Up twice; give each state once\nTry 'qchain step --help' for more"
+            + " information.\n", usage("step", PLANT, "-n", "2", "--from", "Up", "--to", "Up,Worn,Up").err());
+    }
+
+    @Test
     void toWithoutAStartNamesBothOptions() {
         assertEquals("qchain: --to needs --from (the starting state) or --start (the initial state or"
             + " distribution)\nTry 'qchain step --help' for more information.\n",
