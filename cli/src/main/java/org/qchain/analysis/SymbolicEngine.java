@@ -189,7 +189,7 @@ final class SymbolicEngine {
         Model m = model.model();
         Checked ctx = checked(model);
         long n = q.ns().get(0);
-        SymbolicLimits limits = new SymbolicLimits(StepQuery.DEFAULT_MAX_TERMS, q.maxDigits());
+        SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
         Rational[] start = new Rational[m.size()];
         java.util.Arrays.fill(start, Rational.ZERO);
         List<RatFun> acc = null;
@@ -220,7 +220,7 @@ final class SymbolicEngine {
         }
         List<Formula> formulas = new ArrayList<>();
         for (RatFun f : cells) {
-            formulas.add(new RatFunFormula(f, false));
+            formulas.add(new RatFunFormula(f, q.factor()));
         }
         Optional<Point> point = model.point();
         Optional<List<List<Rational>>> values = point.map(pt -> {
@@ -246,7 +246,7 @@ final class SymbolicEngine {
         });
         String from = q.start().text();
         Optional<String> toName = to.length == 0 ? Optional.empty() : Optional.of(String.join(",", q.to()));
-        return new SymbolicStepResult(m.source(), m.kind().word(), n, m.usedParameters(), m.states(), false,
+        return new SymbolicStepResult(m.source(), m.kind().word(), n, m.usedParameters(), m.states(), q.factor(),
             Optional.of(from), toName, List.of(from), toName.map(List::of).orElse(m.states()), List.of(formulas),
             point, values, ctx.warnings());
     }

@@ -283,6 +283,19 @@ class StartAndSeriesTest {
         assertTrue(at.out().contains("\nUp=1/2, Worn=1/2  Worn,Down  1/2 + 3/4*p - r - 1/2*p^2 + 1/2*p*r + 1/2*r^2\n"),
             at.out());
         assertTrue(at.out().contains("\nUp=1/2, Worn=1/2  Worn,Down  0.363750000000  291/800\n"), at.out());
+        Cli.Result factored = Cli.run("step", pump, "-n", "2", "--start", "Up=1/2", "--start", "Worn=1/2", "--to",
+            "Worn,Down", "--factor");
+        assertEquals(0, factored.code(), factored::toString);
+        assertTrue(factored.out().contains("\nUp=1/2, Worn=1/2  Worn,Down  1/4*(2 + 3*p - 4*r - 2*p^2 + 2*p*r +"
+            + " 2*r^2)\n"), factored.out());
+        Cli.Result terms = Cli.run("step", pump, "-n", "2", "--start", "Up=1/2", "--start", "Worn=1/2", "--max-terms",
+            "2");
+        assertEquals(2, terms.code(), terms::toString);
+        assertTrue(terms.err().endsWith("qchain: the symbolic P^2 would have up to about 18 polynomial terms in total"
+            + " (entries of degree up to 2), more than the limit 2; raise it with --max-terms\n"), terms::toString);
+        assertEquals("qchain: --factor applies to formulas: --start gives them for one n on a model with a parameter"
+            + " without a value\nTry 'qchain step --help' for more information.\n",
+            usage("step", PLANT, "-n", "2", "--start", "Up", "--factor").err());
         Cli.Result series = Cli.run("step", pump, "-n", "1,2", "--from", "Up");
         assertEquals(2, series.code(), series::toString);
         assertEquals("qchain: a list or range of n needs a value for every parameter (parameters without a value: p;"
