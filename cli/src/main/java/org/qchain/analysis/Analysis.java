@@ -122,20 +122,28 @@ public final class Analysis {
      * probability of a set of states, for one n or a series of n. The whole series is estimated before any work; the
      * series shares its work (each n continues from the one before).
      *
-     * @param model    the loaded model; every used parameter needs a value (nominal or given)
+     * @param model    the loaded model; for a list or range of n every used parameter needs a value (nominal or
+     *                 given)
      * @param q        the query
      * @param progress told about long work (one report per n)
-     * @return the result
+     * @return a {@link org.qchain.result.DistributionResult} when every parameter has a value; otherwise, for one n,
+     *         a {@link org.qchain.result.SymbolicStepResult} whose one row is the start (formulas in the parameters)
      * @throws QchainException for a continuous chain, a parameter without a value, an unknown state, a series past
      *                         the size limit (with the estimate), an interruption
      */
-    public static org.qchain.result.DistributionResult distribution(LoadedModel model, DistributionQuery q,
-                                                                    Progress progress) {
+    public static Result distribution(LoadedModel model, DistributionQuery q, Progress progress) {
         model.requireDiscrete("qchain step -n needs a discrete chain; for a continuous chain give the time: qchain step MODEL -t T");
+        if (!q.series() && model.hasParameterWithoutNominal()) {
+            // one n: formulas in the parameters (with their values at a --at point), as step gives a row or an entry
+            if (model.complete()) {
+                // the values at the point come from the exact engine too: its estimate first
+                DistributionEngine.guard(model, q, DistributionEngine.startVector(model, q));
+            }
+            return Interrupts.guarded(() -> SymbolicEngine.distribution(model, q, progress));
+        }
         if (!model.complete()) {
-            String what = q.start().option().equals("--start") ? "--start"
-                : q.to().size() > 1 ? "a --to set" : "a list or range of n";
-            throw new QchainException(AnalysisKey.DISTRIBUTION_NEEDS_VALUES, what, String.join(", ", model.free()));
+            throw new QchainException(AnalysisKey.DISTRIBUTION_NEEDS_VALUES, "a list or range of n",
+                String.join(", ", model.free()));
         }
         return DistributionEngine.run(model, q, progress);
     }

@@ -12,7 +12,7 @@ public enum AnalysisKey implements MessageKey {
         + " of a symbolic chain depend on the parameters)"),
     /** {0}: what was asked ({@code --start}, a {@code --to} set, a list of n); {1}: the parameters without a value. */
     DISTRIBUTION_NEEDS_VALUES("{0} needs a value for every parameter (parameters without a value: {1}; give them"
-        + " with --at NAME=VALUE); formulas in the parameters are given for one n from one --from state");
+        + " with --at NAME=VALUE); formulas in the parameters are given for one n at a time");
 
     private final String pattern;
 

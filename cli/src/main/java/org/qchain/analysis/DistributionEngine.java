@@ -51,13 +51,19 @@ final class DistributionEngine {
         return s < 0 ? Long.MAX_VALUE : s;
     }
 
-    static DistributionResult run(LoadedModel model, DistributionQuery q, Progress progress) {
-        List<String> states = model.states();
-        Rational[] start = new Rational[states.size()];
+    /** The start as a row vector over the model's states. */
+    static Rational[] startVector(LoadedModel model, DistributionQuery q) {
+        Rational[] start = new Rational[model.states().size()];
         java.util.Arrays.fill(start, Rational.ZERO);
         for (Map.Entry<String, Rational> w : q.start().weights().entrySet()) {
             start[model.state(q.start().option(), w.getKey())] = w.getValue();
         }
+        return start;
+    }
+
+    static DistributionResult run(LoadedModel model, DistributionQuery q, Progress progress) {
+        List<String> states = model.states();
+        Rational[] start = startVector(model, q);
         int[] to = new int[q.to().size()];
         for (int k = 0; k < to.length; k++) {
             to[k] = model.state("--to", q.to().get(k));

@@ -13,9 +13,11 @@ import org.qchain.exact.SizeEstimate;
  * @param start     the start
  * @param to        the states whose total probability is asked for; empty for the whole distribution
  * @param maxDigits refuse a result whose whole series is estimated to have more digits in total
+ * @param factor    formulas (a parameter without a value, one n): factored
+ * @param maxTerms  formulas: refuse powers estimated to need more polynomial terms
  */
-public record DistributionQuery(List<Long> ns, boolean series, Start start, List<String> to, long maxDigits)
-    implements Query {
+public record DistributionQuery(List<Long> ns, boolean series, Start start, List<String> to, long maxDigits,
+                                boolean factor, long maxTerms) implements Query {
     /**
      * Copies the lists and checks them.
      *
@@ -36,6 +38,19 @@ public record DistributionQuery(List<Long> ns, boolean series, Start start, List
         if (to.stream().distinct().count() != to.size()) {
             throw new IllegalArgumentException("a state twice in the set: " + to);
         }
+    }
+
+    /**
+     * A query with expanded formulas and the default term limit.
+     *
+     * @param ns        the step counts
+     * @param series    whether they were asked as a list or range
+     * @param start     the start
+     * @param to        the states whose total probability is asked for
+     * @param maxDigits the digit limit
+     */
+    public DistributionQuery(List<Long> ns, boolean series, Start start, List<String> to, long maxDigits) {
+        this(ns, series, start, to, maxDigits, false, StepQuery.DEFAULT_MAX_TERMS);
     }
 
     /** The distribution after {@code n} steps from {@code start}, with the default limit. */

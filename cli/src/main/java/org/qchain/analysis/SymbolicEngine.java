@@ -230,6 +230,77 @@ final class SymbolicEngine {
         }
     }
 
+    /**
+     * The distribution after one n from a start (a state or a distribution), or the probability of a set of states,
+     * as formulas in the parameters: the start's weighted sum of rows of P^n, each computed once; the values at the
+     * point are checked against the exact engine's distribution of the substituted chain.
+     */
+    static SymbolicStepResult distribution(LoadedModel model, DistributionQuery q, Progress progress) {
+        Model m = model.model();
+        Checked ctx = checked(model);
+        long n = q.ns().get(0);
+        SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
+        Rational[] start = new Rational[m.size()];
+        java.util.Arrays.fill(start, Rational.ZERO);
+        List<RatFun> acc = null;
+        for (Map.Entry<String, Rational> w : q.start().weights().entrySet()) {
+            int i = model.state(q.start().option(), w.getKey());
+            start[i] = w.getValue();
+            if (w.getValue().isZero()) {
+                continue;
+            }
+            List<RatFun> row = ctx.p().powerRow(i, n, limits, multiplying(progress, n));
+            List<RatFun> scaled = new ArrayList<>();
+            for (int j = 0; j < row.size(); j++) {
+                RatFun x = row.get(j).multiply(w.getValue());
+                scaled.add(acc == null ? x : acc.get(j).add(x));
+            }
+            acc = scaled;
+        }
+        int[] to = q.to().stream().mapToInt(t -> model.state("--to", t)).toArray();
+        List<RatFun> cells = new ArrayList<>();
+        if (to.length == 0) {
+            cells.addAll(acc);
+        } else {
+            RatFun sum = acc.get(to[0]);
+            for (int k = 1; k < to.length; k++) {
+                sum = sum.add(acc.get(to[k]));
+            }
+            cells.add(sum);
+        }
+        List<Formula> formulas = new ArrayList<>();
+        for (RatFun f : cells) {
+            formulas.add(new RatFunFormula(f, q.factor()));
+        }
+        Optional<Point> point = model.point();
+        Optional<List<List<Rational>>> values = point.map(pt -> {
+            Rational[] exact = org.qchain.exact.DistributionPowers.series(Chains.transitionMatrix(m, pt.values()),
+                start, new long[] {n}, Progress.NONE).get(0);
+            List<Rational> expected = new ArrayList<>();
+            if (to.length == 0) {
+                expected.addAll(List.of(exact));
+            } else {
+                Rational sum = Rational.ZERO;
+                for (int j : to) {
+                    sum = sum.add(exact[j]);
+                }
+                expected.add(sum);
+            }
+            List<Rational> row = new ArrayList<>();
+            for (int j = 0; j < cells.size(); j++) {
+                Rational v = cells.get(j).evaluate(pt.values());
+                requireEqual(v, expected.get(j));
+                row.add(v);
+            }
+            return List.of(row);
+        });
+        String from = q.start().text();
+        Optional<String> toName = to.length == 0 ? Optional.empty() : Optional.of(String.join(",", q.to()));
+        return new SymbolicStepResult(m.source(), m.kind().word(), n, m.usedParameters(), m.states(), q.factor(),
+            Optional.of(from), toName, List.of(from), toName.map(List::of).orElse(m.states()), List.of(formulas),
+            point, values, ctx.warnings());
+    }
+
     // --- sens --------------------------------------------------------------------------------------------------
 
     static SensResult sens(LoadedModel model, SensQuery q, Progress progress) {

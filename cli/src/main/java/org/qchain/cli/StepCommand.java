@@ -129,6 +129,12 @@ final class StepCommand implements Callable<Integer> {
         if (startOptions.given() && from != null) {
             throw new ParameterException(spec.commandLine(), "--start and --from both name the start; give one");
         }
+        for (int k = 0; k < to.size(); k++) {
+            if (to.subList(0, k).contains(to.get(k))) {
+                throw new ParameterException(spec.commandLine(), "--to names " + to.get(k) + " twice; give each state"
+                    + " once");
+            }
+        }
         if (startOptions.given() || to.size() > 1 || n.series()) {
             return distribution();
         }
@@ -187,14 +193,19 @@ final class StepCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--paths lists the paths of one entry: one n, one --from"
                 + " state and one --to state (not " + what + ")");
         }
-        if (certified || symbolic || symbolicOptions.factor || doubles) {
+        if (certified || symbolic || doubles) {
             throw new ParameterException(spec.commandLine(), what + " gives exact values and decimals; it does not"
-                + " combine with --certified, --symbolic, --factor or --double");
+                + " combine with --certified, --symbolic or --double");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         Start start = startOptions.start().orElseGet(() -> Start.state(from, "--from"));
         LoadedModel loaded = model.load();
-        DistributionQuery q = new DistributionQuery(n.ns(), n.series(), start, to, digitLimit.maxDigits);
+        if (symbolicOptions.factor && (n.series() || !loaded.hasParameterWithoutNominal())) {
+            throw new ParameterException(spec.commandLine(), "--factor applies to formulas: " + what + " gives them"
+                + " for one n on a model with a parameter without a value");
+        }
+        DistributionQuery q = new DistributionQuery(n.ns(), n.series(), start, to, digitLimit.maxDigits,
+            symbolicOptions.factor, symbolicOptions.maxTerms());
         Result result = root.run(spec, progress -> Analysis.distribution(loaded, q, progress));
         Emitter.emit(spec, output.formatter(), result, output.output());
         return ExitCodes.OK;

@@ -27,6 +27,10 @@ final class Symbolic {
         if (r.isSingle()) {
             return "P^" + r.n() + "(" + r.from().get() + " -> " + r.to().get() + ")";
         }
+        if (!r.isMatrix() && r.from().get().contains("=")) {
+            // step --start with a distribution: the start's weighted sum of rows
+            return "Distribution after " + Text.steps(r.n()) + " from " + r.from().get();
+        }
         return r.isMatrix() ? "P^" + r.n() : "Row " + r.from().get() + " of P^" + r.n();
     }
 

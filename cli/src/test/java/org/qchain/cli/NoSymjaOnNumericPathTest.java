@@ -107,6 +107,10 @@ class NoSymjaOnNumericPathTest {
         assertNoForbidden(classesRequestedBy("step", m, "-n", "6", "--format", "json"));
         assertNoForbidden(classesRequestedBy("step", m, "-n", "6", "--format", "csv"));
         assertNoForbidden(classesRequestedBy("step", m, "-n", "600", "--from", "Up", "--certified", "--format", "json"));
+        // a start distribution, a set of states, a table over n
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "1..20", "--start", "Up=1/2", "--start", "Worn=1/2",
+            "--to", "Worn,Down", "--format", "json"));
+        assertNoForbidden(classesRequestedBy("step", m, "-n", "0..60 by 20", "--from", "Up"));
     }
 
     @Test

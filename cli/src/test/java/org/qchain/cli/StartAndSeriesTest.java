@@ -141,6 +141,12 @@ class StartAndSeriesTest {
     }
 
     @Test
+    void aStateTwiceInTheSetIsAUsageError() {
+        assertEquals("qchain: --to names Up twice; give each state once\nTry 'qchain step --help' for more"
+            + " information.\n", usage("step", PLANT, "-n", "2", "--from", "Up", "--to", "Up,Worn,Up").err());
+    }
+
+    @Test
     void toWithoutAStartNamesBothOptions() {
         assertEquals("qchain: --to needs --from (the starting state) or --start (the initial state or"
             + " distribution)\nTry 'qchain step --help' for more information.\n",
@@ -250,5 +256,50 @@ class StartAndSeriesTest {
             + " initial distribution is not computed (step --start gives its exact values for given n)\nTry 'qchain"
             + " closed --help' for more information.\n",
             usage("closed", TWO, "--start", "Working=1/2", "--start", "Failed=1/2").err());
+    }
+
+    @Test
+    void freeParametersGiveFormulasForOneN() {
+        // pump-params.chain: Up -> Worn p, Worn -> Down p, Worn -> Up r, Down -> Up 1/2, p without a value. By hand
+        // (common practice, no source): P^2(Up, .) = ((1-p)^2 + p r, (1-p) p + p (1-p-r), p^2) and P^2(Worn, .) =
+        // (r (1-p) + (1-p-r) r + p/2, r p + (1-p-r)^2, (1-p-r) p); half of each
+        String pump = Cli.model("pump-params.chain");
+        Cli.Result r = Cli.run("step", pump, "-n", "2", "--start", "Up=1/2", "--start", "Worn=1/2");
+        assertEquals(0, r.code(), r::toString);
+        assertEquals("Distribution after 2 steps from Up=1/2, Worn=1/2 for " + pump + " (discrete chain, 3 states) as"
+            + " exact rational functions of p, r\n"
+            + "Each formula is in canonical form: numerator and denominator coprime, expanded.\n\n"
+            + "from              to    P^2\n"
+            + "Up=1/2, Worn=1/2  Up    1/2 - 3/4*p + r + 1/2*p^2 - 1/2*p*r - 1/2*r^2\n"
+            + "Up=1/2, Worn=1/2  Worn  1/2 - r - 1/2*p^2 + p*r + 1/2*r^2\n"
+            + "Up=1/2, Worn=1/2  Down  3/4*p - 1/2*p*r\n\n"
+            + "Caution: results are only as good as the model; safety-critical use follows the applicable standards,"
+            + " local codes and licensed engineering review.\n", r.out());
+        // with --at the formula is evaluated and checked against the exact engine: 1/2 + 3/40 - 1/4 - 1/200 +
+        // 1/80 + 1/32 = 291/800
+        Cli.Result at = Cli.run("step", pump, "-n", "2", "--start", "Up=1/2", "--start", "Worn=1/2", "--to",
+            "Worn,Down", "--at", "p=1/10");
+        assertEquals(0, at.code(), at::toString);
+        assertTrue(at.out().contains("\nUp=1/2, Worn=1/2  Worn,Down  1/2 + 3/4*p - r - 1/2*p^2 + 1/2*p*r + 1/2*r^2\n"),
+            at.out());
+        assertTrue(at.out().contains("\nUp=1/2, Worn=1/2  Worn,Down  0.363750000000  291/800\n"), at.out());
+        Cli.Result factored = Cli.run("step", pump, "-n", "2", "--start", "Up=1/2", "--start", "Worn=1/2", "--to",
+            "Worn,Down", "--factor");
+        assertEquals(0, factored.code(), factored::toString);
+        assertTrue(factored.out().contains("\nUp=1/2, Worn=1/2  Worn,Down  1/4*(2 + 3*p - 4*r - 2*p^2 + 2*p*r +"
+            + " 2*r^2)\n"), factored.out());
+        Cli.Result terms = Cli.run("step", pump, "-n", "2", "--start", "Up=1/2", "--start", "Worn=1/2", "--max-terms",
+            "2");
+        assertEquals(2, terms.code(), terms::toString);
+        assertTrue(terms.err().endsWith("qchain: the symbolic P^2 would have up to about 18 polynomial terms in total"
+            + " (entries of degree up to 2), more than the limit 2; raise it with --max-terms\n"), terms::toString);
+        assertEquals("qchain: --factor applies to formulas: --start gives them for one n on a model with a parameter"
+            + " without a value\nTry 'qchain step --help' for more information.\n",
+            usage("step", PLANT, "-n", "2", "--start", "Up", "--factor").err());
+        Cli.Result series = Cli.run("step", pump, "-n", "1,2", "--from", "Up");
+        assertEquals(2, series.code(), series::toString);
+        assertEquals("qchain: a list or range of n needs a value for every parameter (parameters without a value: p;"
+            + " give them with --at NAME=VALUE); formulas in the parameters are given for one n at a time\n",
+            series.err());
     }
 }

@@ -34,8 +34,10 @@ class ValuesOriginTest {
         String json = out("step", NOMINAL, "-n", "2", "--from", "Up", "--to", "Down", "--at", "p=1/10", "--format",
             "json");
         assertTrue(json.contains(",\"kind\":\"discrete\",\"at\":{\"p\":\"1/10\",\"r\":\"1/4\"},\"digits\":12,"), json);
-        String start = out("step", PUMP, "-n", "2", "--start", "Up", "--at", "p=1/10");
+        String start = out("step", NOMINAL, "-n", "2", "--start", "Up", "--at", "p=1/10");
         assertTrue(start.contains("\nParameters at " + MIXED + ".\n"), start);
+        String symbolicStart = out("step", PUMP, "-n", "2", "--start", "Up", "--at", "p=1/10");
+        assertTrue(symbolicStart.contains("\nAt " + MIXED + ":\n"), symbolicStart);
     }
 
     @Test

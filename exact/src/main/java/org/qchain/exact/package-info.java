@@ -6,6 +6,8 @@
  * <li>{@link org.qchain.exact.Rational} and {@link org.qchain.exact.RationalMatrix}: immutable values, always in
  * lowest terms.</li>
  * <li>{@link org.qchain.exact.MatrixPowers}: {@code P^n}, one row of it, one entry of it.</li>
+ * <li>{@link org.qchain.exact.DistributionPowers}: a distribution after n steps, {@code start · P^n}, for one n or a
+ * series of n that continues each from the one before.</li>
  * <li>{@link org.qchain.exact.TopPaths}: the {@code K} most probable paths of length {@code n} between two states,
  * as {@link org.qchain.exact.WeightedPath}s.</li>
  * <li>{@link org.qchain.exact.SizeEstimate}: how many digits a result will have, before computing it, and the
