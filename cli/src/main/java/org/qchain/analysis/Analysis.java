@@ -139,6 +139,7 @@ public final class Analysis {
                 // the values at the point come from the exact engine too: its estimate first
                 DistributionEngine.guard(model, q, DistributionEngine.startVector(model, q));
             }
+            SizeGuard.check(model, q);
             return Interrupts.guarded(() -> SymbolicEngine.distribution(model, q, progress));
         }
         if (!model.complete()) {

@@ -38,6 +38,20 @@ final class SizeGuard {
         });
     }
 
+    /** A distribution query on the symbolic route (one n): each row of P^n it needs, estimated before any product. */
+    static void check(LoadedModel model, DistributionQuery q) {
+        for (String s : q.start().weights().keySet()) {
+            model.state(q.start().option(), s);
+        }
+        for (String t : q.to()) {
+            model.state("--to", t);
+        }
+        Interrupts.guarded(() -> {
+            SymbolicEngine.requireWithin(model, q);
+            return null;
+        });
+    }
+
     /** A sensitivity query. */
     static void check(LoadedModel model, SensQuery q) {
         if (model.complete()) {

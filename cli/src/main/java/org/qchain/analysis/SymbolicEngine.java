@@ -115,6 +115,12 @@ final class SymbolicEngine {
         (q.from().isPresent() ? e.row(p.size()) : e).requireWithin(new SymbolicLimits(q.maxTerms(), q.maxDigits()));
     }
 
+    /** Refuses a distribution whose rows of the power are estimated past the query's limits. */
+    static void requireWithin(LoadedModel model, DistributionQuery q) {
+        RatFunMatrix p = checked(model).p();
+        p.estimatePower(q.ns().get(0)).row(p.size()).requireWithin(new SymbolicLimits(q.maxTerms(), q.maxDigits()));
+    }
+
     /** Refuses a sensitivity whose row of the power is estimated past the query's limits. */
     static void requireWithin(LoadedModel model, SensQuery q) {
         RatFunMatrix p = checked(model).p();
