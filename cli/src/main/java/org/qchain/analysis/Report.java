@@ -119,8 +119,11 @@ public final class Report {
             throw new QchainException(ErrorKey.INTERRUPTED);
         }
         progress.update("report: " + what, Math.min(done, total), total);
+        // the engine's own progress, shown under the report's: "report 4/9: the closed form (powers) 3/20"
+        String label = "report " + Math.min(done + 1, total) + "/" + total + ": " + what;
+        Progress inner = (phase, d, t) -> progress.update(label + " (" + phase + ")", d, t);
         try {
-            return Optional.of(Analysis.run(model, query, Progress.NONE));
+            return Optional.of(Analysis.run(model, query, inner));
         } catch (QchainException e) {
             if (e.key() == ErrorKey.INTERRUPTED) {
                 throw e;
