@@ -301,7 +301,7 @@ class ReportLayoutTest {
         for (String env : List.of("tabular", "tikzpicture", "itemize", "center", "verbatim")) {
             assertEquals(count(tex, "\\begin{" + env + "}"), count(tex, "\\end{" + env + "}"), env);
         }
-        assertEquals(2, count(tex, "\\begin{tikzpicture}"));
+        assertEquals(3, count(tex, "\\begin{tikzpicture}"), "the diagram and two plots");
         // every tabular row has as many cells as its column specification
         Matcher tab = Pattern.compile("\\\\begin\\{tabular\\}\\{(l+)\\}\\n(.*?)\\\\end\\{tabular\\}", Pattern.DOTALL)
             .matcher(tex);
