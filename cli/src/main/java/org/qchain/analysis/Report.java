@@ -136,8 +136,17 @@ public final class Report {
     }
 
     private ReportResult run() {
+        // what the user named is checked before any work: a bad name or sweep fails the report (exit 2)
         from();
         targets();
+        sensTo();
+        if (q.sweep().isPresent()) {
+            String p = sweepParameter(q.sweep().get());
+            if (model.model().param(p).isEmpty()) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "--sweep", q.sweep().get(), "'" + p
+                    + "' is not a parameter of " + model.source());
+            }
+        }
         List<ReportResult.Section> sections = new ArrayList<>();
         Optional<LongRunResult> longRun = Optional.empty();
         Optional<AvailabilityResult> avail = Optional.empty();
