@@ -396,7 +396,10 @@ public final class Report {
         String range = q.sweep().orElseGet(() -> defaultSweep(params.get(0)));
         SensQuery s = new SensQuery(n, from(), sensTo(), sweepParameter(range), Optional.of(range), false,
             q.maxTerms(), q.maxDigits());
-        Optional<ReportResult.SweepTable> sweep = ask(s, "the sweep", notes).map(SensResult.class::cast)
+        // a sweep the user wrote is part of the question: its refusal fails the report; the default one is a note
+        Optional<Result> ran = q.sweep().isPresent() ? Optional.of(Analysis.run(model, s, Progress.NONE))
+            : ask(s, "the sweep", notes);
+        Optional<ReportResult.SweepTable> sweep = ran.map(SensResult.class::cast)
             .flatMap(SensResult::sweep).map(sw -> new ReportResult.SweepTable(figure, sw.parameter(), range,
                 sw.lines().stream().map(l -> new ReportResult.SweepRow(l.value(), l.probability(),
                     Optional.of(l.derivative()))).toList()));
@@ -457,7 +460,7 @@ public final class Report {
             }
             sweep = Optional.of(new ReportResult.SweepTable("availability", spec.parameter(), range, rows));
         } catch (QchainException e) {
-            if (e.key() == ErrorKey.INTERRUPTED) {
+            if (e.key() == ErrorKey.INTERRUPTED || q.sweep().isPresent()) {
                 throw e;
             }
             notes.add("the sweep: not included (" + e.getMessage() + ")");

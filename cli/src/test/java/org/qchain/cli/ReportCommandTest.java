@@ -101,6 +101,10 @@ class ReportCommandTest {
             "--sweep", "p from 0 to 1");
         assertEquals(2, s.code(), s::toString);
         assertTrue(!Files.exists(dir.resolve("r.md")));
+        Cli.Result t = Cli.run("report", Cli.model("two-state-nominal.chain"), "-o", dir.resolve("r.md").toString(),
+            "--sweep", "p in [0, 2] with 3 points");
+        assertEquals(2, t.code(), t::toString);
+        assertTrue(!Files.exists(dir.resolve("r.md")));
     }
 
     @Test
