@@ -119,8 +119,11 @@ public final class Report {
             throw new QchainException(ErrorKey.INTERRUPTED);
         }
         progress.update("report: " + what, Math.min(done, total), total);
+        // the engine's own progress, shown under the report's: "report 4/9: the closed form (powers) 3/20"
+        String label = "report " + Math.min(done + 1, total) + "/" + total + ": " + what;
+        Progress inner = (phase, d, t) -> progress.update(label + " (" + phase + ")", d, t);
         try {
-            return Optional.of(Analysis.run(model, query, Progress.NONE));
+            return Optional.of(Analysis.run(model, query, inner));
         } catch (QchainException e) {
             if (e.key() == ErrorKey.INTERRUPTED) {
                 throw e;
@@ -133,8 +136,17 @@ public final class Report {
     }
 
     private ReportResult run() {
+        // what the user named is checked before any work: a bad name or sweep fails the report (exit 2)
         from();
         targets();
+        sensTo();
+        if (q.sweep().isPresent()) {
+            String p = sweepParameter(q.sweep().get());
+            if (model.model().param(p).isEmpty()) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "--sweep", q.sweep().get(), "'" + p
+                    + "' is not a parameter of " + model.source());
+            }
+        }
         List<ReportResult.Section> sections = new ArrayList<>();
         Optional<LongRunResult> longRun = Optional.empty();
         Optional<AvailabilityResult> avail = Optional.empty();
@@ -384,7 +396,10 @@ public final class Report {
         String range = q.sweep().orElseGet(() -> defaultSweep(params.get(0)));
         SensQuery s = new SensQuery(n, from(), sensTo(), sweepParameter(range), Optional.of(range), false,
             q.maxTerms(), q.maxDigits());
-        Optional<ReportResult.SweepTable> sweep = ask(s, "the sweep", notes).map(SensResult.class::cast)
+        // a sweep the user wrote is part of the question: its refusal fails the report; the default one is a note
+        Optional<Result> ran = q.sweep().isPresent() ? Optional.of(Analysis.run(model, s, Progress.NONE))
+            : ask(s, "the sweep", notes);
+        Optional<ReportResult.SweepTable> sweep = ran.map(SensResult.class::cast)
             .flatMap(SensResult::sweep).map(sw -> new ReportResult.SweepTable(figure, sw.parameter(), range,
                 sw.lines().stream().map(l -> new ReportResult.SweepRow(l.value(), l.probability(),
                     Optional.of(l.derivative()))).toList()));
@@ -445,7 +460,7 @@ public final class Report {
             }
             sweep = Optional.of(new ReportResult.SweepTable("availability", spec.parameter(), range, rows));
         } catch (QchainException e) {
-            if (e.key() == ErrorKey.INTERRUPTED) {
+            if (e.key() == ErrorKey.INTERRUPTED || q.sweep().isPresent()) {
                 throw e;
             }
             notes.add("the sweep: not included (" + e.getMessage() + ")");

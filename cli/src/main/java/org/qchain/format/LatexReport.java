@@ -158,7 +158,7 @@ final class LatexReport extends ReportWriter {
 
     @Override
     void diagram(String title, ReportResult.DiagramSection d) {
-        // the DOT text that follows is the diagram in this format
+        out.append("\\begin{center}\n").append(StateDiagram.tikz(d)).append("\\end{center}\n\n");
     }
 
     @Override

@@ -141,6 +141,40 @@ final class StateDiagram {
         return sb.toString();
     }
 
+    /**
+     * The diagram as a TikZ picture with the same circular layout as {@link #svg}: states as circles, each transition
+     * a bent arrow labelled with its formula in math mode, self-loops outside their state; past
+     * {@link #MAX_LABELLED_EDGES} edges without labels.
+     */
+    static String tikz(ReportResult.DiagramSection d) {
+        int n = d.states().size();
+        boolean labels = labelled(d);
+        double scale = 11.0 / SIZE;
+        StringBuilder sb = new StringBuilder("\\begin{tikzpicture}[>=stealth,font=\\small,"
+            + "state/.style={circle,draw,thick,minimum size=1.1cm,inner sep=1pt}]\n");
+        for (int i = 0; i < n; i++) {
+            double[] p = position(i, n);
+            sb.append("\\node[state] (s").append(i).append(") at (").append(f((p[0] - SIZE / 2.0) * scale))
+                .append(',').append(f((SIZE / 2.0 - p[1]) * scale)).append(") {")
+                .append(LatexReport.text(d.states().get(i))).append("};\n");
+        }
+        for (ReportResult.Edge e : d.edges()) {
+            String label = labels ? " node[midway,fill=white,inner sep=1pt,font=\\scriptsize] {$" + e.label().latex()
+                + "$}" : "";
+            if (e.from() == e.to()) {
+                double[] p = position(e.from(), n);
+                long angle = n == 1 ? 90 : Math.round(Math.toDegrees(Math.atan2(SIZE / 2.0 - p[1], p[0] - SIZE / 2.0)));
+                sb.append("\\draw[->] (s").append(e.from()).append(") to[out=").append(angle + 25).append(",in=")
+                    .append(angle - 25).append(",looseness=6]").append(label).append(" (s").append(e.to())
+                    .append(");\n");
+            } else {
+                sb.append("\\draw[->] (s").append(e.from()).append(") to[bend left=15]").append(label).append(" (s")
+                    .append(e.to()).append(");\n");
+            }
+        }
+        return sb.append("\\end{tikzpicture}\n").toString();
+    }
+
     private static String text(double x, double y, String label) {
         return "<text class=\"edge-label\" x=\"" + f(x) + "\" y=\"" + f(y) + "\" text-anchor=\"middle\""
             + " paint-order=\"stroke\" stroke=\"#ffffff\" stroke-width=\"3\" fill=\"#222222\">" + label + "</text>\n";

@@ -91,6 +91,23 @@ class ReportCommandTest {
     }
 
     @Test
+    void badSweepIsAnErrorBeforeAnyWork() {
+        Cli.Result r = Cli.run("report", Cli.model("two-state-nominal.chain"), "-o", dir.resolve("r.md").toString(),
+            "--sweep", "q in [0, 1] with 3 points");
+        assertEquals(2, r.code(), r::toString);
+        assertTrue(r.err().startsWith("qchain: invalid --sweep 'q in [0, 1] with 3 points': 'q' is not a parameter of"),
+            r.err());
+        Cli.Result s = Cli.run("report", Cli.model("two-state-nominal.chain"), "-o", dir.resolve("r.md").toString(),
+            "--sweep", "p from 0 to 1");
+        assertEquals(2, s.code(), s::toString);
+        assertTrue(!Files.exists(dir.resolve("r.md")));
+        Cli.Result t = Cli.run("report", Cli.model("two-state-nominal.chain"), "-o", dir.resolve("r.md").toString(),
+            "--sweep", "p in [0, 2] with 3 points");
+        assertEquals(2, t.code(), t::toString);
+        assertTrue(!Files.exists(dir.resolve("r.md")));
+    }
+
+    @Test
     void neverWritesOverTheModel() throws Exception {
         Path model = dir.resolve("m.md");
         Files.copy(Path.of(Cli.model("two-state-nominal.chain")), model);
