@@ -107,7 +107,7 @@ public final class Report {
         n += q.has(ReportSection.MODEL) ? 2 : 0;
         n += q.has(ReportSection.STEPS) ? (continuous() ? 1 : q.steps().size()) : 0;
         n += q.has(ReportSection.CLOSED) ? 1 : 0;
-        n += q.has(ReportSection.LONGRUN) ? 3 : 0;
+        n += q.has(ReportSection.LONGRUN) ? (continuous() ? 4 : 3) : 0;
         n += q.has(ReportSection.SENSITIVITY) ? 2 * model.model().usedParameters().size() + 2 : 0;
         n += q.has(ReportSection.PLOTS) ? (continuous() ? 2 : (int) Math.min(q.plotSteps() + 2, 10_000)) : 0;
         return Math.max(n, 1);
@@ -358,7 +358,9 @@ public final class Report {
     }
 
     private ReportResult.LongRunSection availability() {
-        List<String> notes = new ArrayList<>();
+        // the classes, the long run and any absorption of the generator, then the figures of merit
+        ReportResult.LongRunSection base = longRun();
+        List<String> notes = new ArrayList<>(base.notes());
         Optional<AvailabilityResult> a = Optional.empty();
         if (model.model().upStates().isEmpty()) {
             notes.add("The model has no 'up' line: availability figures need the operating states.");
@@ -367,7 +369,7 @@ public final class Report {
                 .HOURS_PER_YEAR, q.digits(), CertifiedPowers.DEFAULT_MAX_BITS);
             a = ask(aq, "availability", notes).map(AvailabilityResult.class::cast);
         }
-        return new ReportResult.LongRunSection(Optional.empty(), Optional.empty(), Optional.empty(), a, notes);
+        return new ReportResult.LongRunSection(base.classes(), base.longRun(), base.absorb(), a, notes);
     }
 
     // --- sensitivity ----------------------------------------------------------------------------------------------------

@@ -205,7 +205,7 @@ abstract class ReportWriter implements ReportLayout {
                 heading(2, r.continuous() ? "Closed form in t" : "Closed form in n", "closed");
                 c.closed().ifPresent(this::closed);
             } else if (s instanceof ReportResult.LongRunSection l) {
-                heading(2, r.continuous() ? "Availability" : "Long run", "longrun");
+                heading(2, r.continuous() ? "Long run and availability" : "Long run", "longrun");
                 l.classes().ifPresent(this::classes);
                 l.longRun().ifPresent(this::longRun);
                 l.absorb().ifPresent(this::absorb);
@@ -403,10 +403,13 @@ abstract class ReportWriter implements ReportLayout {
     private void classes(ClassesResult c) {
         List<List<List<Span>>> rows = new ArrayList<>();
         for (ClassesResult.ChainClass k : c.classes()) {
-            rows.add(List.of(t(String.join(", ", k.states())), t(k.closed() ? "closed" : "transient"),
+            // a continuous chain has no period
+            rows.add(c.continuous() ? List.of(t(String.join(", ", k.states())), t(k.closed() ? "closed" : "transient"))
+                : List.of(t(String.join(", ", k.states())), t(k.closed() ? "closed" : "transient"),
                 t(k.period() == 0 ? "none (no return)" : Integer.toString(k.period()))));
         }
-        table("Communicating classes", List.of("states", "kind", "period"), rows);
+        table("Communicating classes", c.continuous() ? List.of("states", "kind") : List.of("states", "kind", "period"),
+            rows);
         paragraph(t("Absorbing states: " + (c.absorbing().isEmpty() ? "none" : String.join(", ", c.absorbing()))
             + "."));
     }
@@ -419,10 +422,11 @@ abstract class ReportWriter implements ReportLayout {
             List<List<List<Span>>> rows = new ArrayList<>();
             for (int i = 0; i < k.states().size(); i++) {
                 rows.add(List.of(t(k.states().get(i)), formulaCell(k.stationary().get(i)),
-                    formulaCell(k.meanRecurrence().get(i))));
+                    i < k.meanRecurrence().size() ? formulaCell(k.meanRecurrence().get(i)) : t("never left")));
             }
             table("Stationary law of the closed class {" + String.join(", ", k.states()) + "}",
-                List.of("state", "π", "mean recurrence time 1/π"), rows);
+                List.of("state", "π", l.continuous() ? "mean return time 1/(π q)" : "mean recurrence time 1/π"),
+                rows);
         }
         if (!l.absorption().isEmpty()) {
             List<String> head = new ArrayList<>();
@@ -442,7 +446,8 @@ abstract class ReportWriter implements ReportLayout {
             }
             table("Probability of ending in each closed class (" + closed.size() + ")", head, rows);
         }
-        table(l.cesaro() ? "Limit of the averages of P^n (a closed class is periodic)" : "Limit of P^n as n grows",
+        table(l.continuous() ? "Limit of P(t) as t grows" : l.cesaro()
+            ? "Limit of the averages of P^n (a closed class is periodic)" : "Limit of P^n as n grows",
             header(l.states()), matrixRows(l.states(), l.limit().stream()
                 .map(row -> row.stream().map(this::formulaCell).toList()).toList()));
     }
@@ -453,8 +458,8 @@ abstract class ReportWriter implements ReportLayout {
             rows.add(List.of(t(a.transients().get(i)), formulaCell(a.expectedSteps().get(i)),
                 formulaCell(a.variance().get(i))));
         }
-        table("Steps until absorption into {" + String.join(", ", a.absorbing()) + "}",
-            List.of("from", "expected steps", "variance"), rows);
+        table((a.continuous() ? "Time" : "Steps") + " until absorption into {" + String.join(", ", a.absorbing())
+            + "}", List.of("from", a.continuous() ? "expected time" : "expected steps", "variance"), rows);
         List<String> head = new ArrayList<>();
         head.add("from \\ absorbed in");
         head.addAll(a.absorbing());
