@@ -20,7 +20,8 @@ import org.qchain.symbolic.TestChains;
  * The a-priori bound of a sweep's digits ({@link SweepEstimate}, from the one-step matrix) is never below the figure
  * the sweep checks from the computed formulas ({@link EntrySensitivity#sweep}), on random chains in two parameters
  * with a fixed seed: polynomial and rational entries, the derivative in the swept parameter or in the other one, one
- * final state or several. The sweep's figure is read from its refusal at a limit of 0 digits.
+ * final state or several; and never below the digits of the sweep's exact values. The sweep's figure is read from
+ * its refusal at a limit of 0 digits (common practice, no source: the bound's argument is in SweepEstimate).
  */
 class SweepEstimateTest {
     private static final String[] POOL = {"a", "b", "a/2", "a*b", "(1 - a)/3", "b/(1 + a)", "a^2/4", "1/5",
@@ -78,6 +79,15 @@ class SweepEstimateTest {
             long bound = SweepEstimate.digits(p, n, from, to, wrt, r, base);
             String what = "n=" + n + " v=" + v + " wrt=" + wrt + " " + p + " E=" + e.probability() + " dE=" + e.derivative() + " base=" + base + " points=" + r.size();
             assertTrue(bound >= figure, () -> "bound " + bound + " < sweep's " + figure + ": " + what);
+            // and the real size: the digits of every exact value of the sweep
+            long real = 0;
+            for (SweepRow row : e.sweep(r, base)) {
+                for (Rational x : new Rational[] {row.probability(), row.derivative()}) {
+                    real += x.numerator().abs().toString().length() + x.denominator().toString().length();
+                }
+            }
+            long realDigits = real;
+            assertTrue(bound >= realDigits, () -> "bound " + bound + " < " + realDigits + " real digits: " + what);
         }
     }
 }
