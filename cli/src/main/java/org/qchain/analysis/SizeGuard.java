@@ -13,8 +13,11 @@ import java.util.OptionalInt;
  * search's work ({@link NumericEngine#guard}); a symbolic step's terms and digits of the power or of one row, a
  * sensitivity's row, closed forms' powers P^1 .. P^s (estimates from degrees and coefficient heights, in
  * {@link SymbolicEngine}, which alone names symbolic types). Where a symbolic query is also evaluated at a point,
- * the exact engine's estimate of that value comes first. The closed forms' estimate of their printed digits needs
- * the factors of the characteristic polynomial, so it stays with the closed-form engine, after its first phase.
+ * the exact engine's estimate of that value comes first. Two engines check a figure of their own that needs their
+ * work: a sweep's digits (from the formula) and a parameter-free closed form's printed digits (from the factors of
+ * the characteristic polynomial). For both the guard decides first on an a-priori upper bound from the model and the
+ * query ({@code SweepEstimate}, {@code ClosedForms.digitBound}), never below the engine's figure (each class gives
+ * the argument; random-chain tests check it), so the engines' checks stay as a second line that does not fire here.
  */
 final class SizeGuard {
     private SizeGuard() {

@@ -33,6 +33,7 @@ import org.qchain.symbolic.closed.SeriesForm;
 import org.qchain.symbolic.sensitivity.EntrySensitivity;
 import org.qchain.symbolic.sensitivity.PointSensitivity;
 import org.qchain.symbolic.sensitivity.Sensitivity;
+import org.qchain.symbolic.sensitivity.SweepEstimate;
 import org.qchain.symbolic.sensitivity.SweepRange;
 import org.qchain.symbolic.sensitivity.SweepRow;
 import org.qchain.result.CheckResult;
@@ -121,17 +122,64 @@ final class SymbolicEngine {
         p.estimatePower(q.ns().get(0)).row(p.size()).requireWithin(new SymbolicLimits(q.maxTerms(), q.maxDigits()));
     }
 
-    /** Refuses a sensitivity whose row of the power is estimated past the query's limits. */
+    /**
+     * Refuses a sensitivity whose row of the power is estimated past the query's limits, then a sweep whose exact
+     * values are bounded past the digit limit ({@link SweepEstimate}, from the one-step matrix: never below the
+     * figure the sweep itself checks, so that check, kept as a second line, does not fire).
+     */
     static void requireWithin(LoadedModel model, SensQuery q) {
         RatFunMatrix p = checked(model).p();
         p.estimatePower(q.n()).row(p.size()).requireWithin(new SymbolicLimits(q.maxTerms(), q.maxDigits()));
+        Optional<SweepRange> range = sweepRange(model.model(), q);
+        if (range.isPresent() && p.ring().indexOf(q.wrt()).isPresent()) {
+            SweepRange r = range.get();
+            int[] to = q.toStates().stream().mapToInt(t -> model.state("--to", t)).toArray();
+            long digits = SweepEstimate.digits(p, q.n(), model.state("--from", q.from()), to, q.wrt(), r,
+                others(model, r, q.sweep().get()));
+            if (digits > q.maxDigits()) {
+                throw sweepTooLarge(digits, r.size(), q.maxDigits());
+            }
+        }
     }
 
-    /** Refuses closed forms whose powers P^1 .. P^s are estimated past the query's term limit. */
+    private static QchainException sweepTooLarge(Object digits, Object points, Object limit) {
+        return new QchainException(ErrorKey.SWEEP_TOO_LARGE, digits, points, limit,
+            "; raise it with " + NumericEngine.MAX_DIGITS_OPTION + ", or sweep fewer points");
+    }
+
+    /** The --wrt and --sweep checks of a sensitivity query, and its sweep range if it has one. */
+    private static Optional<SweepRange> sweepRange(Model m, SensQuery q) {
+        for (String wrt : q.gradient()) {
+            if (m.param(wrt).isEmpty()) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "--wrt", wrt, m.params().isEmpty()
+                    ? "the model declares no parameters"
+                    : "not a parameter of " + m.source() + " (parameters: "
+                        + String.join(", ", m.params().stream().map(d -> d.name()).toList()) + ")");
+            }
+        }
+        if (q.sweep().isPresent() && q.gradient().size() > 1) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--sweep", q.sweep().get(), "a sweep tabulates one"
+                + " derivative; give one --wrt parameter with --sweep (asked: " + String.join(", ", q.gradient())
+                + "), or the gradient without --sweep");
+        }
+        return q.sweep().map(text -> sweep(m, text));
+    }
+
+    /**
+     * Refuses closed forms whose powers P^1 .. P^s are estimated past the query's term limit, then, for a chain with
+     * no free parameter, closed forms whose printed digits are bounded past the digit limit (the bound from P's
+     * entries, {@link ClosedForms#digitBound}, is never below the figure the engine checks after factoring, which
+     * stays as a second line that does not fire).
+     */
     static void requireWithin(LoadedModel model, ClosedQuery q) {
         checked(model);
         ClosedForms.estimate(model.model(), model.given())
             .requireTermsWithin(new SymbolicLimits(q.maxTerms(), q.maxDigits()));
+        java.util.OptionalLong digits = ClosedForms.digitBound(model.model(), model.given());
+        if (digits.isPresent() && digits.getAsLong() > q.maxDigits()) {
+            throw new QchainException(ErrorKey.RESULT_TOO_LARGE, digits.getAsLong(), q.maxDigits(),
+                SymbolicLimits.DIGITS_OPTION);
+        }
     }
 
     private static LongConsumer multiplying(Progress progress, long n) {
@@ -311,20 +359,7 @@ final class SymbolicEngine {
 
     static SensResult sens(LoadedModel model, SensQuery q, Progress progress) {
         Model m = model.model();
-        for (String wrt : q.gradient()) {
-            if (m.param(wrt).isEmpty()) {
-                throw new QchainException(ErrorKey.BAD_ARGUMENT, "--wrt", wrt, m.params().isEmpty()
-                    ? "the model declares no parameters"
-                    : "not a parameter of " + m.source() + " (parameters: "
-                        + String.join(", ", m.params().stream().map(d -> d.name()).toList()) + ")");
-            }
-        }
-        if (q.sweep().isPresent() && q.gradient().size() > 1) {
-            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--sweep", q.sweep().get(), "a sweep tabulates one"
-                + " derivative; give one --wrt parameter with --sweep (asked: " + String.join(", ", q.gradient())
-                + "), or the gradient without --sweep");
-        }
-        Optional<SweepRange> range = q.sweep().map(text -> sweep(m, text));
+        Optional<SweepRange> range = sweepRange(m, q);
         Checked ctx = checked(model);
         int from = model.state("--from", q.from());
         int[] to = q.toStates().stream().mapToInt(t -> model.state("--to", t)).toArray();
@@ -385,13 +420,14 @@ final class SymbolicEngine {
             List<SensResult.SweepLine> lines = new ArrayList<>();
             List<SweepRow> rows;
             try {
+                // the second line of defence: SizeGuard refused, before any work, every sweep whose a-priori bound
+                // (never below this figure) passes the limit
                 rows = s.sweep(r, others, q.maxDigits(), progress);
             } catch (QchainException e) {
                 if (e.key() != ErrorKey.SWEEP_TOO_LARGE) {
                     throw e;
                 }
-                throw new QchainException(ErrorKey.SWEEP_TOO_LARGE, e.args().get(0), e.args().get(1), e.args().get(2),
-                    "; raise it with " + NumericEngine.MAX_DIGITS_OPTION + ", or sweep fewer points");
+                throw sweepTooLarge(e.args().get(0), e.args().get(1), e.args().get(2));
             }
             for (SweepRow row : rows) {
                 lines.add(new SensResult.SweepLine(row.value(), row.probability(), row.derivative()));

@@ -12,7 +12,9 @@
  * {@link org.qchain.analysis.Query} permits) goes to {@link org.qchain.analysis.Analysis}, which picks the
  * {@link org.qchain.analysis.Route}, runs the query's size guard ({@code SizeGuard}) before any engine and returns a
  * result of
- * {@code org.qchain.result}. {@code NumericEngine} calls the exact module only; {@code SymbolicEngine} is the one
+ * {@code org.qchain.result}. The guard's decisions are all made from the model and the query: where an engine's own
+ * figure needs its work (a sweep's formula, a closed form's factors), the guard uses an a-priori upper bound of that
+ * figure, and the engine's check stays as a second line. {@code NumericEngine} calls the exact module only; {@code SymbolicEngine} is the one
  * class that names symbolic types.
  *
  * <pre>{@code

@@ -97,4 +97,57 @@ class SizeGuardTest {
             () -> Analysis.step(pump, StepQuery.matrix(1L << 40), NO_ENGINE));
         assertEquals(ErrorKey.RESULT_TOO_LARGE, e.key());
     }
+
+    private static final Path PUMP = Path.of("src/test/resources/models/pump-params.chain");
+    private static final Path CUBIC = Path.of("src/test/resources/models/closed-cubic.chain");
+
+    @Test
+    void aSweepPastTheDigitLimitIsRefusedBeforeTheFormulaIsComputed() {
+        // the sweep's own figure needs the formula (a power of the symbolic matrix, which reports its progress);
+        // the guard's bound comes from the one-step matrix
+        LoadedModel pump = LoadedModel.load(PUMP, Map.of());
+        SensQuery q = new SensQuery(20, "Up", "Down", "p", Optional.of("p in [0, 1/2] by 1/20000"), false,
+            StepQuery.DEFAULT_MAX_TERMS, 100_000);
+        QchainException e = assertThrows(QchainException.class, () -> Analysis.run(pump, q, NO_ENGINE));
+        assertEquals(ErrorKey.SWEEP_TOO_LARGE, e.key());
+        org.junit.jupiter.api.Assertions.assertTrue(e.getMessage().matches("the sweep would compute about \\d+ digits"
+            + " of exact values at 10001 points, more than the limit 100000; raise it with --max-digits, or sweep"
+            + " fewer points"), e::getMessage);
+        // within the limit, the same sweep runs
+        SensQuery small = new SensQuery(20, "Up", "Down", "p", Optional.of("p in [0, 1/2] by 1/20"), false,
+            StepQuery.DEFAULT_MAX_TERMS, 100_000);
+        assertEquals(11, Analysis.sens(pump, small, Progress.NONE).sweep().orElseThrow().lines().size());
+    }
+
+    @Test
+    void aSweepInTheOtherParameterIsBoundedToo() {
+        LoadedModel pump = LoadedModel.load(PUMP, Map.of("p", Rational.of(1, 10)));
+        SensQuery q = new SensQuery(10, "Up", "Down", "p", Optional.of("r in [0, 1/2] by 1/20000"), false,
+            StepQuery.DEFAULT_MAX_TERMS, 40_000);
+        assertEquals(ErrorKey.SWEEP_TOO_LARGE,
+            assertThrows(QchainException.class, () -> Analysis.run(pump, q, NO_ENGINE)).key());
+    }
+
+    @Test
+    void aParameterFreeClosedFormPastTheDigitLimitIsRefusedBeforeTheClosedFormEngine() {
+        // the engine's own figure (1040 digits) needs the characteristic polynomial's factors, after its "powers"
+        // and "factoring" phases; the guard's bound (2720) comes from P's entries
+        LoadedModel cubic = LoadedModel.load(CUBIC, Map.of());
+        for (org.qchain.result.ClosedResult.Form form : org.qchain.result.ClosedResult.Form.values()) {
+            ClosedQuery q = new ClosedQuery(form, Optional.empty(), "--from", Optional.empty(),
+                StepQuery.DEFAULT_MAX_TERMS, 12, 2719);
+            QchainException e = assertThrows(QchainException.class, () -> Analysis.run(cubic, q, NO_ENGINE));
+            assertEquals("the result would have about 2720 digits in total, more than the limit 2719; raise it with"
+                + " --max-digits", e.getMessage());
+        }
+        ClosedQuery ok = new ClosedQuery(org.qchain.result.ClosedResult.Form.MATRIX, Optional.empty(), "--from",
+            Optional.empty(), StepQuery.DEFAULT_MAX_TERMS, 12, 2720);
+        Analysis.run(cubic, ok, Progress.NONE);
+        // parameters given values make the chain parameter-free: the bound applies
+        LoadedModel pump = LoadedModel.load(PUMP, Map.of("p", Rational.of(1, 10), "r", Rational.of(1, 4)));
+        ClosedQuery tiny = new ClosedQuery(org.qchain.result.ClosedResult.Form.MATRIX, Optional.empty(), "--from",
+            Optional.empty(), StepQuery.DEFAULT_MAX_TERMS, 12, 10);
+        assertEquals(ErrorKey.RESULT_TOO_LARGE,
+            assertThrows(QchainException.class, () -> Analysis.run(pump, tiny, NO_ENGINE)).key());
+    }
 }

@@ -189,6 +189,8 @@ final class RationalRoute {
                 digits += estimate(h, (int) gq.degree(0));
             }
         }
+        // the second line of defence: a caller's size guard refuses first with ClosedForms.digitBound, from P's
+        // entries, which is never below this figure (DigitBound gives the argument), so this does not fire there
         if (digits > limits.maxDigits()) {
             throw new QchainException(ErrorKey.RESULT_TOO_LARGE, digits, limits.maxDigits(), SymbolicLimits.DIGITS_OPTION);
         }

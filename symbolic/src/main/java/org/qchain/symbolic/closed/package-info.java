@@ -46,7 +46,10 @@
  * denominator d, factorisation over Q, and the parts of each simple factor from integer combinations of the adjugate
  * coefficients with {@code chi'^-1} modulo the factor (fraction-free elimination), reduced once per entry. It hands
  * back the same values as constants of Q(parameters), so every later step and every printed form is shared with the
- * general route; the tests check both routes against each other and against exact powers.
+ * general route; the tests check both routes against each other and against exact powers. Its estimate of the
+ * printed digits of the parts, made after factoring, is refused past the digit limit; a caller's size guard refuses
+ * first on {@link org.qchain.symbolic.closed.ClosedForms#digitBound}, an upper bound of that figure from P's entries
+ * alone, before any work.
  *
  * <p>Every result is checked in the tests against exact P^n (the symbolic module's powers with parameters free, the
  * exact module's products with them substituted), and {@code evaluate} uses exact arithmetic throughout: square-root

@@ -86,6 +86,8 @@ public record EntrySensitivity(long n, int from, int to, String parameter, RatFu
             Rational x = range.point(k);
             digits = Math.addExact(digits, pv.digitsAt(x) + dv.digitsAt(x));
         }
+        // the second line of defence: a caller's size guard refuses first with SweepEstimate, from the one-step
+        // matrix, which is never below this figure (SweepEstimate gives the argument), so this does not fire there
         if (digits > maxDigits) {
             throw new QchainException(ErrorKey.SWEEP_TOO_LARGE, digits, size, maxDigits, "");
         }
