@@ -2,7 +2,10 @@ package org.qchain.format;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.qchain.exact.certified.CertifiedComplex;
+import org.qchain.exact.certified.CertifiedReal;
 import org.qchain.result.ClosedResult;
+import org.qchain.result.Formula;
 import org.qchain.result.Point;
 
 /** Phrases shared by every format's layout of closed forms. */
@@ -121,11 +124,59 @@ final class Closed {
     }
 
     /** The eigenvalues' decimals when they add something to the exact values; empty otherwise. */
-    static String eigenDecimals(ClosedResult.Eigen e) {
-        if (e.decimals().isEmpty() || e.decimals().equals(e.values())) {
+    static String eigenDecimals(ClosedResult r, ClosedResult.Eigen e) {
+        List<String> d = decimals(e.atPoint(), r.digits());
+        if (d.isEmpty() || d.equals(plain(e.values()))) {
             return "";
         }
-        return String.join(", ", e.decimals());
+        return String.join(", ", d);
+    }
+
+    /** The eigenvalues at the point as decimals (complex ones {@code a + b*i}); empty without a point. */
+    static List<String> eigenDecimalList(ClosedResult r, ClosedResult.Eigen e) {
+        return decimals(e.atPoint(), r.digits());
+    }
+
+    /** Each value correctly rounded to {@code digits}: {@code re}, {@code re + im*i} or {@code re - im*i}. */
+    static List<String> decimals(List<CertifiedComplex> values, int digits) {
+        List<String> out = new ArrayList<>();
+        for (CertifiedComplex z : values) {
+            out.add(complex(z, digits));
+        }
+        return out;
+    }
+
+    /** One value correctly rounded to {@code digits}: {@code re}, {@code re + im*i} or {@code re - im*i}. */
+    static String complex(CertifiedComplex z, int digits) {
+        String re = z.re().decimal(digits).text();
+        if (z.isReal()) {
+            return re;
+        }
+        int sign = z.im().signum();
+        return re + (sign < 0 ? " - " : " + ") + z.im().abs().decimal(digits).text() + "*i";
+    }
+
+    /** The value at the requested digits. */
+    static String real(ClosedResult r, CertifiedReal x) {
+        return x.decimal(r.digits()).text();
+    }
+
+    /** The plain forms of a grid. */
+    static List<List<String>> plainGrid(List<List<Formula>> grid) {
+        List<List<String>> out = new ArrayList<>();
+        for (List<Formula> row : grid) {
+            out.add(plain(row));
+        }
+        return out;
+    }
+
+    /** The plain forms. */
+    static List<String> plain(List<Formula> fs) {
+        List<String> out = new ArrayList<>();
+        for (Formula f : fs) {
+            out.add(f.plain());
+        }
+        return out;
     }
 
     /** Where the decimals are taken: {@code " at p=1/20, r=1/4"} or empty for a chain without parameters. */

@@ -263,7 +263,7 @@ final class LatexFormatter extends Layout {
         }
         sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
         for (ClosedResult.Eigen e : r.eigenvalues()) {
-            sb.append("% eigenvalue ").append(String.join(", ", e.values())).append(" from ").append(e.factor().plain());
+            sb.append("% eigenvalue ").append(String.join(", ", Closed.plain(e.values()))).append(" from ").append(e.factor().plain());
             if (e.multiplicity() > 1) {
                 sb.append(", multiplicity ").append(e.multiplicity());
             }
@@ -276,7 +276,7 @@ final class LatexFormatter extends Layout {
                 sb.append("% ").append(Text.comment(note)).append('\n');
             }
             sb.append("% ").append(Text.comment(Closed.rateLine(r, lr)))
-                .append(lr.exact() ? "" : lr.rateValue().map(v -> " = " + v).orElse("")).append('\n');
+                .append(lr.exact() ? "" : lr.rateValue().map(v -> " = " + Closed.real(r, v)).orElse("")).append('\n');
         });
         return caution(sb);
     }

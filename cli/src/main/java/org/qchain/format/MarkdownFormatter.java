@@ -238,7 +238,7 @@ final class MarkdownFormatter extends Layout {
         if (!r.eigenvalues().isEmpty()) {
             sb.append("\nEigenvalues:\n\n");
             for (ClosedResult.Eigen e : r.eigenvalues()) {
-                sb.append("- `").append(Text.code(String.join(", ", e.values()))).append("` from `")
+                sb.append("- `").append(Text.code(String.join(", ", Closed.plain(e.values())))).append("` from `")
                     .append(Text.code(e.factor().plain())).append('`');
                 if (e.multiplicity() > 1) {
                     sb.append(", multiplicity ").append(e.multiplicity());
@@ -251,7 +251,7 @@ final class MarkdownFormatter extends Layout {
             for (ClosedResult.Roots rt : r.roots()) {
                 sb.append("- `").append(rt.name()).append(" = ").append(Text.code(rt.polynomial().plain())).append('`');
                 if (!rt.roots().isEmpty()) {
-                    sb.append(": roots ").append(String.join(", ", rt.roots()));
+                    sb.append(": roots ").append(String.join(", ", Closed.decimals(rt.roots(), r.digits())));
                 }
                 sb.append('\n');
             }
@@ -267,7 +267,7 @@ final class MarkdownFormatter extends Layout {
                         sb.append("| ").append(periodic ? Text.markdown(Closed.subsequenceIndex(r, lr, k)) + " | " : "")
                             .append(Text.markdown(r.rows().get(i))).append(" | ")
                             .append(Text.markdown(r.cols().get(j))).append(" | `")
-                            .append(Text.code(lr.limits().get(k).get(i).get(j))).append("` |\n");
+                            .append(Text.code(lr.limits().get(k).get(i).get(j).plain())).append("` |\n");
                     }
                 }
             }
@@ -277,7 +277,7 @@ final class MarkdownFormatter extends Layout {
             }
             sb.append('\n').append(Text.markdown(Closed.rateLine(r, lr)));
             if (!lr.exact()) {
-                lr.rateValue().ifPresent(v -> sb.append(" = ").append(v)
+                lr.rateValue().ifPresent(v -> sb.append(" = ").append(Closed.real(r, v))
                     .append(r.point().map(p -> " at " + p.text()).orElse("")));
             }
             sb.append(".\n");

@@ -367,9 +367,9 @@ final class TextFormatter extends Layout {
                 facts.add(e.factor().plain() + ":");
                 String extra = e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() : "";
                 extra += e.jordanIndex() > 1 ? ", Jordan block of size " + e.jordanIndex() : "";
-                String dec = Closed.eigenDecimals(e);
+                String dec = Closed.eigenDecimals(r, e);
                 decimals |= !dec.isEmpty();
-                vals.add(String.join(", ", e.values()) + (extra.isEmpty() ? "" : extra + ")")
+                vals.add(String.join(", ", Closed.plain(e.values())) + (extra.isEmpty() ? "" : extra + ")")
                     + (dec.isEmpty() ? "" : "  ≈ " + dec));
             }
             aligned(sb, facts, " ", vals, "  ");
@@ -381,7 +381,7 @@ final class TextFormatter extends Layout {
         for (ClosedResult.Roots rt : r.roots()) {
             sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial().plain());
             if (!rt.roots().isEmpty()) {
-                sb.append("; roots ").append(String.join(", ", rt.roots()));
+                sb.append("; roots ").append(String.join(", ", Closed.decimals(rt.roots(), r.digits())));
             }
             sb.append('\n');
         }
@@ -404,7 +404,7 @@ final class TextFormatter extends Layout {
                 for (int j = 0; j < r.cols().size(); j++) {
                     labels.add((lr.periodic() ? Closed.subsequence(r, lr, k) + ": " : "") + r.rows().get(i) + " -> "
                         + r.cols().get(j));
-                    String exact = lr.limits().get(k).get(i).get(j);
+                    String exact = lr.limits().get(k).get(i).get(j).plain();
                     values.add(exact);
                     String d = dec.isEmpty() ? "" : dec.get(k).get(i).get(j);
                     approx.add(d.isEmpty() || d.equals(exact) ? "" : "  ≈ " + d);
@@ -436,7 +436,7 @@ final class TextFormatter extends Layout {
         }
         sb.append(Closed.rateLine(r, lr)).append('\n');
         if (!lr.exact()) {
-            lr.rateValue().ifPresent(v -> sb.append("  = ").append(v)
+            lr.rateValue().ifPresent(v -> sb.append("  = ").append(Closed.real(r, v))
                 .append(r.point().map(p -> " at " + p.text()).orElse("")).append(" (").append(r.digits())
                 .append(" significant digits)\n"));
         }

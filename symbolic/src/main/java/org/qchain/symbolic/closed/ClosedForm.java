@@ -15,6 +15,9 @@ import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.certified.CertifiedComplex;
+import org.qchain.exact.certified.CertifiedReal;
+import org.qchain.exact.certified.CertifiedRoots;
 import org.qchain.exact.model.Domain;
 import org.qchain.symbolic.ParamRing;
 import org.qchain.symbolic.RatFun;
@@ -243,21 +246,25 @@ public final class ClosedForm {
                 ? Fml.sum(Fml.name(symbols.variable()), Fml.neg(field.formula(g.lambda)))
                 : field.formula(g.factor, symbols.variable());
             List<String> values = new ArrayList<>();
+            List<String> valuesLatex = new ArrayList<>();
             String kind;
             if (g.kind == Spectral.Kind.LINEAR) {
                 kind = "rational";
                 values.add(Fml.plain(field.formula(g.lambda)));
+                valuesLatex.add(Fml.latex(field.formula(g.lambda)));
             } else if (g.kind == Spectral.Kind.QUADRATIC) {
                 kind = "quadratic";
                 for (Fml r : quadraticRoots(g)) {
                     values.add(Fml.plain(r));
+                    valuesLatex.add(Fml.latex(r));
                 }
             } else {
                 kind = "roots";
                 values.add("roots of " + g.name);
+                valuesLatex.add("\\text{roots of } " + Fml.latex(Fml.name(g.name)));
             }
             out.add(new Eigenvalue(Fml.plain(f), Fml.latex(f), g.degree, g.multiplicity, g.index(), kind, values,
-                g.name, g.unitOrder));
+                g.name, g.unitOrder, valuesLatex));
         }
         return List.copyOf(out);
     }
@@ -381,6 +388,18 @@ public final class ClosedForm {
             throw new IllegalArgumentException("n = " + n + " outside 0.." + size);
         }
         return plainMatrix(spectral.series.powers.get(n));
+    }
+
+    private List<List<String>> latexMatrix(Quotient<BigRational>[][] m) {
+        List<List<String>> out = new ArrayList<>();
+        for (Quotient<BigRational>[] row : m) {
+            List<String> r = new ArrayList<>();
+            for (Quotient<BigRational> q : row) {
+                r.add(Fml.latex(field.formula(q)));
+            }
+            out.add(List.copyOf(r));
+        }
+        return List.copyOf(out);
     }
 
     private List<List<String>> plainMatrix(Quotient<BigRational>[][] m) {
@@ -585,6 +604,7 @@ public final class ClosedForm {
         }
         Evaluator<Quotient<BigRational>> ev = new Evaluator<>(field.field, q -> q);
         List<List<List<String>>> limits = new ArrayList<>();
+        List<List<List<String>>> limitsLatex = new ArrayList<>();
         for (int r = 0; r < d; r++) {
             Quotient<BigRational>[][] m = Mat.zero(field, size);
             for (int i = 0; i < size; i++) {
@@ -597,13 +617,14 @@ public final class ClosedForm {
                 }
             }
             limits.add(plainMatrix(m));
+            limitsLatex.add(latexMatrix(m));
         }
         Fml rate = moduli.isEmpty() ? Fml.ZERO : (moduli.size() == 1 ? moduli.get(0) : new Fml.Call("max", List.copyOf(moduli)));
         List<String> conds = new ArrayList<>();
         for (LongRunCondition c : longRunConditions()) {
             conds.add(c.text);
         }
-        return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate), conds, moduli.isEmpty(), validFrom);
+        return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate), conds, moduli.isEmpty(), validFrom, limitsLatex);
     }
 
     /**
@@ -637,41 +658,52 @@ public final class ClosedForm {
     }
 
     /**
-     * The eigenvalues of each factor of {@link #eigenvalues()} at a point, as decimals (complex ones as
-     * {@code a + b i}), correctly rounded as the roots of named factors are.
+     * The eigenvalues of each factor of {@link #eigenvalues()} at a point, as certified numbers (every digit
+     * proven on demand; complex ones with both parts): a rational eigenvalue exactly, a quadratic pair as
+     * {@code u/2 + (s/2) sqrt(D)} then {@code u/2 - (s/2) sqrt(D)} (exact algebraic numbers), the roots of a named
+     * factor as {@link CertifiedRoots} isolates them.
      *
-     * @param at     a value for every parameter
-     * @param digits significant digits, at least 1
-     * @return per factor, its roots in the order of the numeric root finder
+     * @param at a value for every parameter
+     * @return per factor, its eigenvalues
      * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
      */
-    public List<List<String>> eigenvalueDecimals(Map<String, Rational> at, int digits) {
-        List<List<String>> out = new ArrayList<>();
+    public List<List<CertifiedComplex>> eigenvaluesAt(Map<String, Rational> at) {
+        List<List<CertifiedComplex>> out = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
-            List<String> v = new ArrayList<>();
-            if (g.kind == Spectral.Kind.QUADRATIC) {
-                // in the printed order: u/2 + (s/2) sqrt(D), then u/2 - (s/2) sqrt(D)
-                long prec = digits + 20L;
-                Quotient<BigRational> half = field.of(2).inverse();
-                org.apfloat.Apfloat mid = apfloat(substitute(g.u.multiply(half), at), prec);
-                org.apfloat.Apfloat w = apfloat(substitute(g.scale.multiply(half), at), prec);
-                BigRational dv = substitute(g.delta, at);
-                org.apfloat.Apfloat root = org.apfloat.ApfloatMath.sqrt(apfloat(dv.abs(), prec));
-                for (int sign : new int[] {1, -1}) {
-                    org.apfloat.Apfloat t = w.multiply(root).multiply(new org.apfloat.Apfloat(sign, prec));
-                    v.add(dv.signum() >= 0 ? NumericRoots.format(mid.add(t), digits)
-                        : NumericRoots.format(new org.apfloat.Apcomplex(mid, t), digits));
-                }
-            } else if (g.kind == Spectral.Kind.LINEAR) {
-                v.add(org.qchain.exact.Decimals.format(ParamField.rational(substitute(g.lambda, at)), digits));
-            } else {
-                for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
-                    v.add(NumericRoots.format(z, digits));
-                }
-            }
-            out.add(List.copyOf(v));
+            out.add(valuesAt(g, at));
         }
         return List.copyOf(out);
+    }
+
+    private List<CertifiedComplex> valuesAt(Spectral.Group g, Map<String, Rational> at) {
+        List<CertifiedComplex> v = new ArrayList<>();
+        if (g.kind == Spectral.Kind.QUADRATIC) {
+            substituted(g, at);
+            Quotient<BigRational> half = field.of(2).inverse();
+            Rational mid = ParamField.rational(substitute(g.u.multiply(half), at));
+            Rational w = ParamField.rational(substitute(g.scale.multiply(half), at));
+            Rational dv = ParamField.rational(substitute(g.delta, at));
+            for (int sign : new int[] {1, -1}) {
+                Rational ws = sign > 0 ? w : w.negate();
+                v.add(dv.signum() >= 0 ? CertifiedComplex.real(CertifiedReal.quadratic(mid, ws, dv))
+                    : new CertifiedComplex(CertifiedReal.exact(mid),
+                        CertifiedReal.quadratic(Rational.ZERO, ws, dv.negate())));
+            }
+        } else if (g.kind == Spectral.Kind.LINEAR) {
+            substituted(g, at);
+            v.add(CertifiedComplex.real(CertifiedReal.exact(ParamField.rational(substitute(g.lambda, at)))));
+        } else {
+            v.addAll(CertifiedRoots.of(coefficientsAt(g, at)));
+        }
+        return List.copyOf(v);
+    }
+
+    private List<Rational> coefficientsAt(Spectral.Group g, Map<String, Rational> at) {
+        List<Rational> c = new ArrayList<>();
+        for (BigRational b : substituted(g, at)) {
+            c.add(ParamField.rational(b));
+        }
+        return c;
     }
 
     /** A condition of the long run: {@code poly != 0} (poly empty: not decidable here, never proved). */
@@ -839,23 +871,18 @@ public final class ClosedForm {
     }
 
     /**
-     * The factors of degree 3 or more that formulas name, with their roots numerically at a point.
+     * The factors of degree 3 or more that formulas name, with their roots at a point as certified numbers.
      *
-     * @param at     a value for every parameter in {@link #parameters()} (empty if there are none)
-     * @param digits significant digits, at least 1
+     * @param at a value for every parameter in {@link #parameters()} (empty if there are none)
      * @return the named factors in name order
      * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
      */
-    public List<RootPolynomial> rootPolynomials(Map<String, Rational> at, int digits) {
+    public List<RootPolynomial> rootPolynomials(Map<String, Rational> at) {
         List<RootPolynomial> out = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g.kind == Spectral.Kind.ROOTS) {
                 Fml f = field.formula(g.factor, symbols.variable());
-                List<String> roots = new ArrayList<>();
-                for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
-                    roots.add(NumericRoots.format(z, digits));
-                }
-                out.add(new RootPolynomial(g.name, Fml.plain(f), Fml.latex(f), roots));
+                out.add(new RootPolynomial(g.name, Fml.plain(f), Fml.latex(f), CertifiedRoots.of(coefficientsAt(g, at))));
             }
         }
         return List.copyOf(out);
@@ -863,28 +890,53 @@ public final class ClosedForm {
 
     /**
      * The second-largest eigenvalue modulus at a point (the largest modulus among eigenvalues that are not roots of
-     * unity and not 0), numerically: P^n approaches its limit (or its periodic pattern) like this number to the
-     * power n.
+     * unity and not 0), as a certified number: P^n approaches its limit (or its periodic pattern) like this number
+     * to the power n. A real eigenvalue's modulus and that of a complex quadratic pair ({@code sqrt} of the
+     * constant term) are exact algebraic numbers; that of a complex root of a named factor comes from the
+     * enclosures of its parts.
      *
-     * @param at     a value for every parameter in {@link #parameters()}
-     * @param digits significant digits, at least 1
-     * @return the modulus in plain decimal notation, {@code 0} if there is no such eigenvalue
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return the modulus, exactly 0 if there is no such eigenvalue
      * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
      */
-    public String rate(Map<String, Rational> at, int digits) {
-        org.apfloat.Apfloat best = new org.apfloat.Apfloat(0);
+    public CertifiedReal rateAt(Map<String, Rational> at) {
+        List<CertifiedReal> moduli = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g.unitOrder > 0 || g == zero) {
                 continue;
             }
-            for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
-                org.apfloat.Apfloat m = org.apfloat.ApcomplexMath.abs(z);
-                if (m.compareTo(best) > 0) {
-                    best = m;
-                }
+            if (g.kind == Spectral.Kind.QUADRATIC && ParamField.rational(substitute(g.delta, at)).signum() < 0) {
+                // a complex pair: both have modulus sqrt(l1 l2), the constant term
+                moduli.add(CertifiedReal.sqrt(ParamField.rational(substitute(g.coeffs[0], at))));
+                continue;
+            }
+            for (CertifiedComplex z : valuesAt(g, at)) {
+                moduli.add(z.isReal() ? z.re().abs() : modulus(z));
             }
         }
-        return NumericRoots.format(best, digits);
+        return moduli.isEmpty() ? CertifiedReal.exact(Rational.ZERO) : CertifiedReal.max(moduli);
+    }
+
+    /** |z| from enclosures of its parts. */
+    private static CertifiedReal modulus(CertifiedComplex z) {
+        return CertifiedReal.enclosed(bits -> {
+            org.qchain.exact.certified.Enclosure re = z.re().abs().enclosure(bits + 4);
+            org.qchain.exact.certified.Enclosure im = z.im().abs().enclosure(bits + 4);
+            Rational lo = re.lo().multiply(re.lo()).add(im.lo().multiply(im.lo()));
+            Rational hi = re.hi().multiply(re.hi()).add(im.hi().multiply(im.hi()));
+            return org.qchain.exact.certified.Enclosure.of(sqrtBound(lo, bits + 4, false), sqrtBound(hi, bits + 4, true));
+        });
+    }
+
+    /** A rational below ({@code up} false) or above sqrt(q), q >= 0, within about 2^-bits. */
+    private static Rational sqrtBound(Rational q, int bits, boolean up) {
+        BigInteger m = q.denominator();
+        BigInteger t = q.numerator().multiply(m).shiftLeft(2 * bits);
+        BigInteger s = t.sqrt();
+        if (up && !s.multiply(s).equals(t)) {
+            s = s.add(BigInteger.ONE);
+        }
+        return Rational.of(s, m.shiftLeft(bits));
     }
 
     private BigRational[] substituted(Spectral.Group g, Map<String, Rational> at) {
