@@ -351,14 +351,25 @@ final class SymbolicEngine {
         List<Integer> ri = indices(m, row);
         List<Integer> ci = indices(m, col);
         List<List<Formula>> cells = new ArrayList<>();
+        List<List<Formula>> namedCells = new ArrayList<>();
         int validFrom = 0;
         for (int i : ri) {
             List<Formula> line = new ArrayList<>();
+            List<Formula> named = new ArrayList<>();
             for (int j : ci) {
                 line.add(Formula.of(cf.formula(i, j), cf.latex(i, j)));
+                named.add(Formula.of(cf.namedFormula(i, j), cf.namedLatex(i, j)));
                 validFrom = Math.max(validFrom, cf.validFrom(i, j));
             }
             cells.add(line);
+            namedCells.add(named);
+        }
+        List<ClosedResult.Where> where = new ArrayList<>();
+        String eigenPrefix = cf.symbols().eigenPrefix();
+        for (org.qchain.symbolic.closed.Definition d : cf.definitions()) {
+            String index = d.name().substring(eigenPrefix.length());
+            where.add(new ClosedResult.Where(d.name(), d.eigenvalue() ? "λ" + index : d.name(),
+                d.eigenvalue() ? "\\lambda_{" + index + "}" : d.name(), d.eigenvalue(), Formula.of(d.plain(), d.latex())));
         }
         List<String> warnings = new ArrayList<>();
         Optional<Point> pt = point(model, cf.parameters());
@@ -387,7 +398,7 @@ final class SymbolicEngine {
             Eigenvalue e = cf.eigenvalues().get(k);
             eig.add(new ClosedResult.Eigen(Formula.of(e.factor(), e.factorLatex()), e.multiplicity(), e.jordanIndex(),
                 e.kind(), formulas(e.values(), e.valuesLatex()),
-                eigenAtPoint.isEmpty() ? List.of() : eigenAtPoint.get(k)));
+                eigenAtPoint.isEmpty() ? List.of() : eigenAtPoint.get(k), e.valueNames()));
         }
         List<ClosedResult.Roots> roots = new ArrayList<>();
         if (named.isEmpty()) {
@@ -442,7 +453,8 @@ final class SymbolicEngine {
         return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, cf.conditions(),
             cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),
             names(m, ci), cells, List.of(), eig, Optional.of(longRun), roots,
-            pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()));
+            pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()), where,
+            where.isEmpty() ? List.of() : namedCells);
     }
 
     /** Formulas from the engine's two printed forms, pairwise. */

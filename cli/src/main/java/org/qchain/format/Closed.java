@@ -161,6 +161,56 @@ final class Closed {
         return x.decimal(r.digits()).text();
     }
 
+    /**
+     * A plain formula as text and Markdown print it: each eigenvalue's name ({@code l1}) as its symbol
+     * ({@code λ1}; the output of these formats is always UTF-8).
+     */
+    static String shown(ClosedResult r, String plain) {
+        String out = plain;
+        for (ClosedResult.Where w : r.where()) {
+            if (!w.symbol().equals(w.name())) {
+                out = out.replaceAll("\\b" + java.util.regex.Pattern.quote(w.name()) + "\\b",
+                    java.util.regex.Matcher.quoteReplacement(w.symbol()));
+            }
+        }
+        return out;
+    }
+
+    /** {@code where s = sqrt(...), λ1 = ..., λ2 = ...} in text syntax; empty when nothing is named. */
+    static String whereLine(ClosedResult r) {
+        if (r.where().isEmpty()) {
+            return "";
+        }
+        List<String> parts = new ArrayList<>();
+        for (ClosedResult.Where w : r.where()) {
+            parts.add(w.symbol() + " = " + shown(r, w.value().plain()));
+        }
+        return "where " + String.join(", ", parts);
+    }
+
+    /** The eigenvalues of a factor as printed: their names when named, else their formulas. */
+    static String eigenValues(ClosedResult r, ClosedResult.Eigen e) {
+        if (e.names().isEmpty()) {
+            return String.join(", ", plain(e.values()));
+        }
+        List<String> out = new ArrayList<>();
+        for (String n : e.names()) {
+            out.add(shown(r, n));
+        }
+        return String.join(", ", out);
+    }
+
+    /** The rate formula, with named eigenvalues by name ({@code max(abs(λ1), abs(λ2))}). */
+    static String rate(ClosedResult r, ClosedResult.LongRun lr, boolean symbols) {
+        String s = lr.rate().plain();
+        for (ClosedResult.Eigen e : r.eigenvalues()) {
+            for (int k = 0; k < e.names().size(); k++) {
+                s = s.replace("abs(" + e.values().get(k).plain() + ")", "abs(" + e.names().get(k) + ")");
+            }
+        }
+        return symbols ? shown(r, s) : s;
+    }
+
     /** The plain forms of a grid. */
     static List<List<String>> plainGrid(List<List<Formula>> grid) {
         List<List<String>> out = new ArrayList<>();
@@ -196,8 +246,8 @@ final class Closed {
         }
         return lr.periodic()
             ? "Convergence rate of each subsequence (largest modulus of the eigenvalues that are not roots of unity): "
-                + lr.rate().plain()
-            : "Convergence rate (second-largest eigenvalue modulus): " + lr.rate().plain();
+                + rate(r, lr, true)
+            : "Convergence rate (second-largest eigenvalue modulus): " + rate(r, lr, true);
     }
 
     /** Whether the conditions are known to hold inside the parameters' domains; empty without conditions. */

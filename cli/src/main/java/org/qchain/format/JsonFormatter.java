@@ -286,9 +286,12 @@ final class JsonFormatter extends Layout {
             });
         }
         if (!r.isSeries()) {
+            j.objects("where", r.where(), w -> Json.object().string("name", w.name()).string("symbol", w.symbol())
+                .bool("eigenvalue", w.eigenvalue()).string("value", w.value().plain()));
+            j.stringRows("named_cells", Symbolic.plain(r.shownCells()));
             j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor().plain())
                 .number("multiplicity", e.multiplicity()).number("jordan_index", e.jordanIndex())
-                .string("kind", e.kind()).strings("values", Closed.plain(e.values()))
+                .string("kind", e.kind()).strings("values", Closed.plain(e.values())).strings("names", e.names())
                 .strings("decimals", Closed.eigenDecimalList(r, e)));
             j.objects("root_polynomials", r.roots(), rt -> Json.object().string("name", rt.name())
                 .string("polynomial", rt.polynomial().plain()).strings("roots", Closed.decimals(rt.roots(), r.digits())));
@@ -299,7 +302,7 @@ final class JsonFormatter extends Layout {
                 }
                 Json l = Json.object().number("period", lr.period())
                     .objects("limits", rs, k -> limitJson(r, k, Closed.plainGrid(lr.limits().get(k)), Closed.limitDecimals(r, lr)))
-                    .string("rate", lr.rate().plain());
+                    .string("rate", lr.rate().plain()).string("rate_named", Closed.rate(r, lr, false));
                 lr.rateValue().ifPresent(v -> l.string("rate_value", Closed.real(r, v)));
                 List<String> special = new ArrayList<>();
                 for (org.qchain.result.Point p : lr.special()) {

@@ -256,10 +256,15 @@ final class LatexFormatter extends Layout {
                 String idx = "\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.cols().get(j)) + "}";
                 String lhs = r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(" + r.names().series() + ")"
                     : "P^{" + r.names().step() + "}_{" + idx + "}";
-                String rhs = r.form() == ClosedResult.Form.RECURRENCE ? r.cells().get(i).get(j).latex()
-                    : broken(r.cells().get(i).get(j).latex());
+                String rhs = r.form() == ClosedResult.Form.RECURRENCE ? r.shownCells().get(i).get(j).latex()
+                    : broken(r.shownCells().get(i).get(j).latex());
                 lines.add(r.form() == ClosedResult.Form.RECURRENCE ? "&" + lhs + ":\\; " + rhs : lhs + " &= " + rhs);
             }
+        }
+        for (int k = 0; k < r.where().size(); k++) {
+            ClosedResult.Where w = r.where().get(k);
+            lines.add((k == 0 ? "&\\text{where } " : "&\\phantom{\\text{where }} ") + w.latexName() + " = "
+                + w.value().latex());
         }
         sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
         for (ClosedResult.Eigen e : r.eigenvalues()) {

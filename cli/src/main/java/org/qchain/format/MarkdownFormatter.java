@@ -232,13 +232,16 @@ final class MarkdownFormatter extends Layout {
             for (int j = 0; j < r.cols().size(); j++) {
                 sb.append("| ").append(Text.markdown(r.rows().get(i))).append(" | ")
                     .append(Text.markdown(r.cols().get(j))).append(" | `")
-                    .append(Text.code(r.cells().get(i).get(j).plain())).append("` |\n");
+                    .append(Text.code(Closed.shown(r, r.shownCells().get(i).get(j).plain()))).append("` |\n");
             }
+        }
+        if (!r.where().isEmpty()) {
+            sb.append("\n`").append(Text.code(Closed.whereLine(r))).append("`\n");
         }
         if (!r.eigenvalues().isEmpty()) {
             sb.append("\nEigenvalues:\n\n");
             for (ClosedResult.Eigen e : r.eigenvalues()) {
-                sb.append("- `").append(Text.code(String.join(", ", Closed.plain(e.values())))).append("` from `")
+                sb.append("- `").append(Text.code(Closed.eigenValues(r, e))).append("` from `")
                     .append(Text.code(e.factor().plain())).append('`');
                 if (e.multiplicity() > 1) {
                     sb.append(", multiplicity ").append(e.multiplicity());

@@ -354,10 +354,13 @@ final class TextFormatter extends Layout {
         for (int i = 0; i < r.rows().size(); i++) {
             for (int j = 0; j < r.cols().size(); j++) {
                 labels.add(Closed.label(r, r.rows().get(i), r.cols().get(j)));
-                values.add(r.cells().get(i).get(j).plain());
+                values.add(Closed.shown(r, r.shownCells().get(i).get(j).plain()));
             }
         }
         aligned(sb, labels, r.form() == ClosedResult.Form.RECURRENCE ? ": " : " = ", values, "");
+        if (!r.where().isEmpty()) {
+            sb.append(Closed.whereLine(r)).append('\n');
+        }
         if (!r.eigenvalues().isEmpty()) {
             sb.append("\nEigenvalues, by irreducible factor of det(").append(r.names().variable()).append("I - P):\n");
             List<String> facts = new ArrayList<>();
@@ -369,7 +372,7 @@ final class TextFormatter extends Layout {
                 extra += e.jordanIndex() > 1 ? ", Jordan block of size " + e.jordanIndex() : "";
                 String dec = Closed.eigenDecimals(r, e);
                 decimals |= !dec.isEmpty();
-                vals.add(String.join(", ", Closed.plain(e.values())) + (extra.isEmpty() ? "" : extra + ")")
+                vals.add(Closed.eigenValues(r, e) + (extra.isEmpty() ? "" : extra + ")")
                     + (dec.isEmpty() ? "" : "  ≈ " + dec));
             }
             aligned(sb, facts, " ", vals, "  ");

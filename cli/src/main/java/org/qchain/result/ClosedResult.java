@@ -37,13 +37,16 @@ import org.qchain.exact.certified.CertifiedReal;
  * @param digits      the significant digits the formatters print numeric values with
  * @param warnings    warnings
  * @param names       the symbols the formulas use for their own quantities (none is a parameter's name)
+ * @param where       the names of repeated pieces (a quadratic factor's square root and eigenvalues), each defined
+ *                    in terms of the parameters and the names before it; empty when nothing is named
+ * @param namedCells  {@code cells} written with the names of {@code where}; empty when nothing is named
  */
 public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
                            List<String> notProved, List<String> states, List<String> parameters, Selection selection,
                            List<String> rows, List<String> cols, List<List<Formula>> cells,
                            List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                            List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
-                           Names names)
+                           Names names, List<Where> where, List<List<Formula>> namedCells)
     implements Result {
 
     /** Copies the lists. */
@@ -59,6 +62,36 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
         eigenvalues = List.copyOf(eigenvalues);
         roots = List.copyOf(roots);
         warnings = List.copyOf(warnings);
+        where = List.copyOf(where);
+        namedCells = namedCells.stream().map(List::copyOf).toList();
+    }
+
+    /** As the canonical constructor with nothing named. */
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
+                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+                        List<String> rows, List<String> cols, List<List<Formula>> cells,
+                        List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
+                        List<Roots> roots, Optional<Point> point, int digits, List<String> warnings, Names names) {
+        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+            recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, List.of(), List.of());
+    }
+
+    /** The cells to print: written with the names of {@link #where()} when there are any. */
+    public List<List<Formula>> shownCells() {
+        return where.isEmpty() ? cells : namedCells;
+    }
+
+    /**
+     * A name for a repeated piece of the formulas.
+     *
+     * @param name       the name in plain syntax (ASCII: {@code l1}, {@code s}), as JSON and the plain formulas
+     *                   write it, and as the model file's expressions read it
+     * @param symbol     the name as text and Markdown print it ({@code λ1} for an eigenvalue, else {@code name})
+     * @param latexName  the name in LaTeX ({@code \lambda_{1}}, {@code s})
+     * @param eigenvalue whether it stands for an eigenvalue
+     * @param value      its value, in terms of the parameters and the names before it
+     */
+    public record Where(String name, String symbol, String latexName, boolean eigenvalue, Formula value) {
     }
 
     /**
@@ -150,18 +183,21 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param kind         {@code rational}, {@code quadratic} or {@code roots}
      * @param values       the eigenvalues as formulas ({@code roots of f1} for a named factor)
      * @param atPoint      the eigenvalues at the point, every one of the factor; empty without a point
+     * @param names        the names of {@code values} in {@link ClosedResult#where()} (ASCII, as {@code l1}); empty
+     *                     when they are not named
      */
     public record Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<Formula> values,
-                        List<CertifiedComplex> atPoint) {
+                        List<CertifiedComplex> atPoint, List<String> names) {
         /** Copies the lists. */
         public Eigen {
             values = List.copyOf(values);
             atPoint = List.copyOf(atPoint);
+            names = List.copyOf(names);
         }
 
-        /** Without values at a point. */
+        /** Without values at a point or names. */
         public Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<Formula> values) {
-            this(factor, multiplicity, jordanIndex, kind, values, List.of());
+            this(factor, multiplicity, jordanIndex, kind, values, List.of(), List.of());
         }
     }
 

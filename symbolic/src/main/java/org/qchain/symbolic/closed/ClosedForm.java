@@ -47,6 +47,10 @@ public final class ClosedForm {
     private final int validFrom;
     private final int[][] validFromEntry;
     private final Fml[][] formulas;
+    /** The same with each quadratic pair and its square root by name. */
+    private final Fml[][] namedFormulas;
+    private final java.util.Map<Spectral.Group, String[]> quadraticNames = new java.util.IdentityHashMap<>();
+    private final List<Definition> definitions;
     private final List<GenPolynomial<BigRational>> conditionPolys;
     private final List<String> conditions;
     private final List<Eigenvalue> eigenvalues;
@@ -61,11 +65,32 @@ public final class ClosedForm {
         this.n = Fml.name(symbols.step());
         this.spectral = Spectral.of(series, progress);
         int named = 1;
+        int quadratics = 0;
         for (Spectral.Group g : spectral.groups) {
             if (g.kind == Spectral.Kind.ROOTS) {
                 g.name = symbols.factor(named++);
             }
+            if (g.kind == Spectral.Kind.QUADRATIC) {
+                quadratics++;
+            }
         }
+        int q = 0;
+        List<Definition> defs = new ArrayList<>();
+        for (Spectral.Group g : spectral.groups) {
+            if (g.kind == Spectral.Kind.QUADRATIC) {
+                q++;
+                String s = quadratics == 1 ? symbols.root() : symbols.root() + q;
+                String l1 = symbols.eigenvalue(2 * q - 1);
+                String l2 = symbols.eigenvalue(2 * q);
+                quadraticNames.put(g, new String[] {s, l1, l2});
+                Fml sqrt = Fml.call("sqrt", field.formula(g.delta));
+                defs.add(new Definition(s, Fml.plain(sqrt), Fml.latex(sqrt), false));
+                List<Fml> roots = quadraticRoots(g, Fml.name(s));
+                defs.add(new Definition(l1, Fml.plain(roots.get(0)), Fml.latex(roots.get(0)), true));
+                defs.add(new Definition(l2, Fml.plain(roots.get(1)), Fml.latex(roots.get(1)), true));
+            }
+        }
+        this.definitions = List.copyOf(defs);
         this.seriesForm = new SeriesForm(series, states);
         this.states = List.copyOf(states);
         this.size = spectral.series.size;
@@ -79,6 +104,7 @@ public final class ClosedForm {
         this.validFrom = z == null ? 0 : z.nilpotent.size();
         this.validFromEntry = new int[size][size];
         this.formulas = new Fml[size][size];
+        this.namedFormulas = new Fml[size][size];
         for (int i = 0; i < size; i++) {
             for (int j = 0; j < size; j++) {
                 int v = 0;
@@ -91,7 +117,8 @@ public final class ClosedForm {
                 }
                 validFromEntry[i][j] = v;
                 Steps.report(progress, "formulas", (long) i * size + j, (long) size * size);
-                formulas[i][j] = buildFormula(i, j);
+                formulas[i][j] = buildFormula(i, j, false);
+                namedFormulas[i][j] = definitions.isEmpty() ? formulas[i][j] : buildFormula(i, j, true);
             }
         }
         this.conditionPolys = collectConditions();
@@ -105,17 +132,27 @@ public final class ClosedForm {
 
     // --- the formulas ------------------------------------------------------------------------------------------
 
-    private Fml buildFormula(int i, int j) {
+    private Fml buildFormula(int i, int j, boolean named) {
         List<Fml> terms = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g != zero) {
-                terms.add(term(g, i, j));
+                terms.add(term(g, i, j, named));
             }
         }
         return Fml.sum(terms);
     }
 
-    private Fml term(Spectral.Group g, int i, int j) {
+    /** A name as an atom: an eigenvalue name prints as lambda with an index in LaTeX. */
+    private Fml nameAtom(String name) {
+        String prefix = symbols.eigenPrefix();
+        if (name.startsWith(prefix) && name.length() > prefix.length()
+            && name.substring(prefix.length()).chars().allMatch(Character::isDigit)) {
+            return new Fml.Atom(name, "\\lambda_{" + name.substring(prefix.length()) + "}");
+        }
+        return Fml.name(name);
+    }
+
+    private Fml term(Spectral.Group g, int i, int j, boolean named) {
         List<Fml> terms = new ArrayList<>();
         switch (g.kind) {
             case LINEAR:
@@ -136,8 +173,9 @@ public final class ClosedForm {
                 }
                 break;
             case QUADRATIC: {
-                Fml sqrt = Fml.call("sqrt", field.formula(g.delta));
-                List<Fml> roots = quadraticRoots(g);
+                String[] nm = quadraticNames.get(g);
+                Fml sqrt = named ? Fml.name(nm[0]) : Fml.call("sqrt", field.formula(g.delta));
+                List<Fml> roots = named ? List.of(nameAtom(nm[1]), nameAtom(nm[2])) : quadraticRoots(g);
                 for (int k = 0; k < g.x.size(); k++) {
                     Quotient<BigRational> x = g.x.get(k)[i][j];
                     Quotient<BigRational> y = g.y.get(k)[i][j];
@@ -263,15 +301,20 @@ public final class ClosedForm {
                 values.add("roots of " + g.name);
                 valuesLatex.add("\\text{roots of } " + Fml.latex(Fml.name(g.name)));
             }
+            String[] nm = quadraticNames.get(g);
             out.add(new Eigenvalue(Fml.plain(f), Fml.latex(f), g.degree, g.multiplicity, g.index(), kind, values,
-                g.name, g.unitOrder, valuesLatex));
+                g.name, g.unitOrder, valuesLatex, nm == null ? List.of() : List.of(nm[1], nm[2])));
         }
         return List.copyOf(out);
     }
 
     /** u/2 + (s/2) sqrt(D) and u/2 - (s/2) sqrt(D). */
     private List<Fml> quadraticRoots(Spectral.Group g) {
-        Fml sqrt = Fml.call("sqrt", field.formula(g.delta));
+        return quadraticRoots(g, Fml.call("sqrt", field.formula(g.delta)));
+    }
+
+    /** u/2 + (s/2) r and u/2 - (s/2) r, with r the square root or its name. */
+    private List<Fml> quadraticRoots(Spectral.Group g, Fml sqrt) {
         Quotient<BigRational> half = field.of(2).inverse();
         Fml mid = field.formula(g.u.multiply(half));
         Fml w = Fml.prod(field.formula(g.scale.multiply(half)), sqrt);
@@ -358,6 +401,28 @@ public final class ClosedForm {
         return Fml.plain(formulas[i][j]);
     }
 
+    /**
+     * The formula of entry (i, j) in terms of the names of {@link #definitions()} (each quadratic pair of
+     * eigenvalues and its square root by name), plain syntax; the same as {@link #formula(int, int)} when there is
+     * nothing to name.
+     */
+    public String namedFormula(int i, int j) {
+        return Fml.plain(namedFormulas[i][j]);
+    }
+
+    /** {@link #namedFormula(int, int)} in LaTeX. */
+    public String namedLatex(int i, int j) {
+        return Fml.latex(namedFormulas[i][j]);
+    }
+
+    /**
+     * The names {@link #namedFormula(int, int)} uses, each defined in terms of the parameters and the names before
+     * it: per quadratic factor, its square root and then its two eigenvalues. Empty without a quadratic factor.
+     */
+    public List<Definition> definitions() {
+        return definitions;
+    }
+
     /** The formula of entry (i, j) in LaTeX. */
     public String latex(int i, int j) {
         return Fml.latex(formulas[i][j]);
@@ -391,23 +456,19 @@ public final class ClosedForm {
     }
 
     private List<List<String>> latexMatrix(Quotient<BigRational>[][] m) {
-        List<List<String>> out = new ArrayList<>();
-        for (Quotient<BigRational>[] row : m) {
-            List<String> r = new ArrayList<>();
-            for (Quotient<BigRational> q : row) {
-                r.add(Fml.latex(field.formula(q)));
-            }
-            out.add(List.copyOf(r));
-        }
-        return List.copyOf(out);
+        return printedMatrix(m, Fml::latex);
     }
 
     private List<List<String>> plainMatrix(Quotient<BigRational>[][] m) {
+        return printedMatrix(m, Fml::plain);
+    }
+
+    private List<List<String>> printedMatrix(Quotient<BigRational>[][] m, java.util.function.Function<Fml, String> print) {
         List<List<String>> out = new ArrayList<>();
         for (Quotient<BigRational>[] row : m) {
             List<String> r = new ArrayList<>();
             for (Quotient<BigRational> q : row) {
-                r.add(Fml.plain(field.formula(q)));
+                r.add(print.apply(field.formula(q)));
             }
             out.add(List.copyOf(r));
         }
