@@ -357,8 +357,8 @@ final class SymbolicEngine {
             List<Formula> line = new ArrayList<>();
             List<Formula> named = new ArrayList<>();
             for (int j : ci) {
-                line.add(Formula.of(cf.formula(i, j), cf.latex(i, j)));
-                named.add(Formula.of(cf.namedFormula(i, j), cf.namedLatex(i, j)));
+                line.add(Formula.of(cf.plain(i, j, false, q.factor()), cf.latex(i, j, false, q.factor())));
+                named.add(Formula.of(cf.plain(i, j, true, q.factor()), cf.latex(i, j, true, q.factor())));
                 validFrom = Math.max(validFrom, cf.validFrom(i, j));
             }
             cells.add(line);
@@ -412,7 +412,7 @@ final class SymbolicEngine {
                 roots.add(new ClosedResult.Roots(r.name(), Formula.of(r.polynomial(), r.latex()), r.roots()));
             }
         }
-        LongRun lr = cf.longRun();
+        LongRun lr = cf.longRun(q.factor());
         List<List<List<Formula>>> limits = new ArrayList<>();
         for (int k = 0; k < lr.limits().size(); k++) {
             List<List<String>> full = lr.limits().get(k);
@@ -454,7 +454,7 @@ final class SymbolicEngine {
             cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),
             names(m, ci), cells, List.of(), eig, Optional.of(longRun), roots,
             pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()), where,
-            where.isEmpty() ? List.of() : namedCells);
+            where.isEmpty() ? List.of() : namedCells, q.factor());
     }
 
     /** Formulas from the engine's two printed forms, pairwise. */

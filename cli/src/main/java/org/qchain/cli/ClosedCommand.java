@@ -73,6 +73,10 @@ final class ClosedCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
+    @Option(names = "--factor", description = "Print each coefficient of the formulas and each limit with numerator"
+        + " and denominator factored over the rationals, and det(xI - P) as the product of its irreducible factors.")
+    boolean factor;
+
     @Mixin
     LimitOptions.Terms terms;
 
@@ -88,6 +92,9 @@ final class ClosedCommand implements Callable<Integer> {
         if (start != null && from != null) {
             throw new ParameterException(spec.commandLine(), "--start and --from both name the starting state; give one");
         }
+        if (factor && form != ClosedResult.Form.MATRIX) {
+            throw new ParameterException(spec.commandLine(), "--factor applies to --form matrix (the closed form in n)");
+        }
         if (output.format == OutputFormat.CSV) {
             throw new ParameterException(spec.commandLine(),
                 "--format csv is not available for closed forms; use text, json, latex or markdown");
@@ -96,7 +103,7 @@ final class ClosedCommand implements Callable<Integer> {
         LoadedModel loaded = model.load();
         ClosedQuery q = new ClosedQuery(form, Optional.ofNullable(start != null ? start : from),
             start != null ? "--start" : "--from", Optional.ofNullable(to), terms.maxTerms, output.digits(),
-            digitLimit.maxDigits);
+            digitLimit.maxDigits, factor);
         ClosedResult result = root.run(spec, progress -> Analysis.closed(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

@@ -211,6 +211,26 @@ final class Closed {
         return symbols ? shown(r, s) : s;
     }
 
+    /**
+     * {@code det(xI - P)} as the product of its irreducible factors with their multiplicities, plain syntax:
+     * {@code (x - 1)*(x^2 - 3/4*x + 1/16)^2}.
+     */
+    static String characteristicPolynomial(ClosedResult r) {
+        List<String> parts = new ArrayList<>();
+        for (ClosedResult.Eigen e : r.eigenvalues()) {
+            String f = e.factor().plain();
+            boolean atom = f.chars().allMatch(Character::isLetterOrDigit);
+            String b = atom ? f : "(" + f + ")";
+            parts.add(e.multiplicity() == 1 ? b : b + "^" + e.multiplicity());
+        }
+        return String.join("*", parts);
+    }
+
+    /** The note of {@code --factor}; empty without it. */
+    static String factoredNote(ClosedResult r) {
+        return r.factored() ? "Coefficients and limits: numerator and denominator factored over the rationals." : "";
+    }
+
     /** The plain forms of a grid. */
     static List<List<String>> plainGrid(List<List<Formula>> grid) {
         List<List<String>> out = new ArrayList<>();

@@ -289,6 +289,7 @@ final class JsonFormatter extends Layout {
             j.objects("where", r.where(), w -> Json.object().string("name", w.name()).string("symbol", w.symbol())
                 .bool("eigenvalue", w.eigenvalue()).string("value", w.value().plain()));
             j.stringRows("named_cells", Symbolic.plain(r.shownCells()));
+            j.bool("factored", r.factored()).string("characteristic_polynomial", Closed.characteristicPolynomial(r));
             j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor().plain())
                 .number("multiplicity", e.multiplicity()).number("jordan_index", e.jordanIndex())
                 .string("kind", e.kind()).strings("values", Closed.plain(e.values())).strings("names", e.names())

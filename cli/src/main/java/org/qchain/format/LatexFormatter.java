@@ -249,6 +249,10 @@ final class LatexFormatter extends Layout {
         if (!Closed.symbolsNote(r).isEmpty()) {
             sb.append("% ").append(Closed.symbolsNote(r)).append('\n');
         }
+        if (!Closed.factoredNote(r).isEmpty()) {
+            sb.append("% ").append(Closed.factoredNote(r)).append(" det(").append(r.names().variable())
+                .append("I - P) = ").append(Closed.characteristicPolynomial(r)).append('\n');
+        }
         sb.append("\\begin{align*}\n");
         List<String> lines = new ArrayList<>();
         for (int i = 0; i < r.rows().size(); i++) {

@@ -224,6 +224,9 @@ final class MarkdownFormatter extends Layout {
         if (!Closed.symbolsNote(r).isEmpty()) {
             sb.append(' ').append(Closed.symbolsNote(r));
         }
+        if (!Closed.factoredNote(r).isEmpty()) {
+            sb.append(' ').append(Closed.factoredNote(r));
+        }
         sb.append("\n\n");
         sb.append("| from | to | ").append(r.form() == ClosedResult.Form.GF ? "G(" + r.names().series() + ")"
                 : (r.form() == ClosedResult.Form.RECURRENCE ? "recurrence" : Closed.pn(r)))

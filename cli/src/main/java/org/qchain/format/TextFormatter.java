@@ -348,6 +348,9 @@ final class TextFormatter extends Layout {
         if (!Closed.symbolsNote(r).isEmpty()) {
             sb.append(Closed.symbolsNote(r)).append('\n');
         }
+        if (!Closed.factoredNote(r).isEmpty()) {
+            sb.append(Closed.factoredNote(r)).append('\n');
+        }
         sb.append('\n');
         List<String> labels = new ArrayList<>();
         List<String> values = new ArrayList<>();
@@ -379,6 +382,10 @@ final class TextFormatter extends Layout {
             if (decimals) {
                 sb.append("  (≈: decimals").append(Closed.pointNote(r)).append(", ").append(r.digits())
                     .append(" significant digits)\n");
+            }
+            if (r.factored()) {
+                sb.append("  det(").append(r.names().variable()).append("I - P) = ")
+                    .append(Closed.characteristicPolynomial(r)).append('\n');
             }
         }
         for (ClosedResult.Roots rt : r.roots()) {

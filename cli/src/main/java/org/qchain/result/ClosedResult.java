@@ -40,13 +40,15 @@ import org.qchain.exact.certified.CertifiedReal;
  * @param where       the names of repeated pieces (a quadratic factor's square root and eigenvalues), each defined
  *                    in terms of the parameters and the names before it; empty when nothing is named
  * @param namedCells  {@code cells} written with the names of {@code where}; empty when nothing is named
+ * @param factored    whether coefficients and limits are printed with numerator and denominator factored over the
+ *                    rationals ({@code closed --factor})
  */
 public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
                            List<String> notProved, List<String> states, List<String> parameters, Selection selection,
                            List<String> rows, List<String> cols, List<List<Formula>> cells,
                            List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                            List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
-                           Names names, List<Where> where, List<List<Formula>> namedCells)
+                           Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored)
     implements Result {
 
     /** Copies the lists. */
@@ -73,7 +75,7 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
                         List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                         List<Roots> roots, Optional<Point> point, int digits, List<String> warnings, Names names) {
         this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
-            recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, List.of(), List.of());
+            recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, List.of(), List.of(), false);
     }
 
     /** The cells to print: written with the names of {@link #where()} when there are any. */

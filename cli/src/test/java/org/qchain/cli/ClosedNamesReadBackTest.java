@@ -8,7 +8,10 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.qchain.analysis.Analysis;
 import org.qchain.analysis.ClosedQuery;
@@ -20,53 +23,58 @@ import org.qchain.result.StepResult;
 import org.qchain.symbolic.cas.SymjaSession;
 
 /**
- * The closed forms written with named eigenvalues and square roots read back to the right values: the printed plain
- * entry, with the printed {@code where} definitions substituted back (last name first), is evaluated by Symja
- * (matheclipse-core 3.0.0, {@code N[..., 40]}, a general-purpose reference outside the project) at a rational point
- * and step count, and compared with the exact P^n entry of {@code step} at the same point.
+ * The closed forms as printed read back to the right values: the plain entry written with named eigenvalues and
+ * square roots, with the printed {@code where} definitions substituted back (last name first), and the expanded
+ * entry, each also with {@code --factor}, are evaluated by Symja (matheclipse-core 3.0.0, {@code N[..., 40]}, a
+ * general-purpose reference outside the project) at a rational point and step count, and compared with the exact
+ * P^n entry of {@code step} at the same point.
  */
 class ClosedNamesReadBackTest {
+    private static final SymjaSession CAS = SymjaSession.open();
+
+    /** One check: a model, its parameter, a rational point, whether factored, a step count. */
+    private record Case(String model, String param, String point, boolean factor, int n) {
+    }
 
     private static String substituted(ClosedResult r, String plain) {
         String out = plain;
-        List<ClosedResult.Where> where = r.where();
-        for (int k = where.size() - 1; k >= 0; k--) {
-            ClosedResult.Where w = where.get(k);
-            out = out.replaceAll("\\b" + java.util.regex.Pattern.quote(w.name()) + "\\b",
-                java.util.regex.Matcher.quoteReplacement("(" + w.value().plain() + ")"));
+        for (int k = r.where().size() - 1; k >= 0; k--) {
+            ClosedResult.Where w = r.where().get(k);
+            out = out.replaceAll("\\b" + Pattern.quote(w.name()) + "\\b",
+                Matcher.quoteReplacement("(" + w.value().plain() + ")"));
         }
         return out;
     }
 
+    private static BigDecimal evaluate(String formula, String step, int n, String param, String point) {
+        String expr = formula.replaceAll("\\b" + step + "\\b", "(" + n + ")")
+            .replaceAll("\\b" + param + "\\b", "(" + point + ")");
+        return new BigDecimal(CAS.eval("N(Re(" + expr + "), 40)").replace("*10^", "E"), MathContext.DECIMAL128);
+    }
+
     @Test
-    void namedEntriesEvaluateToTheExactPowers() {
-        SymjaSession cas = SymjaSession.open();
-        for (String model : List.of("closed-stages.chain", "plant.chain")) {
-            for (String point : List.of(model.equals("plant.chain") ? "1/40" : "1/7")) {
-                String param = model.equals("plant.chain") ? "w" : "a";
-                LoadedModel m = LoadedModel.load(Path.of(Cli.model(model)), Optional.empty());
-                ClosedResult r = Analysis.closed(m, ClosedQuery.matrix(), (p, d, t) -> { });
-                assertFalse(r.where().isEmpty(), "a quadratic pair is named in " + model);
-                LoadedModel at = LoadedModel.load(Path.of(Cli.model(model)),
-                    java.util.Map.of(param, Rational.parse(point)));
-                for (int n : new int[] {1, 12}) {
-                    StepResult.Matrix exact = (StepResult.Matrix) Analysis.step(at, StepQuery.matrix(n),
-                        (p, d, t) -> { });
-                    for (int i = 0; i < r.rows().size(); i++) {
-                        for (int j = 0; j < r.cols().size(); j++) {
-                            String f = substituted(r, r.shownCells().get(i).get(j).plain());
-                            assertTrue(r.shownCells().get(i).get(j).plain().length()
-                                <= r.cells().get(i).get(j).plain().length(), "names shorten the entry");
-                            String expr = f.replaceAll("\\b" + r.names().step() + "\\b", "(" + n + ")")
-                                .replaceAll("\\b" + param + "\\b", "(" + point + ")");
-                            String v = cas.eval("N(Re(" + expr + "), 40)");
-                            BigDecimal got = new BigDecimal(v.replace("*10^", "E"), MathContext.DECIMAL128);
-                            Rational want = exact.entries().get(i).get(j);
-                            BigDecimal w = new BigDecimal(want.numerator()).divide(new BigDecimal(want.denominator()),
-                                MathContext.DECIMAL128);
-                            assertEquals(0, got.subtract(w).abs().compareTo(new BigDecimal("1e-25")) < 0 ? 0 : 1,
-                                model + " P^" + n + "(" + i + "," + j + ") at " + point + ": " + got + " vs " + w);
-                        }
+    void printedEntriesEvaluateToTheExactPowers() {
+        List<Case> cases = List.of(new Case("closed-stages.chain", "a", "1/7", false, 12),
+            new Case("closed-stages.chain", "a", "1/3", true, 1), new Case("plant.chain", "w", "2/9", true, 4));
+        for (Case c : cases) {
+            LoadedModel m = LoadedModel.load(Path.of(Cli.model(c.model())), Optional.empty());
+            ClosedResult r = Analysis.closed(m, ClosedQuery.matrix().factored(c.factor()), (p, d, t) -> { });
+            assertFalse(r.where().isEmpty(), "a quadratic pair is named in " + c);
+            assertEquals(c.factor(), r.factored());
+            LoadedModel at = LoadedModel.load(Path.of(Cli.model(c.model())), Map.of(c.param(), Rational.parse(c.point())));
+            StepResult.Matrix exact = (StepResult.Matrix) Analysis.step(at, StepQuery.matrix(c.n()), (p, d, t) -> { });
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.cols().size(); j++) {
+                    String named = r.shownCells().get(i).get(j).plain();
+                    String expanded = r.cells().get(i).get(j).plain();
+                    assertTrue(named.length() <= expanded.length(), "names shorten the entry");
+                    Rational want = exact.entries().get(i).get(j);
+                    BigDecimal w = new BigDecimal(want.numerator()).divide(new BigDecimal(want.denominator()),
+                        MathContext.DECIMAL128);
+                    for (String f : List.of(substituted(r, named), expanded)) {
+                        BigDecimal got = evaluate(f, r.names().step(), c.n(), c.param(), c.point());
+                        assertTrue(got.subtract(w).abs().compareTo(new BigDecimal("1e-25")) < 0,
+                            c + " (" + i + "," + j + "): " + f + " gives " + got + ", exact " + w);
                     }
                 }
             }

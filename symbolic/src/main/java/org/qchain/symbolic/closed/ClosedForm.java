@@ -133,13 +133,48 @@ public final class ClosedForm {
     // --- the formulas ------------------------------------------------------------------------------------------
 
     private Fml buildFormula(int i, int j, boolean named) {
+        return buildFormula(i, j, named, false);
+    }
+
+    private Fml buildFormula(int i, int j, boolean named, boolean factored) {
         List<Fml> terms = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g != zero) {
-                terms.add(term(g, i, j, named));
+                terms.add(term(g, i, j, named, factored));
             }
         }
         return Fml.sum(terms);
+    }
+
+    /** A coefficient, expanded or with numerator and denominator factored over the rationals. */
+    private Fml coefficient(Quotient<BigRational> q, boolean factored) {
+        return factored ? field.factoredFormula(q) : field.formula(q);
+    }
+
+    private final Map<String, Fml> printedCache = new java.util.concurrent.ConcurrentHashMap<>();
+
+    private Fml printed(int i, int j, boolean named, boolean factored) {
+        if (!factored) {
+            return named ? namedFormulas[i][j] : formulas[i][j];
+        }
+        return printedCache.computeIfAbsent(i + "," + j + "," + named,
+            key -> buildFormula(i, j, named && !definitions.isEmpty(), true));
+    }
+
+    /**
+     * The formula of entry (i, j) in plain syntax: with the names of {@link #definitions()} ({@code named}) or
+     * expanded, and with each coefficient's numerator and denominator factored over the rationals
+     * ({@code factored}) or multiplied out.
+     *
+     * @throws IndexOutOfBoundsException if i or j is out of range
+     */
+    public String plain(int i, int j, boolean named, boolean factored) {
+        return Fml.plain(printed(i, j, named, factored));
+    }
+
+    /** {@link #plain(int, int, boolean, boolean)} in LaTeX. */
+    public String latex(int i, int j, boolean named, boolean factored) {
+        return Fml.latex(printed(i, j, named, factored));
     }
 
     /** A name as an atom: an eigenvalue name prints as lambda with an index in LaTeX. */
@@ -152,7 +187,7 @@ public final class ClosedForm {
         return Fml.name(name);
     }
 
-    private Fml term(Spectral.Group g, int i, int j, boolean named) {
+    private Fml term(Spectral.Group g, int i, int j, boolean named, boolean factored) {
         List<Fml> terms = new ArrayList<>();
         switch (g.kind) {
             case LINEAR:
@@ -169,7 +204,7 @@ public final class ClosedForm {
                     Fml exponent = constant ? n : shifted(-k);
                     Quotient<BigRational> coef = constant && k > 0 ? c.divide(ParamField.power(g.lambda, k)) : c;
                     Fml power = g.lambda.isONE() ? Fml.ONE : Fml.pow(field.formula(g.lambda), exponent);
-                    terms.add(Fml.prod(List.of(field.formula(coef), binom, power)));
+                    terms.add(Fml.prod(List.of(coefficient(coef, factored), binom, power)));
                 }
                 break;
             case QUADRATIC: {
@@ -183,10 +218,10 @@ public final class ClosedForm {
                     Fml l1n = Fml.pow(roots.get(0), exponent);
                     Fml l2n = Fml.pow(roots.get(1), exponent);
                     if (!x.isZERO()) {
-                        terms.add(Fml.prod(List.of(field.formula(x), binomial(k), Fml.sum(l1n, l2n))));
+                        terms.add(Fml.prod(List.of(coefficient(x, factored), binomial(k), Fml.sum(l1n, l2n))));
                     }
                     if (!y.isZERO()) {
-                        terms.add(Fml.prod(List.of(field.formula(y), binomial(k),
+                        terms.add(Fml.prod(List.of(coefficient(y, factored), binomial(k),
                             Fml.div(Fml.sum(l1n, Fml.neg(l2n)), sqrt))));
                     }
                 }
@@ -197,7 +232,7 @@ public final class ClosedForm {
                     for (int t = 0; t < g.degree; t++) {
                         Quotient<BigRational> c = g.c.get(k).get(t)[i][j];
                         if (!c.isZERO()) {
-                            terms.add(Fml.prod(List.of(field.formula(c), binomial(k),
+                            terms.add(Fml.prod(List.of(coefficient(c, factored), binomial(k),
                                 Fml.call("rootsum", shifted(t - k), Fml.name(g.name)))));
                         }
                     }
@@ -456,19 +491,20 @@ public final class ClosedForm {
     }
 
     private List<List<String>> latexMatrix(Quotient<BigRational>[][] m) {
-        return printedMatrix(m, Fml::latex);
+        return printedMatrix(m, Fml::latex, false);
     }
 
     private List<List<String>> plainMatrix(Quotient<BigRational>[][] m) {
-        return printedMatrix(m, Fml::plain);
+        return printedMatrix(m, Fml::plain, false);
     }
 
-    private List<List<String>> printedMatrix(Quotient<BigRational>[][] m, java.util.function.Function<Fml, String> print) {
+    private List<List<String>> printedMatrix(Quotient<BigRational>[][] m, java.util.function.Function<Fml, String> print,
+                                             boolean factored) {
         List<List<String>> out = new ArrayList<>();
         for (Quotient<BigRational>[] row : m) {
             List<String> r = new ArrayList<>();
             for (Quotient<BigRational> q : row) {
-                r.add(print.apply(field.formula(q)));
+                r.add(print.apply(coefficient(q, factored)));
             }
             out.add(List.copyOf(r));
         }
@@ -652,6 +688,14 @@ public final class ClosedForm {
      * the domains.
      */
     public LongRun longRun() {
+        return longRun(false);
+    }
+
+    /**
+     * As {@link #longRun()}, with the limits' numerators and denominators factored over the rationals when
+     * {@code factored}.
+     */
+    public LongRun longRun(boolean factored) {
         int d = 1;
         List<Spectral.Group> unit = new ArrayList<>();
         List<Fml> moduli = new ArrayList<>();
@@ -677,8 +721,8 @@ public final class ClosedForm {
                     m[i][j] = s;
                 }
             }
-            limits.add(plainMatrix(m));
-            limitsLatex.add(latexMatrix(m));
+            limits.add(factored ? printedMatrix(m, f -> Fml.plain(f), true) : plainMatrix(m));
+            limitsLatex.add(factored ? printedMatrix(m, f -> Fml.latex(f), true) : latexMatrix(m));
         }
         Fml rate = moduli.isEmpty() ? Fml.ZERO : (moduli.size() == 1 ? moduli.get(0) : new Fml.Call("max", List.copyOf(moduli)));
         List<String> conds = new ArrayList<>();
