@@ -252,6 +252,10 @@ final class MarkdownFormatter extends Layout {
                 if (e.jordanIndex() > 1) {
                     sb.append(", Jordan block of size ").append(e.jordanIndex());
                 }
+                String dec = Closed.eigenDecimals(r, e);
+                if (!dec.isEmpty()) {
+                    sb.append(" ≈ ").append(dec).append(Text.markdown(Closed.pointNote(r)));
+                }
                 sb.append('\n');
             }
             for (ClosedResult.Roots rt : r.roots()) {
@@ -264,18 +268,27 @@ final class MarkdownFormatter extends Layout {
         }
         r.longRun().ifPresent(lr -> {
             boolean periodic = lr.periodic();
+            List<List<List<String>>> dec = Closed.limitDecimals(r, lr);
+            boolean decimals = !dec.isEmpty();
             sb.append("\nLong run: ").append(Text.markdown(Closed.longRunHeading(r, lr))).append(":\n\n| ")
                 .append(periodic ? r.names().step() + " | " : "")
-                .append("from | to | limit |\n| ").append(periodic ? "--- | " : "").append("--- | --- | --- |\n");
+                .append("from | to | limit |").append(decimals ? " decimal |" : "").append("\n| ")
+                .append(periodic ? "--- | " : "").append("--- | --- | --- |").append(decimals ? " ---: |" : "")
+                .append('\n');
             for (int k = 0; k < lr.limits().size(); k++) {
                 for (int i = 0; i < r.rows().size(); i++) {
                     for (int j = 0; j < r.cols().size(); j++) {
                         sb.append("| ").append(periodic ? Text.markdown(Closed.subsequenceIndex(r, lr, k)) + " | " : "")
                             .append(Text.markdown(r.rows().get(i))).append(" | ")
                             .append(Text.markdown(r.cols().get(j))).append(" | `")
-                            .append(Text.code(lr.limits().get(k).get(i).get(j).plain())).append("` |\n");
+                            .append(Text.code(lr.limits().get(k).get(i).get(j).plain())).append("` |")
+                            .append(decimals ? " " + dec.get(k).get(i).get(j) + " |" : "").append('\n');
                     }
                 }
+            }
+            if (decimals) {
+                sb.append("\nDecimals").append(Text.markdown(Closed.pointNote(r))).append(", ").append(r.digits())
+                    .append(" significant digits.\n");
             }
             String note = Closed.longRunNote(lr);
             if (!note.isEmpty()) {
