@@ -53,9 +53,10 @@ public final class CertifiedRoots {
             Comparator.reverseOrder()));
         List<CertifiedComplex> out = new ArrayList<>(real);
         for (RootDisks.Disk d : complex) {
+            RootDisks.Refined root = new RootDisks.Refined(p, d);
             out.add(new CertifiedComplex(
-                CertifiedReal.enclosed(bits -> d.refine(p, bits).reEnclosure(), x -> partIs(p, d, x, false)),
-                CertifiedReal.enclosed(bits -> d.refine(p, bits).imEnclosure(), x -> partIs(p, d, x, true))));
+                CertifiedReal.enclosed(bits -> root.at(bits).reEnclosure(), x -> partIs(p, d, x, false)),
+                CertifiedReal.enclosed(bits -> root.at(bits).imEnclosure(), x -> partIs(p, d, x, true))));
         }
         return List.copyOf(out);
     }

@@ -1,6 +1,7 @@
 package org.qchain.exact.certified;
 
 import java.math.BigDecimal;
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
 import org.apfloat.Apcomplex;
@@ -34,8 +35,13 @@ final class RootDisks {
 
         /** A smaller disk inside this one, about {@code 2^-bits} wide, holding the same root. */
         Disk refine(List<Rational> p, int bits) {
+            return refine(p, bits, this);
+        }
+
+        /** As {@link #refine(List, int)}, with Newton's method started from the centre of {@code from}. */
+        Disk refine(List<Rational> p, int bits, Disk from) {
             long prec = (long) Math.ceil(bits * 0.30103) + 20;
-            Apcomplex z = newton(p, new Apcomplex(apfloat(re, prec), apfloat(im, prec)), prec);
+            Apcomplex z = newton(p, new Apcomplex(apfloat(from.re, prec), apfloat(from.im, prec)), prec);
             Rational cr = rational(z.real());
             Rational ci = rational(z.imag());
             Rational r = inclusionRadius(p, cr, ci, bits + 8);
@@ -60,6 +66,39 @@ final class RootDisks {
     }
 
     /**
+     * An isolating disk with the narrowest refinement found so far (shared by the real and imaginary parts of its
+     * root, so each precision is worked out once).
+     */
+    static final class Refined {
+        private final List<Rational> p;
+        private final Disk isolating;
+        private Disk best;
+
+        Refined(List<Rational> p, Disk isolating) {
+            this.p = p;
+            this.isolating = isolating;
+            this.best = isolating;
+        }
+
+        Disk isolating() {
+            return isolating;
+        }
+
+        /** A disk about the root, at most about {@code 2^-bits} in radius when the arithmetic allows. */
+        synchronized Disk at(int bits) {
+            Rational target = Rational.dyadic(BigInteger.ONE, bits);
+            if (best.radius().compareTo(target) <= 0) {
+                return best;
+            }
+            Disk d = isolating.refine(p, bits, best);
+            if (d.radius().compareTo(best.radius()) < 0) {
+                best = d;
+            }
+            return best;
+        }
+    }
+
+    /**
      * One disk per root of {@code p} (square-free, monic, degree at least 1), pairwise disjoint.
      *
      * @throws IllegalStateException if the roots could not be separated at the largest precision
@@ -73,8 +112,9 @@ final class RootDisks {
         List<Apcomplex> z = durandKerner(p);
         for (long prec = 40; prec <= MAX_DIGITS; prec *= 2) {
             List<Apcomplex> refined = new ArrayList<>();
+            Apfloat[] ca = coefficients(p, prec);
             for (Apcomplex s : z) {
-                refined.add(newton(p, s, prec));
+                refined.add(newton(ca, s, prec));
             }
             z = refined;
             List<Disk> disks = certify(p, z, prec);
@@ -137,33 +177,44 @@ final class RootDisks {
 
     /**
      * An upper bound of {@code d |p(z) / p'(z)|} at {@code z = re + im i}, or null if {@code p'(z) = 0}: the disk of
-     * this radius about z holds a root of p.
+     * this radius about z holds a root of p. Evaluated in integers over the common denominator of re and im.
      */
     static Rational inclusionRadius(List<Rational> p, Rational re, Rational im, int bits) {
         int d = p.size() - 1;
-        // Horner for p and p' together, in complex rational arithmetic
-        Rational pr = p.get(d);
-        Rational pi = Rational.ZERO;
-        Rational dr = Rational.ZERO;
-        Rational di = Rational.ZERO;
-        for (int k = d - 1; k >= 0; k--) {
-            // p' <- p' z + p
-            Rational ndr = dr.multiply(re).subtract(di.multiply(im)).add(pr);
-            Rational ndi = dr.multiply(im).add(di.multiply(re)).add(pi);
-            dr = ndr;
-            di = ndi;
-            // p <- p z + a_k
-            Rational npr = pr.multiply(re).subtract(pi.multiply(im)).add(p.get(k));
-            Rational npi = pr.multiply(im).add(pi.multiply(re));
-            pr = npr;
-            pi = npi;
+        BigInteger[] c = Polys.integral(p);
+        BigInteger den = re.denominator().divide(re.denominator().gcd(im.denominator())).multiply(im.denominator());
+        BigInteger a = re.numerator().multiply(den.divide(re.denominator()));
+        BigInteger b = im.numerator().multiply(den.divide(im.denominator()));
+        BigInteger[] dPow = new BigInteger[d + 1];
+        dPow[0] = BigInteger.ONE;
+        for (int k = 1; k <= d; k++) {
+            dPow[k] = dPow[k - 1].multiply(den);
         }
-        Rational den = dr.multiply(dr).add(di.multiply(di));
-        if (den.isZero()) {
+        // den^d p(z) and den^(d-1) p'(z), by Horner on (a + b i) with the powers of den
+        BigInteger pr = c[d];
+        BigInteger pi = BigInteger.ZERO;
+        for (int k = d - 1; k >= 0; k--) {
+            BigInteger nr = pr.multiply(a).subtract(pi.multiply(b)).add(c[k].multiply(dPow[d - k]));
+            BigInteger ni = pr.multiply(b).add(pi.multiply(a));
+            pr = nr;
+            pi = ni;
+        }
+        BigInteger qr = c[d].multiply(BigInteger.valueOf(d));
+        BigInteger qi = BigInteger.ZERO;
+        for (int k = d - 1; k >= 1; k--) {
+            BigInteger nr = qr.multiply(a).subtract(qi.multiply(b)).add(c[k].multiply(BigInteger.valueOf(k))
+                .multiply(dPow[d - k]));
+            BigInteger ni = qr.multiply(b).add(qi.multiply(a));
+            qr = nr;
+            qi = ni;
+        }
+        BigInteger q2 = qr.multiply(qr).add(qi.multiply(qi));
+        if (q2.signum() == 0) {
             return null;
         }
-        Rational sq = pr.multiply(pr).add(pi.multiply(pi)).divide(den).multiply(Rational.of((long) d * d));
-        return Polys.sqrtUp(sq, bits);
+        // |p / p'|^2 = |den^d p|^2 / (|den^(d-1) p'|^2 den^2)
+        BigInteger num = pr.multiply(pr).add(pi.multiply(pi)).multiply(BigInteger.valueOf((long) d * d));
+        return Polys.sqrtUp(Rational.of(num, q2.multiply(den).multiply(den)), bits);
     }
 
     private static Rational rational(Apfloat x) {
@@ -171,16 +222,27 @@ final class RootDisks {
     }
 
     private static Apfloat apfloat(Rational r, long prec) {
-        return new Apfloat(r.numerator(), prec).divide(new Apfloat(r.denominator(), prec));
+        Apfloat n = new Apfloat(r.numerator(), prec);
+        return r.isInteger() ? n : n.divide(new Apfloat(r.denominator(), prec));
     }
 
     /** Newton's method from {@code z} at {@code prec} decimal digits. */
     static Apcomplex newton(List<Rational> a, Apcomplex start, long prec) {
-        int d = a.size() - 1;
-        Apfloat[] ca = new Apfloat[d + 1];
-        for (int k = 0; k <= d; k++) {
+        return newton(coefficients(a, prec), start, prec);
+    }
+
+    /** The coefficients at {@code prec} decimal digits. */
+    static Apfloat[] coefficients(List<Rational> a, long prec) {
+        Apfloat[] ca = new Apfloat[a.size()];
+        for (int k = 0; k < ca.length; k++) {
             ca[k] = apfloat(a.get(k), prec);
         }
+        return ca;
+    }
+
+    /** Newton's method from {@code z} at {@code prec} decimal digits, with the coefficients at that precision. */
+    static Apcomplex newton(Apfloat[] ca, Apcomplex start, long prec) {
+        int d = ca.length - 1;
         Apcomplex z = new Apcomplex(start.real().precision(prec), start.imag().precision(prec));
         Apfloat eps = ApfloatMath.pow(new Apfloat(10, prec), -(prec - 5));
         for (int it = 0; it < 200; it++) {

@@ -780,7 +780,25 @@ public final class ClosedForm {
         return List.copyOf(out);
     }
 
+    /** The values of each factor at the points asked for so far (the eigenvalues, roots and rate share them). */
+    private final Map<Spectral.Group, Map<Map<String, Rational>, List<CertifiedComplex>>> valuesCache =
+        new java.util.IdentityHashMap<>();
+
     private List<CertifiedComplex> valuesAt(Spectral.Group g, Map<String, Rational> at) {
+        synchronized (valuesCache) {
+            Map<Map<String, Rational>, List<CertifiedComplex>> byPoint = valuesCache.computeIfAbsent(g,
+                k -> new java.util.HashMap<>());
+            Map<String, Rational> key = Map.copyOf(at);
+            List<CertifiedComplex> v = byPoint.get(key);
+            if (v == null) {
+                v = computeValuesAt(g, at);
+                byPoint.put(key, v);
+            }
+            return v;
+        }
+    }
+
+    private List<CertifiedComplex> computeValuesAt(Spectral.Group g, Map<String, Rational> at) {
         List<CertifiedComplex> v = new ArrayList<>();
         if (g.kind == Spectral.Kind.QUADRATIC) {
             substituted(g, at);
@@ -987,7 +1005,7 @@ public final class ClosedForm {
         for (Spectral.Group g : spectral.groups) {
             if (g.kind == Spectral.Kind.ROOTS) {
                 Fml f = field.formula(g.factor, symbols.variable());
-                out.add(new RootPolynomial(g.name, Fml.plain(f), Fml.latex(f), CertifiedRoots.of(coefficientsAt(g, at))));
+                out.add(new RootPolynomial(g.name, Fml.plain(f), Fml.latex(f), valuesAt(g, at)));
             }
         }
         return List.copyOf(out);
@@ -1016,7 +1034,12 @@ public final class ClosedForm {
                 continue;
             }
             for (CertifiedComplex z : valuesAt(g, at)) {
-                moduli.add(z.isReal() ? z.re().abs() : modulus(z));
+                // a conjugate pair has one modulus: take the member with positive imaginary part only
+                if (z.isReal()) {
+                    moduli.add(z.re().abs());
+                } else if (z.im().signum() > 0) {
+                    moduli.add(modulus(z));
+                }
             }
         }
         return moduli.isEmpty() ? CertifiedReal.exact(Rational.ZERO) : CertifiedReal.max(moduli);
