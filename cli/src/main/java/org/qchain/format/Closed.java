@@ -43,7 +43,13 @@ final class Closed {
      */
     static String symbolsNote(ClosedResult r) {
         ClosedResult.Names s = r.names();
-        if (s.usual()) {
+        List<String> moved = new ArrayList<>();
+        for (ClosedResult.Where w : r.where()) {
+            if (!w.name().matches(w.eigenvalue() ? "l[0-9]+" : "s[0-9]*")) {
+                moved.add(w.eigenvalue() ? w.name() + " (" + w.symbol() + ") an eigenvalue" : w.name() + " a square root");
+            }
+        }
+        if (s.usual() && moved.isEmpty()) {
             return "";
         }
         List<String> parts = new ArrayList<>();
@@ -57,6 +63,7 @@ final class Closed {
         if (r.form() == ClosedResult.Form.RECURRENCE) {
             parts.add(s.sequence() + " the sequence");
         }
+        parts.addAll(moved);
         return "Symbols (chosen apart from the parameter names): " + String.join(", ", parts) + ".";
     }
 

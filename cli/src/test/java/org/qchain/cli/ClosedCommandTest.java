@@ -68,6 +68,11 @@ class ClosedCommandTest {
         out.add(new Case("rounds-entry.tex", List.of(rounds, "--from", "Draft1", "--to", "Revise2", "--format", "latex")));
         out.add(new Case("cubic.txt", List.of(Cli.model("closed-cubic.chain"), "--from", "Run", "--to", "Run",
             "--digits", "15")));
+        // parameters named s and l1: the square root and the eigenvalues take other names (R, L1/λ1)
+        out.add(new Case("names-quadratic.txt", List.of(Cli.model("closed-stages-names.chain"), "--at", "l1=1/2",
+            "--from", "Working", "--to", "Fixing")));
+        out.add(new Case("names-quadratic.json", List.of(Cli.model("closed-stages-names.chain"), "--at", "l1=1/2",
+            "--from", "Working", "--to", "Fixing", "--format", "json")));
         // --factor: coefficients and limits with numerator and denominator factored, det(xI - P) as a product
         out.add(new Case("plant-factor.txt", List.of(Cli.model("plant.chain"), "--from", "Up", "--factor")));
         out.add(new Case("plant-factor.json", List.of(Cli.model("plant.chain"), "--from", "Up", "--to", "Down",

@@ -9,7 +9,6 @@ import java.math.MathContext;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
@@ -32,8 +31,11 @@ import org.qchain.symbolic.cas.SymjaSession;
 class ClosedNamesReadBackTest {
     private static final SymjaSession CAS = SymjaSession.open();
 
-    /** One check: a model, its parameter, a rational point, whether factored, a step count. */
-    private record Case(String model, String param, String point, boolean factor, int n) {
+    /** One check: a model, its symbolic parameter, a rational point, whether factored, a step count, given values. */
+    private record Case(String model, String param, String point, boolean factor, int n, Map<String, Rational> given) {
+        Case(String model, String param, String point, boolean factor, int n) {
+            this(model, param, point, factor, n, Map.of());
+        }
     }
 
     private static String substituted(ClosedResult r, String plain) {
@@ -55,13 +57,16 @@ class ClosedNamesReadBackTest {
     @Test
     void printedEntriesEvaluateToTheExactPowers() {
         List<Case> cases = List.of(new Case("closed-stages.chain", "a", "1/7", false, 12),
-            new Case("closed-stages.chain", "a", "1/3", true, 1), new Case("plant.chain", "w", "2/9", true, 4));
+            new Case("closed-stages.chain", "a", "1/3", true, 1), new Case("plant.chain", "w", "2/9", true, 4),
+            new Case("closed-stages-names.chain", "s", "1/5", false, 3, Map.of("l1", Rational.of(1, 2))));
         for (Case c : cases) {
-            LoadedModel m = LoadedModel.load(Path.of(Cli.model(c.model())), Optional.empty());
+            LoadedModel m = LoadedModel.load(Path.of(Cli.model(c.model())), c.given());
             ClosedResult r = Analysis.closed(m, ClosedQuery.matrix().factored(c.factor()), (p, d, t) -> { });
             assertFalse(r.where().isEmpty(), "a quadratic pair is named in " + c);
             assertEquals(c.factor(), r.factored());
-            LoadedModel at = LoadedModel.load(Path.of(Cli.model(c.model())), Map.of(c.param(), Rational.parse(c.point())));
+            Map<String, Rational> point = new java.util.HashMap<>(c.given());
+            point.put(c.param(), Rational.parse(c.point()));
+            LoadedModel at = LoadedModel.load(Path.of(Cli.model(c.model())), point);
             StepResult.Matrix exact = (StepResult.Matrix) Analysis.step(at, StepQuery.matrix(c.n()), (p, d, t) -> { });
             for (int i = 0; i < r.rows().size(); i++) {
                 for (int j = 0; j < r.cols().size(); j++) {
