@@ -378,7 +378,7 @@ final class TextFormatter extends Layout {
                 vals.add(Closed.eigenValues(r, e) + (extra.isEmpty() ? "" : extra + ")")
                     + (dec.isEmpty() ? "" : "  ≈ " + dec));
             }
-            aligned(sb, facts, " ", vals, "  ");
+            aligned(sb, facts, " ", vals, "  ", EIGEN_PAD);
             if (decimals) {
                 sb.append("  (≈: decimals").append(Closed.pointNote(r)).append(", ").append(r.digits())
                     .append(" significant digits)\n");
@@ -452,13 +452,25 @@ final class TextFormatter extends Layout {
         }
     }
 
+    /**
+     * The widest factor that is still padded to align the eigenvalues after it: a long factor (a quadratic with
+     * parameters) would otherwise push the short ones' eigenvalues far to the right.
+     */
+    private static final int EIGEN_PAD = 24;
+
     /** Labels padded to one width, unless one is longer than {@link #MAX_PAD}: then a single separator each. */
     private static void aligned(StringBuilder sb, List<String> left, String sep, List<String> right, String indent) {
+        aligned(sb, left, sep, right, indent, MAX_PAD);
+    }
+
+    /** Labels padded to one width, unless one is longer than {@code maxPad}: then a single separator each. */
+    private static void aligned(StringBuilder sb, List<String> left, String sep, List<String> right, String indent,
+                                int maxPad) {
         int w = 0;
         for (String l : left) {
             w = Math.max(w, l.length());
         }
-        if (w > MAX_PAD) {
+        if (w > maxPad) {
             w = 0;
         }
         for (int i = 0; i < left.size(); i++) {
