@@ -393,7 +393,7 @@ function _picocli_qchain_closed() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'-h' '--help' '-V' '--version'"
+  local flag_opts="'--factor' '-h' '--help' '-V' '--version'"
   local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--digits' '-o' '--output' '--max-terms' '--max-digits' '--format'"
   local FORM_option_args=("MATRIX" "GF" "RECURRENCE") # --form values
   local FORMAT_option_args=("text" "json" "markdown" "latex") # --format values

@@ -14,11 +14,23 @@ import org.qchain.result.ClosedResult;
  * @param maxTerms  refuse chains whose powers are estimated to need more polynomial terms
  * @param digits    significant digits of numeric values (rate, roots)
  * @param maxDigits refuse closed forms of parameter-free chains estimated to print more digits
+ * @param factor    print coefficients and limits with numerator and denominator factored over the rationals
  */
 public record ClosedQuery(ClosedResult.Form form, Optional<String> from, String fromName, Optional<String> to,
-                          long maxTerms, int digits, long maxDigits) implements Query {
+                          long maxTerms, int digits, long maxDigits, boolean factor) implements Query {
     /** The default of {@code maxDigits}, as for every command's {@code --max-digits}. */
     public static final long DEFAULT_MAX_DIGITS = org.qchain.exact.SizeEstimate.DEFAULT_MAX_DIGITS;
+
+    /** Expanded formulas. */
+    public ClosedQuery(ClosedResult.Form form, Optional<String> from, String fromName, Optional<String> to,
+                       long maxTerms, int digits, long maxDigits) {
+        this(form, from, fromName, to, maxTerms, digits, maxDigits, false);
+    }
+
+    /** The same query with factored ({@code true}) or expanded coefficients. */
+    public ClosedQuery factored(boolean on) {
+        return new ClosedQuery(form, from, fromName, to, maxTerms, digits, maxDigits, on);
+    }
 
     /** With the default digit limit. */
     public ClosedQuery(ClosedResult.Form form, Optional<String> from, String fromName, Optional<String> to,

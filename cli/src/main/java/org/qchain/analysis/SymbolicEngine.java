@@ -37,6 +37,8 @@ import org.qchain.symbolic.sensitivity.SweepEstimate;
 import org.qchain.symbolic.sensitivity.SweepRange;
 import org.qchain.symbolic.sensitivity.SweepRow;
 import org.qchain.result.CheckResult;
+import org.qchain.exact.certified.CertifiedComplex;
+import org.qchain.exact.certified.CertifiedReal;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Formula;
 import org.qchain.result.Point;
@@ -555,29 +557,40 @@ final class SymbolicEngine {
         List<Integer> ri = indices(m, row);
         List<Integer> ci = indices(m, col);
         List<List<Formula>> cells = new ArrayList<>();
+        List<List<Formula>> namedCells = new ArrayList<>();
         int validFrom = 0;
         for (int i : ri) {
             List<Formula> line = new ArrayList<>();
+            List<Formula> named = new ArrayList<>();
             for (int j : ci) {
-                line.add(Formula.of(cf.formula(i, j), cf.latex(i, j)));
+                line.add(Formula.of(cf.plain(i, j, false, q.factor()), cf.latex(i, j, false, q.factor())));
+                named.add(Formula.of(cf.plain(i, j, true, q.factor()), cf.latex(i, j, true, q.factor())));
                 validFrom = Math.max(validFrom, cf.validFrom(i, j));
             }
             cells.add(line);
+            namedCells.add(named);
+        }
+        List<ClosedResult.Where> where = new ArrayList<>();
+        String eigenPrefix = cf.symbols().eigenPrefix();
+        for (org.qchain.symbolic.closed.Definition d : cf.definitions()) {
+            String index = d.name().substring(eigenPrefix.length());
+            where.add(new ClosedResult.Where(d.name(), d.eigenvalue() ? "λ" + index : d.name(),
+                d.eigenvalue() ? "\\lambda_{" + index + "}" : d.name(), d.eigenvalue(), Formula.of(d.plain(), d.latex())));
         }
         List<String> warnings = new ArrayList<>();
         Optional<Point> pt = point(model, cf.parameters());
-        Optional<String> rateValue = Optional.empty();
+        Optional<CertifiedReal> rateValue = Optional.empty();
         List<RootPolynomial> named = List.of();
-        List<List<String>> eigenDecimals = List.of();
+        List<List<CertifiedComplex>> eigenAtPoint = List.of();
         List<RationalMatrix> limitValues = List.of();
         if (pt.isPresent()) {
             try {
                 if (!cf.parameters().isEmpty()) {
                     cf.evaluate(0, pt.get().values()); // checks every condition at the point (none without parameters)
                 }
-                rateValue = Optional.of(cf.rate(pt.get().values(), q.digits()));
-                named = cf.rootPolynomials(pt.get().values(), q.digits());
-                eigenDecimals = cf.eigenvalueDecimals(pt.get().values(), q.digits());
+                rateValue = Optional.of(cf.rateAt(pt.get().values()));
+                named = cf.rootPolynomials(pt.get().values());
+                eigenAtPoint = cf.eigenvaluesAt(pt.get().values());
                 limitValues = cf.longRunAt(pt.get().values());
             } catch (QchainException e) {
                 if (e.key() != ErrorKey.CLOSED_FORM_CONDITION) {
@@ -590,8 +603,8 @@ final class SymbolicEngine {
         for (int k = 0; k < cf.eigenvalues().size(); k++) {
             Eigenvalue e = cf.eigenvalues().get(k);
             eig.add(new ClosedResult.Eigen(Formula.of(e.factor(), e.factorLatex()), e.multiplicity(), e.jordanIndex(),
-                e.kind(), e.values(),
-                eigenDecimals.isEmpty() ? List.of() : eigenDecimals.get(k)));
+                e.kind(), formulas(e.values(), e.valuesLatex()),
+                eigenAtPoint.isEmpty() ? List.of() : eigenAtPoint.get(k), e.valueNames()));
         }
         List<ClosedResult.Roots> roots = new ArrayList<>();
         if (named.isEmpty()) {
@@ -605,14 +618,16 @@ final class SymbolicEngine {
                 roots.add(new ClosedResult.Roots(r.name(), Formula.of(r.polynomial(), r.latex()), r.roots()));
             }
         }
-        LongRun lr = cf.longRun();
-        List<List<List<String>>> limits = new ArrayList<>();
-        for (List<List<String>> full : lr.limits()) {
-            List<List<String>> picked = new ArrayList<>();
+        LongRun lr = cf.longRun(q.factor());
+        List<List<List<Formula>>> limits = new ArrayList<>();
+        for (int k = 0; k < lr.limits().size(); k++) {
+            List<List<String>> full = lr.limits().get(k);
+            List<List<String>> fullLatex = lr.limitsLatex().get(k);
+            List<List<Formula>> picked = new ArrayList<>();
             for (int i : ri) {
-                List<String> r = new ArrayList<>();
+                List<Formula> r = new ArrayList<>();
                 for (int j : ci) {
-                    r.add(full.get(i).get(j));
+                    r.add(Formula.of(full.get(i).get(j), fullLatex.get(i).get(j)));
                 }
                 picked.add(r);
             }
@@ -644,7 +659,17 @@ final class SymbolicEngine {
         return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, cf.conditions(),
             cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),
             names(m, ci), cells, List.of(), eig, Optional.of(longRun), roots,
-            pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()));
+            pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()), where,
+            where.isEmpty() ? List.of() : namedCells, q.factor());
+    }
+
+    /** Formulas from the engine's two printed forms, pairwise. */
+    private static List<Formula> formulas(List<String> plain, List<String> latex) {
+        List<Formula> out = new ArrayList<>();
+        for (int k = 0; k < plain.size(); k++) {
+            out.add(Formula.of(plain.get(k), latex.get(k)));
+        }
+        return out;
     }
 
     private static ClosedResult.Names names(org.qchain.symbolic.closed.Symbols s) {
@@ -668,7 +693,8 @@ final class SymbolicEngine {
                 } else {
                     Recurrence r = sf.recurrence(i, j);
                     line.add(Formula.of(r.plain(), r.latex()));
-                    rr.add(new ClosedResult.Recurrence(r.coefficients(), r.validFrom(), r.initial()));
+                    rr.add(new ClosedResult.Recurrence(formulas(r.coefficients(), r.coefficientsLatex()), r.validFrom(),
+                        formulas(r.initial(), r.initialLatex())));
                     validFrom = Math.max(validFrom, r.validFrom());
                 }
             }

@@ -74,6 +74,10 @@ final class ClosedCommand implements Callable<Integer> {
     @Mixin
     OutputOptions output;
 
+    @Option(names = "--factor", description = "Print each coefficient of the formulas and each limit with numerator"
+        + " and denominator factored over the rationals, and det(xI - P) as the product of its irreducible factors.")
+    boolean factor;
+
     @Mixin
     LimitOptions.Terms terms;
 
@@ -94,6 +98,9 @@ final class ClosedCommand implements Callable<Integer> {
         if (startOptions.given() && from != null) {
             throw new ParameterException(spec.commandLine(), "--start and --from both name the starting state; give one");
         }
+        if (factor && form != ClosedResult.Form.MATRIX) {
+            throw new ParameterException(spec.commandLine(), "--factor applies to --form matrix (the closed form in n)");
+        }
         String start = null;
         if (startOptions.given()) {
             Start s = startOptions.start().orElseThrow();
@@ -109,7 +116,7 @@ final class ClosedCommand implements Callable<Integer> {
         LoadedModel loaded = model.load();
         ClosedQuery q = new ClosedQuery(form, Optional.ofNullable(start != null ? start : from),
             start != null ? "--start" : "--from", Optional.ofNullable(to), terms.maxTerms, output.digits(),
-            digitLimit.maxDigits);
+            digitLimit.maxDigits, factor);
         ClosedResult result = root.run(spec, progress -> Analysis.closed(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

@@ -2,7 +2,10 @@ package org.qchain.format;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.qchain.exact.certified.CertifiedComplex;
+import org.qchain.exact.certified.CertifiedReal;
 import org.qchain.result.ClosedResult;
+import org.qchain.result.Formula;
 import org.qchain.result.Point;
 
 /** Phrases shared by every format's layout of closed forms. */
@@ -40,7 +43,13 @@ final class Closed {
      */
     static String symbolsNote(ClosedResult r) {
         ClosedResult.Names s = r.names();
-        if (s.usual()) {
+        List<String> moved = new ArrayList<>();
+        for (ClosedResult.Where w : r.where()) {
+            if (!w.name().matches(w.eigenvalue() ? "l[0-9]+" : "s[0-9]*")) {
+                moved.add(w.eigenvalue() ? w.name() + " (" + w.symbol() + ") an eigenvalue" : w.name() + " a square root");
+            }
+        }
+        if (s.usual() && moved.isEmpty()) {
             return "";
         }
         List<String> parts = new ArrayList<>();
@@ -54,6 +63,7 @@ final class Closed {
         if (r.form() == ClosedResult.Form.RECURRENCE) {
             parts.add(s.sequence() + " the sequence");
         }
+        parts.addAll(moved);
         return "Symbols (chosen apart from the parameter names): " + String.join(", ", parts) + ".";
     }
 
@@ -121,11 +131,129 @@ final class Closed {
     }
 
     /** The eigenvalues' decimals when they add something to the exact values; empty otherwise. */
-    static String eigenDecimals(ClosedResult.Eigen e) {
-        if (e.decimals().isEmpty() || e.decimals().equals(e.values())) {
+    static String eigenDecimals(ClosedResult r, ClosedResult.Eigen e) {
+        List<String> d = decimals(e.atPoint(), r.digits());
+        if (d.isEmpty() || d.equals(plain(e.values()))) {
             return "";
         }
-        return String.join(", ", e.decimals());
+        return String.join(", ", d);
+    }
+
+    /** The eigenvalues at the point as decimals (complex ones {@code a + b*i}); empty without a point. */
+    static List<String> eigenDecimalList(ClosedResult r, ClosedResult.Eigen e) {
+        return decimals(e.atPoint(), r.digits());
+    }
+
+    /** Each value correctly rounded to {@code digits}: {@code re}, {@code re + im*i} or {@code re - im*i}. */
+    static List<String> decimals(List<CertifiedComplex> values, int digits) {
+        List<String> out = new ArrayList<>();
+        for (CertifiedComplex z : values) {
+            out.add(complex(z, digits));
+        }
+        return out;
+    }
+
+    /** One value correctly rounded to {@code digits}: {@code re}, {@code re + im*i} or {@code re - im*i}. */
+    static String complex(CertifiedComplex z, int digits) {
+        String re = z.re().decimal(digits).text();
+        if (z.isReal()) {
+            return re;
+        }
+        int sign = z.im().signum();
+        return re + (sign < 0 ? " - " : " + ") + z.im().abs().decimal(digits).text() + "*i";
+    }
+
+    /** The value at the requested digits. */
+    static String real(ClosedResult r, CertifiedReal x) {
+        return x.decimal(r.digits()).text();
+    }
+
+    /**
+     * A plain formula as text and Markdown print it: each eigenvalue's name ({@code l1}) as its symbol
+     * ({@code λ1}; the output of these formats is always UTF-8).
+     */
+    static String shown(ClosedResult r, String plain) {
+        String out = plain;
+        for (ClosedResult.Where w : r.where()) {
+            if (!w.symbol().equals(w.name())) {
+                out = out.replaceAll("\\b" + java.util.regex.Pattern.quote(w.name()) + "\\b",
+                    java.util.regex.Matcher.quoteReplacement(w.symbol()));
+            }
+        }
+        return out;
+    }
+
+    /** {@code where s = sqrt(...), λ1 = ..., λ2 = ...} in text syntax; empty when nothing is named. */
+    static String whereLine(ClosedResult r) {
+        if (r.where().isEmpty()) {
+            return "";
+        }
+        List<String> parts = new ArrayList<>();
+        for (ClosedResult.Where w : r.where()) {
+            parts.add(w.symbol() + " = " + shown(r, w.value().plain()));
+        }
+        return "where " + String.join(", ", parts);
+    }
+
+    /** The eigenvalues of a factor as printed: their names when named, else their formulas. */
+    static String eigenValues(ClosedResult r, ClosedResult.Eigen e) {
+        if (e.names().isEmpty()) {
+            return String.join(", ", plain(e.values()));
+        }
+        List<String> out = new ArrayList<>();
+        for (String n : e.names()) {
+            out.add(shown(r, n));
+        }
+        return String.join(", ", out);
+    }
+
+    /** The rate formula, with named eigenvalues by name ({@code max(abs(λ1), abs(λ2))}). */
+    static String rate(ClosedResult r, ClosedResult.LongRun lr, boolean symbols) {
+        String s = lr.rate().plain();
+        for (ClosedResult.Eigen e : r.eigenvalues()) {
+            for (int k = 0; k < e.names().size(); k++) {
+                s = s.replace("abs(" + e.values().get(k).plain() + ")", "abs(" + e.names().get(k) + ")");
+            }
+        }
+        return symbols ? shown(r, s) : s;
+    }
+
+    /**
+     * {@code det(xI - P)} as the product of its irreducible factors with their multiplicities, plain syntax:
+     * {@code (x - 1)*(x^2 - 3/4*x + 1/16)^2}.
+     */
+    static String characteristicPolynomial(ClosedResult r) {
+        List<String> parts = new ArrayList<>();
+        for (ClosedResult.Eigen e : r.eigenvalues()) {
+            String f = e.factor().plain();
+            boolean atom = f.chars().allMatch(Character::isLetterOrDigit);
+            String b = atom ? f : "(" + f + ")";
+            parts.add(e.multiplicity() == 1 ? b : b + "^" + e.multiplicity());
+        }
+        return String.join("*", parts);
+    }
+
+    /** The note of {@code --factor}; empty without it. */
+    static String factoredNote(ClosedResult r) {
+        return r.factored() ? "Coefficients and limits: numerator and denominator factored over the rationals." : "";
+    }
+
+    /** The plain forms of a grid. */
+    static List<List<String>> plainGrid(List<List<Formula>> grid) {
+        List<List<String>> out = new ArrayList<>();
+        for (List<Formula> row : grid) {
+            out.add(plain(row));
+        }
+        return out;
+    }
+
+    /** The plain forms. */
+    static List<String> plain(List<Formula> fs) {
+        List<String> out = new ArrayList<>();
+        for (Formula f : fs) {
+            out.add(f.plain());
+        }
+        return out;
     }
 
     /** Where the decimals are taken: {@code " at p=1/20, r=1/4"} or empty for a chain without parameters. */
@@ -145,8 +273,8 @@ final class Closed {
         }
         return lr.periodic()
             ? "Convergence rate of each subsequence (largest modulus of the eigenvalues that are not roots of unity): "
-                + lr.rate().plain()
-            : "Convergence rate (second-largest eigenvalue modulus): " + lr.rate().plain();
+                + rate(r, lr, true)
+            : "Convergence rate (second-largest eigenvalue modulus): " + rate(r, lr, true);
     }
 
     /** Whether the conditions are known to hold inside the parameters' domains; empty without conditions. */

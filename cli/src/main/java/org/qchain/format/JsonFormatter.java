@@ -296,25 +296,30 @@ final class JsonFormatter extends Layout {
             j.objects("recurrences", items, c -> {
                 ClosedResult.Recurrence rec = (ClosedResult.Recurrence) c[2];
                 return Json.object().string("from", (String) c[0]).string("to", (String) c[1])
-                    .strings("coefficients", rec.coefficients()).number("valid_from", rec.validFrom())
-                    .strings("initial", rec.initial());
+                    .strings("coefficients", Closed.plain(rec.coefficients())).number("valid_from", rec.validFrom())
+                    .strings("initial", Closed.plain(rec.initial()));
             });
         }
         if (!r.isSeries()) {
+            j.objects("where", r.where(), w -> Json.object().string("name", w.name()).string("symbol", w.symbol())
+                .bool("eigenvalue", w.eigenvalue()).string("value", w.value().plain()));
+            j.stringRows("named_cells", Symbolic.plain(r.shownCells()));
+            j.bool("factored", r.factored()).string("characteristic_polynomial", Closed.characteristicPolynomial(r));
             j.objects("eigenvalues", r.eigenvalues(), e -> Json.object().string("factor", e.factor().plain())
                 .number("multiplicity", e.multiplicity()).number("jordan_index", e.jordanIndex())
-                .string("kind", e.kind()).strings("values", e.values()).strings("decimals", e.decimals()));
+                .string("kind", e.kind()).strings("values", Closed.plain(e.values())).strings("names", e.names())
+                .strings("decimals", Closed.eigenDecimalList(r, e)));
             j.objects("root_polynomials", r.roots(), rt -> Json.object().string("name", rt.name())
-                .string("polynomial", rt.polynomial().plain()).strings("roots", rt.roots()));
+                .string("polynomial", rt.polynomial().plain()).strings("roots", Closed.decimals(rt.roots(), r.digits())));
             r.longRun().ifPresent(lr -> {
                 List<Integer> rs = new ArrayList<>();
                 for (int k = 0; k < lr.limits().size(); k++) {
                     rs.add(k);
                 }
                 Json l = Json.object().number("period", lr.period())
-                    .objects("limits", rs, k -> limitJson(r, k, lr.limits().get(k), Closed.limitDecimals(r, lr)))
-                    .string("rate", lr.rate().plain());
-                lr.rateValue().ifPresent(v -> l.string("rate_value", v));
+                    .objects("limits", rs, k -> limitJson(r, k, Closed.plainGrid(lr.limits().get(k)), Closed.limitDecimals(r, lr)))
+                    .string("rate", lr.rate().plain()).string("rate_named", Closed.rate(r, lr, false));
+                lr.rateValue().ifPresent(v -> l.string("rate_value", Closed.real(r, v)));
                 List<String> special = new ArrayList<>();
                 for (org.qchain.result.Point p : lr.special()) {
                     special.add(p.text());

@@ -216,6 +216,34 @@ final class LatexFormatter extends Layout {
 
     // --- closed ------------------------------------------------------------------------------------------------
 
+    /**
+     * The limits as an {@code align*}: {@code \\lim_{n \\to \\infty} P^{n}_{A,B} = ...}, with
+     * {@code \\approx} and the decimal at the point when it is known and adds something.
+     */
+    private static String limits(ClosedResult r, ClosedResult.LongRun lr) {
+        List<List<List<String>>> dec = Closed.limitDecimals(r, lr);
+        List<String> lines = new ArrayList<>();
+        String n = r.names().step();
+        String m = r.names().period();
+        for (int k = 0; k < lr.limits().size(); k++) {
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.cols().size(); j++) {
+                    String idx = "\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.cols().get(j))
+                        + "}";
+                    String lhs = lr.periodic()
+                        ? "\\lim_{" + m + " \\to \\infty} P^{" + lr.period() + m + " + " + k + "}_{" + idx + "}"
+                        : "\\lim_{" + n + " \\to \\infty} P^{" + n + "}_{" + idx + "}";
+                    ClosedResult.LongRun l = lr;
+                    String exact = l.limits().get(k).get(i).get(j).latex();
+                    String d = dec.isEmpty() ? "" : dec.get(k).get(i).get(j);
+                    boolean shows = !d.isEmpty() && !d.equals(l.limits().get(k).get(i).get(j).plain());
+                    lines.add(lhs + " &= " + exact + (shows ? " \\approx " + d : ""));
+                }
+            }
+        }
+        return "\\begin{align*}\n" + String.join(" \\\\\n", lines) + "\n\\end{align*}\n";
+    }
+
     /** The longest run of a formula on one line of an {@code align*} before it is broken. */
     static final int LINE = 100;
 
@@ -267,6 +295,10 @@ final class LatexFormatter extends Layout {
         if (!Closed.symbolsNote(r).isEmpty()) {
             sb.append("% ").append(Closed.symbolsNote(r)).append('\n');
         }
+        if (!Closed.factoredNote(r).isEmpty()) {
+            sb.append("% ").append(Closed.factoredNote(r)).append(" det(").append(r.names().variable())
+                .append("I - P) = ").append(Closed.characteristicPolynomial(r)).append('\n');
+        }
         sb.append("\\begin{align*}\n");
         List<String> lines = new ArrayList<>();
         for (int i = 0; i < r.rows().size(); i++) {
@@ -274,27 +306,44 @@ final class LatexFormatter extends Layout {
                 String idx = "\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.cols().get(j)) + "}";
                 String lhs = r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(" + r.names().series() + ")"
                     : "P^{" + r.names().step() + "}_{" + idx + "}";
-                String rhs = r.form() == ClosedResult.Form.RECURRENCE ? r.cells().get(i).get(j).latex()
-                    : broken(r.cells().get(i).get(j).latex());
+                String rhs = r.form() == ClosedResult.Form.RECURRENCE ? r.shownCells().get(i).get(j).latex()
+                    : broken(r.shownCells().get(i).get(j).latex());
                 lines.add(r.form() == ClosedResult.Form.RECURRENCE ? "&" + lhs + ":\\; " + rhs : lhs + " &= " + rhs);
             }
         }
+        for (int k = 0; k < r.where().size(); k++) {
+            ClosedResult.Where w = r.where().get(k);
+            lines.add((k == 0 ? "&\\text{where } " : "&\\phantom{\\text{where }} ") + w.latexName() + " = "
+                + w.value().latex());
+        }
         sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
         for (ClosedResult.Eigen e : r.eigenvalues()) {
-            sb.append("% eigenvalue ").append(String.join(", ", e.values())).append(" from ").append(e.factor().plain());
+            sb.append("% eigenvalue ").append(String.join(", ", Closed.plain(e.values()))).append(" from ").append(e.factor().plain());
             if (e.multiplicity() > 1) {
                 sb.append(", multiplicity ").append(e.multiplicity());
+            }
+            String dec = Closed.eigenDecimals(r, e);
+            if (!dec.isEmpty()) {
+                sb.append("; approx. ").append(dec).append(Closed.pointNote(r));
+            }
+            sb.append('\n');
+        }
+        for (ClosedResult.Roots rt : r.roots()) {
+            sb.append("% ").append(rt.name()).append(" = ").append(rt.polynomial().plain());
+            if (!rt.roots().isEmpty()) {
+                sb.append("; roots ").append(String.join(", ", Closed.decimals(rt.roots(), r.digits())));
             }
             sb.append('\n');
         }
         r.longRun().ifPresent(lr -> {
             sb.append("% long run: ").append(Text.comment(Closed.longRunHeading(r, lr))).append('\n');
+            sb.append(limits(r, lr));
             String note = Closed.longRunNote(lr);
             if (!note.isEmpty()) {
                 sb.append("% ").append(Text.comment(note)).append('\n');
             }
             sb.append("% ").append(Text.comment(Closed.rateLine(r, lr)))
-                .append(lr.exact() ? "" : lr.rateValue().map(v -> " = " + v).orElse("")).append('\n');
+                .append(lr.exact() ? "" : lr.rateValue().map(v -> " = " + Closed.real(r, v)).orElse("")).append('\n');
         });
         return caution(sb);
     }

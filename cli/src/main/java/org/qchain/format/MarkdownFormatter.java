@@ -247,6 +247,9 @@ final class MarkdownFormatter extends Layout {
         if (!Closed.symbolsNote(r).isEmpty()) {
             sb.append(' ').append(Closed.symbolsNote(r));
         }
+        if (!Closed.factoredNote(r).isEmpty()) {
+            sb.append(' ').append(Closed.factoredNote(r));
+        }
         sb.append("\n\n");
         sb.append("| from | to | ").append(r.form() == ClosedResult.Form.GF ? "G(" + r.names().series() + ")"
                 : (r.form() == ClosedResult.Form.RECURRENCE ? "recurrence" : Closed.pn(r)))
@@ -255,13 +258,16 @@ final class MarkdownFormatter extends Layout {
             for (int j = 0; j < r.cols().size(); j++) {
                 sb.append("| ").append(Text.markdown(r.rows().get(i))).append(" | ")
                     .append(Text.markdown(r.cols().get(j))).append(" | `")
-                    .append(Text.code(r.cells().get(i).get(j).plain())).append("` |\n");
+                    .append(Text.code(Closed.shown(r, r.shownCells().get(i).get(j).plain()))).append("` |\n");
             }
+        }
+        if (!r.where().isEmpty()) {
+            sb.append("\n`").append(Text.code(Closed.whereLine(r))).append("`\n");
         }
         if (!r.eigenvalues().isEmpty()) {
             sb.append("\nEigenvalues:\n\n");
             for (ClosedResult.Eigen e : r.eigenvalues()) {
-                sb.append("- `").append(Text.code(String.join(", ", e.values()))).append("` from `")
+                sb.append("- `").append(Text.code(Closed.eigenValues(r, e))).append("` from `")
                     .append(Text.code(e.factor().plain())).append('`');
                 if (e.multiplicity() > 1) {
                     sb.append(", multiplicity ").append(e.multiplicity());
@@ -269,30 +275,43 @@ final class MarkdownFormatter extends Layout {
                 if (e.jordanIndex() > 1) {
                     sb.append(", Jordan block of size ").append(e.jordanIndex());
                 }
+                String dec = Closed.eigenDecimals(r, e);
+                if (!dec.isEmpty()) {
+                    sb.append(" ≈ ").append(dec).append(Text.markdown(Closed.pointNote(r)));
+                }
                 sb.append('\n');
             }
             for (ClosedResult.Roots rt : r.roots()) {
                 sb.append("- `").append(rt.name()).append(" = ").append(Text.code(rt.polynomial().plain())).append('`');
                 if (!rt.roots().isEmpty()) {
-                    sb.append(": roots ").append(String.join(", ", rt.roots()));
+                    sb.append(": roots ").append(String.join(", ", Closed.decimals(rt.roots(), r.digits())));
                 }
                 sb.append('\n');
             }
         }
         r.longRun().ifPresent(lr -> {
             boolean periodic = lr.periodic();
+            List<List<List<String>>> dec = Closed.limitDecimals(r, lr);
+            boolean decimals = !dec.isEmpty();
             sb.append("\nLong run: ").append(Text.markdown(Closed.longRunHeading(r, lr))).append(":\n\n| ")
                 .append(periodic ? r.names().step() + " | " : "")
-                .append("from | to | limit |\n| ").append(periodic ? "--- | " : "").append("--- | --- | --- |\n");
+                .append("from | to | limit |").append(decimals ? " decimal |" : "").append("\n| ")
+                .append(periodic ? "--- | " : "").append("--- | --- | --- |").append(decimals ? " ---: |" : "")
+                .append('\n');
             for (int k = 0; k < lr.limits().size(); k++) {
                 for (int i = 0; i < r.rows().size(); i++) {
                     for (int j = 0; j < r.cols().size(); j++) {
                         sb.append("| ").append(periodic ? Text.markdown(Closed.subsequenceIndex(r, lr, k)) + " | " : "")
                             .append(Text.markdown(r.rows().get(i))).append(" | ")
                             .append(Text.markdown(r.cols().get(j))).append(" | `")
-                            .append(Text.code(lr.limits().get(k).get(i).get(j))).append("` |\n");
+                            .append(Text.code(lr.limits().get(k).get(i).get(j).plain())).append("` |")
+                            .append(decimals ? " " + dec.get(k).get(i).get(j) + " |" : "").append('\n');
                     }
                 }
+            }
+            if (decimals) {
+                sb.append("\nDecimals").append(Text.markdown(Closed.pointNote(r))).append(", ").append(r.digits())
+                    .append(" significant digits.\n");
             }
             String note = Closed.longRunNote(lr);
             if (!note.isEmpty()) {
@@ -300,7 +319,7 @@ final class MarkdownFormatter extends Layout {
             }
             sb.append('\n').append(Text.markdown(Closed.rateLine(r, lr)));
             if (!lr.exact()) {
-                lr.rateValue().ifPresent(v -> sb.append(" = ").append(v)
+                lr.rateValue().ifPresent(v -> sb.append(" = ").append(Closed.real(r, v))
                     .append(r.point().map(p -> " at " + p.text()).orElse("")));
             }
             sb.append(".\n");

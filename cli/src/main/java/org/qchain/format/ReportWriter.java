@@ -362,10 +362,11 @@ abstract class ReportWriter implements ReportLayout {
                 item.add(new Txt(e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() + "): " : ": "));
                 for (int k = 0; k < e.values().size(); k++) {
                     item.add(k > 0 ? new Txt(", ") : new Txt(""));
-                    item.add(formula(e.values().get(k)));
+                    item.add(formula(e.values().get(k).plain()));
                 }
-                if (!e.decimals().isEmpty()) {
-                    item.add(new Txt(" ≈ " + String.join(", ", e.decimals())));
+                String decimals = Closed.eigenDecimals(c, e);
+                if (!decimals.isEmpty()) {
+                    item.add(new Txt(" ≈ " + decimals));
                 }
                 items.add(item);
             }
@@ -384,7 +385,7 @@ abstract class ReportWriter implements ReportLayout {
                         List<Span> item = new ArrayList<>();
                         item.add(new Math(new Entry("∞", c.rows().get(i), c.cols().get(j))));
                         item.add(new Txt(" = "));
-                        item.add(formula(l.limits().get(r).get(i).get(j)));
+                        item.add(formula(l.limits().get(r).get(i).get(j).plain()));
                         if (!l.values().isEmpty()) {
                             item.add(new Txt(" ≈ " + Text.decimal(l.values().get(r).get(i).get(j), digits)));
                         }
@@ -395,7 +396,7 @@ abstract class ReportWriter implements ReportLayout {
             }
             List<Span> rate = new ArrayList<>(t("Convergence rate (second-largest eigenvalue modulus): "));
             rate.add(formula(l.rate().plain()));
-            l.rateValue().ifPresent(v -> rate.add(new Txt(" = " + v)));
+            l.rateValue().ifPresent(v -> rate.add(new Txt(" = " + Closed.real(c, v))));
             paragraph(rate);
         });
     }

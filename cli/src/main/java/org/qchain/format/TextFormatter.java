@@ -379,16 +379,22 @@ final class TextFormatter extends Layout {
         if (!Closed.symbolsNote(r).isEmpty()) {
             sb.append(Closed.symbolsNote(r)).append('\n');
         }
+        if (!Closed.factoredNote(r).isEmpty()) {
+            sb.append(Closed.factoredNote(r)).append('\n');
+        }
         sb.append('\n');
         List<String> labels = new ArrayList<>();
         List<String> values = new ArrayList<>();
         for (int i = 0; i < r.rows().size(); i++) {
             for (int j = 0; j < r.cols().size(); j++) {
                 labels.add(Closed.label(r, r.rows().get(i), r.cols().get(j)));
-                values.add(r.cells().get(i).get(j).plain());
+                values.add(Closed.shown(r, r.shownCells().get(i).get(j).plain()));
             }
         }
         aligned(sb, labels, r.form() == ClosedResult.Form.RECURRENCE ? ": " : " = ", values, "");
+        if (!r.where().isEmpty()) {
+            sb.append(Closed.whereLine(r)).append('\n');
+        }
         if (!r.eigenvalues().isEmpty()) {
             sb.append("\nEigenvalues, by irreducible factor of det(").append(r.names().variable()).append("I - P):\n");
             List<String> facts = new ArrayList<>();
@@ -398,21 +404,25 @@ final class TextFormatter extends Layout {
                 facts.add(e.factor().plain() + ":");
                 String extra = e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() : "";
                 extra += e.jordanIndex() > 1 ? ", Jordan block of size " + e.jordanIndex() : "";
-                String dec = Closed.eigenDecimals(e);
+                String dec = Closed.eigenDecimals(r, e);
                 decimals |= !dec.isEmpty();
-                vals.add(String.join(", ", e.values()) + (extra.isEmpty() ? "" : extra + ")")
+                vals.add(Closed.eigenValues(r, e) + (extra.isEmpty() ? "" : extra + ")")
                     + (dec.isEmpty() ? "" : "  ≈ " + dec));
             }
-            aligned(sb, facts, " ", vals, "  ");
+            aligned(sb, facts, " ", vals, "  ", EIGEN_PAD);
             if (decimals) {
                 sb.append("  (≈: decimals").append(Closed.pointNote(r)).append(", ").append(r.digits())
                     .append(" significant digits)\n");
+            }
+            if (r.factored()) {
+                sb.append("  det(").append(r.names().variable()).append("I - P) = ")
+                    .append(Closed.characteristicPolynomial(r)).append('\n');
             }
         }
         for (ClosedResult.Roots rt : r.roots()) {
             sb.append("  ").append(rt.name()).append(" = ").append(rt.polynomial().plain());
             if (!rt.roots().isEmpty()) {
-                sb.append("; roots ").append(String.join(", ", rt.roots()));
+                sb.append("; roots ").append(String.join(", ", Closed.decimals(rt.roots(), r.digits())));
             }
             sb.append('\n');
         }
@@ -435,7 +445,7 @@ final class TextFormatter extends Layout {
                 for (int j = 0; j < r.cols().size(); j++) {
                     labels.add((lr.periodic() ? Closed.subsequence(r, lr, k) + ": " : "") + r.rows().get(i) + " -> "
                         + r.cols().get(j));
-                    String exact = lr.limits().get(k).get(i).get(j);
+                    String exact = lr.limits().get(k).get(i).get(j).plain();
                     values.add(exact);
                     String d = dec.isEmpty() ? "" : dec.get(k).get(i).get(j);
                     approx.add(d.isEmpty() || d.equals(exact) ? "" : "  ≈ " + d);
@@ -467,19 +477,31 @@ final class TextFormatter extends Layout {
         }
         sb.append(Closed.rateLine(r, lr)).append('\n');
         if (!lr.exact()) {
-            lr.rateValue().ifPresent(v -> sb.append("  = ").append(v)
+            lr.rateValue().ifPresent(v -> sb.append("  = ").append(Closed.real(r, v))
                 .append(r.point().map(p -> " at " + p.text()).orElse("")).append(" (").append(r.digits())
                 .append(" significant digits)\n"));
         }
     }
 
+    /**
+     * The widest factor that is still padded to align the eigenvalues after it: a long factor (a quadratic with
+     * parameters) would otherwise push the short ones' eigenvalues far to the right.
+     */
+    private static final int EIGEN_PAD = 24;
+
     /** Labels padded to one width, unless one is longer than {@link #MAX_PAD}: then a single separator each. */
     private static void aligned(StringBuilder sb, List<String> left, String sep, List<String> right, String indent) {
+        aligned(sb, left, sep, right, indent, MAX_PAD);
+    }
+
+    /** Labels padded to one width, unless one is longer than {@code maxPad}: then a single separator each. */
+    private static void aligned(StringBuilder sb, List<String> left, String sep, List<String> right, String indent,
+                                int maxPad) {
         int w = 0;
         for (String l : left) {
             w = Math.max(w, l.length());
         }
-        if (w > MAX_PAD) {
+        if (w > maxPad) {
             w = 0;
         }
         for (int i = 0; i < left.size(); i++) {

@@ -3,15 +3,19 @@ package org.qchain.result;
 import java.util.List;
 import java.util.Optional;
 import org.qchain.exact.Rational;
+import org.qchain.exact.certified.CertifiedComplex;
+import org.qchain.exact.certified.CertifiedReal;
 
 /**
  * P^n (the whole matrix, one row or one entry) as formulas in a symbolic n and the free parameters, or their
  * generating functions or recurrences, with the validity range, the parameter conditions, the eigenvalues and the
  * long run ({@code closed}).
  *
- * <p>The closed-form engine prints its formulas itself (plain and LaTeX: the cells, the factors, the rate); the
- * eigenvalues and limits are its plain formulas, and the rate's and roots' values are its decimals at
- * {@link #digits()} (numeric roots of the characteristic polynomial, not exact values).
+ * <p>Symbolic quantities (the cells, the factors, the eigenvalues, the limits, the rate, the recurrences'
+ * coefficients and initial values) are {@link Formula}s, which print themselves as plain text and LaTeX; values at
+ * the parameter point are exact {@code Rational}s (the limits) or {@link CertifiedReal}s and
+ * {@link CertifiedComplex}es (eigenvalues, roots, the rate), which the formatters round at {@link #digits()} with
+ * every digit proven. Nothing here is rounded or laid out for one format.
  *
  * @param source      the model file name as the user gave it
  * @param form        which form is printed
@@ -30,16 +34,21 @@ import org.qchain.exact.Rational;
  * @param longRun     period, limits and rate; empty for the series forms
  * @param roots       the named factors of degree 3 or more, with numeric roots when the point is known
  * @param point       the parameter values used for numeric values, if complete and not empty
- * @param digits      significant digits of numeric values
+ * @param digits      the significant digits the formatters print numeric values with
  * @param warnings    warnings
  * @param names       the symbols the formulas use for their own quantities (none is a parameter's name)
+ * @param where       the names of repeated pieces (a quadratic factor's square root and eigenvalues), each defined
+ *                    in terms of the parameters and the names before it; empty when nothing is named
+ * @param namedCells  {@code cells} written with the names of {@code where}; empty when nothing is named
+ * @param factored    whether coefficients and limits are printed with numerator and denominator factored over the
+ *                    rationals ({@code closed --factor})
  */
 public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
                            List<String> notProved, List<String> states, List<String> parameters, Selection selection,
                            List<String> rows, List<String> cols, List<List<Formula>> cells,
                            List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                            List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
-                           Names names)
+                           Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored)
     implements Result {
 
     /** Copies the lists. */
@@ -55,6 +64,36 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
         eigenvalues = List.copyOf(eigenvalues);
         roots = List.copyOf(roots);
         warnings = List.copyOf(warnings);
+        where = List.copyOf(where);
+        namedCells = namedCells.stream().map(List::copyOf).toList();
+    }
+
+    /** As the canonical constructor with nothing named. */
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
+                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+                        List<String> rows, List<String> cols, List<List<Formula>> cells,
+                        List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
+                        List<Roots> roots, Optional<Point> point, int digits, List<String> warnings, Names names) {
+        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+            recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, List.of(), List.of(), false);
+    }
+
+    /** The cells to print: written with the names of {@link #where()} when there are any. */
+    public List<List<Formula>> shownCells() {
+        return where.isEmpty() ? cells : namedCells;
+    }
+
+    /**
+     * A name for a repeated piece of the formulas.
+     *
+     * @param name       the name in plain syntax (ASCII: {@code l1}, {@code s}), as JSON and the plain formulas
+     *                   write it, and as the model file's expressions read it
+     * @param symbol     the name as text and Markdown print it ({@code λ1} for an eigenvalue, else {@code name})
+     * @param latexName  the name in LaTeX ({@code \lambda_{1}}, {@code s})
+     * @param eigenvalue whether it stands for an eigenvalue
+     * @param value      its value, in terms of the parameters and the names before it
+     */
+    public record Where(String name, String symbol, String latexName, boolean eigenvalue, Formula value) {
     }
 
     /**
@@ -125,11 +164,11 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
     /**
      * One recurrence {@code u(n) = sum_k c_k u(n - k)} for {@code n >= validFrom}.
      *
-     * @param coefficients c_1 .. c_d, plain syntax
+     * @param coefficients c_1 .. c_d
      * @param validFrom    the first n for which it holds
      * @param initial      u(0) .. u(validFrom - 1)
      */
-    public record Recurrence(List<String> coefficients, int validFrom, List<String> initial) {
+    public record Recurrence(List<Formula> coefficients, int validFrom, List<Formula> initial) {
         /** Copies the lists. */
         public Recurrence {
             coefficients = List.copyOf(coefficients);
@@ -144,20 +183,23 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param multiplicity its multiplicity
      * @param jordanIndex  the size of the largest Jordan block of each eigenvalue of the factor (1: none)
      * @param kind         {@code rational}, {@code quadratic} or {@code roots}
-     * @param values       the eigenvalues as formulas
-     * @param decimals     the eigenvalues at the point, as decimals to {@code digits}; empty without a point
+     * @param values       the eigenvalues as formulas ({@code roots of f1} for a named factor)
+     * @param atPoint      the eigenvalues at the point, every one of the factor; empty without a point
+     * @param names        the names of {@code values} in {@link ClosedResult#where()} (ASCII, as {@code l1}); empty
+     *                     when they are not named
      */
-    public record Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<String> values,
-                        List<String> decimals) {
+    public record Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<Formula> values,
+                        List<CertifiedComplex> atPoint, List<String> names) {
         /** Copies the lists. */
         public Eigen {
             values = List.copyOf(values);
-            decimals = List.copyOf(decimals);
+            atPoint = List.copyOf(atPoint);
+            names = List.copyOf(names);
         }
 
-        /** Without decimals. */
-        public Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<String> values) {
-            this(factor, multiplicity, jordanIndex, kind, values, List.of());
+        /** Without values at a point or names. */
+        public Eigen(Formula factor, int multiplicity, int jordanIndex, String kind, List<Formula> values) {
+            this(factor, multiplicity, jordanIndex, kind, values, List.of(), List.of());
         }
     }
 
@@ -169,7 +211,7 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param rate       the largest modulus of the eigenvalues that are neither roots of unity nor 0, as a formula:
      *                   with d = 1 the second-largest eigenvalue modulus; with d &gt; 1 the rate of each subsequence
      *                   P^(dm + r) (the second-largest modulus of P itself is then 1)
-     * @param rateValue  its value at the point, to {@code digits}, when the point is known
+     * @param rateValue  its value at the point, when the point is known
      * @param conditions the conditions on the parameters under which this long run holds (no eigenvalue becomes a
      *                   root of unity)
      * @param notProved  those of {@code conditions} not shown to hold throughout the parameters' domains
@@ -179,7 +221,7 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param exactFrom  see {@code exact}
      * @param values     the limits at the point, exactly, shaped like {@code limits}; empty without a point
      */
-    public record LongRun(int period, List<List<List<String>>> limits, Formula rate, Optional<String> rateValue,
+    public record LongRun(int period, List<List<List<Formula>>> limits, Formula rate, Optional<CertifiedReal> rateValue,
                           List<String> conditions, List<String> notProved, List<Point> special, boolean exact,
                           int exactFrom, List<List<List<Rational>>> values) {
         /** Copies the lists. */
@@ -192,7 +234,7 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
         }
 
         /** Without conditions, special points or values (a rate of {@code 0} means exact from n = 0). */
-        public LongRun(int period, List<List<List<String>>> limits, Formula rate, Optional<String> rateValue) {
+        public LongRun(int period, List<List<List<Formula>>> limits, Formula rate, Optional<CertifiedReal> rateValue) {
             this(period, limits, rate, rateValue, List.of(), List.of(), List.of(), rate.plain().equals("0"), 0,
                 List.of());
         }
@@ -208,9 +250,9 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      *
      * @param name       its name in formulas
      * @param polynomial the factor in x
-     * @param roots      numeric roots at the point, empty if the point is not known
+     * @param roots      its roots at the point, each once, empty if the point is not known
      */
-    public record Roots(String name, Formula polynomial, List<String> roots) {
+    public record Roots(String name, Formula polynomial, List<CertifiedComplex> roots) {
         /** Copies the list. */
         public Roots {
             roots = List.copyOf(roots);

@@ -68,6 +68,17 @@ class ClosedCommandTest {
         out.add(new Case("rounds-entry.tex", List.of(rounds, "--from", "Draft1", "--to", "Revise2", "--format", "latex")));
         out.add(new Case("cubic.txt", List.of(Cli.model("closed-cubic.chain"), "--from", "Run", "--to", "Run",
             "--digits", "15")));
+        // parameters named s and l1: the square root and the eigenvalues take other names (R, L1/λ1)
+        out.add(new Case("names-quadratic.txt", List.of(Cli.model("closed-stages-names.chain"), "--at", "l1=1/2",
+            "--from", "Working", "--to", "Fixing")));
+        out.add(new Case("names-quadratic.json", List.of(Cli.model("closed-stages-names.chain"), "--at", "l1=1/2",
+            "--from", "Working", "--to", "Fixing", "--format", "json")));
+        // --factor: coefficients and limits with numerator and denominator factored, det(xI - P) as a product
+        out.add(new Case("plant-factor.txt", List.of(Cli.model("plant.chain"), "--from", "Up", "--factor")));
+        out.add(new Case("plant-factor.json", List.of(Cli.model("plant.chain"), "--from", "Up", "--to", "Down",
+            "--factor", "--format", "json")));
+        out.add(new Case("rounds-factor.tex", List.of(rounds, "--from", "Draft1", "--to", "Draft2", "--factor",
+            "--format", "latex")));
         return out.stream();
     }
 
@@ -110,6 +121,8 @@ class ClosedCommandTest {
             "--from", "Gone");
         assertUsage("--format csv is not available for closed forms; use text, json, latex or markdown", "closed",
             BEACON, "--format", "csv");
+        assertUsage("--factor applies to --form matrix (the closed form in n)", "closed", BEACON, "--form", "gf",
+            "--factor");
         assertUsage("Invalid value for option '--form': 'series' is not a form; use matrix, gf or recurrence",
             "closed", BEACON, "--form", "series");
         assertUsage("invalid --at 'a=2': value 2 of parameter 'a' is outside its domain (0, 1)", "closed", BEACON,

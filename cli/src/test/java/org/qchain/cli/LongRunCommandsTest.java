@@ -75,13 +75,13 @@ class LongRunCommandsTest {
         for (String name : List.of("beacon.chain", "press.chain", "two-state.chain")) {
             LoadedModel m = LoadedModel.load(Path.of(Cli.model(name)), Optional.empty());
             LongRunResult lr = Analysis.longRun(m, new LongRunQuery(false, true, LongRunQuery.DEFAULT_MAX_DIGITS, 40));
-            List<List<String>> closed = Analysis.closed(m, ClosedQuery.matrix(), (p, d, t) -> { })
+            List<List<org.qchain.result.Formula>> closed = Analysis.closed(m, ClosedQuery.matrix(), (p, d, t) -> { })
                 .longRun().orElseThrow().limits().get(0);
             ParamRing ring = ParamRing.of(m.model());
             for (int i = 0; i < m.states().size(); i++) {
                 for (int j = 0; j < m.states().size(); j++) {
                     RatFun a = ring.fromExpr(ModelParser.parseExpression("<longrun>", lr.limit().get(i).get(j).plain()));
-                    RatFun b = ring.fromExpr(ModelParser.parseExpression("<closed>", closed.get(i).get(j)));
+                    RatFun b = ring.fromExpr(ModelParser.parseExpression("<closed>", closed.get(i).get(j).plain()));
                     assertEquals(b, a, name + " (" + i + "," + j + ")");
                 }
             }

@@ -14,6 +14,12 @@
  * <li>{@link org.qchain.exact.certified.CertifiedPowers}: rows, entries and all of {@code P^n} for a non-negative
  * matrix, dense ({@link org.qchain.exact.RationalMatrix}) or sparse
  * ({@link org.qchain.exact.SparseRationalMatrix}).</li>
+ * <li>{@link org.qchain.exact.certified.CertifiedReal}, {@link org.qchain.exact.certified.CertifiedComplex}: numbers
+ * that give proven digits on demand: exact rationals, real algebraic numbers (a square-free polynomial and an
+ * isolating interval, refined by exact bisection, so a value on a rounding boundary is found exactly), or values
+ * given by enclosures that narrow with the precision; {@link org.qchain.exact.certified.CertifiedRoots} isolates
+ * every root of a rational polynomial (inclusion disks proven in rational arithmetic). The closed forms' eigenvalues,
+ * roots and convergence rate at a point are such numbers.</li>
  * </ul>
  *
  * <h2>Method</h2>

@@ -15,6 +15,9 @@ import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
+import org.qchain.exact.certified.CertifiedComplex;
+import org.qchain.exact.certified.CertifiedReal;
+import org.qchain.exact.certified.CertifiedRoots;
 import org.qchain.exact.model.Domain;
 import org.qchain.symbolic.ParamRing;
 import org.qchain.symbolic.RatFun;
@@ -44,6 +47,10 @@ public final class ClosedForm {
     private final int validFrom;
     private final int[][] validFromEntry;
     private final Fml[][] formulas;
+    /** The same with each quadratic pair and its square root by name. */
+    private final Fml[][] namedFormulas;
+    private final java.util.Map<Spectral.Group, String[]> quadraticNames = new java.util.IdentityHashMap<>();
+    private final List<Definition> definitions;
     private final List<GenPolynomial<BigRational>> conditionPolys;
     private final List<String> conditions;
     private final List<Eigenvalue> eigenvalues;
@@ -58,11 +65,32 @@ public final class ClosedForm {
         this.n = Fml.name(symbols.step());
         this.spectral = Spectral.of(series, progress);
         int named = 1;
+        int quadratics = 0;
         for (Spectral.Group g : spectral.groups) {
             if (g.kind == Spectral.Kind.ROOTS) {
                 g.name = symbols.factor(named++);
             }
+            if (g.kind == Spectral.Kind.QUADRATIC) {
+                quadratics++;
+            }
         }
+        int q = 0;
+        List<Definition> defs = new ArrayList<>();
+        for (Spectral.Group g : spectral.groups) {
+            if (g.kind == Spectral.Kind.QUADRATIC) {
+                q++;
+                String s = quadratics == 1 ? symbols.root() : symbols.root() + q;
+                String l1 = symbols.eigenvalue(2 * q - 1);
+                String l2 = symbols.eigenvalue(2 * q);
+                quadraticNames.put(g, new String[] {s, l1, l2});
+                Fml sqrt = Fml.call("sqrt", field.formula(g.delta));
+                defs.add(new Definition(s, Fml.plain(sqrt), Fml.latex(sqrt), false));
+                List<Fml> roots = quadraticRoots(g, Fml.name(s));
+                defs.add(new Definition(l1, Fml.plain(roots.get(0)), Fml.latex(roots.get(0)), true));
+                defs.add(new Definition(l2, Fml.plain(roots.get(1)), Fml.latex(roots.get(1)), true));
+            }
+        }
+        this.definitions = List.copyOf(defs);
         this.seriesForm = new SeriesForm(series, states);
         this.states = List.copyOf(states);
         this.size = spectral.series.size;
@@ -76,6 +104,7 @@ public final class ClosedForm {
         this.validFrom = z == null ? 0 : z.nilpotent.size();
         this.validFromEntry = new int[size][size];
         this.formulas = new Fml[size][size];
+        this.namedFormulas = new Fml[size][size];
         for (int i = 0; i < size; i++) {
             for (int j = 0; j < size; j++) {
                 int v = 0;
@@ -88,7 +117,8 @@ public final class ClosedForm {
                 }
                 validFromEntry[i][j] = v;
                 Steps.report(progress, "formulas", (long) i * size + j, (long) size * size);
-                formulas[i][j] = buildFormula(i, j);
+                formulas[i][j] = buildFormula(i, j, false);
+                namedFormulas[i][j] = definitions.isEmpty() ? formulas[i][j] : buildFormula(i, j, true);
             }
         }
         this.conditionPolys = collectConditions();
@@ -102,17 +132,62 @@ public final class ClosedForm {
 
     // --- the formulas ------------------------------------------------------------------------------------------
 
-    private Fml buildFormula(int i, int j) {
+    private Fml buildFormula(int i, int j, boolean named) {
+        return buildFormula(i, j, named, false);
+    }
+
+    private Fml buildFormula(int i, int j, boolean named, boolean factored) {
         List<Fml> terms = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g != zero) {
-                terms.add(term(g, i, j));
+                terms.add(term(g, i, j, named, factored));
             }
         }
         return Fml.sum(terms);
     }
 
-    private Fml term(Spectral.Group g, int i, int j) {
+    /** A coefficient, expanded or with numerator and denominator factored over the rationals. */
+    private Fml coefficient(Quotient<BigRational> q, boolean factored) {
+        return factored ? field.factoredFormula(q) : field.formula(q);
+    }
+
+    private final Map<String, Fml> printedCache = new java.util.concurrent.ConcurrentHashMap<>();
+
+    private Fml printed(int i, int j, boolean named, boolean factored) {
+        if (!factored) {
+            return named ? namedFormulas[i][j] : formulas[i][j];
+        }
+        return printedCache.computeIfAbsent(i + "," + j + "," + named,
+            key -> buildFormula(i, j, named && !definitions.isEmpty(), true));
+    }
+
+    /**
+     * The formula of entry (i, j) in plain syntax: with the names of {@link #definitions()} ({@code named}) or
+     * expanded, and with each coefficient's numerator and denominator factored over the rationals
+     * ({@code factored}) or multiplied out.
+     *
+     * @throws IndexOutOfBoundsException if i or j is out of range
+     */
+    public String plain(int i, int j, boolean named, boolean factored) {
+        return Fml.plain(printed(i, j, named, factored));
+    }
+
+    /** {@link #plain(int, int, boolean, boolean)} in LaTeX. */
+    public String latex(int i, int j, boolean named, boolean factored) {
+        return Fml.latex(printed(i, j, named, factored));
+    }
+
+    /** A name as an atom: an eigenvalue name prints as lambda with an index in LaTeX. */
+    private Fml nameAtom(String name) {
+        String prefix = symbols.eigenPrefix();
+        if (name.startsWith(prefix) && name.length() > prefix.length()
+            && name.substring(prefix.length()).chars().allMatch(Character::isDigit)) {
+            return new Fml.Atom(name, "\\lambda_{" + name.substring(prefix.length()) + "}");
+        }
+        return Fml.name(name);
+    }
+
+    private Fml term(Spectral.Group g, int i, int j, boolean named, boolean factored) {
         List<Fml> terms = new ArrayList<>();
         switch (g.kind) {
             case LINEAR:
@@ -129,12 +204,13 @@ public final class ClosedForm {
                     Fml exponent = constant ? n : shifted(-k);
                     Quotient<BigRational> coef = constant && k > 0 ? c.divide(ParamField.power(g.lambda, k)) : c;
                     Fml power = g.lambda.isONE() ? Fml.ONE : Fml.pow(field.formula(g.lambda), exponent);
-                    terms.add(Fml.prod(List.of(field.formula(coef), binom, power)));
+                    terms.add(Fml.prod(List.of(coefficient(coef, factored), binom, power)));
                 }
                 break;
             case QUADRATIC: {
-                Fml sqrt = Fml.call("sqrt", field.formula(g.delta));
-                List<Fml> roots = quadraticRoots(g);
+                String[] nm = quadraticNames.get(g);
+                Fml sqrt = named ? Fml.name(nm[0]) : Fml.call("sqrt", field.formula(g.delta));
+                List<Fml> roots = named ? List.of(nameAtom(nm[1]), nameAtom(nm[2])) : quadraticRoots(g);
                 for (int k = 0; k < g.x.size(); k++) {
                     Quotient<BigRational> x = g.x.get(k)[i][j];
                     Quotient<BigRational> y = g.y.get(k)[i][j];
@@ -142,10 +218,10 @@ public final class ClosedForm {
                     Fml l1n = Fml.pow(roots.get(0), exponent);
                     Fml l2n = Fml.pow(roots.get(1), exponent);
                     if (!x.isZERO()) {
-                        terms.add(Fml.prod(List.of(field.formula(x), binomial(k), Fml.sum(l1n, l2n))));
+                        terms.add(Fml.prod(List.of(coefficient(x, factored), binomial(k), Fml.sum(l1n, l2n))));
                     }
                     if (!y.isZERO()) {
-                        terms.add(Fml.prod(List.of(field.formula(y), binomial(k),
+                        terms.add(Fml.prod(List.of(coefficient(y, factored), binomial(k),
                             Fml.div(Fml.sum(l1n, Fml.neg(l2n)), sqrt))));
                     }
                 }
@@ -156,7 +232,7 @@ public final class ClosedForm {
                     for (int t = 0; t < g.degree; t++) {
                         Quotient<BigRational> c = g.c.get(k).get(t)[i][j];
                         if (!c.isZERO()) {
-                            terms.add(Fml.prod(List.of(field.formula(c), binomial(k),
+                            terms.add(Fml.prod(List.of(coefficient(c, factored), binomial(k),
                                 Fml.call("rootsum", shifted(t - k), Fml.name(g.name)))));
                         }
                     }
@@ -243,28 +319,37 @@ public final class ClosedForm {
                 ? Fml.sum(Fml.name(symbols.variable()), Fml.neg(field.formula(g.lambda)))
                 : field.formula(g.factor, symbols.variable());
             List<String> values = new ArrayList<>();
+            List<String> valuesLatex = new ArrayList<>();
             String kind;
             if (g.kind == Spectral.Kind.LINEAR) {
                 kind = "rational";
                 values.add(Fml.plain(field.formula(g.lambda)));
+                valuesLatex.add(Fml.latex(field.formula(g.lambda)));
             } else if (g.kind == Spectral.Kind.QUADRATIC) {
                 kind = "quadratic";
                 for (Fml r : quadraticRoots(g)) {
                     values.add(Fml.plain(r));
+                    valuesLatex.add(Fml.latex(r));
                 }
             } else {
                 kind = "roots";
                 values.add("roots of " + g.name);
+                valuesLatex.add("\\text{roots of } " + Fml.latex(Fml.name(g.name)));
             }
+            String[] nm = quadraticNames.get(g);
             out.add(new Eigenvalue(Fml.plain(f), Fml.latex(f), g.degree, g.multiplicity, g.index(), kind, values,
-                g.name, g.unitOrder));
+                g.name, g.unitOrder, valuesLatex, nm == null ? List.of() : List.of(nm[1], nm[2])));
         }
         return List.copyOf(out);
     }
 
     /** u/2 + (s/2) sqrt(D) and u/2 - (s/2) sqrt(D). */
     private List<Fml> quadraticRoots(Spectral.Group g) {
-        Fml sqrt = Fml.call("sqrt", field.formula(g.delta));
+        return quadraticRoots(g, Fml.call("sqrt", field.formula(g.delta)));
+    }
+
+    /** u/2 + (s/2) r and u/2 - (s/2) r, with r the square root or its name. */
+    private List<Fml> quadraticRoots(Spectral.Group g, Fml sqrt) {
         Quotient<BigRational> half = field.of(2).inverse();
         Fml mid = field.formula(g.u.multiply(half));
         Fml w = Fml.prod(field.formula(g.scale.multiply(half)), sqrt);
@@ -351,6 +436,28 @@ public final class ClosedForm {
         return Fml.plain(formulas[i][j]);
     }
 
+    /**
+     * The formula of entry (i, j) in terms of the names of {@link #definitions()} (each quadratic pair of
+     * eigenvalues and its square root by name), plain syntax; the same as {@link #formula(int, int)} when there is
+     * nothing to name.
+     */
+    public String namedFormula(int i, int j) {
+        return Fml.plain(namedFormulas[i][j]);
+    }
+
+    /** {@link #namedFormula(int, int)} in LaTeX. */
+    public String namedLatex(int i, int j) {
+        return Fml.latex(namedFormulas[i][j]);
+    }
+
+    /**
+     * The names {@link #namedFormula(int, int)} uses, each defined in terms of the parameters and the names before
+     * it: per quadratic factor, its square root and then its two eigenvalues. Empty without a quadratic factor.
+     */
+    public List<Definition> definitions() {
+        return definitions;
+    }
+
     /** The formula of entry (i, j) in LaTeX. */
     public String latex(int i, int j) {
         return Fml.latex(formulas[i][j]);
@@ -383,12 +490,21 @@ public final class ClosedForm {
         return plainMatrix(spectral.series.powers.get(n));
     }
 
+    private List<List<String>> latexMatrix(Quotient<BigRational>[][] m) {
+        return printedMatrix(m, Fml::latex, false);
+    }
+
     private List<List<String>> plainMatrix(Quotient<BigRational>[][] m) {
+        return printedMatrix(m, Fml::plain, false);
+    }
+
+    private List<List<String>> printedMatrix(Quotient<BigRational>[][] m, java.util.function.Function<Fml, String> print,
+                                             boolean factored) {
         List<List<String>> out = new ArrayList<>();
         for (Quotient<BigRational>[] row : m) {
             List<String> r = new ArrayList<>();
             for (Quotient<BigRational> q : row) {
-                r.add(Fml.plain(field.formula(q)));
+                r.add(print.apply(coefficient(q, factored)));
             }
             out.add(List.copyOf(r));
         }
@@ -572,6 +688,14 @@ public final class ClosedForm {
      * the domains.
      */
     public LongRun longRun() {
+        return longRun(false);
+    }
+
+    /**
+     * As {@link #longRun()}, with the limits' numerators and denominators factored over the rationals when
+     * {@code factored}.
+     */
+    public LongRun longRun(boolean factored) {
         int d = 1;
         List<Spectral.Group> unit = new ArrayList<>();
         List<Fml> moduli = new ArrayList<>();
@@ -585,6 +709,7 @@ public final class ClosedForm {
         }
         Evaluator<Quotient<BigRational>> ev = new Evaluator<>(field.field, q -> q);
         List<List<List<String>>> limits = new ArrayList<>();
+        List<List<List<String>>> limitsLatex = new ArrayList<>();
         for (int r = 0; r < d; r++) {
             Quotient<BigRational>[][] m = Mat.zero(field, size);
             for (int i = 0; i < size; i++) {
@@ -596,14 +721,15 @@ public final class ClosedForm {
                     m[i][j] = s;
                 }
             }
-            limits.add(plainMatrix(m));
+            limits.add(factored ? printedMatrix(m, f -> Fml.plain(f), true) : plainMatrix(m));
+            limitsLatex.add(factored ? printedMatrix(m, f -> Fml.latex(f), true) : latexMatrix(m));
         }
         Fml rate = moduli.isEmpty() ? Fml.ZERO : (moduli.size() == 1 ? moduli.get(0) : new Fml.Call("max", List.copyOf(moduli)));
         List<String> conds = new ArrayList<>();
         for (LongRunCondition c : longRunConditions()) {
             conds.add(c.text);
         }
-        return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate), conds, moduli.isEmpty(), validFrom);
+        return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate), conds, moduli.isEmpty(), validFrom, limitsLatex);
     }
 
     /**
@@ -637,41 +763,70 @@ public final class ClosedForm {
     }
 
     /**
-     * The eigenvalues of each factor of {@link #eigenvalues()} at a point, as decimals (complex ones as
-     * {@code a + b i}), correctly rounded as the roots of named factors are.
+     * The eigenvalues of each factor of {@link #eigenvalues()} at a point, as certified numbers (every digit
+     * proven on demand; complex ones with both parts): a rational eigenvalue exactly, a quadratic pair as
+     * {@code u/2 + (s/2) sqrt(D)} then {@code u/2 - (s/2) sqrt(D)} (exact algebraic numbers), the roots of a named
+     * factor as {@link CertifiedRoots} isolates them.
      *
-     * @param at     a value for every parameter
-     * @param digits significant digits, at least 1
-     * @return per factor, its roots in the order of the numeric root finder
+     * @param at a value for every parameter
+     * @return per factor, its eigenvalues
      * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
      */
-    public List<List<String>> eigenvalueDecimals(Map<String, Rational> at, int digits) {
-        List<List<String>> out = new ArrayList<>();
+    public List<List<CertifiedComplex>> eigenvaluesAt(Map<String, Rational> at) {
+        List<List<CertifiedComplex>> out = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
-            List<String> v = new ArrayList<>();
-            if (g.kind == Spectral.Kind.QUADRATIC) {
-                // in the printed order: u/2 + (s/2) sqrt(D), then u/2 - (s/2) sqrt(D)
-                long prec = digits + 20L;
-                Quotient<BigRational> half = field.of(2).inverse();
-                org.apfloat.Apfloat mid = apfloat(substitute(g.u.multiply(half), at), prec);
-                org.apfloat.Apfloat w = apfloat(substitute(g.scale.multiply(half), at), prec);
-                BigRational dv = substitute(g.delta, at);
-                org.apfloat.Apfloat root = org.apfloat.ApfloatMath.sqrt(apfloat(dv.abs(), prec));
-                for (int sign : new int[] {1, -1}) {
-                    org.apfloat.Apfloat t = w.multiply(root).multiply(new org.apfloat.Apfloat(sign, prec));
-                    v.add(dv.signum() >= 0 ? NumericRoots.format(mid.add(t), digits)
-                        : NumericRoots.format(new org.apfloat.Apcomplex(mid, t), digits));
-                }
-            } else if (g.kind == Spectral.Kind.LINEAR) {
-                v.add(org.qchain.exact.Decimals.format(ParamField.rational(substitute(g.lambda, at)), digits));
-            } else {
-                for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
-                    v.add(NumericRoots.format(z, digits));
-                }
-            }
-            out.add(List.copyOf(v));
+            out.add(valuesAt(g, at));
         }
         return List.copyOf(out);
+    }
+
+    /** The values of each factor at the points asked for so far (the eigenvalues, roots and rate share them). */
+    private final Map<Spectral.Group, Map<Map<String, Rational>, List<CertifiedComplex>>> valuesCache =
+        new java.util.IdentityHashMap<>();
+
+    private List<CertifiedComplex> valuesAt(Spectral.Group g, Map<String, Rational> at) {
+        synchronized (valuesCache) {
+            Map<Map<String, Rational>, List<CertifiedComplex>> byPoint = valuesCache.computeIfAbsent(g,
+                k -> new java.util.HashMap<>());
+            Map<String, Rational> key = Map.copyOf(at);
+            List<CertifiedComplex> v = byPoint.get(key);
+            if (v == null) {
+                v = computeValuesAt(g, at);
+                byPoint.put(key, v);
+            }
+            return v;
+        }
+    }
+
+    private List<CertifiedComplex> computeValuesAt(Spectral.Group g, Map<String, Rational> at) {
+        List<CertifiedComplex> v = new ArrayList<>();
+        if (g.kind == Spectral.Kind.QUADRATIC) {
+            substituted(g, at);
+            Quotient<BigRational> half = field.of(2).inverse();
+            Rational mid = ParamField.rational(substitute(g.u.multiply(half), at));
+            Rational w = ParamField.rational(substitute(g.scale.multiply(half), at));
+            Rational dv = ParamField.rational(substitute(g.delta, at));
+            for (int sign : new int[] {1, -1}) {
+                Rational ws = sign > 0 ? w : w.negate();
+                v.add(dv.signum() >= 0 ? CertifiedComplex.real(CertifiedReal.quadratic(mid, ws, dv))
+                    : new CertifiedComplex(CertifiedReal.exact(mid),
+                        CertifiedReal.quadratic(Rational.ZERO, ws, dv.negate())));
+            }
+        } else if (g.kind == Spectral.Kind.LINEAR) {
+            substituted(g, at);
+            v.add(CertifiedComplex.real(CertifiedReal.exact(ParamField.rational(substitute(g.lambda, at)))));
+        } else {
+            v.addAll(CertifiedRoots.of(coefficientsAt(g, at)));
+        }
+        return List.copyOf(v);
+    }
+
+    private List<Rational> coefficientsAt(Spectral.Group g, Map<String, Rational> at) {
+        List<Rational> c = new ArrayList<>();
+        for (BigRational b : substituted(g, at)) {
+            c.add(ParamField.rational(b));
+        }
+        return c;
     }
 
     /** A condition of the long run: {@code poly != 0} (poly empty: not decidable here, never proved). */
@@ -839,23 +994,18 @@ public final class ClosedForm {
     }
 
     /**
-     * The factors of degree 3 or more that formulas name, with their roots numerically at a point.
+     * The factors of degree 3 or more that formulas name, with their roots at a point as certified numbers.
      *
-     * @param at     a value for every parameter in {@link #parameters()} (empty if there are none)
-     * @param digits significant digits, at least 1
+     * @param at a value for every parameter in {@link #parameters()} (empty if there are none)
      * @return the named factors in name order
      * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
      */
-    public List<RootPolynomial> rootPolynomials(Map<String, Rational> at, int digits) {
+    public List<RootPolynomial> rootPolynomials(Map<String, Rational> at) {
         List<RootPolynomial> out = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g.kind == Spectral.Kind.ROOTS) {
                 Fml f = field.formula(g.factor, symbols.variable());
-                List<String> roots = new ArrayList<>();
-                for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
-                    roots.add(NumericRoots.format(z, digits));
-                }
-                out.add(new RootPolynomial(g.name, Fml.plain(f), Fml.latex(f), roots));
+                out.add(new RootPolynomial(g.name, Fml.plain(f), Fml.latex(f), valuesAt(g, at)));
             }
         }
         return List.copyOf(out);
@@ -863,28 +1013,58 @@ public final class ClosedForm {
 
     /**
      * The second-largest eigenvalue modulus at a point (the largest modulus among eigenvalues that are not roots of
-     * unity and not 0), numerically: P^n approaches its limit (or its periodic pattern) like this number to the
-     * power n.
+     * unity and not 0), as a certified number: P^n approaches its limit (or its periodic pattern) like this number
+     * to the power n. A real eigenvalue's modulus and that of a complex quadratic pair ({@code sqrt} of the
+     * constant term) are exact algebraic numbers; that of a complex root of a named factor comes from the
+     * enclosures of its parts.
      *
-     * @param at     a value for every parameter in {@link #parameters()}
-     * @param digits significant digits, at least 1
-     * @return the modulus in plain decimal notation, {@code 0} if there is no such eigenvalue
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return the modulus, exactly 0 if there is no such eigenvalue
      * @throws QchainException with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value
      */
-    public String rate(Map<String, Rational> at, int digits) {
-        org.apfloat.Apfloat best = new org.apfloat.Apfloat(0);
+    public CertifiedReal rateAt(Map<String, Rational> at) {
+        List<CertifiedReal> moduli = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g.unitOrder > 0 || g == zero) {
                 continue;
             }
-            for (org.apfloat.Apcomplex z : NumericRoots.roots(substituted(g, at), digits)) {
-                org.apfloat.Apfloat m = org.apfloat.ApcomplexMath.abs(z);
-                if (m.compareTo(best) > 0) {
-                    best = m;
+            if (g.kind == Spectral.Kind.QUADRATIC && ParamField.rational(substitute(g.delta, at)).signum() < 0) {
+                // a complex pair: both have modulus sqrt(l1 l2), the constant term
+                moduli.add(CertifiedReal.sqrt(ParamField.rational(substitute(g.coeffs[0], at))));
+                continue;
+            }
+            for (CertifiedComplex z : valuesAt(g, at)) {
+                // a conjugate pair has one modulus: take the member with positive imaginary part only
+                if (z.isReal()) {
+                    moduli.add(z.re().abs());
+                } else if (z.im().signum() > 0) {
+                    moduli.add(modulus(z));
                 }
             }
         }
-        return NumericRoots.format(best, digits);
+        return moduli.isEmpty() ? CertifiedReal.exact(Rational.ZERO) : CertifiedReal.max(moduli);
+    }
+
+    /** |z| from enclosures of its parts. */
+    private static CertifiedReal modulus(CertifiedComplex z) {
+        return CertifiedReal.enclosed(bits -> {
+            org.qchain.exact.certified.Enclosure re = z.re().abs().enclosure(bits + 4);
+            org.qchain.exact.certified.Enclosure im = z.im().abs().enclosure(bits + 4);
+            Rational lo = re.lo().multiply(re.lo()).add(im.lo().multiply(im.lo()));
+            Rational hi = re.hi().multiply(re.hi()).add(im.hi().multiply(im.hi()));
+            return org.qchain.exact.certified.Enclosure.of(sqrtBound(lo, bits + 4, false), sqrtBound(hi, bits + 4, true));
+        });
+    }
+
+    /** A rational below ({@code up} false) or above sqrt(q), q >= 0, within about 2^-bits. */
+    private static Rational sqrtBound(Rational q, int bits, boolean up) {
+        BigInteger m = q.denominator();
+        BigInteger t = q.numerator().multiply(m).shiftLeft(2 * bits);
+        BigInteger s = t.sqrt();
+        if (up && !s.multiply(s).equals(t)) {
+            s = s.add(BigInteger.ONE);
+        }
+        return Rational.of(s, m.shiftLeft(bits));
     }
 
     private BigRational[] substituted(Spectral.Group g, Map<String, Rational> at) {

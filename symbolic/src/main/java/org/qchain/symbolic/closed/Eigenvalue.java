@@ -17,11 +17,17 @@ import java.util.List;
  * @param values       the eigenvalues as formulas: one, two (with {@code sqrt}), or {@code "roots of NAME"}
  * @param name         the factor's name in formulas ({@code f1}, ...) for kind {@code roots}; empty otherwise
  * @param unitOrder    k if the eigenvalues are k-th roots of unity (they then drive periodicity), else 0
+ * @param valuesLatex  the eigenvalues in LaTeX, as {@code values}
+ * @param valueNames   the names of the eigenvalues in {@link ClosedForm#namedFormula} ({@code l1}, {@code l2}) for
+ *                     a quadratic factor; empty otherwise
  */
 public record Eigenvalue(String factor, String factorLatex, int degree, int multiplicity, int jordanIndex,
-                         String kind, List<String> values, String name, int unitOrder) {
-    /** Copies the list. */
+                         String kind, List<String> values, String name, int unitOrder, List<String> valuesLatex,
+                         List<String> valueNames) {
+    /** Copies the lists. */
     public Eigenvalue {
         values = List.copyOf(values);
+        valuesLatex = List.copyOf(valuesLatex);
+        valueNames = List.copyOf(valueNames);
     }
 }

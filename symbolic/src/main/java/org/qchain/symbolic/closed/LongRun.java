@@ -23,18 +23,15 @@ import java.util.List;
  *                   subsequence) equals its limit from n = {@code exactFrom} on
  * @param exactFrom  the first n from which P^n is exactly periodic (or constant) when {@code exact}; the closed
  *                   form's valid-from otherwise
+ * @param limitsLatex the limits in LaTeX, shaped like {@code limits}
  */
 public record LongRun(int period, List<List<List<String>>> limits, String rate, String rateLatex,
-                      List<String> conditions, boolean exact, int exactFrom) {
+                      List<String> conditions, boolean exact, int exactFrom, List<List<List<String>>> limitsLatex) {
     /** Copies the lists. */
     public LongRun {
         limits = limits.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
+        limitsLatex = limitsLatex.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
         conditions = List.copyOf(conditions);
-    }
-
-    /** The behaviour with no conditions, as before conditions were stated (rate {@code 0} means exact). */
-    public LongRun(int period, List<List<List<String>>> limits, String rate, String rateLatex) {
-        this(period, limits, rate, rateLatex, List.of(), rate.equals("0"), 0);
     }
 
     /** Whether P^n has a limit (period 1) for generic parameter values. */

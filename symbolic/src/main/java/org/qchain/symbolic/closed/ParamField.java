@@ -275,6 +275,55 @@ final class ParamField {
         return Fml.sum(terms);
     }
 
+    /**
+     * A rational function with numerator and denominator factored over the rationals: one rational constant times
+     * irreducible integer polynomials with their multiplicities, {@code 3*w*(39 + 50*w)/(2*(14 + 53*w))}.
+     */
+    Fml factoredFormula(Quotient<BigRational> q) {
+        if (q.isZERO() || (q.num.isConstant() && q.den.isConstant())) {
+            return formula(q);
+        }
+        FactorAbstract<BigRational> fac = FactorFactory.getImplementation(BigRational.ZERO);
+        List<Fml> top = new ArrayList<>();
+        List<Fml> bottom = new ArrayList<>();
+        BigRational c = factorInto(fac, q.num, top).divide(factorInto(fac, q.den, bottom));
+        BigInteger u = c.numerator().abs();
+        BigInteger v = c.denominator();
+        if (!u.equals(BigInteger.ONE) || top.isEmpty()) {
+            top.add(0, Fml.integer(u));
+        }
+        if (!v.equals(BigInteger.ONE)) {
+            bottom.add(0, Fml.integer(v));
+        }
+        Fml t = Fml.prod(top);
+        Fml r = bottom.isEmpty() ? t : Fml.div(t, Fml.prod(bottom));
+        return c.signum() < 0 ? Fml.neg(r) : r;
+    }
+
+    /** Adds the irreducible factors of {@code p} (integral, with their powers) to {@code out}; returns the constant. */
+    private BigRational factorInto(FactorAbstract<BigRational> fac, GenPolynomial<BigRational> p, List<Fml> out) {
+        if (p.isConstant()) {
+            return p.leadingBaseCoefficient();
+        }
+        BigRational c = p.leadingBaseCoefficient();
+        List<Map.Entry<GenPolynomial<BigRational>, Long>> fs = new ArrayList<>(fac.factors(p).entrySet());
+        // monomials first, then by degree and text: 3*w*(39 + 50*w)
+        fs.sort(java.util.Comparator.comparingInt((Map.Entry<GenPolynomial<BigRational>, Long> e) -> e.getKey()
+            .length()).thenComparingLong(e -> e.getKey().totalDegree())
+            .thenComparing(e -> Fml.plain(formula(integral(e.getKey())))));
+        for (Map.Entry<GenPolynomial<BigRational>, Long> e : fs) {
+            if (e.getKey().isConstant()) {
+                continue;
+            }
+            GenPolynomial<BigRational> g = integral(e.getKey());
+            long k = e.getValue();
+            c = c.divide(power(g, k).leadingBaseCoefficient());
+            Fml f = formula(g);
+            out.add(k == 1 ? f : Fml.pow(f, Fml.integer(k)));
+        }
+        return c;
+    }
+
     /** A rational function as {@code num/den} with coprime integer coefficients and a positive denominator. */
     Fml formula(Quotient<BigRational> q) {
         if (q.isZERO()) {

@@ -14,12 +14,16 @@ import java.util.List;
  * @param initial      u(0) .. u(validFrom - 1), plain syntax
  * @param plain        the recurrence and its initial values in plain syntax
  * @param latex        the same in LaTeX
+ * @param coefficientsLatex r_1 .. r_d in LaTeX
+ * @param initialLatex      u(0) .. u(validFrom - 1) in LaTeX
  */
 public record Recurrence(int order, List<String> coefficients, int validFrom, List<String> initial, String plain,
-                         String latex) {
+                         String latex, List<String> coefficientsLatex, List<String> initialLatex) {
     /** Copies the lists. */
     public Recurrence {
         coefficients = List.copyOf(coefficients);
         initial = List.copyOf(initial);
+        coefficientsLatex = List.copyOf(coefficientsLatex);
+        initialLatex = List.copyOf(initialLatex);
     }
 }

@@ -186,10 +186,13 @@ public final class SeriesForm {
         List<Quotient<BigRational>> r = recurrenceCoefficients(i, j);
         int start = recurrenceStart(i, j);
         List<String> coeffs = new ArrayList<>();
+        List<String> coeffsLatex = new ArrayList<>();
+        List<String> initValuesLatex = new ArrayList<>();
         List<Fml> rhs = new ArrayList<>();
         for (int k = 0; k < r.size(); k++) {
             Fml c = field.formula(r.get(k));
             coeffs.add(Fml.plain(c));
+            coeffsLatex.add(Fml.latex(c));
             Fml arg = Fml.sum(Fml.name(symbols.step()), Fml.neg(Fml.integer(k + 1)));
             rhs.add(Fml.prod(c, Fml.call(symbols.sequence(), arg)));
         }
@@ -199,6 +202,7 @@ public final class SeriesForm {
         for (int k = 0; k < start; k++) {
             Fml v = field.formula(series.powers.get(k)[i][j]);
             init.add(Fml.plain(v));
+            initValuesLatex.add(Fml.latex(v));
             initLatex.add(Fml.latex(Fml.name(u)) + "(" + k + ") = " + Fml.latex(v));
         }
         Fml right = Fml.sum(rhs);
@@ -210,7 +214,7 @@ public final class SeriesForm {
         String latex = Fml.latex(Fml.name(u)) + "(" + Fml.latex(Fml.name(n)) + ") = " + Fml.latex(right) + " \\quad ("
             + Fml.latex(Fml.name(n)) + " \\ge " + start + ")"
             + (initLatex.isEmpty() ? "" : ",\\; " + String.join(",\\; ", initLatex));
-        return new Recurrence(r.size(), coeffs, start, init, plain.toString(), latex);
+        return new Recurrence(r.size(), coeffs, start, init, plain.toString(), latex, coeffsLatex, initValuesLatex);
     }
 
 }

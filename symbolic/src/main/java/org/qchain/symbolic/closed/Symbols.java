@@ -21,7 +21,7 @@ import java.util.Set;
  * @param root         the name of a shared square root ({@code where s = sqrt(...)}), normally {@code s}
  */
 public record Symbols(String step, String period, String variable, String series, String sequence,
-                      String factorPrefix, String root) {
+                      String factorPrefix, String root, String eigenPrefix) {
     /** The symbols when no parameter is in the way. */
     public static final Symbols DEFAULT = avoiding(List.of());
 
@@ -52,17 +52,32 @@ public record Symbols(String step, String period, String variable, String series
         if (factor == null) {
             factor = pick(taken, "fac");
         }
-        return new Symbols(step, period, variable, series, sequence, factor, root);
+        String eigen = null;
+        for (String c : List.of("l", "L", "ev", "eig")) {
+            if (!clashesWithFactor(names, c) && !c.equals(factor)) {
+                eigen = c;
+                break;
+            }
+        }
+        if (eigen == null) {
+            eigen = pick(taken, "eigen");
+        }
+        return new Symbols(step, period, variable, series, sequence, factor, root, eigen);
     }
 
     /** The name of the k-th named factor (from 1). */
+    /** The k-th named eigenvalue, {@code l1}, {@code l2}, ... (printed λ1, λ2 where the output allows). */
+    public String eigenvalue(int k) {
+        return eigenPrefix + k;
+    }
+
     public String factor(int k) {
         return factorPrefix + k;
     }
 
     /** Every symbol in use, as shown to readers. */
     public List<String> all() {
-        return List.of(step, period, variable, series, sequence, factorPrefix + "1", root);
+        return List.of(step, period, variable, series, sequence, factorPrefix + "1", root, eigenPrefix + "1");
     }
 
     private static boolean clashesWithFactor(Collection<String> names, String prefix) {

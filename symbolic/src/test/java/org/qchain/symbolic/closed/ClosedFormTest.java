@@ -196,13 +196,13 @@ class ClosedFormTest {
         Model m = Chains.model(List.of(), new String[][] {
             {"1/2", "1/2", "0", "0"}, {"0", "1/3", "2/3", "0"}, {"0", "0", "1/4", "3/4"}, {"1", "0", "0", "0"}});
         ClosedForm cf = ClosedForms.of(m);
-        List<RootPolynomial> rp = cf.rootPolynomials(Map.of(), 20);
+        List<RootPolynomial> rp = cf.rootPolynomials(Map.of());
         assertEquals(1, rp.size());
         assertEquals("x^3 - 1/12*x^2 + 7/24*x + 1/4", rp.get(0).polynomial());
         assertEquals(3, rp.get(0).roots().size());
         // the roots sum to 1/12 and multiply to -1/4 (Vieta, common practice): check through the real root r and
         // the modulus of the pair, |w|^2 = (-1/4)/r ... here only numerically, to 15 digits
-        java.math.BigDecimal r = new java.math.BigDecimal(rp.get(0).roots().get(0));
+        java.math.BigDecimal r = new java.math.BigDecimal(rp.get(0).roots().get(0).re().decimal(20).text());
         java.math.BigDecimal f = r.pow(3).subtract(r.pow(2).divide(java.math.BigDecimal.valueOf(12), java.math.MathContext.DECIMAL128))
             .add(r.multiply(java.math.BigDecimal.valueOf(7)).divide(java.math.BigDecimal.valueOf(24), java.math.MathContext.DECIMAL128))
             .add(new java.math.BigDecimal("0.25"));
@@ -214,7 +214,7 @@ class ClosedFormTest {
                 .solveAllComplex(new double[] {0.25, 7.0 / 24, -1.0 / 12, 1}, 0)) {
             best = Math.max(best, z.norm());
         }
-        assertEquals(best, Double.parseDouble(cf.rate(Map.of(), 15)), 1e-12);
+        assertEquals(best, Double.parseDouble(cf.rateAt(Map.of()).decimal(15).text()), 1e-12);
     }
 
     @Test

@@ -105,8 +105,13 @@ class RationalRouteTest {
                 out.add(cf.recurrence(i, j));
             }
         }
-        out.add(cf.rootPolynomials(Map.of(), 15));
-        out.add(cf.rate(Map.of(), 15));
+        for (RootPolynomial rp : cf.rootPolynomials(Map.of())) {
+            out.add(rp.name() + " = " + rp.polynomial());
+            for (org.qchain.exact.certified.CertifiedComplex z : rp.roots()) {
+                out.add(z.re().decimal(15).text() + " " + z.im().decimal(15).text());
+            }
+        }
+        out.add(cf.rateAt(Map.of()).decimal(15).text());
         return out;
     }
 
