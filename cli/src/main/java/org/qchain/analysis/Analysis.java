@@ -55,7 +55,7 @@ public final class Analysis {
             return availability(model, q, progress);
         }
         if (query instanceof RateSensQuery q) {
-            return rateSens(model, q);
+            return rateSens(model, q, progress);
         }
         if (query instanceof VerifyQuery q) {
             return verify(model, q, progress);
@@ -247,16 +247,38 @@ public final class Analysis {
      *                         MTTF, a parameter without a value
      */
     public static org.qchain.result.RateSensResult rateSens(LoadedModel model, RateSensQuery q) {
-        model.generator("qchain sens --of " + Figures.name(q.figure()));
+        return rateSens(model, q, Progress.NONE);
+    }
+
+    /**
+     * As {@link #rateSens(LoadedModel, RateSensQuery)}, with the sweep if the query has one: the digits of all its
+     * exact values are estimated before any solve and refused past the query's limit; progress (phase
+     * {@code sweep}, one step per point) and an interrupt check between points.
+     *
+     * @param model    the loaded model
+     * @param q        the query
+     * @param progress told about each point of the sweep
+     * @return the result
+     * @throws QchainException as {@link #rateSens(LoadedModel, RateSensQuery)}; BAD_ARGUMENT for a bad sweep;
+     *                         SWEEP_TOO_LARGE past the limit (with the estimate); INTERRUPTED
+     */
+    public static org.qchain.result.RateSensResult rateSens(LoadedModel model, RateSensQuery q, Progress progress) {
+        String what = "qchain sens --of " + Figures.name(q.figure());
         java.util.List<Integer> up = model.model().upStates().orElseThrow(() -> new QchainException(
-            ErrorKey.NO_UP_STATES, "qchain sens --of " + Figures.name(q.figure())));
+            ErrorKey.NO_UP_STATES, what));
+        Optional<org.qchain.exact.model.SweepSpec> range = q.sweep().map(text -> RateSweeps.parse(model, text));
+        if (range.isPresent()) {
+            RateSweeps.requireOthers(model, range.get(), q.sweep().get());
+        }
+        model.generator(what);
         int from = q.from().map(f -> model.state("--from", f)).orElse(up.get(0));
+        Optional<org.qchain.result.SensResult.Sweep> sweep = range.map(r -> RateSweeps.run(model, q, r, from, progress));
         org.qchain.exact.ctmc.RateSensitivity.Derivative d = org.qchain.exact.ctmc.RateSensitivity.of(model.model(),
             model.given(), q.wrt(), q.figure(), from);
         Optional<String> start = q.figure() == org.qchain.exact.ctmc.RateSensitivity.Figure.MTTF
             ? Optional.of(model.states().get(from)) : Optional.empty();
         return new org.qchain.result.RateSensResult(model.source(), Figures.name(q.figure()), start, q.wrt(),
-            model.point().orElseThrow(), d.value(), d.derivative(), d.elasticity(), java.util.List.of());
+            model.point().orElseThrow(), d.value(), d.derivative(), d.elasticity(), java.util.List.of(), sweep);
     }
 
     /**

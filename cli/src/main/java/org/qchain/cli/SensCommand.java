@@ -25,7 +25,9 @@ import picocli.CommandLine.Spec;
         "Sensitivity of the n-step probability P^n(FROM -> TO) to a parameter: its exact derivative and elasticity.",
         "P and dP/dp are printed as formulas in the parameters, with their values and the elasticity (p/P) dP/dp at"
             + " the nominal values (or --at).",
-        "With --sweep: a table of P and dP/dp over exact values of the parameter, exact and decimal."})
+        "With --sweep: a table of P and dP/dp over exact values of the parameter, exact and decimal.",
+        "For a continuous chain, --of availability|unavailability|mttf|failure-frequency differentiates a figure of"
+            + " merit exactly (with --sweep: a table of the figure, its derivative and its elasticity)."})
 final class SensCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -106,14 +108,15 @@ final class SensCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--of " + of + " takes one --wrt parameter (the gradient"
                 + " is for --of entry)");
         }
-        if (n != null || !to.isEmpty() || sweep != null || symbolicOptions.factor) {
-            throw new ParameterException(spec.commandLine(), "--of " + of + " takes --wrt, --from, --at, --digits,"
-                + " --format and --output (-n, --to, --sweep and --factor are for --of entry)");
+        if (n != null || !to.isEmpty() || symbolicOptions.factor) {
+            throw new ParameterException(spec.commandLine(), "--of " + of + " takes --wrt, --from, --sweep, --at,"
+                + " --digits, --max-digits, --format and --output (-n, --to and --factor are for --of entry)");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
-        org.qchain.analysis.RateSensQuery q = new org.qchain.analysis.RateSensQuery(f, wrt.get(0), Optional.ofNullable(from));
-        org.qchain.result.Result result = root.run(spec, progress -> Analysis.rateSens(loaded, q));
+        org.qchain.analysis.RateSensQuery q = new org.qchain.analysis.RateSensQuery(f, wrt.get(0),
+            Optional.ofNullable(from), Optional.ofNullable(sweep), digitLimit.maxDigits);
+        org.qchain.result.Result result = root.run(spec, progress -> Analysis.rateSens(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }
