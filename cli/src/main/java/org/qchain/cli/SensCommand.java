@@ -26,6 +26,8 @@ import picocli.CommandLine.Spec;
         "P and dP/dp are printed as formulas in the parameters, with their values and the elasticity (p/P) dP/dp at"
             + " the nominal values (or --at).",
         "With --sweep: a table of P and dP/dp over exact values of the parameter, exact and decimal.",
+        "For a continuous chain, -t T --from A --to B: P(t)(A -> B), its derivative and elasticity as certified"
+            + " decimals, every printed digit proven (uniformization with a rigorous bound, in interval arithmetic).",
         "For a continuous chain, --of availability|unavailability|mttf|failure-frequency differentiates a figure of"
             + " merit exactly (with --sweep: a table of the figure, its derivative and its elasticity)."})
 final class SensCommand implements Callable<Integer> {
@@ -47,6 +49,17 @@ final class SensCommand implements Callable<Integer> {
     @Option(names = {"-n", "--steps"}, paramLabel = "N", converter = Converters.Steps.class,
         description = "Number of steps (0 or more); for --of entry.")
     Long n;
+
+    @Option(names = {"-t", "--time"}, paramLabel = "T", converter = Converters.Times.class,
+        description = "Time(s) for a continuous chain, --of entry: T, T1,T2,... or A..B:STEP (rationals, 0 or more);"
+            + " P(t)(FROM -> TO), its derivative and elasticity as certified decimals (--digits).")
+    Converters.TimeList times;
+
+    @Option(names = "--max-work", paramLabel = "W", converter = Converters.WorkLimit.class,
+        defaultValue = "" + org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_WORK,
+        description = "With -t: refuse a computation estimated to need more than W multiplications of fixed-point"
+            + " numbers (default: ${DEFAULT-VALUE}).")
+    long maxWork = org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_WORK;
 
     @Option(names = "--from", paramLabel = "STATE", description = "Starting state.")
     String from;
@@ -79,7 +92,13 @@ final class SensCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (!of.equals("entry")) {
+            if (times != null) {
+                throw new ParameterException(spec.commandLine(), "-t is for --of entry (P(t) of a continuous chain)");
+            }
             return figure();
+        }
+        if (times != null) {
+            return transientEntry();
         }
         if (n == null || from == null || to.isEmpty()) {
             throw new ParameterException(spec.commandLine(), to.isEmpty() || from != null
@@ -95,6 +114,24 @@ final class SensCommand implements Callable<Integer> {
         SensQuery q = new SensQuery(n, from, String.join(",", to), wrt.get(0), Optional.ofNullable(sweep),
             symbolicOptions.factor, symbolicOptions.maxTerms(), digitLimit.maxDigits, to, wrt);
         SensResult result = root.run(spec, progress -> Analysis.sens(loaded, q, progress));
+        Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
+        return ExitCodes.OK;
+    }
+
+    /** {@code --of entry -t T}: certified P(t)(FROM -> TO) of a continuous chain and its derivative. */
+    private Integer transientEntry() {
+        if (n != null || sweep != null || symbolicOptions.factor || wrt.size() > 1 || to.size() > 1 || from == null
+            || to.isEmpty()) {
+            throw new ParameterException(spec.commandLine(), "-t takes --from STATE, --to STATE, one --wrt, --at,"
+                + " --digits, --max-work, --format and --output (-n, --sweep, --factor, several --to or --wrt are for"
+                + " discrete chains)");
+        }
+        Emitter.checkTarget(output.output(), Optional.of(model.model));
+        LoadedModel loaded = model.load();
+        org.qchain.analysis.TransientSensQuery q = new org.qchain.analysis.TransientSensQuery(times.times(), from,
+            to.get(0), wrt.get(0), output.digits(), org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_BITS,
+            maxWork);
+        org.qchain.result.Result result = root.run(spec, progress -> Analysis.transientSens(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }

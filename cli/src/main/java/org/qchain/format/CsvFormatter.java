@@ -279,6 +279,14 @@ final class CsvFormatter extends Layout {
         return sb.toString();
     }
 
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("t", "quantity", "decimal", "enclosure_width", "status"));
+        Continuous.transientSensRows(r).forEach(x -> Text.csvRecord(sb, x));
+        return sb.toString();
+    }
+
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
     /** One record per cell: table, row label, column heading, exact value (long form, easy to filter). */

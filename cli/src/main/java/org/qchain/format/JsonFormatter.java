@@ -516,6 +516,36 @@ final class JsonFormatter extends Layout {
         return j.close() + "\n";
     }
 
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        Json pt = Json.object();
+        r.point().values().forEach((k, v) -> pt.string(k, v.toString()));
+        Json j = Json.object()
+            .string("kind", "continuous")
+            .string("of", "entry")
+            .string("from", r.from())
+            .string("to", r.to())
+            .string("wrt", r.wrt())
+            .objects("rows", r.rows(), row -> {
+                Json o = Json.object().string("t", row.t().toString())
+                    .string("value", row.value().text())
+                    .string("derivative", row.derivative().text())
+                    .string("elasticity", row.elasticity().map(org.qchain.exact.certified.CertifiedDecimal::text)
+                        .orElse("undefined"));
+                Json b = Json.object().string("value", Continuous.bound(row.value().enclosure().width()))
+                    .string("derivative", Continuous.bound(row.derivative().enclosure().width()));
+                row.elasticity().ifPresent(e -> b.string("elasticity", Continuous.bound(e.enclosure().width())));
+                return o.object("bound", b);
+            })
+            .object("at", pt)
+            .string("uniformization_rate", r.rate().toString())
+            .number("digits", digits)
+            .string("model", r.source())
+            .strings("warnings", r.warnings())
+            .string("caution", Caution.TEXT);
+        return j.close() + "\n";
+    }
+
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
     @Override

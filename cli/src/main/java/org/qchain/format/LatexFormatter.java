@@ -422,6 +422,19 @@ final class LatexFormatter extends Layout {
         return caution(sb);
     }
 
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        StringBuilder sb = new StringBuilder("% ").append(Text.comment(Continuous.transientSensTitle(r))).append('\n');
+        sb.append("\\begin{tabular}{rlrr}\n $t$ & quantity & decimal & enclosure width \\\\ \\hline\n");
+        for (List<String> x : Continuous.transientSensRows(r)) {
+            sb.append('$').append(Text.frac(Rational.parse(x.get(0)))).append("$ & ").append(Text.latex(x.get(1)))
+                .append(" & ").append(Text.latex(x.get(2))).append(" & ").append(Text.latex(x.get(3)))
+                .append(" \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+        return caution(sb);
+    }
+
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
     @Override

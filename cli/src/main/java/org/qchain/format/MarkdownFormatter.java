@@ -409,6 +409,18 @@ final class MarkdownFormatter extends Layout {
         return caution(sb);
     }
 
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        StringBuilder sb = new StringBuilder("**").append(Text.markdown(Continuous.transientSensTitle(r)))
+            .append("**\n\n");
+        line(sb, List.of("t", "quantity", "decimal", "enclosure width"));
+        line(sb, separator(4));
+        Continuous.transientSensRows(r).forEach(x -> line(sb, x.subList(0, 4).stream().map(Text::markdown).toList()));
+        sb.append("\nEvery digit shown is proven.\n");
+        r.warnings().forEach(w -> sb.append("\nWarning: ").append(Text.markdown(w)).append('\n'));
+        return caution(sb);
+    }
+
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
     @Override

@@ -615,6 +615,18 @@ final class TextFormatter extends Layout {
         return end(sb);
     }
 
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        StringBuilder sb = new StringBuilder(Continuous.transientSensTitle(r)).append("\n\n");
+        TextTable table = new TextTable().addRow("t", "quantity", "decimal", "enclosure width");
+        Continuous.transientSensRows(r).forEach(x -> table.addRow(x.subList(0, 4)));
+        sb.append(table.render());
+        sb.append("Every digit shown is proven: the value lies in an interval of the width shown, all of whose points"
+            + " round to it.\nElasticity: (").append(r.wrt()).append("/P) dP/d").append(r.wrt()).append(".\n");
+        r.warnings().forEach(w -> sb.append("Warning: ").append(w).append('\n'));
+        return end(sb);
+    }
+
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
     @Override
