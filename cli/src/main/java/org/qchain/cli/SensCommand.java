@@ -43,7 +43,7 @@ final class SensCommand implements Callable<Integer> {
     @Option(names = "--of", paramLabel = "FIGURE", defaultValue = "entry",
         description = "What is differentiated: entry (P^n(FROM -> TO), the default), or for a continuous chain with"
             + " an 'up' line availability, unavailability, mttf (from --from, default the first up state) or"
-            + " failure-frequency, exactly at the nominal or --at point.")
+            + " failure-frequency, exactly at the nominal or --at point (with --sweep: over the sweep's points).")
     String of = "entry";
 
     @Option(names = {"-n", "--steps"}, paramLabel = "N", converter = Converters.Steps.class,
@@ -65,7 +65,7 @@ final class SensCommand implements Callable<Integer> {
     String from;
 
     @Option(names = "--to", paramLabel = "STATE", split = ",", splitSynopsisLabel = ",",
-        description = "State after n steps; for --of entry. Several (--to Up,Worn): P is the probability of being in"
+        description = "State after n steps (or at time t, with -t); for --of entry. Several (--to Up,Worn): P is the probability of being in"
             + " one of them.")
     List<String> to = new ArrayList<>();
 
@@ -77,7 +77,8 @@ final class SensCommand implements Callable<Integer> {
     @Option(names = "--sweep", paramLabel = "\"NAME in [LOW, HIGH] by STEP\"",
         description = "A table of P and dP/dp over exact values of NAME, in the model file's interval syntax:"
             + " \"p in [0, 1/10] by 1/100\" or \"p in [0, 1/10] with 11 points\" (an open end such as (0 is left"
-            + " out; at most 10001 points); the other parameters at their nominal or --at values.")
+            + " out; at most 10001 points); the other parameters at their nominal or --at values. With --of FIGURE:"
+            + " the figure, its derivative and elasticity, exact; --max-digits bounds the estimated digits of all.")
     String sweep;
 
     @Mixin
