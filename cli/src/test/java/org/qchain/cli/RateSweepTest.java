@@ -89,7 +89,7 @@ class RateSweepTest {
         // O(h^2) (common practice, no source).
         for (Figure f : Figure.values()) {
             for (String p : new String[] {"lam", "mu"}) {
-                String range = p.equals("lam") ? "lam in [1/600, 1/400] by 1/1000000" : "mu in [1/12, 1/11] by 1/100000";
+                String range = p.equals("lam") ? "lam in [1/510, 1/490] by 1/1000000" : "mu in [1/12, 1/11] by 1/100000";
                 RateSensResult r = sweep(TWO_UNITS, f, p, range);
                 List<SensResult.SweepLine> lines = r.sweep().orElseThrow().lines();
                 Rational h = r.sweep().orElseThrow().step();
