@@ -144,6 +144,20 @@ class RateSweepTest {
     }
 
     @Test
+    void anInterruptStopsTheSweepBetweenPoints() {
+        Thread.currentThread().interrupt();
+        try {
+            org.qchain.exact.QchainException e = org.junit.jupiter.api.Assertions.assertThrows(
+                org.qchain.exact.QchainException.class, () -> Analysis.rateSens(LoadedModel.fromText("m.chain",
+                    TWO_UNITS), new RateSensQuery(Figure.MTTF, "mu", Optional.empty(),
+                    Optional.of("mu in [1/24, 1/6] by 1/48"), SizeEstimate.DEFAULT_MAX_DIGITS), Progress.NONE));
+            assertEquals(org.qchain.exact.ErrorKey.INTERRUPTED, e.key());
+        } finally {
+            Thread.interrupted();
+        }
+    }
+
+    @Test
     void badSweepsAreUsageErrors() {
         for (String s : new String[] {"nu in [0, 1] by 1/10", "mu in [1, 0] by 1/10", "mu in [0, 1] by 0",
             "mu in [-1, 1] by 1/10", "mu in [0, 1] by 1/100000", "mu from 0"}) {

@@ -108,7 +108,9 @@ public final class TransientSensitivity {
                             int digits, int maxBits, Progress progress) {
         Rational lambda = rate(q);
         boolean reachable = reaches(q, from, to);
-        boolean constant = isZero(dq);
+        boolean stays = q.get(from, from).isZero();
+        // no rate that the chain can use from 'from' depends on θ: P(t)(from, .) does not either
+        boolean constant = reachableNorm(q, dq, lambda, from).isZero();
         int start = startBits(digits);
         int max = Math.max(start, maxBits);
         Ziv.Enclosing src = bits -> {
@@ -116,6 +118,10 @@ public final class TransientSensitivity {
             if (!reachable) {
                 // the entry is exactly 0 at the point; its derivative need not be
                 return new Enclosure[] {Enclosure.exact(Rational.ZERO), vd[1]};
+            }
+            if (stays) {
+                // no way out of 'from' at the point: its row is the unit row exactly, as in CertifiedTransient
+                vd[0] = Enclosure.exact(from == to ? Rational.ONE : Rational.ZERO);
             }
             if (constant) {
                 return new Enclosure[] {vd[0], Enclosure.exact(Rational.ZERO), Enclosure.exact(Rational.ZERO)};
@@ -203,18 +209,12 @@ public final class TransientSensitivity {
         return lambda.isZero() ? Rational.ONE : lambda;
     }
 
-    private static boolean isZero(RationalMatrix m) {
-        for (int i = 0; i < m.rows(); i++) {
-            for (int j = 0; j < m.cols(); j++) {
-                if (!m.get(i, j).isZero()) {
-                    return false;
-                }
-            }
-        }
-        return true;
+    private static boolean reaches(RationalMatrix q, int from, int to) {
+        return reachable(q, from)[to];
     }
 
-    private static boolean reaches(RationalMatrix q, int from, int to) {
+    /** The states reachable from {@code from} (itself included) in the rate graph at the point. */
+    private static boolean[] reachable(RationalMatrix q, int from) {
         boolean[] seen = new boolean[q.rows()];
         ArrayDeque<Integer> queue = new ArrayDeque<>();
         seen[from] = true;
@@ -228,7 +228,26 @@ public final class TransientSensitivity {
                 }
             }
         }
-        return seen[to];
+        return seen;
+    }
+
+    /**
+     * {@code max_i ||D_i||_1} over the rows {@code i} reachable from {@code from}, {@code D = Q'/Λ}: the rows that
+     * {@code a_k} can weight, so the bound {@code ||b_k||_1 <= k ||D||} holds with it.
+     */
+    private static Rational reachableNorm(RationalMatrix q, RationalMatrix dq, Rational lambda, int from) {
+        boolean[] r = reachable(q, from);
+        Rational norm = Rational.ZERO;
+        for (int i = 0; i < q.rows(); i++) {
+            if (r[i]) {
+                Rational sum = Rational.ZERO;
+                for (int j = 0; j < q.cols(); j++) {
+                    sum = sum.add(dq.get(i, j).abs());
+                }
+                norm = norm.max(sum.divide(lambda));
+            }
+        }
+        return norm;
     }
 
     /** The smallest {@code K > x} whose tail estimate {@code e^-x x^K/K! (K+1)/(K+1-x) (1 + x)} is below 2^-bits. */
@@ -275,15 +294,12 @@ public final class TransientSensitivity {
         int[][] dc = new int[n][];
         BigInteger[][] dl = new BigInteger[n][];
         BigInteger[][] dh = new BigInteger[n][];
-        Rational dNorm = Rational.ZERO;
+        Rational dNorm = reachableNorm(q, dq, lambda, from);
         for (int i = 0; i < n; i++) {
             Rational[] drow = new Rational[n];
-            Rational rowSum = Rational.ZERO;
             for (int j = 0; j < n; j++) {
                 drow[j] = dq.get(i, j).divide(lambda);
-                rowSum = rowSum.add(drow[j].abs());
             }
-            dNorm = dNorm.max(rowSum);
             sparse(p[i], w, i, pc, pl, ph);
             sparse(drow, w, i, dc, dl, dh);
         }

@@ -130,6 +130,40 @@ class TransientSensitivityTest {
     }
 
     @Test
+    void fromAStateThatCannotUseTheParametersRatesTheDerivativeIsExactlyZero() {
+        // A non-repairable pair: None absorbs, so P(t)(None, .) is the unit row for every lam (common practice, no
+        // source); the derivative is exact, not an interval straddling 0.
+        Model m = ModelParser.parse("pair.chain", "chain continuous\nparam lam in (0, inf) = 1/3\n"
+            + "states Both One None\nup Both One\nBoth One 2*lam\nOne None lam\n");
+        TransientSensitivity.Result r = TransientSensitivity.of(m, Map.of(), "lam", Rational.of(2), 2, 2, 12, 8192,
+            Progress.NONE);
+        assertEquals("1", r.value().text());
+        assertEquals(CertifiedDecimal.Status.EXACT, r.derivative().status());
+        assertEquals("0", r.derivative().text());
+        // from Both: R(t) = P(Both -> None) = (1 - e^(-lam t))^2, dR/dlam = 2 (1 - e^(-lam t)) t e^(-lam t) (two
+        // independent units in parallel without repair; common practice, no source)
+        Rational t = Rational.of(2);
+        TransientSensitivity.Result b = TransientSensitivity.of(m, Map.of(), "lam", t, 0, 2, 20, 8192, Progress.NONE);
+        Apfloat e = ApfloatMath.exp(ap(Rational.of(-2, 3)));
+        Apfloat one = new Apfloat(1, PREC);
+        Apfloat d = new Apfloat(2, PREC).multiply(one.subtract(e)).multiply(ap(t)).multiply(e);
+        assertEquals(Decimals.format(rational(d), 20), b.derivative().text());
+    }
+
+    @Test
+    void anInterruptedThreadStopsTheSeries() {
+        Thread.currentThread().interrupt();
+        try {
+            org.qchain.exact.QchainException ex = org.junit.jupiter.api.Assertions.assertThrows(
+                org.qchain.exact.QchainException.class, () -> TransientSensitivity.of(TWO_UNITS, Map.of(), "mu",
+                    Rational.of(10), 0, 0, 12, 8192, Progress.NONE));
+            assertEquals(org.qchain.exact.ErrorKey.INTERRUPTED, ex.key());
+        } finally {
+            Thread.interrupted();
+        }
+    }
+
+    @Test
     void theWorkEstimateGrowsWithTheRateTimesTime() {
         TransientSensitivity.Work a = TransientSensitivity.estimate(ONE_UNIT, Map.of(), "mu", Rational.ONE, 12);
         TransientSensitivity.Work b = TransientSensitivity.estimate(ONE_UNIT, Map.of(), "mu", Rational.of(100), 12);
