@@ -315,7 +315,7 @@ function _picocli_qchain_sens() {
 
   local commands=""
   local flag_opts="'--factor' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--of' '-n' '--steps' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--of' '-n' '--steps' '-t' '--time' '--max-work' '--from' '--to' '--wrt' '--sweep' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -334,6 +334,12 @@ function _picocli_qchain_sens() {
       return
       ;;
     '-n'|'--steps')
+      return
+      ;;
+    '-t'|'--time')
+      return
+      ;;
+    '--max-work')
       return
       ;;
     '--from')

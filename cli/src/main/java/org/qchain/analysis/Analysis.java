@@ -54,8 +54,11 @@ public final class Analysis {
         if (query instanceof AvailabilityQuery q) {
             return availability(model, q, progress);
         }
+        if (query instanceof TransientSensQuery q) {
+            return transientSens(model, q, progress);
+        }
         if (query instanceof RateSensQuery q) {
-            return rateSens(model, q);
+            return rateSens(model, q, progress);
         }
         if (query instanceof VerifyQuery q) {
             return verify(model, q, progress);
@@ -256,16 +259,95 @@ public final class Analysis {
      *                         MTTF, a parameter without a value
      */
     public static org.qchain.result.RateSensResult rateSens(LoadedModel model, RateSensQuery q) {
-        model.generator("qchain sens --of " + Figures.name(q.figure()));
+        return rateSens(model, q, Progress.NONE);
+    }
+
+    /**
+     * As {@link #rateSens(LoadedModel, RateSensQuery)}, with the sweep if the query has one: the digits of all its
+     * exact values are estimated before any solve and refused past the query's limit; progress (phase
+     * {@code sweep}, one step per point) and an interrupt check between points.
+     *
+     * @param model    the loaded model
+     * @param q        the query
+     * @param progress told about each point of the sweep
+     * @return the result
+     * @throws QchainException as {@link #rateSens(LoadedModel, RateSensQuery)}; BAD_ARGUMENT for a bad sweep;
+     *                         SWEEP_TOO_LARGE past the limit (with the estimate); INTERRUPTED
+     */
+    public static org.qchain.result.RateSensResult rateSens(LoadedModel model, RateSensQuery q, Progress progress) {
+        String what = "qchain sens --of " + Figures.name(q.figure());
         java.util.List<Integer> up = model.model().upStates().orElseThrow(() -> new QchainException(
-            ErrorKey.NO_UP_STATES, "qchain sens --of " + Figures.name(q.figure())));
+            ErrorKey.NO_UP_STATES, what));
+        Optional<org.qchain.exact.model.SweepSpec> range = q.sweep().map(text -> RateSweeps.parse(model, text));
+        if (range.isPresent()) {
+            RateSweeps.requireOthers(model, range.get(), q.sweep().get());
+        }
+        model.generator(what);
         int from = q.from().map(f -> model.state("--from", f)).orElse(up.get(0));
+        Optional<org.qchain.result.SensResult.Sweep> sweep = range.map(r -> RateSweeps.run(model, q, r, from, progress));
         org.qchain.exact.ctmc.RateSensitivity.Derivative d = org.qchain.exact.ctmc.RateSensitivity.of(model.model(),
             model.given(), q.wrt(), q.figure(), from);
         Optional<String> start = q.figure() == org.qchain.exact.ctmc.RateSensitivity.Figure.MTTF
             ? Optional.of(model.states().get(from)) : Optional.empty();
         return new org.qchain.result.RateSensResult(model.source(), Figures.name(q.figure()), start, q.wrt(),
-            model.point().orElseThrow(), d.value(), d.derivative(), d.elasticity(), java.util.List.of());
+            model.point().orElseThrow(), d.value(), d.derivative(), d.elasticity(), java.util.List.of(), sweep);
+    }
+
+    /**
+     * The derivative of a transition probability of a continuous chain with respect to a parameter, as certified
+     * decimals at the given times. The work is estimated for all times before any is done.
+     *
+     * @param model    the loaded model
+     * @param q        the query
+     * @param progress told about the terms of the series and the times
+     * @return the result
+     * @throws QchainException for a discrete chain, a parameter without a value, an unknown parameter or state;
+     *                         TRANSIENT_TOO_LARGE past the work limit (with the estimate); INTERRUPTED
+     */
+    public static org.qchain.result.TransientSensResult transientSens(LoadedModel model, TransientSensQuery q,
+                                                                      Progress progress) {
+        org.qchain.exact.RationalMatrix g = model.generator("qchain sens -t");
+        if (model.model().param(q.wrt()).isEmpty()) {
+            throw new QchainException(ErrorKey.BAD_ARGUMENT, "--wrt", q.wrt(), model.model().params().isEmpty()
+                ? "the model declares no parameters" : "not a parameter of " + model.source());
+        }
+        int from = model.state("--from", q.from());
+        int to = model.state("--to", q.to());
+        double work = 0;
+        org.qchain.exact.ctmc.TransientSensitivity.Work last = null;
+        double most = 0;
+        for (org.qchain.exact.Rational t : q.times()) {
+            last = org.qchain.exact.ctmc.TransientSensitivity.estimate(model.model(), model.given(), q.wrt(), t,
+                q.digits());
+            work += last.multiplications();
+            most = Math.max(most, last.rateTime());
+        }
+        if (last != null && work > q.maxWork()) {
+            throw new QchainException(ErrorKey.TRANSIENT_TOO_LARGE,
+                org.qchain.exact.certified.CertifiedTransient.WorkEstimate.roughly(work), last.bits(), last.states(),
+                last.entries(), q.times().size(), org.qchain.exact.certified.CertifiedTransient.WorkEstimate.roughly(most),
+                q.maxWork(), NumericEngine.MAX_WORK_OPTION);
+        }
+        java.util.List<org.qchain.result.TransientSensResult.Row> rows = new java.util.ArrayList<>();
+        org.qchain.exact.Rational rate = org.qchain.exact.Rational.ONE;
+        for (int k = 0; k < q.times().size(); k++) {
+            org.qchain.exact.Rational t = q.times().get(k);
+            org.qchain.exact.ctmc.TransientSensitivity.Result r = org.qchain.exact.ctmc.TransientSensitivity.of(
+                model.model(), model.given(), q.wrt(), t, from, to, q.digits(), q.maxBits(), progress);
+            rate = r.rate();
+            rows.add(new org.qchain.result.TransientSensResult.Row(t, r.value(), r.derivative(), r.elasticity()));
+            progress.update("times", k + 1, q.times().size());
+        }
+        java.util.List<String> warnings = new java.util.ArrayList<>();
+        for (org.qchain.result.TransientSensResult.Row row : rows) {
+            if (!row.value().isProven() || !row.derivative().isProven()
+                || row.elasticity().map(e -> !e.isProven()).orElse(false)) {
+                warnings.add("at t = " + row.t() + " some digits could not be proven at the largest working precision;"
+                    + " the interval is printed instead");
+            }
+        }
+        return new org.qchain.result.TransientSensResult(model.source(), q.from(), q.to(), q.wrt(),
+            model.point().orElseThrow(), rate, rows, q.digits(), warnings);
     }
 
     /**

@@ -5,5 +5,6 @@ package org.qchain.analysis;
  * queries run through the same analysis. Add a new query type to {@code permits} and to {@link Analysis#run}.
  */
 public sealed interface Query permits StepQuery, SensQuery, ClosedQuery, CheckQuery, VerifyQuery,
-    TransientQuery, AvailabilityQuery, RateSensQuery, DistributionQuery, LongRunQuery, AbsorbQuery, ClassesQuery {
+    TransientQuery, AvailabilityQuery, RateSensQuery, DistributionQuery, LongRunQuery, AbsorbQuery, ClassesQuery,
+    TransientSensQuery {
 }

@@ -104,6 +104,30 @@ final class Continuous {
         return r.figure() + r.from().map(f -> " from " + f).orElse("");
     }
 
+    /** The title of a P(t) entry's sensitivity. */
+    static String transientSensTitle(org.qchain.result.TransientSensResult r) {
+        return "Sensitivity of P(t)(" + r.from() + " -> " + r.to() + ") to " + r.wrt() + " in " + r.source() + " at "
+            + r.point().text() + " (certified decimals, " + Text.digits(r.digits()) + "; uniformization rate "
+            + r.rate() + ")";
+    }
+
+    /** The rows of a P(t) entry's sensitivity: t, quantity, decimal, enclosure width, status; three per time. */
+    static List<List<String>> transientSensRows(org.qchain.result.TransientSensResult r) {
+        List<List<String>> out = new ArrayList<>();
+        for (org.qchain.result.TransientSensResult.Row row : r.rows()) {
+            String t = row.t().toString();
+            out.add(cells(t, "P", row.value()));
+            out.add(cells(t, "dP/d" + r.wrt(), row.derivative()));
+            out.add(row.elasticity().map(e -> cells(t, "elasticity", e))
+                .orElse(List.of(t, "elasticity", "undefined (P = 0)", "", "")));
+        }
+        return out;
+    }
+
+    private static List<String> cells(String t, String what, CertifiedDecimal d) {
+        return List.of(t, what, d.text(), bound(d.enclosure().width()), d.status().name().toLowerCase(java.util.Locale.ROOT));
+    }
+
     /** The rows of a rate sensitivity: name, exact value, decimal. */
     static List<List<String>> sensRows(RateSensResult r, int digits) {
         List<List<String>> out = new ArrayList<>();

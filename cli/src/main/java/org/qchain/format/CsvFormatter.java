@@ -159,13 +159,7 @@ final class CsvFormatter extends Layout {
     public String sens(SensResult s) {
         StringBuilder sb = new StringBuilder();
         if (s.sweep().isPresent()) {
-            SensResult.Sweep w = s.sweep().get();
-            Text.csvRecord(sb, List.of(w.parameter(), "value", "decimal", "derivative", "derivative_decimal"));
-            for (SensResult.SweepLine l : w.lines()) {
-                Text.csvRecord(sb, List.of(l.value().toString(), l.probability().toString(), dec(l.probability()),
-                    l.derivative().toString(), dec(l.derivative())));
-            }
-            return sb.toString();
+            return sweep(sb, s.sweep().get(), java.util.Optional.empty());
         }
         Text.csvRecord(sb, List.of("quantity", "formula", "value", "decimal"));
         if (s.at().isEmpty()) {
@@ -258,8 +252,38 @@ final class CsvFormatter extends Layout {
     @Override
     public String rateSens(RateSensResult r) {
         StringBuilder sb = new StringBuilder();
+        if (r.sweep().isPresent()) {
+            return sweep(sb, r.sweep().get(), java.util.Optional.of(r::elasticity));
+        }
         Text.csvRecord(sb, List.of("quantity", "exact", "decimal"));
         Continuous.sensRows(r, digits).forEach(x -> Text.csvRecord(sb, x));
+        return sb.toString();
+    }
+
+    /** {@code NAME,value,decimal,derivative,derivative_decimal[,elasticity,elasticity_decimal]}, one record a point. */
+    private String sweep(StringBuilder sb, SensResult.Sweep w, java.util.Optional<java.util.function.Function<SensResult.SweepLine, java.util.Optional<Rational>>> elasticity) {
+        List<String> head = new ArrayList<>(List.of(w.parameter(), "value", "decimal", "derivative",
+            "derivative_decimal"));
+        elasticity.ifPresent(f -> head.addAll(List.of("elasticity", "elasticity_decimal")));
+        Text.csvRecord(sb, head);
+        for (SensResult.SweepLine l : w.lines()) {
+            List<String> rec = new ArrayList<>(List.of(l.value().toString(), l.probability().toString(),
+                dec(l.probability()), l.derivative().toString(), dec(l.derivative())));
+            elasticity.ifPresent(f -> {
+                java.util.Optional<Rational> e = f.apply(l);
+                rec.add(e.map(Rational::toString).orElse("undefined"));
+                rec.add(e.map(this::dec).orElse("undefined"));
+            });
+            Text.csvRecord(sb, rec);
+        }
+        return sb.toString();
+    }
+
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("t", "quantity", "decimal", "enclosure_width", "status"));
+        Continuous.transientSensRows(r).forEach(x -> Text.csvRecord(sb, x));
         return sb.toString();
     }
 

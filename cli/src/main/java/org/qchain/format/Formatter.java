@@ -57,6 +57,9 @@ public interface Formatter {
         if (result instanceof RateSensResult r) {
             return rateSens(r);
         }
+        if (result instanceof org.qchain.result.TransientSensResult r) {
+            return transientSens(r);
+        }
         if (result instanceof VerifyResult v) {
             return verify(v);
         }
@@ -121,6 +124,9 @@ public interface Formatter {
 
     /** The derivative of a figure of merit with respect to a rate. */
     String rateSens(RateSensResult r);
+
+    /** The derivative of a P(t) entry with respect to a rate parameter, as certified decimals. */
+    String transientSens(org.qchain.result.TransientSensResult r);
     /** Float results checked against the exact values. */
     String verify(VerifyResult v);
 

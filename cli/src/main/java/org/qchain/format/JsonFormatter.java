@@ -243,20 +243,29 @@ final class JsonFormatter extends Layout {
                 return o;
             });
         }
-        if (s.sweep().isPresent()) {
-            SensResult.Sweep w = s.sweep().get();
-            Json sw = Json.object().string("parameter", w.parameter()).string("start", w.start().toString())
-                .string("step", w.step().toString()).string("end", w.end().toString())
-                .object("others", point(w.others()))
-                .objects("rows", w.lines(), l -> Json.object().string(w.parameter(), l.value().toString())
+        s.sweep().ifPresent(w -> j.object("sweep", sweep(w, java.util.Optional.empty())));
+        return j.string("kind", s.kind()).number("digits", digits).string("model", s.source())
+            .strings("warnings", s.warnings()).close() + "\n";
+    }
+
+    /** {@code {"parameter","start","step","end","others","rows":[{NAME,value,decimal,derivative,...}]}}. */
+    private Json sweep(SensResult.Sweep w, java.util.Optional<java.util.function.Function<SensResult.SweepLine, java.util.Optional<Rational>>> elasticity) {
+        return Json.object().string("parameter", w.parameter()).string("start", w.start().toString())
+            .string("step", w.step().toString()).string("end", w.end().toString())
+            .object("others", point(w.others()))
+            .objects("rows", w.lines(), l -> {
+                Json o = Json.object().string(w.parameter(), l.value().toString())
                     .string("value", l.probability().toString())
                     .string("decimal", dec(l.probability()))
                     .string("derivative", l.derivative().toString())
-                    .string("derivative_decimal", dec(l.derivative())));
-            j.object("sweep", sw);
-        }
-        return j.string("kind", s.kind()).number("digits", digits).string("model", s.source())
-            .strings("warnings", s.warnings()).close() + "\n";
+                    .string("derivative_decimal", dec(l.derivative()));
+                elasticity.ifPresent(f -> {
+                    java.util.Optional<Rational> e = f.apply(l);
+                    o.string("elasticity", e.map(Rational::toString).orElse("undefined"))
+                        .string("elasticity_decimal", e.map(this::dec).orElse("undefined"));
+                });
+                return o;
+            });
     }
 
     // --- closed ------------------------------------------------------------------------------------------------
@@ -506,7 +515,38 @@ final class JsonFormatter extends Layout {
                 .string("elasticity", Continuous.decimal(r.elasticity(), "undefined", digits)))
             .object("at", pt);
         r.from().ifPresent(f -> j.string("from", f));
+        r.sweep().ifPresent(w -> j.object("sweep", sweep(w, java.util.Optional.of(r::elasticity))));
         j.number("digits", digits).string("model", r.source()).strings("warnings", r.warnings())
+            .string("caution", Caution.TEXT);
+        return j.close() + "\n";
+    }
+
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        Json pt = Json.object();
+        r.point().values().forEach((k, v) -> pt.string(k, v.toString()));
+        Json j = Json.object()
+            .string("kind", "continuous")
+            .string("of", "entry")
+            .string("from", r.from())
+            .string("to", r.to())
+            .string("wrt", r.wrt())
+            .objects("rows", r.rows(), row -> {
+                Json o = Json.object().string("t", row.t().toString())
+                    .string("value", row.value().text())
+                    .string("derivative", row.derivative().text())
+                    .string("elasticity", row.elasticity().map(org.qchain.exact.certified.CertifiedDecimal::text)
+                        .orElse("undefined"));
+                Json b = Json.object().string("value", Continuous.bound(row.value().enclosure().width()))
+                    .string("derivative", Continuous.bound(row.derivative().enclosure().width()));
+                row.elasticity().ifPresent(e -> b.string("elasticity", Continuous.bound(e.enclosure().width())));
+                return o.object("bound", b);
+            })
+            .object("at", pt)
+            .string("uniformization_rate", r.rate().toString())
+            .number("digits", digits)
+            .string("model", r.source())
+            .strings("warnings", r.warnings())
             .string("caution", Caution.TEXT);
         return j.close() + "\n";
     }

@@ -201,17 +201,31 @@ final class LatexFormatter extends Layout {
             }
         }
         sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
-        if (s.sweep().isPresent()) {
-            SensResult.Sweep sw = s.sweep().get();
-            sb.append("\\begin{tabular}{r|rr}\n$").append(w).append("$ & $P$ & $\\partial P/\\partial ").append(w)
-                .append("$ \\\\ \\hline\n");
-            for (SensResult.SweepLine l : sw.lines()) {
-                sb.append('$').append(Text.frac(l.value())).append("$ & $").append(dec(l.probability()))
-                    .append("$ & $").append(dec(l.derivative())).append("$ \\\\\n");
-            }
-            sb.append("\\end{tabular}\n");
-        }
+        s.sweep().ifPresent(sw -> sweep(sb, sw, w, "P", "\\partial P/\\partial " + w, java.util.Optional.empty()));
         return caution(sb);
+    }
+
+    /**
+     * A sweep table: the parameter, the value's and the derivative's decimals; where an elasticity is given (a
+     * figure of merit), its decimal and then the three exact values.
+     */
+    private void sweep(StringBuilder sb, SensResult.Sweep sw, String p, String value, String derivative,
+                       java.util.Optional<java.util.function.Function<SensResult.SweepLine, java.util.Optional<Rational>>> elasticity) {
+        sb.append("\\begin{tabular}{r|rr").append(elasticity.isPresent() ? "r|rrr" : "").append("}\n$").append(p)
+            .append("$ & $").append(value).append("$ & $").append(derivative).append('$')
+            .append(elasticity.isPresent() ? " & elasticity & exact & exact & exact" : "").append(" \\\\ \\hline\n");
+        for (SensResult.SweepLine l : sw.lines()) {
+            sb.append('$').append(Text.frac(l.value())).append("$ & $").append(dec(l.probability()))
+                .append("$ & $").append(dec(l.derivative())).append('$');
+            elasticity.ifPresent(f -> {
+                java.util.Optional<Rational> e = f.apply(l);
+                sb.append(" & ").append(e.map(x -> "$" + dec(x) + "$").orElse("undefined"))
+                    .append(" & $").append(Text.frac(l.probability())).append("$ & $").append(Text.frac(l.derivative()))
+                    .append("$ & ").append(e.map(x -> "$" + Text.frac(x) + "$").orElse("undefined"));
+            });
+            sb.append(" \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
     }
 
     // --- closed ------------------------------------------------------------------------------------------------
@@ -445,6 +459,26 @@ final class LatexFormatter extends Layout {
         for (List<String> x : Continuous.sensRows(r, digits)) {
             sb.append(Text.latex(x.get(0))).append(" & $").append(Text.frac(Rational.parse(x.get(1).equals("undefined")
                 ? "0" : x.get(1)))).append("$ & ").append(Text.latex(x.get(2))).append(" \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+        r.sweep().ifPresent(sw -> {
+            String f = "\\text{" + Text.latex(r.figure()) + "}";
+            String x = Text.latex(r.wrt());
+            sb.append("% sweep ").append(Text.comment(sw.range())).append('\n');
+            sweep(sb, sw, "\\text{" + Text.latex(sw.parameter()) + "}", f, "\\partial " + f + "/\\partial \\text{" + x
+                + "}", java.util.Optional.of(r::elasticity));
+        });
+        return caution(sb);
+    }
+
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        StringBuilder sb = new StringBuilder("% ").append(Text.comment(Continuous.transientSensTitle(r))).append('\n');
+        sb.append("\\begin{tabular}{rlrr}\n $t$ & quantity & decimal & enclosure width \\\\ \\hline\n");
+        for (List<String> x : Continuous.transientSensRows(r)) {
+            sb.append('$').append(Text.frac(Rational.parse(x.get(0)))).append("$ & ").append(Text.latex(x.get(1)))
+                .append(" & ").append(Text.latex(x.get(2))).append(" & ").append(Text.latex(x.get(3)))
+                .append(" \\\\\n");
         }
         sb.append("\\end{tabular}\n");
         return caution(sb);

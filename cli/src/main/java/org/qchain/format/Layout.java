@@ -82,6 +82,31 @@ abstract class Layout implements Formatter {
         return Text.decimal(r, digits);
     }
 
+    /** A sweep table's heading: the parameter, the decimals, the exact values (an elasticity column with each). */
+    static List<String> sweepHead(String parameter, String value, String derivative, boolean elasticity) {
+        List<String> head = new java.util.ArrayList<>(List.of(parameter, value, derivative));
+        if (elasticity) {
+            head.add("elasticity");
+        }
+        head.addAll(List.of(value + " exact", derivative + " exact"));
+        if (elasticity) {
+            head.add("elasticity exact");
+        }
+        return head;
+    }
+
+    /** A sweep table's line, in the order of {@link #sweepHead}. */
+    final List<String> sweepCells(org.qchain.result.SensResult.SweepLine l,
+                                  java.util.Optional<java.util.function.Function<org.qchain.result.SensResult.SweepLine, java.util.Optional<Rational>>> elasticity) {
+        java.util.Optional<Rational> e = elasticity.flatMap(f -> f.apply(l));
+        List<String> row = new java.util.ArrayList<>(List.of(l.value().toString(), dec(l.probability()),
+            dec(l.derivative())));
+        elasticity.ifPresent(f -> row.add(e.map(this::dec).orElse("undefined")));
+        row.addAll(List.of(l.probability().toString(), l.derivative().toString()));
+        elasticity.ifPresent(f -> row.add(e.map(Rational::toString).orElse("")));
+        return row;
+    }
+
     /** A numeric check as its one-step matrix; a symbolic one through {@link #symbolicCheck}. */
     @Override
     public String check(CheckResult c) {

@@ -209,21 +209,23 @@ final class MarkdownFormatter extends Layout {
                     .append(" |\n"));
             }
         }
-        if (s.sweep().isPresent()) {
-            SensResult.Sweep w = s.sweep().get();
-            sb.append("\nSweep ").append(w.range()).append(":\n\n| ").append(w.parameter()).append(" | P | dP/d")
-                .append(s.wrt()).append(" | P exact | dP/d").append(s.wrt())
-                .append(" exact |\n| --- | --- | --- | --- | --- |\n");
-            for (SensResult.SweepLine l : w.lines()) {
-                sb.append("| ").append(l.value()).append(" | ").append(dec(l.probability())).append(" | ")
-                    .append(dec(l.derivative())).append(" | ").append(l.probability())
-                    .append(" | ").append(l.derivative()).append(" |\n");
-            }
-        }
+        s.sweep().ifPresent(w -> sweep(sb, w, "P", "dP/d" + s.wrt(), java.util.Optional.empty()));
         if (s.at().isPresent() || s.sweep().isPresent()) {
             sb.append("\nDecimals: ").append(Text.digits(digits)).append(".\n");
         }
         return caution(sb);
+    }
+
+    /** A sweep table: the parameter, decimals, then exact values; an elasticity column where one is given. */
+    private void sweep(StringBuilder sb, SensResult.Sweep w, String value, String derivative,
+                       java.util.Optional<java.util.function.Function<SensResult.SweepLine, java.util.Optional<Rational>>> elasticity) {
+        List<String> head = sweepHead(w.parameter(), value, derivative, elasticity.isPresent());
+        sb.append("\nSweep ").append(w.range()).append(":\n\n| ").append(String.join(" | ", head)).append(" |\n|")
+            .append(" --- |".repeat(head.size())).append('\n');
+        for (SensResult.SweepLine l : w.lines()) {
+            List<String> row = sweepCells(l, elasticity);
+            sb.append("| ").append(String.join(" | ", row)).append(" |\n");
+        }
     }
 
     // --- closed ------------------------------------------------------------------------------------------------
@@ -419,6 +421,22 @@ final class MarkdownFormatter extends Layout {
         line(sb, List.of("quantity", "exact", "decimal"));
         line(sb, separator(3));
         Continuous.sensRows(r, digits).forEach(x -> line(sb, x.stream().map(Text::markdown).toList()));
+        r.sweep().ifPresent(w -> {
+            String f = Text.markdown(Continuous.figureName(r));
+            sweep(sb, w, f, "d(" + f + ")/d" + r.wrt(), java.util.Optional.of(r::elasticity));
+        });
+        return caution(sb);
+    }
+
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        StringBuilder sb = new StringBuilder("**").append(Text.markdown(Continuous.transientSensTitle(r)))
+            .append("**\n\n");
+        line(sb, List.of("t", "quantity", "decimal", "enclosure width"));
+        line(sb, separator(4));
+        Continuous.transientSensRows(r).forEach(x -> line(sb, x.subList(0, 4).stream().map(Text::markdown).toList()));
+        sb.append("\nEvery digit shown is proven.\n");
+        r.warnings().forEach(w -> sb.append("\nWarning: ").append(Text.markdown(w)).append('\n'));
         return caution(sb);
     }
 

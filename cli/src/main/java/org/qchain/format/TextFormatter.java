@@ -335,22 +335,26 @@ final class TextFormatter extends Layout {
             sb.append("Elasticity: (").append(s.wrt()).append("/P) dP/d").append(s.wrt())
                 .append(", the relative change of P per relative change of ").append(s.wrt()).append(".\n");
         }
-        if (s.sweep().isPresent()) {
-            SensResult.Sweep w = s.sweep().get();
-            sb.append("\nSweep ").append(w.range()).append(w.others().isEmpty() ? ""
-                : " (" + w.others().text() + ")").append(":\n");
-            TextTable t = new TextTable();
-            t.addRow(w.parameter(), "P", "dP/d" + s.wrt(), "P exact", "dP/d" + s.wrt() + " exact");
-            for (SensResult.SweepLine l : w.lines()) {
-                t.addRow(l.value().toString(), dec(l.probability()), dec(l.derivative()),
-                    l.probability().toString(), l.derivative().toString());
-            }
-            sb.append(t.render());
-        }
+        s.sweep().ifPresent(w -> sweep(sb, w, "P", "dP/d" + s.wrt(), java.util.Optional.empty()));
         if (s.at().isPresent() || s.sweep().isPresent()) {
             sb.append("Decimals: ").append(Text.digits(digits)).append(".\n");
         }
         return sb.append('\n').append(Caution.TEXT).append('\n').toString();
+    }
+
+    /** A sweep table: the parameter, decimals, then exact values; an elasticity column where one is given. */
+    private void sweep(StringBuilder sb, SensResult.Sweep w, String value, String derivative,
+                       java.util.Optional<java.util.function.Function<SensResult.SweepLine, java.util.Optional<Rational>>> elasticity) {
+        sb.append("\nSweep ").append(w.range()).append(w.others().isEmpty() ? ""
+            : " (" + w.others().text() + ")").append(":\n");
+        TextTable t = new TextTable();
+        List<String> head = sweepHead(w.parameter(), value, derivative, elasticity.isPresent());
+        t.addRow(head);
+        for (SensResult.SweepLine l : w.lines()) {
+            List<String> row = sweepCells(l, elasticity);
+            t.addRow(row);
+        }
+        sb.append(t.render());
     }
 
     // --- closed ------------------------------------------------------------------------------------------------
@@ -625,6 +629,23 @@ final class TextFormatter extends Layout {
         TextTable table = new TextTable().addRow("quantity", "decimal", "exact");
         Continuous.sensRows(r, digits).forEach(x -> table.addRow(x.get(0), x.get(2), x.get(1)));
         sb.append(table.render());
+        r.sweep().ifPresent(w -> {
+            String f = Continuous.figureName(r);
+            sweep(sb, w, f, "d(" + f + ")/d" + r.wrt(), java.util.Optional.of(r::elasticity));
+            sb.append("Elasticity: (").append(r.wrt()).append("/figure) d/d").append(r.wrt()).append(".\n");
+        });
+        return end(sb);
+    }
+
+    @Override
+    public String transientSens(org.qchain.result.TransientSensResult r) {
+        StringBuilder sb = new StringBuilder(Continuous.transientSensTitle(r)).append("\n\n");
+        TextTable table = new TextTable().addRow("t", "quantity", "decimal", "enclosure width");
+        Continuous.transientSensRows(r).forEach(x -> table.addRow(x.subList(0, 4)));
+        sb.append(table.render());
+        sb.append("Every digit shown is proven: the value lies in an interval of the width shown, all of whose points"
+            + " round to it.\nElasticity: (").append(r.wrt()).append("/P) dP/d").append(r.wrt()).append(".\n");
+        r.warnings().forEach(w -> sb.append("Warning: ").append(w).append('\n'));
         return end(sb);
     }
 

@@ -129,6 +129,9 @@ class NoSymjaOnNumericPathTest {
         assertNoForbidden(classesRequestedBy("avail", m, "-t", "5", "--format", "markdown"));
         assertNoForbidden(classesRequestedBy("convert", m, "--to", "uniformized"));
         assertNoForbidden(classesRequestedBy("sens", m, "--of", "mttf", "--wrt", "mu", "--format", "json"));
+        assertNoForbidden(classesRequestedBy("sens", m, "--of", "mttf", "--wrt", "mu", "--sweep",
+            "mu in [1/24, 1/6] by 1/48"));
+        assertNoForbidden(classesRequestedBy("sens", m, "-t", "1,24", "--from", "Both", "--to", "None", "--wrt", "mu"));
     }
 
     @Test

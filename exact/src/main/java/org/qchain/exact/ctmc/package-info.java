@@ -6,6 +6,9 @@
  * per cycle and unavailability in hours per year; {@link org.qchain.exact.ctmc.Generators} turns a generator into
  * its embedded jump chain or its uniformized chain (discrete transition matrices). Transient probabilities
  * {@code P(t) = exp(Qt)} as certified decimals are in {@link org.qchain.exact.certified.CertifiedTransient}.
+ * {@link org.qchain.exact.ctmc.RateSensitivity} differentiates the figures exactly with respect to a rate parameter
+ * (with a digit estimate for sweeps); {@link org.qchain.exact.ctmc.TransientSensitivity} gives one entry of
+ * {@code P(t)} and its derivative with respect to a parameter as certified decimals.
  *
  * <pre>{@code
  * RationalMatrix q = Chains.transitionMatrix(model);           // the generator
