@@ -213,7 +213,22 @@ public final class Rational implements Comparable<Rational> {
         if (den.equals(o.den)) {
             return of(num.add(o.num), den);
         }
-        return of(num.multiply(o.den).add(o.num.multiply(den)), den.multiply(o.den));
+        // Henrici's sum (D. E. Knuth, The Art of Computer Programming, vol. 2, 4.5.1): with g = gcd(q1, q2),
+        // t = p1 (q2/g) + p2 (q1/g) and h = gcd(t, g), the sum is (t/h) / ((q1/g)(q2/h)) in lowest terms; the gcds
+        // are of the factors, not of the double-length cross products
+        BigInteger g = den.gcd(o.den);
+        if (g.equals(BigInteger.ONE)) {
+            BigInteger t = num.multiply(o.den).add(o.num.multiply(den));
+            return t.signum() == 0 ? ZERO : new Rational(t, den.multiply(o.den));
+        }
+        BigInteger d1 = den.divide(g);
+        BigInteger t = num.multiply(o.den.divide(g)).add(o.num.multiply(d1));
+        if (t.signum() == 0) {
+            return ZERO;
+        }
+        BigInteger h = t.gcd(g);
+        return h.equals(BigInteger.ONE) ? new Rational(t, d1.multiply(o.den))
+            : new Rational(t.divide(h), d1.multiply(o.den.divide(h)));
     }
 
     /** {@code this - o}. */
@@ -231,6 +246,10 @@ public final class Rational implements Comparable<Rational> {
         }
         if (o.isOne()) {
             return this;
+        }
+        if (o == this || (num.equals(o.num) && den.equals(o.den))) {
+            // a square of a reduced fraction is reduced
+            return new Rational(num.multiply(num), den.multiply(den));
         }
         // cross-reduce first so the products stay small: gcd(p1, q2) and gcd(p2, q1)
         BigInteger g1 = num.gcd(o.den);
