@@ -508,9 +508,20 @@ final class SymbolicEngine {
         Optional<Integer> row = q.from().map(s -> model.state(q.fromName(), s));
         Optional<Integer> col = q.to().map(s -> model.state("--to", s));
         SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
-        return q.form() == ClosedResult.Form.MATRIX
+        ClosedResult r = q.form() == ClosedResult.Form.MATRIX
             ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), row, col, ctx)
             : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), row, col);
+        return model.given().isEmpty() ? r : substituted(r, model.given());
+    }
+
+    /** The result with the values given with --at, which were substituted before the closed form was found. */
+    private static ClosedResult substituted(ClosedResult r, Map<String, Rational> given) {
+        Map<String, Rational> ordered = new java.util.LinkedHashMap<>();
+        new java.util.TreeMap<>(given).forEach(ordered::put);
+        return new ClosedResult(r.source(), r.form(), r.nSymbol(), r.validFrom(), r.conditions(), r.notProved(),
+            r.states(), r.parameters(), r.selection(), r.rows(), r.cols(), r.cells(), r.recurrences(), r.eigenvalues(),
+            r.longRun(), r.roots(), r.point(), r.digits(), r.warnings(), r.names(), r.where(), r.namedCells(),
+            r.factored(), ordered);
     }
 
     private static List<Integer> indices(Model m, Optional<Integer> pick) {

@@ -289,6 +289,11 @@ final class JsonFormatter extends Layout {
                 j.stringRows("matrix", cells);
         }
         j.string("form", r.form().word()).strings("parameters", r.parameters());
+        if (!r.substituted().isEmpty()) {
+            Json sub = Json.object();
+            r.substituted().forEach((k, v) -> sub.string(k, v.toString()));
+            j.object("substituted", sub);
+        }
         if (!r.isSeries()) {
             j.strings("conditions_not_proved", r.notProved());
         }

@@ -309,6 +309,10 @@ final class LatexFormatter extends Layout {
         if (!Closed.symbolsNote(r).isEmpty()) {
             sb.append("% ").append(Closed.symbolsNote(r)).append('\n');
         }
+        if (!r.substituted().isEmpty()) {
+            sb.append("% substituted before solving (given with --at): ").append(Text.comment(r.substitutedText()))
+                .append('\n');
+        }
         if (!Closed.factoredNote(r).isEmpty()) {
             sb.append("% ").append(Closed.factoredNote(r)).append(" det(").append(r.names().variable())
                 .append("I - P) = ").append(Closed.characteristicPolynomial(r)).append('\n');

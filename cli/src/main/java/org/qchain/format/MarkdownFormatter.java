@@ -252,6 +252,10 @@ final class MarkdownFormatter extends Layout {
         if (!Closed.factoredNote(r).isEmpty()) {
             sb.append(' ').append(Closed.factoredNote(r));
         }
+        if (!r.substituted().isEmpty()) {
+            sb.append(" Substituted before solving (given with --at): `").append(Text.code(r.substitutedText()))
+                .append("`.");
+        }
         sb.append("\n\n");
         sb.append("| from | to | ").append(r.form() == ClosedResult.Form.GF ? "G(" + r.names().series() + ")"
                 : (r.form() == ClosedResult.Form.RECURRENCE ? "recurrence" : Closed.pn(r)))

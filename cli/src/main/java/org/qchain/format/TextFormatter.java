@@ -380,6 +380,9 @@ final class TextFormatter extends Layout {
         if (!r.parameters().isEmpty()) {
             sb.append("Parameters (symbolic): ").append(String.join(", ", r.parameters())).append('\n');
         }
+        if (!r.substituted().isEmpty()) {
+            sb.append("Substituted before solving (given with --at): ").append(r.substitutedText()).append('\n');
+        }
         if (!Closed.symbolsNote(r).isEmpty()) {
             sb.append(Closed.symbolsNote(r)).append('\n');
         }

@@ -42,13 +42,16 @@ import org.qchain.exact.certified.CertifiedReal;
  * @param namedCells  {@code cells} written with the names of {@code where}; empty when nothing is named
  * @param factored    whether coefficients and limits are printed with numerator and denominator factored over the
  *                    rationals ({@code closed --factor})
+ * @param substituted the parameter values given with {@code --at} and substituted before the closed form was found
+ *                    (the formulas are in the other parameters); empty when none
  */
 public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
                            List<String> notProved, List<String> states, List<String> parameters, Selection selection,
                            List<String> rows, List<String> cols, List<List<Formula>> cells,
                            List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                            List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
-                           Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored)
+                           Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored,
+                           java.util.Map<String, org.qchain.exact.Rational> substituted)
     implements Result {
 
     /** Copies the lists. */
@@ -66,6 +69,28 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
         warnings = List.copyOf(warnings);
         where = List.copyOf(where);
         namedCells = namedCells.stream().map(List::copyOf).toList();
+        substituted = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(substituted));
+    }
+
+    /** As the canonical constructor with nothing substituted. */
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
+                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+                        List<String> rows, List<String> cols, List<List<Formula>> cells,
+                        List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
+                        List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
+                        Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored) {
+        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+            recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where, namedCells, factored,
+            java.util.Map.of());
+    }
+
+    /** The substituted values as {@code p=1/10, r=1/4}; empty when none. */
+    public String substitutedText() {
+        StringBuilder sb = new StringBuilder();
+        for (java.util.Map.Entry<String, org.qchain.exact.Rational> e : substituted.entrySet()) {
+            sb.append(sb.length() == 0 ? "" : ", ").append(e.getKey()).append('=').append(e.getValue());
+        }
+        return sb.toString();
     }
 
     /** As the canonical constructor with nothing named. */

@@ -161,4 +161,20 @@ class ClosedCommandTest {
             + " --max-digits", "closed", Cli.model("closed-cubic.chain"), "--max-digits", "1040");
         assertEquals(0, Cli.run("closed", Cli.model("closed-cubic.chain"), "--max-digits", "2720").code());
     }
+
+    // common practice, no source: a value given with --at is substituted before solving, and every format says so
+    @Test
+    void valuesGivenWithAtAreNamedAsSubstituted() {
+        String m = "../docs/examples/pump-station-params.chain";
+        Cli.Result t = Cli.run("closed", m, "--at", "p=1/10", "--from", "Up", "--to", "Down");
+        assertEquals(0, t.code(), t::toString);
+        assertTrue(t.out().contains("\nParameters (symbolic): r\nSubstituted before solving (given with --at): p=1/10\n"),
+            t.out());
+        Cli.Result j = Cli.run("closed", m, "--at", "p=1/10", "--from", "Up", "--to", "Down", "--format", "json");
+        assertTrue(j.out().contains("\"parameters\":[\"r\"],\"substituted\":{\"p\":\"1/10\"}"), j.out());
+        Cli.Result md = Cli.run("closed", m, "--at", "p=1/10", "--from", "Up", "--to", "Down", "--format", "markdown");
+        assertTrue(md.out().contains("Substituted before solving (given with --at): `p=1/10`."), md.out());
+        Cli.Result none = Cli.run("closed", m, "--from", "Up", "--to", "Down", "--format", "json");
+        assertTrue(!none.out().contains("substituted"), none.out());
+    }
 }
