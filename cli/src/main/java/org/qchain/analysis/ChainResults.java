@@ -37,7 +37,7 @@ final class ChainResults {
             List<String> parameters, List<ClassesResult.SpecialValue> special, List<String> warnings, boolean brief) {
         List<String> names = model.states();
         boolean ct = continuous(model);
-        Structure s = Structure.of(ct ? ChainEngine.generatorGraph(f, p) : ChainEngine.graph(f, p));
+        Structure s = Structure.of(graph(model, f, p));
         List<ClassesResult.ChainClass> cls = new ArrayList<>();
         for (int c = 0; c < s.classes().size(); c++) {
             cls.add(new ClassesResult.ChainClass(names(names, s.classes().get(c)), s.closed().get(c),
@@ -45,6 +45,14 @@ final class ChainResults {
         }
         return new ClassesResult(model.source(), names, parameters, cls, names(names, s.absorbing()),
             names(names, s.transients()), special, brief ? List.of() : table(p, fmt), warnings, at(model, parameters), ct, brief);
+    }
+
+    /**
+     * The graph the structure is read from: the non-zero entries, with a loop at every state of a continuous chain
+     * (it is never periodic).
+     */
+    static <T> boolean[][] graph(LoadedModel model, Arithmetic<T> f, List<List<T>> p) {
+        return continuous(model) ? ChainEngine.generatorGraph(f, p) : ChainEngine.graph(f, p);
     }
 
     /** Whether the model is a continuous-time chain (its matrix is then the generator). */

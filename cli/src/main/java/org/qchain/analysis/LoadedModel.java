@@ -43,7 +43,10 @@ public final class LoadedModel {
     private final Map<String, Rational> given;
     private final Map<String, Rational> known;
     private final Optional<SparseRationalMatrix> sparse;
+    /** A continuous chain's generator at the point, as validated at load (empty if a parameter has no value). */
+    private final Optional<SparseRationalMatrix> sparseGenerator;
     private volatile RationalMatrix dense;
+    private volatile RationalMatrix generator;
     private volatile SymbolicValidation symbolic;
 
     private LoadedModel(Model model, Optional<Path> file, Map<String, Rational> given) {
@@ -62,6 +65,7 @@ public final class LoadedModel {
             // the numeric check: throws, located, for an entry outside [0, 1] or a row not summing to 1; stored
             // sparse, so a large model with few transitions a state needs no dense matrix unless a query asks for one
             this.sparse = Optional.of(Chains.sparseTransitionMatrix(model, given));
+            this.sparseGenerator = Optional.empty();
             if (!model.usedParameters().isEmpty()) {
                 // rows must sum to 1 identically, not only at this point: the same refusal as the symbolic route,
                 // proved without JAS (rows without parameters were just checked exactly)
@@ -69,14 +73,14 @@ public final class LoadedModel {
             }
         } else {
             this.sparse = Optional.empty();
+            // a continuous chain is validated (negative rates, division by zero) before any command looks at its
+            // kind, so every command refuses a broken one with the same located message; the generator is kept
+            this.sparseGenerator = model.kind() == ChainKind.CONTINUOUS && complete()
+                ? Optional.of(Chains.sparseTransitionMatrix(model, given)) : Optional.empty();
             if (model.kind() == ChainKind.DISCRETE) {
                 Chains.requireDense(model);
                 RowSums.requireIdenticallyOne(model, true);
                 symbolic();
-            } else if (complete()) {
-                // a continuous chain is validated (negative rates, division by zero) before any command looks at
-                // its kind, so every command refuses a broken one with the same located message
-                Chains.sparseTransitionMatrix(model, given);
             }
         }
     }
@@ -327,7 +331,17 @@ public final class LoadedModel {
         if (model.kind() != ChainKind.CONTINUOUS) {
             throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(), what + " needs a continuous chain");
         }
-        return Chains.transitionMatrix(model, given);
+        RationalMatrix g = generator;
+        if (g == null) {
+            if (sparseGenerator.isEmpty()) {
+                // a parameter without a value: the same refusal as the validation would give
+                return Chains.transitionMatrix(model, given);
+            }
+            Chains.requireDense(model);
+            g = sparseGenerator.get().toDense();
+            generator = g;
+        }
+        return g;
     }
 
     /**

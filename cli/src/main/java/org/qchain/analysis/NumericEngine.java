@@ -185,7 +185,7 @@ final class NumericEngine {
      * twice that many digits.
      */
     static void guardSolve(LoadedModel model, long maxDigits) {
-        RationalMatrix p = ChainResults.continuous(model) ? model.generator("this analysis") : model.matrix();
+        RationalMatrix p = chainMatrix(model);
         int n = p.rows();
         double det = 0;
         for (int i = 0; i < n; i++) {
@@ -207,8 +207,13 @@ final class NumericEngine {
         }
     }
 
+    /** The one-step matrix, or a continuous chain's generator: the long-run engine takes either. */
+    private static RationalMatrix chainMatrix(LoadedModel model) {
+        return ChainResults.continuous(model) ? model.generator("this analysis") : model.matrix();
+    }
+
     static List<List<Rational>> rows(LoadedModel model) {
-        RationalMatrix p = ChainResults.continuous(model) ? model.generator("this analysis") : model.matrix();
+        RationalMatrix p = chainMatrix(model);
         List<List<Rational>> out = new ArrayList<>();
         for (int i = 0; i < p.rows(); i++) {
             out.add(List.of(p.row(i)));

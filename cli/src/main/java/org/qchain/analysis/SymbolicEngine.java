@@ -809,12 +809,15 @@ final class SymbolicEngine {
                 }
             }
         }
-        org.qchain.exact.longrun.Structure generic = org.qchain.exact.longrun.Structure.of(graph(rows));
+        org.qchain.symbolic.linear.RatFunArithmetic f = org.qchain.symbolic.linear.RatFunArithmetic.of(p.ring());
+        org.qchain.exact.longrun.Structure generic = org.qchain.exact.longrun.Structure.of(
+            ChainResults.graph(model, f, rows));
         List<org.qchain.result.ClassesResult.SpecialValue> out = new ArrayList<>();
         for (Map.Entry<String, java.util.TreeSet<Rational>> e : roots.entrySet()) {
             for (Rational r : e.getValue()) {
                 List<List<RatFun>> at = rows(p.substitute(Map.of(e.getKey(), r)));
-                org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(graph(at));
+                org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(
+                    ChainResults.graph(model, f, at));
                 if (!s.equals(generic)) {
                     out.add(new org.qchain.result.ClassesResult.SpecialValue(e.getKey() + " = " + r,
                         effect(generic, s, model.states())));
@@ -827,16 +830,13 @@ final class SymbolicEngine {
                 continue;
             }
             // at a generic point of {c = 0} exactly the entries whose numerator has the factor c vanish
-            boolean[][] g = graph(rows);
-            for (int i = 0; i < rows.size(); i++) {
-                for (int j = 0; j < rows.size(); j++) {
-                    RatFun x = rows.get(i).get(j);
-                    if (!x.isZero() && x.numerator().divideExact(c).isPresent()) {
-                        g[i][j] = false;
-                    }
-                }
+            List<List<RatFun>> cut = new ArrayList<>();
+            for (List<RatFun> row : rows) {
+                cut.add(row.stream().map(x -> !x.isZero() && x.numerator().divideExact(c).isPresent()
+                    ? RatFun.of(p.ring().zero()) : x).toList());
             }
-            org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(g);
+            org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(
+                ChainResults.graph(model, f, cut));
             if (!s.equals(generic)) {
                 out.add(new org.qchain.result.ClassesResult.SpecialValue(org.qchain.symbolic.Formulas.plain(c) + " = 0"
                     + (v == Vanishing.UNDECIDED ? " (if it vanishes inside the domains: not decided)" : ""),
@@ -916,17 +916,6 @@ final class SymbolicEngine {
         }
         return pos + neg > 0 && org.qchain.symbolic.BoxSign.positive(terms, inside) ? Vanishing.NEVER
             : Vanishing.UNDECIDED;
-    }
-
-    private static boolean[][] graph(List<List<RatFun>> rows) {
-        int n = rows.size();
-        boolean[][] g = new boolean[n][n];
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                g[i][j] = !rows.get(i).get(j).isZero();
-            }
-        }
-        return g;
     }
 
     /** What changes between two structures, in words. */
