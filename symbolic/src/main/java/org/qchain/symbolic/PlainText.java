@@ -28,25 +28,11 @@ final class PlainText {
         boolean first = true;
         for (Poly.Term t : p.terms()) {
             Rational c = t.coefficient();
-            boolean neg = c.signum() < 0;
-            if (first) {
-                if (neg) {
-                    sb.append('-');
-                }
-            } else {
-                sb.append(neg ? " - " : " + ");
-            }
-            first = false;
-            String mono = monomial(vars, t.exponents(), latex ? " " : "*", latex);
+            String times = latex ? " " : "*";
             Rational a = c.abs();
-            String coef = latex ? latexRational(a) : a.toString();
-            if (mono.isEmpty()) {
-                sb.append(coef);
-            } else if (a.isOne()) {
-                sb.append(mono);
-            } else {
-                sb.append(coef).append(latex ? " " : "*").append(mono);
-            }
+            org.qchain.exact.model.TermText.append(sb, first, c, monomial(vars, t.exponents(), times, latex),
+                latex ? latexRational(a) : a.toString(), times);
+            first = false;
         }
         return sb.toString();
     }

@@ -380,9 +380,9 @@ final class SparsePoly {
 
     /**
      * The plain one-line text, as the symbolic module prints an expanded polynomial: terms in {@link #PRINT_ORDER},
-     * {@code 3/4*a*b^2}, {@code " - "} between terms with negative coefficients. It mirrors the symbolic module's
-     * {@code PlainText} on purpose (this module cannot use it); {@code RowSumsAgainstJasTest} checks that both print
-     * the same text.
+     * {@code 3/4*a*b^2}, {@code " - "} between terms with negative coefficients. Each term is written by
+     * {@link TermText}, as the symbolic module's {@code PlainText} writes its terms; {@code RowSumsAgainstJasTest}
+     * checks that both print the same text.
      *
      * @param names the variables' names, in index order
      * @return the text; {@code 0} for the zero polynomial
@@ -395,15 +395,6 @@ final class SparsePoly {
         boolean first = true;
         for (Map.Entry<Mono, Rational> t : sorted()) {
             Rational c = t.getValue();
-            boolean neg = c.signum() < 0;
-            if (first) {
-                if (neg) {
-                    sb.append('-');
-                }
-            } else {
-                sb.append(neg ? " - " : " + ");
-            }
-            first = false;
             List<String> parts = new ArrayList<>();
             int[] e = t.getKey().e;
             for (int i = 0; i < vars; i++) {
@@ -411,15 +402,8 @@ final class SparsePoly {
                     parts.add(e[i] == 1 ? names.get(i) : names.get(i) + "^" + e[i]);
                 }
             }
-            String mono = String.join("*", parts);
-            Rational a = c.abs();
-            if (mono.isEmpty()) {
-                sb.append(a);
-            } else if (a.isOne()) {
-                sb.append(mono);
-            } else {
-                sb.append(a).append('*').append(mono);
-            }
+            TermText.append(sb, first, c, String.join("*", parts), c.abs().toString(), "*");
+            first = false;
         }
         return sb.toString();
     }
