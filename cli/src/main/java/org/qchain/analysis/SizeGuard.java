@@ -35,10 +35,7 @@ final class SizeGuard {
         }
         q.from().ifPresent(f -> model.state("--from", f));
         q.to().ifPresent(t -> model.state("--to", t));
-        Interrupts.guarded(() -> {
-            SymbolicEngine.requireWithin(model, q);
-            return null;
-        });
+        symbolic(() -> SymbolicEngine.requireWithin(model, q));
     }
 
     /** A distribution query on the symbolic route (one n): each row of P^n it needs, estimated before any product. */
@@ -49,10 +46,7 @@ final class SizeGuard {
         for (String t : q.to()) {
             model.state("--to", t);
         }
-        Interrupts.guarded(() -> {
-            SymbolicEngine.requireWithin(model, q);
-            return null;
-        });
+        symbolic(() -> SymbolicEngine.requireWithin(model, q));
     }
 
     /** A sensitivity query. */
@@ -66,18 +60,20 @@ final class SizeGuard {
         for (String t : q.toStates()) {
             model.state("--to", t);
         }
-        Interrupts.guarded(() -> {
-            SymbolicEngine.requireWithin(model, q);
-            return null;
-        });
+        symbolic(() -> SymbolicEngine.requireWithin(model, q));
     }
 
     /** A closed-form query. */
     static void check(LoadedModel model, ClosedQuery q) {
         q.from().ifPresent(s -> model.state(q.fromName(), s));
         q.to().ifPresent(s -> model.state("--to", s));
+        symbolic(() -> SymbolicEngine.requireWithin(model, q));
+    }
+
+    /** Runs a symbolic estimate (it may touch JAS), a JAS preemption ending as an interruption. */
+    private static void symbolic(Runnable estimate) {
         Interrupts.guarded(() -> {
-            SymbolicEngine.requireWithin(model, q);
+            estimate.run();
             return null;
         });
     }

@@ -882,21 +882,17 @@ final class SymbolicEngine {
         }
         int pos = 0;
         int neg = 0;
-        int[] idx = new int[vars.size()];
-        int total = 1;
+        // the grid's points, at most 100,000 of them
+        long total = 1;
         for (List<Rational> g : grid) {
-            total = Math.multiplyExact(total, g.size());
-            if (total > 100_000) {
-                break;
-            }
+            total = Math.min(100_000, total * g.size());
         }
-        for (int n = 0; n < Math.min(total, 100_000); n++) {
+        for (int n = 0; n < total; n++) {
             Map<String, Rational> at = new java.util.HashMap<>();
             int q = n;
             for (int i = 0; i < vars.size(); i++) {
-                idx[i] = q % grid.get(i).size();
+                at.put(vars.get(i), grid.get(i).get(q % grid.get(i).size()));
                 q /= grid.get(i).size();
-                at.put(vars.get(i), grid.get(i).get(idx[i]));
             }
             int sign = c.evaluate(at).signum();
             pos += sign > 0 ? 1 : 0;
