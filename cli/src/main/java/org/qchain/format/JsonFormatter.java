@@ -580,8 +580,9 @@ final class JsonFormatter extends Layout {
 
     private static Json byState(List<String> states, List<org.qchain.result.Formula> values) {
         Json j = Json.object();
-        // values may be empty: a continuous chain's state that is never left has no mean return time
-        for (int i = 0; i < Math.min(states.size(), values.size()); i++) {
+        // values may be empty (a continuous chain's state that is never left has no mean return time); otherwise
+        // there is one per state
+        for (int i = 0; i < (values.isEmpty() ? 0 : states.size()); i++) {
             j.string(states.get(i), values.get(i).plain());
         }
         return j;
