@@ -64,33 +64,7 @@ public final class ClosedForm {
         this.symbols = Symbols.avoiding(series.field.names);
         this.n = Fml.name(symbols.step());
         this.spectral = Spectral.of(series, progress);
-        int named = 1;
-        int quadratics = 0;
-        for (Spectral.Group g : spectral.groups) {
-            if (g.kind == Spectral.Kind.ROOTS) {
-                g.name = symbols.factor(named++);
-            }
-            if (g.kind == Spectral.Kind.QUADRATIC) {
-                quadratics++;
-            }
-        }
-        int q = 0;
-        List<Definition> defs = new ArrayList<>();
-        for (Spectral.Group g : spectral.groups) {
-            if (g.kind == Spectral.Kind.QUADRATIC) {
-                q++;
-                String s = quadratics == 1 ? symbols.root() : symbols.root() + q;
-                String l1 = symbols.eigenvalue(2 * q - 1);
-                String l2 = symbols.eigenvalue(2 * q);
-                quadraticNames.put(g, new String[] {s, l1, l2});
-                Fml sqrt = Fml.call("sqrt", field.formula(g.delta));
-                defs.add(new Definition(s, Fml.plain(sqrt), Fml.latex(sqrt), false));
-                List<Fml> roots = quadraticRoots(g, Fml.name(s));
-                defs.add(new Definition(l1, Fml.plain(roots.get(0)), Fml.latex(roots.get(0)), true));
-                defs.add(new Definition(l2, Fml.plain(roots.get(1)), Fml.latex(roots.get(1)), true));
-            }
-        }
-        this.definitions = List.copyOf(defs);
+        this.definitions = SpectralParts.nameGroups(field, spectral.groups, symbols, quadraticNames);
         this.seriesForm = new SeriesForm(series, states);
         this.states = List.copyOf(states);
         this.size = spectral.series.size;
@@ -254,106 +228,22 @@ public final class ClosedForm {
     // --- conditions --------------------------------------------------------------------------------------------
 
     private List<GenPolynomial<BigRational>> collectConditions() {
-        Map<String, GenPolynomial<BigRational>> out = new TreeMap<>();
-        Map<GenPolynomial<BigRational>, Boolean> seen = new LinkedHashMap<>();
-        for (Spectral.Group g : spectral.groups) {
-            if (g == zero) {
-                continue;
-            }
-            List<Quotient<BigRational>> used = new ArrayList<>(List.of(g.coeffs));
-            if (g.kind == Spectral.Kind.LINEAR) {
-                for (Quotient<BigRational>[][] m : g.nilpotent) {
-                    addAll(used, m);
-                }
-            } else if (g.kind == Spectral.Kind.QUADRATIC) {
-                for (int k = 0; k < g.x.size(); k++) {
-                    addAll(used, g.x.get(k));
-                    addAll(used, g.y.get(k));
-                }
-                used.add(g.delta);
-                // sqrt(D) stands in a denominator: D != 0
-                for (GenPolynomial<BigRational> p : field.irreducibleFactors(g.delta.num)) {
-                    out.put(key(p), p);
-                }
-            } else {
-                for (List<Quotient<BigRational>[][]> ck : g.c) {
-                    for (Quotient<BigRational>[][] m : ck) {
-                        addAll(used, m);
-                    }
-                }
-            }
-            for (Quotient<BigRational> q : used) {
-                if (!q.den.isConstant() && seen.put(q.den, Boolean.TRUE) == null) {
-                    for (GenPolynomial<BigRational> p : field.irreducibleFactors(q.den)) {
-                        out.put(key(p), p);
-                    }
-                }
-            }
-        }
-        List<GenPolynomial<BigRational>> list = new ArrayList<>(out.values());
-        list.sort(Comparator.comparingLong((GenPolynomial<BigRational> p) -> p.totalDegree()).thenComparing(this::key));
-        return List.copyOf(list);
+        return SpectralParts.conditionPolys(field, spectral.groups, zero);
     }
 
     private String key(GenPolynomial<BigRational> p) {
-        return Fml.plain(field.formula(p));
-    }
-
-    private static void addAll(List<Quotient<BigRational>> out, Quotient<BigRational>[][] m) {
-        for (Quotient<BigRational>[] row : m) {
-            for (Quotient<BigRational> q : row) {
-                if (!q.isZERO()) {
-                    out.add(q);
-                }
-            }
-        }
+        return SpectralParts.key(field, p);
     }
 
     // --- eigenvalues -------------------------------------------------------------------------------------------
 
     private List<Eigenvalue> describeEigenvalues() {
-        List<Eigenvalue> out = new ArrayList<>();
-        for (Spectral.Group g : spectral.groups) {
-            // a linear factor reads x - (lambda), the way its eigenvalue is printed
-            Fml f = g.kind == Spectral.Kind.LINEAR && !g.lambda.isZERO()
-                ? Fml.sum(Fml.name(symbols.variable()), Fml.neg(field.formula(g.lambda)))
-                : field.formula(g.factor, symbols.variable());
-            List<String> values = new ArrayList<>();
-            List<String> valuesLatex = new ArrayList<>();
-            String kind;
-            if (g.kind == Spectral.Kind.LINEAR) {
-                kind = "rational";
-                values.add(Fml.plain(field.formula(g.lambda)));
-                valuesLatex.add(Fml.latex(field.formula(g.lambda)));
-            } else if (g.kind == Spectral.Kind.QUADRATIC) {
-                kind = "quadratic";
-                for (Fml r : quadraticRoots(g)) {
-                    values.add(Fml.plain(r));
-                    valuesLatex.add(Fml.latex(r));
-                }
-            } else {
-                kind = "roots";
-                values.add("roots of " + g.name);
-                valuesLatex.add("\\text{roots of } " + Fml.latex(Fml.name(g.name)));
-            }
-            String[] nm = quadraticNames.get(g);
-            out.add(new Eigenvalue(Fml.plain(f), Fml.latex(f), g.degree, g.multiplicity, g.index(), kind, values,
-                g.name, g.unitOrder, valuesLatex, nm == null ? List.of() : List.of(nm[1], nm[2])));
-        }
-        return List.copyOf(out);
+        return SpectralParts.describe(field, spectral.groups, symbols.variable(), quadraticNames);
     }
 
     /** u/2 + (s/2) sqrt(D) and u/2 - (s/2) sqrt(D). */
     private List<Fml> quadraticRoots(Spectral.Group g) {
-        return quadraticRoots(g, Fml.call("sqrt", field.formula(g.delta)));
-    }
-
-    /** u/2 + (s/2) r and u/2 - (s/2) r, with r the square root or its name. */
-    private List<Fml> quadraticRoots(Spectral.Group g, Fml sqrt) {
-        Quotient<BigRational> half = field.of(2).inverse();
-        Fml mid = field.formula(g.u.multiply(half));
-        Fml w = Fml.prod(field.formula(g.scale.multiply(half)), sqrt);
-        return List.of(Fml.sum(mid, w), Fml.sum(mid, Fml.neg(w)));
+        return SpectralParts.quadraticRoots(field, g);
     }
 
     // --- public API --------------------------------------------------------------------------------------------
@@ -584,24 +474,11 @@ public final class ClosedForm {
     }
 
     private void checkPoint(Map<String, Rational> at) {
-        for (String p : field.names) {
-            if (!at.containsKey(p)) {
-                throw new QchainException(ErrorKey.BAD_ARGUMENT, "parameter values", at.keySet(), "no value for " + p);
-            }
-        }
-        for (GenPolynomial<BigRational> c : conditionPolys) {
-            if (field.evaluate(c, at).isZERO()) {
-                throw new QchainException(ErrorKey.CLOSED_FORM_CONDITION, Fml.plain(field.formula(c)) + " != 0", at);
-            }
-        }
+        SpectralParts.checkPoint(field, conditionPolys, at);
     }
 
     private BigRational substitute(Quotient<BigRational> q, Map<String, Rational> at) {
-        BigRational d = field.evaluate(q.den, at);
-        if (d.isZERO()) {
-            throw new QchainException(ErrorKey.CLOSED_FORM_CONDITION, Fml.plain(field.formula(q.den)) + " != 0", at);
-        }
-        return field.evaluate(q.num, at).divide(d);
+        return SpectralParts.substitute(field, q, at);
     }
 
     /**
@@ -799,34 +676,7 @@ public final class ClosedForm {
     }
 
     private List<CertifiedComplex> computeValuesAt(Spectral.Group g, Map<String, Rational> at) {
-        List<CertifiedComplex> v = new ArrayList<>();
-        if (g.kind == Spectral.Kind.QUADRATIC) {
-            substituted(g, at);
-            Quotient<BigRational> half = field.of(2).inverse();
-            Rational mid = ParamField.rational(substitute(g.u.multiply(half), at));
-            Rational w = ParamField.rational(substitute(g.scale.multiply(half), at));
-            Rational dv = ParamField.rational(substitute(g.delta, at));
-            for (int sign : new int[] {1, -1}) {
-                Rational ws = sign > 0 ? w : w.negate();
-                v.add(dv.signum() >= 0 ? CertifiedComplex.real(CertifiedReal.quadratic(mid, ws, dv))
-                    : new CertifiedComplex(CertifiedReal.exact(mid),
-                        CertifiedReal.quadratic(Rational.ZERO, ws, dv.negate())));
-            }
-        } else if (g.kind == Spectral.Kind.LINEAR) {
-            substituted(g, at);
-            v.add(CertifiedComplex.real(CertifiedReal.exact(ParamField.rational(substitute(g.lambda, at)))));
-        } else {
-            v.addAll(CertifiedRoots.of(coefficientsAt(g, at)));
-        }
-        return List.copyOf(v);
-    }
-
-    private List<Rational> coefficientsAt(Spectral.Group g, Map<String, Rational> at) {
-        List<Rational> c = new ArrayList<>();
-        for (BigRational b : substituted(g, at)) {
-            c.add(ParamField.rational(b));
-        }
-        return c;
+        return SpectralParts.valuesAt(field, g, at);
     }
 
     /** A condition of the long run: {@code poly != 0} (poly empty: not decidable here, never proved). */
@@ -928,48 +778,11 @@ public final class ClosedForm {
      * @return each point as a map from parameter to value, in parameter order
      */
     public List<Map<String, Rational>> specialCorners(Map<String, Domain> domains) {
-        List<List<Rational>> ends = new ArrayList<>();
-        for (String p : field.names) {
-            Domain d = domains.get(p);
-            List<Rational> e = new ArrayList<>();
-            if (d != null && d.lowerClosed()) {
-                e.add(d.lower());
-            }
-            if (d != null && d.upper().isPresent() && d.upperClosed()) {
-                e.add(d.upper().get());
-            }
-            if (e.isEmpty()) {
-                return List.of();
-            }
-            ends.add(e);
-        }
         List<GenPolynomial<BigRational>> polys = new ArrayList<>(conditionPolys);
         for (LongRunCondition c : longRunConditions()) {
             c.poly.ifPresent(polys::add);
         }
-        List<Map<String, Rational>> out = new ArrayList<>();
-        int[] at = new int[ends.size()];
-        while (!ends.isEmpty()) {
-            Map<String, Rational> pt = new LinkedHashMap<>();
-            for (int i = 0; i < at.length; i++) {
-                pt.put(field.names.get(i), ends.get(i).get(at[i]));
-            }
-            for (GenPolynomial<BigRational> c : polys) {
-                if (field.evaluate(c, pt).isZERO()) {
-                    out.add(java.util.Collections.unmodifiableMap(pt));
-                    break;
-                }
-            }
-            int i = 0;
-            while (i < at.length && ++at[i] == ends.get(i).size()) {
-                at[i] = 0;
-                i++;
-            }
-            if (i == at.length) {
-                break;
-            }
-        }
-        return List.copyOf(out);
+        return SpectralParts.corners(field, polys, domains);
     }
 
     private Fml modulus(Spectral.Group g) {
@@ -1068,16 +881,7 @@ public final class ClosedForm {
     }
 
     private BigRational[] substituted(Spectral.Group g, Map<String, Rational> at) {
-        for (String p : field.names) {
-            if (!at.containsKey(p)) {
-                throw new QchainException(ErrorKey.BAD_ARGUMENT, "parameter values", at.keySet(), "no value for " + p);
-            }
-        }
-        BigRational[] a = new BigRational[g.coeffs.length];
-        for (int k = 0; k < a.length; k++) {
-            a[k] = substitute(g.coeffs[k], at);
-        }
-        return a;
+        return SpectralParts.substituted(field, g, at);
     }
 
     private static org.apfloat.Apfloat apfloat(BigRational r, long prec) {

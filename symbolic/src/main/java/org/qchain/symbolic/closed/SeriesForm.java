@@ -119,7 +119,46 @@ public final class SeriesForm {
      * @throws IndexOutOfBoundsException if i or j is out of range
      */
     public GeneratingFunction generatingFunction(int i, int j) {
-        List<GenPolynomial<Quotient<BigRational>>> parts = gfParts(i, j);
+        return printed(gfParts(i, j), symbols.series(), false);
+    }
+
+    /**
+     * Entry (i, j) of the Laplace transform {@code (sI - Q)^-1 = adj(sI - Q)/det(sI - Q)} of exp(Qt), for the
+     * matrix Q this series was made from (a continuous chain's generator), reduced by trial division with the
+     * known factors of {@code det(sI - Q)} and printed with the denominator monic in s before the parameters'
+     * denominators are cleared.
+     *
+     * @param variable the transform's variable (never a parameter's name)
+     * @throws IndexOutOfBoundsException if i or j is out of range
+     */
+    GeneratingFunction laplaceTransform(int i, int j, String variable) {
+        // adj(xI - Q) = sum_k B_k x^(s-1-k), det(xI - Q) = chi(x)
+        GenPolynomial<Quotient<BigRational>> num = field.univariate.getZERO();
+        for (int k = 0; k < size; k++) {
+            num = num.sum(series.adjugate.get(k)[i][j], ExpVector.create(1, 0, size - 1 - k));
+        }
+        GenPolynomial<Quotient<BigRational>> den = series.chi;
+        if (num.isZERO()) {
+            den = field.univariate.getONE();
+        } else {
+            for (int f = 0; f < series.factors.size(); f++) {
+                GenPolynomial<Quotient<BigRational>> g = series.factors.get(f);
+                for (int k = 0; k < series.multiplicities.get(f); k++) {
+                    GenPolynomial<Quotient<BigRational>>[] qn = num.quotientRemainder(g);
+                    if (!qn[1].isZERO()) {
+                        break;
+                    }
+                    num = qn[0];
+                    den = den.divide(g);
+                }
+            }
+        }
+        return printed(List.of(num, den), variable, true);
+    }
+
+    /** num/den with the parameters' denominators cleared, in ascending or descending powers of the variable. */
+    private GeneratingFunction printed(List<GenPolynomial<Quotient<BigRational>>> parts, String variable,
+                                       boolean descending) {
         // clear the parameters' denominators: multiply both by the lcm of all coefficient denominators
         GenPolynomial<BigRational> l = field.poly.getONE();
         for (GenPolynomial<Quotient<BigRational>> p : parts) {
@@ -127,10 +166,10 @@ public final class SeriesForm {
                 l = lcm(l, q.den);
             }
         }
-        Fml num = zPolynomial(parts.get(0), l);
-        Fml den = zPolynomial(parts.get(1), l);
+        Fml num = polynomial(parts.get(0), l, variable, descending);
+        Fml den = polynomial(parts.get(1), l, variable, descending);
         Fml whole = Fml.isOne(den) ? num : Fml.div(num, den);
-        return new GeneratingFunction(symbols.series(), Fml.plain(num), Fml.plain(den), Fml.plain(whole), Fml.latex(whole));
+        return new GeneratingFunction(variable, Fml.plain(num), Fml.plain(den), Fml.plain(whole), Fml.latex(whole));
     }
 
     private GenPolynomial<BigRational> lcm(GenPolynomial<BigRational> a, GenPolynomial<BigRational> b) {
@@ -141,18 +180,20 @@ public final class SeriesForm {
         return a.multiply(b).divide(g);
     }
 
-    /** sum_k coeff_k z^k with each coefficient times l (a polynomial then), ascending in z. */
-    private Fml zPolynomial(GenPolynomial<Quotient<BigRational>> p, GenPolynomial<BigRational> l) {
+    /** sum_k coeff_k v^k with each coefficient times l (a polynomial then), ascending or descending in v. */
+    private Fml polynomial(GenPolynomial<Quotient<BigRational>> p, GenPolynomial<BigRational> l, String variable,
+                           boolean descending) {
         List<Fml> terms = new ArrayList<>();
         Quotient<BigRational> lq = new Quotient<>(field.field, l);
-        TreeMap<Long, Quotient<BigRational>> byPower = new TreeMap<>();
+        TreeMap<Long, Quotient<BigRational>> byPower = descending ? new TreeMap<>(java.util.Comparator.reverseOrder())
+            : new TreeMap<>();
         for (Map.Entry<ExpVector, Quotient<BigRational>> t : p.getMap().entrySet()) {
             byPower.put(t.getKey().getVal(0), t.getValue().multiply(lq));
         }
         for (Map.Entry<Long, Quotient<BigRational>> t : byPower.entrySet()) {
             Fml c = field.formula(t.getValue());
             long k = t.getKey();
-            Fml zk = k == 0 ? Fml.ONE : Fml.pow(Fml.name(symbols.series()), Fml.integer(k));
+            Fml zk = k == 0 ? Fml.ONE : Fml.pow(Fml.name(variable), Fml.integer(k));
             terms.add(Fml.prod(c, zk));
         }
         return Fml.sum(terms);
