@@ -114,7 +114,7 @@ class ClosedCommandTest {
 
     @Test
     void badOptionsAreUsageErrors() {
-        assertUsage("--to needs --from (the starting state) or --start (the initial state)", "closed", BEACON, "--to", "Lit");
+        assertUsage("--to needs --from (the starting state) or --start (the initial state or distribution)", "closed", BEACON, "--to", "Lit");
         assertUsage("--start and --from both name the starting state; give one", "closed", BEACON, "--start", "Lit",
             "--from", "Dark");
         assertUsage("invalid --from 'Gone': not a state of " + BEACON + " (states: Lit, Dark)", "closed", BEACON,
