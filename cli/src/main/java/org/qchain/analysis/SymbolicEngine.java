@@ -705,7 +705,9 @@ final class SymbolicEngine {
         }
         ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits,
             Formula.of(lr.rate(), lr.rateLatex()), rateValue,
-            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(), lr.exactFrom(), values);
+            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(),
+            // the printed cells are exactly periodic (or constant) from their own valid-from on
+            Math.min(lr.exactFrom(), validFrom), values);
         // the conditions of the printed formulas only (a combination's cancelled terms need none), in the order of
         // the whole matrix's conditions
         List<String> conditions = cf.conditions();

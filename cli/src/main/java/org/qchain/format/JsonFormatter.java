@@ -318,7 +318,8 @@ final class JsonFormatter extends Layout {
             List<Object[]> items = new ArrayList<>();
             for (int i = 0; i < r.rows().size(); i++) {
                 for (int k = 0; k < r.cols().size(); k++) {
-                    items.add(new Object[] {r.rows().get(i), r.cols().get(k), r.recurrences().get(i).get(k)});
+                    String to = r.toStates().isEmpty() ? r.cols().get(k) : String.join(",", r.toStates());
+                    items.add(new Object[] {r.rows().get(i), to, r.recurrences().get(i).get(k)});
                 }
             }
             j.objects("recurrences", items, c -> {
