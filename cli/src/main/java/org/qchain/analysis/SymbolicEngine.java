@@ -24,6 +24,7 @@ import org.qchain.symbolic.check.CheckReport;
 import org.qchain.symbolic.check.Finding;
 import org.qchain.symbolic.check.ParameterCheck;
 import org.qchain.symbolic.closed.ClosedForm;
+import org.qchain.symbolic.closed.Combination;
 import org.qchain.symbolic.closed.ClosedForms;
 import org.qchain.symbolic.closed.Eigenvalue;
 import org.qchain.symbolic.closed.LongRun;
@@ -505,13 +506,79 @@ final class SymbolicEngine {
         Model m = model.model();
         // the symbolic check, as for every symbolic query: rows must sum to 1 identically
         Checked ctx = checked(model);
-        Optional<Integer> row = q.from().map(s -> model.state(q.fromName(), s));
-        Optional<Integer> col = q.to().map(s -> model.state("--to", s));
+        Cells cells = Cells.of(model, q);
         SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
         ClosedResult r = q.form() == ClosedResult.Form.MATRIX
-            ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), row, col, ctx)
-            : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), row, col);
-        return model.given().isEmpty() ? r : substituted(r, model.given());
+            ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), cells, ctx)
+            : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), cells);
+        r = model.given().isEmpty() ? r : substituted(r, model.given());
+        return cells.combined ? r.withStart(cells.startWeights, cells.toStates) : r;
+    }
+
+    /**
+     * The cells a closed-form query prints: rows (each state, one starting state, or one start distribution) by
+     * columns (each state, one final state, or one set of final states), each cell one {@link Combination} of the
+     * entries of P^n, with the labels the result shows.
+     */
+    private record Cells(List<String> rowLabels, List<String> colLabels, List<List<Combination>> grid,
+                         ClosedResult.Selection selection, boolean combined, Map<String, Rational> startWeights,
+                         List<String> toStates) {
+        static Cells of(LoadedModel model, ClosedQuery q) {
+            int s = model.model().size();
+            List<Map<Integer, Rational>> rows = new ArrayList<>();
+            List<String> rowLabels = new ArrayList<>();
+            Map<String, Rational> weights = new LinkedHashMap<>();
+            if (q.start().isPresent()) {
+                Start st = q.start().get();
+                Map<Integer, Rational> w = new LinkedHashMap<>();
+                st.weights().forEach((name, v) -> w.put(model.state(st.option(), name), v));
+                weights.putAll(st.weights());
+                rows.add(w);
+                rowLabels.add(st.text());
+            } else {
+                for (int i = 0; i < s; i++) {
+                    rows.add(Map.of(i, Rational.ONE));
+                    rowLabels.add(model.model().states().get(i));
+                }
+            }
+            List<List<Integer>> cols = new ArrayList<>();
+            List<String> colLabels = new ArrayList<>();
+            if (!q.toStates().isEmpty()) {
+                List<Integer> c = new ArrayList<>();
+                for (String t : q.toStates()) {
+                    c.add(model.state("--to", t));
+                }
+                cols.add(c);
+                colLabels.add(q.toStates().size() == 1 ? q.toStates().get(0)
+                    : "{" + String.join(", ", q.toStates()) + "}");
+            } else {
+                for (int j = 0; j < s; j++) {
+                    cols.add(List.of(j));
+                    colLabels.add(model.model().states().get(j));
+                }
+            }
+            List<List<Combination>> grid = new ArrayList<>();
+            for (Map<Integer, Rational> r : rows) {
+                List<Combination> line = new ArrayList<>();
+                for (List<Integer> c : cols) {
+                    line.add(r.size() == 1 && c.size() == 1 && r.values().iterator().next().isOne()
+                        ? Combination.entry(r.keySet().iterator().next(), c.get(0)) : Combination.of(r, c));
+                }
+                grid.add(line);
+            }
+            ClosedResult.Selection sel = !q.toStates().isEmpty() ? ClosedResult.Selection.ENTRY
+                : (q.start().isPresent() ? ClosedResult.Selection.ROW : ClosedResult.Selection.MATRIX);
+            // a start given as --start, or a set of final states: the result names them (as step does)
+            boolean combined = q.start().isPresent() && (q.fromName().equals("--start") || q.toStates().size() > 1);
+            return new Cells(rowLabels, colLabels, grid, sel, combined, weights, q.toStates());
+        }
+
+        /** Every cell, row by row. */
+        List<Combination> all() {
+            List<Combination> out = new ArrayList<>();
+            grid.forEach(out::addAll);
+            return out;
+        }
     }
 
     /** The result with the values given with --at, which were substituted before the closed form was found. */
@@ -521,32 +588,7 @@ final class SymbolicEngine {
         return new ClosedResult(r.source(), r.form(), r.nSymbol(), r.validFrom(), r.conditions(), r.notProved(),
             r.states(), r.parameters(), r.selection(), r.rows(), r.cols(), r.cells(), r.recurrences(), r.eigenvalues(),
             r.longRun(), r.roots(), r.point(), r.digits(), r.warnings(), r.names(), r.where(), r.namedCells(),
-            r.factored(), ordered);
-    }
-
-    private static List<Integer> indices(Model m, Optional<Integer> pick) {
-        List<Integer> out = new ArrayList<>();
-        if (pick.isPresent()) {
-            out.add(pick.get());
-        } else {
-            for (int i = 0; i < m.size(); i++) {
-                out.add(i);
-            }
-        }
-        return out;
-    }
-
-    private static List<String> names(Model m, List<Integer> idx) {
-        List<String> out = new ArrayList<>();
-        for (int i : idx) {
-            out.add(m.states().get(i));
-        }
-        return out;
-    }
-
-    private static ClosedResult.Selection selection(Optional<Integer> row, Optional<Integer> col) {
-        return col.isPresent() ? ClosedResult.Selection.ENTRY
-            : (row.isPresent() ? ClosedResult.Selection.ROW : ClosedResult.Selection.MATRIX);
+            r.factored(), ordered, r.start(), r.toStates());
     }
 
     /** The values at which numbers are shown: the given ones, then nominal values; empty unless all are known. */
@@ -562,21 +604,19 @@ final class SymbolicEngine {
         return Optional.of(new Point(p, model.given().keySet()));
     }
 
-    private static ClosedResult fromClosedForm(LoadedModel model, ClosedQuery q, ClosedForm cf,
-                                               Optional<Integer> row, Optional<Integer> col, Checked ctx) {
+    private static ClosedResult fromClosedForm(LoadedModel model, ClosedQuery q, ClosedForm cf, Cells sel,
+                                               Checked ctx) {
         Model m = model.model();
-        List<Integer> ri = indices(m, row);
-        List<Integer> ci = indices(m, col);
         List<List<Formula>> cells = new ArrayList<>();
         List<List<Formula>> namedCells = new ArrayList<>();
         int validFrom = 0;
-        for (int i : ri) {
+        for (List<Combination> row : sel.grid()) {
             List<Formula> line = new ArrayList<>();
             List<Formula> named = new ArrayList<>();
-            for (int j : ci) {
-                line.add(Formula.of(cf.plain(i, j, false, q.factor()), cf.latex(i, j, false, q.factor())));
-                named.add(Formula.of(cf.plain(i, j, true, q.factor()), cf.latex(i, j, true, q.factor())));
-                validFrom = Math.max(validFrom, cf.validFrom(i, j));
+            for (Combination c : row) {
+                line.add(Formula.of(cf.plain(c, false, q.factor()), cf.latex(c, false, q.factor())));
+                named.add(Formula.of(cf.plain(c, true, q.factor()), cf.latex(c, true, q.factor())));
+                validFrom = Math.max(validFrom, cf.validFrom(c));
             }
             cells.add(line);
             namedCells.add(named);
@@ -632,25 +672,24 @@ final class SymbolicEngine {
         LongRun lr = cf.longRun(q.factor());
         List<List<List<Formula>>> limits = new ArrayList<>();
         for (int k = 0; k < lr.limits().size(); k++) {
-            List<List<String>> full = lr.limits().get(k);
-            List<List<String>> fullLatex = lr.limitsLatex().get(k);
             List<List<Formula>> picked = new ArrayList<>();
-            for (int i : ri) {
+            for (List<Combination> row : sel.grid()) {
                 List<Formula> r = new ArrayList<>();
-                for (int j : ci) {
-                    r.add(Formula.of(full.get(i).get(j), fullLatex.get(i).get(j)));
+                for (Combination c : row) {
+                    List<String> f = cf.limits(c, q.factor()).get(k);
+                    r.add(Formula.of(f.get(0), f.get(1)));
                 }
                 picked.add(r);
             }
             limits.add(picked);
         }
         List<List<List<Rational>>> values = new ArrayList<>();
-        for (RationalMatrix full : limitValues) {
+        for (int k = 0; k < limitValues.size(); k++) {
             List<List<Rational>> picked = new ArrayList<>();
-            for (int i : ri) {
+            for (List<Combination> row : sel.grid()) {
                 List<Rational> r = new ArrayList<>();
-                for (int j : ci) {
-                    r.add(full.get(i, j));
+                for (Combination c : row) {
+                    r.add(cf.longRunAt(c, pt.orElseThrow().values()).get(k));
                 }
                 picked.add(r);
             }
@@ -666,10 +705,24 @@ final class SymbolicEngine {
         }
         ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits,
             Formula.of(lr.rate(), lr.rateLatex()), rateValue,
-            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(), lr.exactFrom(), values);
-        return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, cf.conditions(),
-            cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),
-            names(m, ci), cells, List.of(), eig, Optional.of(longRun), roots,
+            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(),
+            // the printed cells are exactly periodic (or constant) from their own valid-from on
+            Math.min(lr.exactFrom(), validFrom), values);
+        // the conditions of the printed formulas only (a combination's cancelled terms need none), in the order of
+        // the whole matrix's conditions
+        List<String> conditions = cf.conditions();
+        List<String> notProved = cf.conditionsNotProved(domains);
+        if (sel.selection() != ClosedResult.Selection.MATRIX) {
+            java.util.Set<String> own = new java.util.HashSet<>();
+            for (Combination c : sel.all()) {
+                own.addAll(cf.conditions(c));
+            }
+            conditions = conditions.stream().filter(own::contains).toList();
+            notProved = notProved.stream().filter(own::contains).toList();
+        }
+        return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, conditions,
+            notProved, m.states(), cf.parameters(), sel.selection(), sel.rowLabels(),
+            sel.colLabels(), cells, List.of(), eig, Optional.of(longRun), roots,
             pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()), where,
             where.isEmpty() ? List.of() : namedCells, q.factor());
     }
@@ -687,22 +740,20 @@ final class SymbolicEngine {
         return new ClosedResult.Names(s.step(), s.period(), s.variable(), s.series(), s.sequence());
     }
 
-    private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Optional<Integer> row,
-                                           Optional<Integer> col) {
-        List<Integer> ri = indices(m, row);
-        List<Integer> ci = indices(m, col);
+    private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Cells sel) {
         List<List<Formula>> cells = new ArrayList<>();
         List<List<ClosedResult.Recurrence>> recs = new ArrayList<>();
         int validFrom = 0;
         boolean gf = q.form() == ClosedResult.Form.GF;
-        for (int i : ri) {
+        for (List<Combination> row : sel.grid()) {
             List<Formula> line = new ArrayList<>();
             List<ClosedResult.Recurrence> rr = new ArrayList<>();
-            for (int j : ci) {
+            for (Combination c : row) {
                 if (gf) {
-                    line.add(Formula.of(sf.generatingFunction(i, j).plain(), sf.generatingFunction(i, j).latex()));
+                    org.qchain.symbolic.closed.GeneratingFunction g = sf.generatingFunction(c);
+                    line.add(Formula.of(g.plain(), g.latex()));
                 } else {
-                    Recurrence r = sf.recurrence(i, j);
+                    Recurrence r = sf.recurrence(c);
                     line.add(Formula.of(r.plain(), r.latex()));
                     rr.add(new ClosedResult.Recurrence(formulas(r.coefficients(), r.coefficientsLatex()), r.validFrom(),
                         formulas(r.initial(), r.initialLatex())));
@@ -715,7 +766,7 @@ final class SymbolicEngine {
             }
         }
         return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(), List.of(),
-            m.states(), sf.parameters(), selection(row, col), names(m, ri), names(m, ci), cells, recs, List.of(),
+            m.states(), sf.parameters(), sel.selection(), sel.rowLabels(), sel.colLabels(), cells, recs, List.of(),
             Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of(), names(sf.symbols()));
     }
 

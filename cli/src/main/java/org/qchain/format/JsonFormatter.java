@@ -280,10 +280,24 @@ final class JsonFormatter extends Layout {
             .strings("states", r.states());
         switch (r.selection()) {
             case ENTRY:
-                j.string("from", r.rows().get(0)).string("to", r.cols().get(0)).string("formula", cells.get(0).get(0));
+                // with --start or a --to set, as step's entry shape: the start's probabilities and the states of --to
+                j.string("from", r.rows().get(0));
+                if (!r.start().isEmpty()) {
+                    j.object("start", startJson(r));
+                }
+                j.string("to", r.toStates().isEmpty() ? r.cols().get(0) : String.join(",", r.toStates()));
+                if (!r.toStates().isEmpty()) {
+                    j.strings("to_states", r.toStates());
+                }
+                j.string("formula", cells.get(0).get(0));
                 break;
             case ROW:
-                j.string("start", r.rows().get(0)).strings("row", cells.get(0));
+                // "start" is the row's start as text (a state, or Healthy=3/5, Ill=2/5); the probabilities apart
+                j.string("start", r.rows().get(0));
+                if (!r.start().isEmpty()) {
+                    j.object("start_distribution", startJson(r));
+                }
+                j.strings("row", cells.get(0));
                 break;
             default:
                 j.stringRows("matrix", cells);
@@ -304,7 +318,8 @@ final class JsonFormatter extends Layout {
             List<Object[]> items = new ArrayList<>();
             for (int i = 0; i < r.rows().size(); i++) {
                 for (int k = 0; k < r.cols().size(); k++) {
-                    items.add(new Object[] {r.rows().get(i), r.cols().get(k), r.recurrences().get(i).get(k)});
+                    String to = r.toStates().isEmpty() ? r.cols().get(k) : String.join(",", r.toStates());
+                    items.add(new Object[] {r.rows().get(i), to, r.recurrences().get(i).get(k)});
                 }
             }
             j.objects("recurrences", items, c -> {
@@ -352,6 +367,13 @@ final class JsonFormatter extends Layout {
                 .string("variable", names.variable()).string("series", names.series())
                 .string("sequence", names.sequence()));
         return j.close() + "\n";
+    }
+
+    /** The start's probabilities, {@code {"Healthy":"3/5","Ill":"2/5"}}. */
+    private static Json startJson(ClosedResult r) {
+        Json o = Json.object();
+        r.start().forEach((k, v) -> o.string(k, v.toString()));
+        return o;
     }
 
     private static Json limitJson(ClosedResult r, int k, List<List<String>> grid, List<List<List<String>>> dec) {

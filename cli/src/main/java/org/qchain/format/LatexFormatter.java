@@ -313,6 +313,9 @@ final class LatexFormatter extends Layout {
             sb.append("% substituted before solving (given with --at): ").append(Text.comment(r.substitutedText()))
                 .append('\n');
         }
+        if (!Closed.combinationNote(r).isEmpty()) {
+            sb.append("% ").append(Text.comment(Closed.combinationNote(r))).append('\n');
+        }
         if (!Closed.factoredNote(r).isEmpty()) {
             sb.append("% ").append(Closed.factoredNote(r)).append(" det(").append(r.names().variable())
                 .append("I - P) = ").append(Closed.characteristicPolynomial(r)).append('\n');

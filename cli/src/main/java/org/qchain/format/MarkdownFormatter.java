@@ -252,6 +252,9 @@ final class MarkdownFormatter extends Layout {
         if (!Closed.factoredNote(r).isEmpty()) {
             sb.append(' ').append(Closed.factoredNote(r));
         }
+        if (!Closed.combinationNote(r).isEmpty()) {
+            sb.append(' ').append(Text.markdown(Closed.combinationNote(r)));
+        }
         if (!r.substituted().isEmpty()) {
             sb.append(" Substituted before solving (given with --at): `").append(Text.code(r.substitutedText()))
                 .append("`.");

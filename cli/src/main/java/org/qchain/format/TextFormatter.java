@@ -389,6 +389,9 @@ final class TextFormatter extends Layout {
         if (!Closed.factoredNote(r).isEmpty()) {
             sb.append(Closed.factoredNote(r)).append('\n');
         }
+        if (!Closed.combinationNote(r).isEmpty()) {
+            sb.append(Closed.combinationNote(r)).append('\n');
+        }
         sb.append('\n');
         List<String> labels = new ArrayList<>();
         List<String> values = new ArrayList<>();

@@ -107,17 +107,35 @@ public final class ClosedForm {
     // --- the formulas ------------------------------------------------------------------------------------------
 
     private Fml buildFormula(int i, int j, boolean named) {
-        return buildFormula(i, j, named, false);
+        return buildFormula(cell(i, j), named, false);
     }
 
-    private Fml buildFormula(int i, int j, boolean named, boolean factored) {
+    /**
+     * The formula of a combination of entries: each group's coefficient matrices are combined first
+     * ({@link Combination#apply}), so a term whose combined coefficient is 0 vanishes.
+     */
+    private Fml buildFormula(Cell cell, boolean named, boolean factored) {
         List<Fml> terms = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g != zero) {
-                terms.add(term(g, i, j, named, factored));
+                terms.add(term(g, cell, named, factored));
             }
         }
         return Fml.sum(terms);
+    }
+
+    /** Which value of a coefficient matrix a formula takes: one entry, or a combination of entries. */
+    @FunctionalInterface
+    interface Cell extends java.util.function.Function<Quotient<BigRational>[][], Quotient<BigRational>> {
+    }
+
+    private static Cell cell(int i, int j) {
+        return m -> m[i][j];
+    }
+
+    private Cell cell(Combination c) {
+        c.check(size);
+        return m -> c.apply(field, m);
     }
 
     /** A coefficient, expanded or with numerator and denominator factored over the rationals. */
@@ -132,7 +150,31 @@ public final class ClosedForm {
             return named ? namedFormulas[i][j] : formulas[i][j];
         }
         return printedCache.computeIfAbsent(i + "," + j + "," + named,
-            key -> buildFormula(i, j, named && !definitions.isEmpty(), true));
+            key -> buildFormula(cell(i, j), named && !definitions.isEmpty(), true));
+    }
+
+    private Fml printed(Combination c, boolean named, boolean factored) {
+        if (c.isEntry()) {
+            return printed(c.row(), c.col(), named, factored);
+        }
+        return printedCache.computeIfAbsent(c.key() + "," + named + "," + factored,
+            key -> buildFormula(cell(c), named && !definitions.isEmpty(), factored));
+    }
+
+    /**
+     * The formula of a combination of entries ({@code sum_i s_i sum_(j in To) P^n(i, j)}), plain syntax, as
+     * {@link #plain(int, int, boolean, boolean)}: built from the combined coefficients, so it is as simple as the
+     * combined quantity. Valid for {@code n >= validFrom(c)} under {@link #conditions(Combination)}.
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public String plain(Combination c, boolean named, boolean factored) {
+        return Fml.plain(printed(c, named, factored));
+    }
+
+    /** {@link #plain(Combination, boolean, boolean)} in LaTeX. */
+    public String latex(Combination c, boolean named, boolean factored) {
+        return Fml.latex(printed(c, named, factored));
     }
 
     /**
@@ -161,12 +203,12 @@ public final class ClosedForm {
         return Fml.name(name);
     }
 
-    private Fml term(Spectral.Group g, int i, int j, boolean named, boolean factored) {
+    private Fml term(Spectral.Group g, Cell cell, boolean named, boolean factored) {
         List<Fml> terms = new ArrayList<>();
         switch (g.kind) {
             case LINEAR:
                 for (int k = 0; k < g.nilpotent.size(); k++) {
-                    Quotient<BigRational> c = g.nilpotent.get(k)[i][j];
+                    Quotient<BigRational> c = cell.apply(g.nilpotent.get(k));
                     if (c.isZERO()) {
                         continue;
                     }
@@ -186,8 +228,8 @@ public final class ClosedForm {
                 Fml sqrt = named ? Fml.name(nm[0]) : Fml.call("sqrt", field.formula(g.delta));
                 List<Fml> roots = named ? List.of(nameAtom(nm[1]), nameAtom(nm[2])) : quadraticRoots(g);
                 for (int k = 0; k < g.x.size(); k++) {
-                    Quotient<BigRational> x = g.x.get(k)[i][j];
-                    Quotient<BigRational> y = g.y.get(k)[i][j];
+                    Quotient<BigRational> x = cell.apply(g.x.get(k));
+                    Quotient<BigRational> y = cell.apply(g.y.get(k));
                     Fml exponent = shifted(-k);
                     Fml l1n = Fml.pow(roots.get(0), exponent);
                     Fml l2n = Fml.pow(roots.get(1), exponent);
@@ -204,7 +246,7 @@ public final class ClosedForm {
             default:
                 for (int k = 0; k < g.c.size(); k++) {
                     for (int t = 0; t < g.degree; t++) {
-                        Quotient<BigRational> c = g.c.get(k).get(t)[i][j];
+                        Quotient<BigRational> c = cell.apply(g.c.get(k).get(t));
                         if (!c.isZERO()) {
                             terms.add(Fml.prod(List.of(coefficient(c, factored), binomial(k),
                                 Fml.call("rootsum", shifted(t - k), Fml.name(g.name)))));
@@ -229,6 +271,84 @@ public final class ClosedForm {
 
     private List<GenPolynomial<BigRational>> collectConditions() {
         return SpectralParts.conditionPolys(field, spectral.groups, zero);
+    }
+
+    /**
+     * The irreducible factors of every denominator in the formulas of a combination's cell, and of the
+     * radicand under a square root in a denominator. For a combination only the groups with a nonzero combined
+     * coefficient count, and a quadratic's radicand only with a nonzero coefficient of its {@code /sqrt(D)} term:
+     * for fixed n, P^n and the formula agree on a dense set of parameter values and both are continuous wherever
+     * the formula's parts are defined, so they agree there too (common practice, no source).
+     */
+    private List<GenPolynomial<BigRational>> collectConditions(Cell cell) {
+        Map<String, GenPolynomial<BigRational>> out = new TreeMap<>();
+        Map<GenPolynomial<BigRational>, Boolean> seen = new LinkedHashMap<>();
+        for (Spectral.Group g : spectral.groups) {
+            if (g == zero) {
+                continue;
+            }
+            List<Quotient<BigRational>> used = new ArrayList<>(combined(g, cell, false));
+            List<Quotient<BigRational>> ys = combined(g, cell, true);
+            boolean overRoot = !ys.isEmpty();
+            used.addAll(ys);
+            if (used.isEmpty()) {
+                continue; // the group does not occur in this formula
+            }
+            used.addAll(List.of(g.coeffs));
+            if (g.kind == Spectral.Kind.QUADRATIC) {
+                used.add(g.delta);
+                // sqrt(D) stands in a denominator: D != 0
+                if (overRoot) {
+                    for (GenPolynomial<BigRational> p : field.irreducibleFactors(g.delta.num)) {
+                        out.put(SpectralParts.key(field, p), p);
+                    }
+                }
+            }
+            for (Quotient<BigRational> q : used) {
+                if (!q.den.isConstant() && seen.put(q.den, Boolean.TRUE) == null) {
+                    for (GenPolynomial<BigRational> p : field.irreducibleFactors(q.den)) {
+                        out.put(SpectralParts.key(field, p), p);
+                    }
+                }
+            }
+        }
+        List<GenPolynomial<BigRational>> list = new ArrayList<>(out.values());
+        list.sort(Comparator.comparingLong((GenPolynomial<BigRational> p) -> p.totalDegree()).thenComparing(p -> SpectralParts.key(field, p)));
+        return List.copyOf(list);
+    }
+
+    /**
+     * The nonzero combined coefficients of a group in a cell: with {@code overRoot} only those of a quadratic's
+     * {@code (l1^m - l2^m)/sqrt(D)} terms, else all others.
+     */
+    private static List<Quotient<BigRational>> combined(Spectral.Group g, Cell cell, boolean overRoot) {
+        List<Quotient<BigRational>> out = new ArrayList<>();
+        List<Quotient<BigRational>[][]> ms = new ArrayList<>();
+        if (overRoot) {
+            if (g.kind == Spectral.Kind.QUADRATIC) {
+                ms.addAll(g.y);
+            }
+        } else if (g.kind == Spectral.Kind.LINEAR) {
+            ms.addAll(g.nilpotent);
+        } else if (g.kind == Spectral.Kind.QUADRATIC) {
+            ms.addAll(g.x);
+        } else {
+            for (List<Quotient<BigRational>[][]> ck : g.c) {
+                ms.addAll(ck);
+            }
+        }
+        for (Quotient<BigRational>[][] m : ms) {
+            Quotient<BigRational> q = cell.apply(m);
+            if (!q.isZERO()) {
+                out.add(q);
+            }
+        }
+        return out;
+    }
+
+    /** Whether the group contributes to the cell (some combined coefficient is not 0). */
+    private static boolean occurs(Spectral.Group g, Cell cell) {
+        return !combined(g, cell, false).isEmpty() || !combined(g, cell, true).isEmpty();
     }
 
     private String key(GenPolynomial<BigRational> p) {
@@ -283,6 +403,60 @@ public final class ClosedForm {
      */
     public int validFrom(int i, int j) {
         return validFromEntry[i][j];
+    }
+
+    /**
+     * The least n from which the formula of a combination holds: past the Jordan index of eigenvalue 0 in the
+     * combined coefficients (0 when they cancel).
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public int validFrom(Combination c) {
+        Cell cell = cell(c);
+        int v = 0;
+        if (zero != null) {
+            for (int k = 0; k < zero.nilpotent.size(); k++) {
+                if (!cell.apply(zero.nilpotent.get(k)).isZERO()) {
+                    v = k + 1;
+                }
+            }
+        }
+        return v;
+    }
+
+    private final Map<String, List<GenPolynomial<BigRational>>> conditionCache =
+        new java.util.concurrent.ConcurrentHashMap<>();
+
+    private List<GenPolynomial<BigRational>> conditionPolys(Combination c) {
+        return conditionCache.computeIfAbsent(c.key(), k -> collectConditions(cell(c)));
+    }
+
+    /**
+     * The conditions under which the formula of a combination holds, as {@link #conditions()}: those of the
+     * denominators and square roots that remain in its own formula (a subset of {@link #conditions()}).
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public List<String> conditions(Combination c) {
+        List<String> out = new ArrayList<>();
+        for (GenPolynomial<BigRational> p : conditionPolys(c)) {
+            out.add(Fml.plain(field.formula(p)) + " != 0");
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The conditions of {@link #conditions(Combination)} not shown to hold throughout the domains, as
+     * {@link #conditionsNotProved(Map)}.
+     */
+    public List<String> conditionsNotProved(Combination c, Map<String, Domain> domains) {
+        List<String> out = new ArrayList<>();
+        for (GenPolynomial<BigRational> p : conditionPolys(c)) {
+            if (!DomainCheck.holdsThroughout(field, p, domains)) {
+                out.add(Fml.plain(field.formula(p)) + " != 0");
+            }
+        }
+        return List.copyOf(out);
     }
 
     /**
@@ -473,8 +647,110 @@ public final class ClosedForm {
         return ParamField.rational(s);
     }
 
+    /**
+     * A combination of entries of P^n evaluated exactly at a parameter point, from its own closed form (for n
+     * below {@link #validFrom(Combination)} from the initial terms).
+     *
+     * @param n  the step count, at least 0
+     * @param c  the combination
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return the exact value
+     * @throws IllegalArgumentException  if n is negative
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     * @throws QchainException           with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value, or
+     *                                   {@link ErrorKey#CLOSED_FORM_CONDITION} if a condition of
+     *                                   {@link #conditions(Combination)} fails at the point
+     */
+    public Rational evaluate(long n, Combination c, Map<String, Rational> at) {
+        if (n < 0) {
+            throw new IllegalArgumentException("n must not be negative: " + n);
+        }
+        Cell cell = cell(c);
+        checkPoint(at, conditionPolys(c));
+        if (n < validFrom(c)) {
+            return ParamField.rational(substitute(cell.apply(spectral.series.powers.get((int) n)), at));
+        }
+        Evaluator<BigRational> ev = new Evaluator<>(BigRational.ZERO, q -> substitute(q, at));
+        BigRational s = BigRational.ZERO;
+        for (Spectral.Group g : spectral.groups) {
+            if (g != zero && occurs(g, cell)) {
+                s = s.sum(ev.entry(g, n, cell));
+            }
+        }
+        return ParamField.rational(s);
+    }
+
+    /**
+     * The long-run limits of a combination, as {@link #longRun(boolean)} gives them for the entries: the limit of
+     * its value at n = dm + r as m grows, r = 0 .. d - 1, each the combination of the limit matrices' entries,
+     * combined before printing.
+     *
+     * @param c        the combination
+     * @param factored numerators and denominators factored over the rationals
+     * @return d formulas, each as plain text then LaTeX
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public List<List<String>> limits(Combination c, boolean factored) {
+        Cell cell = cell(c);
+        int d = period();
+        Evaluator<Quotient<BigRational>> ev = new Evaluator<>(field.field, q -> q);
+        List<List<String>> out = new ArrayList<>();
+        for (int r = 0; r < d; r++) {
+            Quotient<BigRational> s = field.zero();
+            for (Spectral.Group g : spectral.groups) {
+                if (g.unitOrder > 0) {
+                    s = s.sum(ev.entry(g, r, cell));
+                }
+            }
+            Fml f = coefficient(s, factored);
+            out.add(List.of(Fml.plain(f), Fml.latex(f)));
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The limits of {@link #limits(Combination, boolean)} at a parameter point, exactly.
+     *
+     * @param c  the combination
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return d exact values
+     * @throws QchainException as {@link #evaluate(long, Combination, Map)}
+     */
+    public List<Rational> longRunAt(Combination c, Map<String, Rational> at) {
+        Cell cell = cell(c);
+        checkPoint(at, conditionPolys(c));
+        int d = period();
+        Evaluator<BigRational> ev = new Evaluator<>(BigRational.ZERO, q -> substitute(q, at));
+        List<Rational> out = new ArrayList<>();
+        for (int r = 0; r < d; r++) {
+            BigRational s = BigRational.ZERO;
+            for (Spectral.Group g : spectral.groups) {
+                if (g.unitOrder > 0) {
+                    s = s.sum(ev.entry(g, r, cell));
+                }
+            }
+            out.add(ParamField.rational(s));
+        }
+        return List.copyOf(out);
+    }
+
+    /** The period d of the long run: the lcm of the orders of the eigenvalues that are roots of unity. */
+    private int period() {
+        int d = 1;
+        for (Spectral.Group g : spectral.groups) {
+            if (g.unitOrder > 0) {
+                d = lcm(d, g.unitOrder);
+            }
+        }
+        return d;
+    }
+
     private void checkPoint(Map<String, Rational> at) {
         SpectralParts.checkPoint(field, conditionPolys, at);
+    }
+
+    private void checkPoint(Map<String, Rational> at, List<GenPolynomial<BigRational>> polys) {
+        SpectralParts.checkPoint(field, polys, at);
     }
 
     private BigRational substitute(Quotient<BigRational> q, Map<String, Rational> at) {

@@ -63,18 +63,36 @@ public final class SeriesForm {
 
     /** Numerator and denominator in z of entry (i, j) of (I - zP)^-1, reduced, denominator(0) = 1. */
     List<GenPolynomial<Quotient<BigRational>>> gfParts(int i, int j) {
-        // adj(I - zP) = sum_k B_k z^k with B_k = sum_{m<=k} c_m P^(k-m); det(I - zP) = sum_k c_k z^k
         List<GenPolynomial<Quotient<BigRational>>> cached = gfCache[i][j];
         if (cached != null) {
             return cached;
         }
+        List<GenPolynomial<Quotient<BigRational>>> out = gfParts(m -> m[i][j]);
+        gfCache[i][j] = out;
+        return out;
+    }
+
+    private final Map<String, List<GenPolynomial<Quotient<BigRational>>>> combinedCache =
+        new java.util.concurrent.ConcurrentHashMap<>();
+
+    /** As {@link #gfParts(int, int)} for a combination: the adjugate's coefficients combined before reducing. */
+    List<GenPolynomial<Quotient<BigRational>>> gfParts(Combination c) {
+        if (c.isEntry()) {
+            return gfParts(c.row(), c.col());
+        }
+        c.check(size);
+        return combinedCache.computeIfAbsent(c.key(), k -> gfParts(m -> c.apply(field, m)));
+    }
+
+    private List<GenPolynomial<Quotient<BigRational>>> gfParts(ClosedForm.Cell cell) {
+        // adj(I - zP) = sum_k B_k z^k with B_k = sum_{m<=k} c_m P^(k-m); det(I - zP) = sum_k c_k z^k
         GenPolynomial<Quotient<BigRational>> num = field.univariate.getZERO();
         GenPolynomial<Quotient<BigRational>> den = field.univariate.getZERO();
         List<Quotient<BigRational>> c = series.charCoeffs;
         for (int k = 0; k <= size; k++) {
             den = den.sum(c.get(k), ExpVector.create(1, 0, k));
             if (k < size) {
-                num = num.sum(series.adjugate.get(k)[i][j], ExpVector.create(1, 0, k));
+                num = num.sum(cell.apply(series.adjugate.get(k)), ExpVector.create(1, 0, k));
             }
         }
         List<GenPolynomial<Quotient<BigRational>>> out;
@@ -100,7 +118,6 @@ public final class SeriesForm {
             Quotient<BigRational> d0 = den.trailingBaseCoefficient();
             out = List.of(num.divide(d0), den.divide(d0));
         }
-        gfCache[i][j] = out;
         return out;
     }
 
@@ -120,6 +137,16 @@ public final class SeriesForm {
      */
     public GeneratingFunction generatingFunction(int i, int j) {
         return printed(gfParts(i, j), symbols.series(), false);
+    }
+
+    /**
+     * The generating function of a combination of entries, {@code sum_n (sum_i s_i sum_(j in To) P^n(i, j)) z^n}:
+     * the combined adjugate over det(I - zP), reduced by the factors it shares with the denominator.
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public GeneratingFunction generatingFunction(Combination c) {
+        return printed(gfParts(c), symbols.series(), false);
     }
 
     /**
@@ -201,7 +228,10 @@ public final class SeriesForm {
 
     /** r_1 .. r_d and the first n from which u(n) = sum r_k u(n - k) holds, for entry (i, j). */
     List<Quotient<BigRational>> recurrenceCoefficients(int i, int j) {
-        List<GenPolynomial<Quotient<BigRational>>> parts = gfParts(i, j);
+        return recurrenceCoefficients(gfParts(i, j));
+    }
+
+    private List<Quotient<BigRational>> recurrenceCoefficients(List<GenPolynomial<Quotient<BigRational>>> parts) {
         GenPolynomial<Quotient<BigRational>> den = parts.get(1);
         int d = (int) den.degree(0);
         Quotient<BigRational>[] a = Spectral.coefficients(field, den, d);
@@ -213,7 +243,10 @@ public final class SeriesForm {
     }
 
     int recurrenceStart(int i, int j) {
-        List<GenPolynomial<Quotient<BigRational>>> parts = gfParts(i, j);
+        return recurrenceStart(gfParts(i, j));
+    }
+
+    private static int recurrenceStart(List<GenPolynomial<Quotient<BigRational>>> parts) {
         long dn = parts.get(0).isZERO() ? -1 : parts.get(0).degree(0);
         return (int) Math.max(parts.get(1).degree(0), dn + 1);
     }
@@ -224,8 +257,22 @@ public final class SeriesForm {
      * @throws IndexOutOfBoundsException if i or j is out of range
      */
     public Recurrence recurrence(int i, int j) {
-        List<Quotient<BigRational>> r = recurrenceCoefficients(i, j);
-        int start = recurrenceStart(i, j);
+        return recurrence(gfParts(i, j), m -> m[i][j]);
+    }
+
+    /**
+     * The linear recurrence of a combination of entries with its initial values: the recurrence its reduced
+     * generating function gives, which may be shorter than that of any entry in it.
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public Recurrence recurrence(Combination c) {
+        return recurrence(gfParts(c), m -> c.apply(field, m));
+    }
+
+    private Recurrence recurrence(List<GenPolynomial<Quotient<BigRational>>> parts, ClosedForm.Cell cell) {
+        List<Quotient<BigRational>> r = recurrenceCoefficients(parts);
+        int start = recurrenceStart(parts);
         List<String> coeffs = new ArrayList<>();
         List<String> coeffsLatex = new ArrayList<>();
         List<String> initValuesLatex = new ArrayList<>();
@@ -241,7 +288,7 @@ public final class SeriesForm {
         List<String> init = new ArrayList<>();
         List<String> initLatex = new ArrayList<>();
         for (int k = 0; k < start; k++) {
-            Fml v = field.formula(series.powers.get(k)[i][j]);
+            Fml v = field.formula(cell.apply(series.powers.get(k)));
             init.add(Fml.plain(v));
             initValuesLatex.add(Fml.latex(v));
             initLatex.add(Fml.latex(Fml.name(u)) + "(" + k + ") = " + Fml.latex(v));
