@@ -518,8 +518,7 @@ final class SymbolicEngine {
     private static ClosedResult substituted(ClosedResult r, Map<String, Rational> given) {
         Map<String, Rational> ordered = new java.util.LinkedHashMap<>();
         new java.util.TreeMap<>(given).forEach(ordered::put);
-        return new ClosedResult(r.source(), r.form(), r.nSymbol(), r.validFrom(), r.conditions(), r.notProved(),
-            r.states(), r.parameters(), r.selection(), r.rows(), r.cols(), r.cells(), r.recurrences(), r.eigenvalues(),
+        return new ClosedResult(r.source(), r.form(), r.nSymbol(), r.validFrom(), r.conditions(), r.states(), r.parameters(), r.selection(), r.rows(), r.cols(), r.cells(), r.recurrences(), r.eigenvalues(),
             r.longRun(), r.roots(), r.point(), r.digits(), r.warnings(), r.names(), r.where(), r.namedCells(),
             r.factored(), ordered);
     }
@@ -666,12 +665,22 @@ final class SymbolicEngine {
         }
         ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits,
             Formula.of(lr.rate(), lr.rateLatex()), rateValue,
-            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(), lr.exactFrom(), values);
-        return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, cf.conditions(),
-            cf.conditionsNotProved(domains), m.states(), cf.parameters(), selection(row, col), names(m, ri),
+            conditions(cf.longRunConditions(domains)), special, lr.exact(), lr.exactFrom(), values);
+        return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, conditions(cf.conditions(domains)),
+            m.states(), cf.parameters(), selection(row, col), names(m, ri),
             names(m, ci), cells, List.of(), eig, Optional.of(longRun), roots,
             pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()), where,
             where.isEmpty() ? List.of() : namedCells, q.factor());
+    }
+
+    /** The closed-form engine's conditions as result values: {@code left != right}, the domain fact kept. */
+    private static List<org.qchain.result.Condition> conditions(List<org.qchain.symbolic.closed.Condition> cs) {
+        List<org.qchain.result.Condition> out = new ArrayList<>();
+        for (org.qchain.symbolic.closed.Condition c : cs) {
+            out.add(org.qchain.result.Condition.notEqual(Formula.of(c.left(), c.leftLatex()), c.right(),
+                c.holdsThroughout()));
+        }
+        return out;
     }
 
     /** Formulas from the engine's two printed forms, pairwise. */
@@ -714,7 +723,7 @@ final class SymbolicEngine {
                 recs.add(rr);
             }
         }
-        return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(), List.of(),
+        return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(),
             m.states(), sf.parameters(), selection(row, col), names(m, ri), names(m, ci), cells, recs, List.of(),
             Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of(), names(sf.symbols()));
     }

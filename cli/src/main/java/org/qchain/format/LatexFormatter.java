@@ -302,7 +302,7 @@ final class LatexFormatter extends Layout {
         if (!r.isSeries()) {
             sb.append("% valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
-                sb.append(" where ").append(String.join(", ", r.conditions())).append('.');
+                sb.append(" where ").append(Closed.conditions(r.conditions())).append('.');
             }
             sb.append(Closed.domainNote(r)).append('\n');
         }

@@ -367,7 +367,7 @@ final class TextFormatter extends Layout {
         if (!r.isSeries()) {
             sb.append("Valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
-                sb.append(" where ").append(String.join(", ", r.conditions()));
+                sb.append(" where ").append(Closed.conditions(r.conditions()));
             }
             sb.append('.');
             sb.append(Closed.domainNote(r));

@@ -55,7 +55,7 @@ class EveryFormatTest {
 
     @Test
     void csvHasNoLayoutForClosedForms() {
-        ClosedResult r = new ClosedResult("m.chain", ClosedResult.Form.GF, "n", 0, List.of(), List.of(),
+        ClosedResult r = new ClosedResult("m.chain", ClosedResult.Form.GF, "n", 0, List.of(),
             List.of("A"), List.of(), ClosedResult.Selection.MATRIX, List.of("A"), List.of("A"),
             List.of(List.of(Formula.of("1/(1 - z)", "\\frac{1}{1 - z}"))), List.of(), List.of(), Optional.empty(),
             List.of(), Optional.empty(), 12, List.of());
