@@ -26,7 +26,7 @@ import org.qchain.result.VerifyResult;
  * plain CSV matrix form that the model parser reads back: the output of {@code step -n N --format csv} is itself a
  * valid model (the N-step chain).
  */
-final class CsvFormatter extends Layout {
+final class CsvFormatter extends DocLayout {
     CsvFormatter(int digits) {
         super(digits);
     }

@@ -559,11 +559,6 @@ final class JsonFormatter extends Layout {
 
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
-    @Override
-    String render(Sections.Doc d) {
-        throw new UnsupportedOperationException("JSON lays out its own fields");
-    }
-
     private static List<List<String>> plain(List<List<org.qchain.result.Formula>> m) {
         return m.stream().map(r -> r.stream().map(org.qchain.result.Formula::plain).toList()).toList();
     }

@@ -22,7 +22,7 @@ import org.qchain.result.VerifyResult;
  * LaTeX for reports: tabulars with {@code \frac} entries and state names as text (special characters escaped),
  * formulas in {@code align*}, the caution as a comment. Needs no package beyond standard LaTeX and amsmath.
  */
-final class LatexFormatter extends Layout {
+final class LatexFormatter extends DocLayout {
     LatexFormatter(int digits) {
         super(digits);
     }

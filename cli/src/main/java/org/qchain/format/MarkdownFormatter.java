@@ -19,7 +19,7 @@ import org.qchain.result.SymbolicStepResult;
 import org.qchain.result.VerifyResult;
 
 /** Markdown (pipe tables) for pasting into reports: exact values and decimals in tables, then the caution. */
-final class MarkdownFormatter extends Layout {
+final class MarkdownFormatter extends DocLayout {
     MarkdownFormatter(int digits) {
         super(digits);
     }

@@ -24,7 +24,7 @@ import org.qchain.result.VerifyResult;
  * exact fraction (exact last, so long fractions do not push other columns apart); for formulas, aligned tables; then
  * the caution.
  */
-final class TextFormatter extends Layout {
+final class TextFormatter extends DocLayout {
     /** Lines of the decimal overview stay within this many characters where they can. */
     static final int WIDTH = 100;
 
