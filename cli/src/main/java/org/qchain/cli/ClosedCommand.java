@@ -6,7 +6,6 @@ import org.qchain.analysis.Analysis;
 import org.qchain.analysis.ClosedQuery;
 import org.qchain.analysis.LoadedModel;
 import org.qchain.analysis.Start;
-import org.qchain.format.OutputFormat;
 import org.qchain.result.ClosedResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.ITypeConverter;
@@ -107,10 +106,6 @@ final class ClosedCommand implements Callable<Integer> {
             start = s.single().orElseThrow(() -> new ParameterException(spec.commandLine(), "closed --start takes one"
                 + " initial state (--start Healthy); the closed form from an initial distribution is not computed"
                 + " (step --start gives its exact values for given n)"));
-        }
-        if (output.format == OutputFormat.CSV) {
-            throw new ParameterException(spec.commandLine(),
-                "--format csv is not available for closed forms; use text, json, latex or markdown");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
