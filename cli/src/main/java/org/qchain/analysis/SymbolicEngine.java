@@ -828,7 +828,8 @@ final class SymbolicEngine {
                 org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(
                     ChainResults.graph(model, f, at));
                 if (!s.equals(generic)) {
-                    out.add(new org.qchain.result.ClassesResult.SpecialValue(e.getKey() + " = " + r,
+                    out.add(new org.qchain.result.ClassesResult.SpecialValue(org.qchain.result.Condition.equal(
+                        Formula.of(e.getKey(), org.qchain.symbolic.Formulas.latexName(e.getKey())), r, true),
                         effect(generic, s, model.states())));
                 }
             }
@@ -847,9 +848,9 @@ final class SymbolicEngine {
             org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(
                 ChainResults.graph(model, f, cut));
             if (!s.equals(generic)) {
-                out.add(new org.qchain.result.ClassesResult.SpecialValue(org.qchain.symbolic.Formulas.plain(c) + " = 0"
-                    + (v == Vanishing.UNDECIDED ? " (if it vanishes inside the domains: not decided)" : ""),
-                    effect(generic, s, model.states())));
+                out.add(new org.qchain.result.ClassesResult.SpecialValue(org.qchain.result.Condition.equal(
+                    Formula.of(org.qchain.symbolic.Formulas.plain(c), org.qchain.symbolic.Formulas.latex(c)),
+                    Rational.ZERO, v == Vanishing.SOMEWHERE), effect(generic, s, model.states())));
             }
         }
         return out;
@@ -923,24 +924,24 @@ final class SymbolicEngine {
             : Vanishing.UNDECIDED;
     }
 
-    /** What changes between two structures, in words. */
-    static String effect(org.qchain.exact.longrun.Structure generic, org.qchain.exact.longrun.Structure s,
-            List<String> names) {
-        List<String> parts = new ArrayList<>();
+    /** What changes between two structures: the states that become absorbing, and the classes when they change. */
+    static org.qchain.result.ClassesResult.Effect effect(org.qchain.exact.longrun.Structure generic,
+            org.qchain.exact.longrun.Structure s, List<String> names) {
+        List<String> absorbing = new ArrayList<>();
         for (int a : s.absorbing()) {
             if (!generic.absorbing().contains(a)) {
-                parts.add(names.get(a) + " can no longer leave");
+                absorbing.add(names.get(a));
             }
         }
-        if (parts.isEmpty() || !generic.classes().equals(s.classes())) {
-            List<String> cls = new ArrayList<>();
+        Optional<List<org.qchain.result.ClassesResult.ChainClass>> classes = Optional.empty();
+        if (absorbing.isEmpty() || !generic.classes().equals(s.classes())) {
+            List<org.qchain.result.ClassesResult.ChainClass> cls = new ArrayList<>();
             for (int c = 0; c < s.classes().size(); c++) {
-                cls.add("{" + String.join(", ", s.classes().get(c).stream().map(names::get).toList()) + "}"
-                    + (s.closed().get(c) ? " closed" : "") + (s.closed().get(c) && s.periods().get(c) > 1
-                    ? " period " + s.periods().get(c) : ""));
+                cls.add(new org.qchain.result.ClassesResult.ChainClass(s.classes().get(c).stream().map(names::get)
+                    .toList(), s.closed().get(c), s.periods().get(c)));
             }
-            parts.add("classes become " + String.join(", ", cls));
+            classes = Optional.of(cls);
         }
-        return String.join("; ", parts);
+        return new org.qchain.result.ClassesResult.Effect(absorbing, classes);
     }
 }

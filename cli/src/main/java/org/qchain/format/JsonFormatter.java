@@ -591,8 +591,8 @@ final class JsonFormatter extends Layout {
             .objects("classes", r.classes(), c -> Json.object().strings("states", c.states()).bool("closed", c.closed())
                 .number("period", c.period()))
             .strings("absorbing", r.absorbing()).strings("transient", r.transients())
-            .objects("special_values", r.specialValues(), v -> Json.object().string("condition", v.condition())
-                .string("effect", v.effect()))
+            .objects("special_values", r.specialValues(), v -> Json.object().string("condition", Sections.specialCondition(v))
+                .string("effect", Sections.effect(v.effect())))
             .stringRows("graph", plain(r.graph()));
         r.at().ifPresent(p -> j.object("at", point(p)));
         return leftOut(j, r.brief(), "graph").strings("warnings", r.warnings()).close() + "\n";
