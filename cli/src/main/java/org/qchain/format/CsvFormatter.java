@@ -200,8 +200,9 @@ final class CsvFormatter extends DocLayout {
      * with its multiplicity; the name of a named one, as {@code rootsum} uses it), {@code eigenvalue} (its value,
      * its name, the multiplicity of its factor and its decimal at the point), {@code limit} (the limit of each
      * printed cell, or of each subsequence r of a periodic chain, with its decimal), {@code rate} (the convergence
-     * rate and its value), {@code long_run_condition} and {@code special_point}. Formulas are in plain syntax,
-     * written out (no names of repeated pieces).
+     * rate and its value), {@code long_run_condition}, {@code special_point}, then {@code substituted} (a value
+     * given with {@code --at} and substituted before solving) and {@code point} (each parameter's value at the
+     * point of the decimals). Formulas are in plain syntax, written out (no names of repeated pieces).
      */
     @Override
     public String closed(ClosedResult r) {
@@ -258,6 +259,10 @@ final class CsvFormatter extends DocLayout {
             }
         }
         r.longRun().ifPresent(lr -> closedLongRun(sb, r, lr));
+        r.substituted().forEach((name, v) -> closedRecord(sb, "substituted", "", "", "", name, v.toString(), "", "",
+            "", ""));
+        r.point().ifPresent(p -> p.values().forEach((name, v) -> closedRecord(sb, "point", "", "", "", name,
+            v.toString(), "", "", "", "")));
         return sb.toString();
     }
 

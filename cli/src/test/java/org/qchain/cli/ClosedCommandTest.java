@@ -45,6 +45,7 @@ class ClosedCommandTest {
         }
         // a is given, b keeps its nominal value 1/2 for the numeric rate
         out.add(new Case("at.txt", List.of(BEACON, "--at", "a=1/10", "--from", "Lit")));
+        out.add(new Case("at.csv", List.of(BEACON, "--at", "a=1/10", "--from", "Lit", "--format", "csv")));
         // numeric chains: a Jordan block (binomial terms) and a period-2 chain
         out.add(new Case("jordan.json", List.of(Cli.model("closed-jordan.chain"), "--format", "json")));
         out.add(new Case("periodic.txt", List.of(Cli.model("closed-periodic.chain"))));
@@ -118,8 +119,9 @@ class ClosedCommandTest {
     @Test
     void csvIsOneRfc4180TableWithOneKindPerRecord() {
         java.util.Set<String> kinds = java.util.Set.of("entry", "coefficient", "initial", "condition", "factor",
-            "eigenvalue", "limit", "rate", "long_run_condition", "special_point");
+            "eigenvalue", "limit", "rate", "long_run_condition", "special_point", "substituted", "point");
         for (List<String> args : List.of(List.of(BEACON), List.of(Cli.model("closed-names.chain")),
+                List.of(BEACON, "--at", "a=1/10"),
                 List.of(Cli.model("closed-cubic.chain")), List.of(Cli.model("plant.chain"), "--from", "Up"),
                 List.of(BEACON, "--form", "recurrence"), List.of(BEACON, "--form", "gf", "--from", "Dark"))) {
             List<String> all = new ArrayList<>(List.of("closed"));
