@@ -400,9 +400,9 @@ function _picocli_qchain_closed() {
 
   local commands=""
   local flag_opts="'--factor' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--digits' '-o' '--output' '--max-terms' '--max-digits' '--format'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '--from' '--to' '--start' '--form' '--format' '--digits' '-o' '--output' '--max-terms' '--max-digits'"
   local FORM_option_args=("MATRIX" "GF" "RECURRENCE") # --form values
-  local FORMAT_option_args=("text" "json" "markdown" "latex") # --format values
+  local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
 
@@ -430,6 +430,11 @@ function _picocli_qchain_closed() {
       COMPREPLY=( $( compReplyArray "${FORM_option_args[@]}" ) )
       return $?
       ;;
+    '--format')
+      local IFS=$'\n'
+      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
+      return $?
+      ;;
     '--digits')
       return
       ;;
@@ -444,11 +449,6 @@ function _picocli_qchain_closed() {
       ;;
     '--max-digits')
       return
-      ;;
-    '--format')
-      local IFS=$'\n'
-      COMPREPLY=( $( compReplyArray "${FORMAT_option_args[@]}" ) )
-      return $?
       ;;
   esac
 

@@ -585,8 +585,7 @@ final class SymbolicEngine {
     private static ClosedResult substituted(ClosedResult r, Map<String, Rational> given) {
         Map<String, Rational> ordered = new java.util.LinkedHashMap<>();
         new java.util.TreeMap<>(given).forEach(ordered::put);
-        return new ClosedResult(r.source(), r.form(), r.nSymbol(), r.validFrom(), r.conditions(), r.notProved(),
-            r.states(), r.parameters(), r.selection(), r.rows(), r.cols(), r.cells(), r.recurrences(), r.eigenvalues(),
+        return new ClosedResult(r.source(), r.form(), r.nSymbol(), r.validFrom(), r.conditions(), r.states(), r.parameters(), r.selection(), r.rows(), r.cols(), r.cells(), r.recurrences(), r.eigenvalues(),
             r.longRun(), r.roots(), r.point(), r.digits(), r.warnings(), r.names(), r.where(), r.namedCells(),
             r.factored(), ordered, r.start(), r.toStates());
     }
@@ -705,26 +704,34 @@ final class SymbolicEngine {
         }
         ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits,
             Formula.of(lr.rate(), lr.rateLatex()), rateValue,
-            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(),
+            conditions(cf.longRunConditions(domains)), special, lr.exact(),
             // the printed cells are exactly periodic (or constant) from their own valid-from on
             Math.min(lr.exactFrom(), validFrom), values);
         // the conditions of the printed formulas only (a combination's cancelled terms need none), in the order of
         // the whole matrix's conditions
-        List<String> conditions = cf.conditions();
-        List<String> notProved = cf.conditionsNotProved(domains);
+        List<org.qchain.symbolic.closed.Condition> conds = cf.conditions(domains);
         if (sel.selection() != ClosedResult.Selection.MATRIX) {
             java.util.Set<String> own = new java.util.HashSet<>();
             for (Combination c : sel.all()) {
                 own.addAll(cf.conditions(c));
             }
-            conditions = conditions.stream().filter(own::contains).toList();
-            notProved = notProved.stream().filter(own::contains).toList();
+            conds = conds.stream().filter(k -> own.contains(k.text())).toList();
         }
-        return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, conditions,
-            notProved, m.states(), cf.parameters(), sel.selection(), sel.rowLabels(),
+        return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, conditions(conds),
+            m.states(), cf.parameters(), sel.selection(), sel.rowLabels(),
             sel.colLabels(), cells, List.of(), eig, Optional.of(longRun), roots,
             pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()), where,
             where.isEmpty() ? List.of() : namedCells, q.factor());
+    }
+
+    /** The closed-form engine's conditions as result values: {@code left != right}, the domain fact kept. */
+    private static List<org.qchain.result.Condition> conditions(List<org.qchain.symbolic.closed.Condition> cs) {
+        List<org.qchain.result.Condition> out = new ArrayList<>();
+        for (org.qchain.symbolic.closed.Condition c : cs) {
+            out.add(org.qchain.result.Condition.notEqual(Formula.of(c.left(), c.leftLatex()), c.right(),
+                c.holdsThroughout()));
+        }
+        return out;
     }
 
     /** Formulas from the engine's two printed forms, pairwise. */
@@ -765,7 +772,7 @@ final class SymbolicEngine {
                 recs.add(rr);
             }
         }
-        return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(), List.of(),
+        return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(),
             m.states(), sf.parameters(), sel.selection(), sel.rowLabels(), sel.colLabels(), cells, recs, List.of(),
             Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of(), names(sf.symbols()));
     }
@@ -870,7 +877,8 @@ final class SymbolicEngine {
                 org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(
                     ChainResults.graph(model, f, at));
                 if (!s.equals(generic)) {
-                    out.add(new org.qchain.result.ClassesResult.SpecialValue(e.getKey() + " = " + r,
+                    out.add(new org.qchain.result.ClassesResult.SpecialValue(org.qchain.result.Condition.equal(
+                        Formula.of(e.getKey(), org.qchain.symbolic.Formulas.latexName(e.getKey())), r, true),
                         effect(generic, s, model.states())));
                 }
             }
@@ -889,9 +897,9 @@ final class SymbolicEngine {
             org.qchain.exact.longrun.Structure s = org.qchain.exact.longrun.Structure.of(
                 ChainResults.graph(model, f, cut));
             if (!s.equals(generic)) {
-                out.add(new org.qchain.result.ClassesResult.SpecialValue(org.qchain.symbolic.Formulas.plain(c) + " = 0"
-                    + (v == Vanishing.UNDECIDED ? " (if it vanishes inside the domains: not decided)" : ""),
-                    effect(generic, s, model.states())));
+                out.add(new org.qchain.result.ClassesResult.SpecialValue(org.qchain.result.Condition.equal(
+                    Formula.of(org.qchain.symbolic.Formulas.plain(c), org.qchain.symbolic.Formulas.latex(c)),
+                    Rational.ZERO, v == Vanishing.SOMEWHERE), effect(generic, s, model.states())));
             }
         }
         return out;
@@ -965,24 +973,24 @@ final class SymbolicEngine {
             : Vanishing.UNDECIDED;
     }
 
-    /** What changes between two structures, in words. */
-    static String effect(org.qchain.exact.longrun.Structure generic, org.qchain.exact.longrun.Structure s,
-            List<String> names) {
-        List<String> parts = new ArrayList<>();
+    /** What changes between two structures: the states that become absorbing, and the classes when they change. */
+    static org.qchain.result.ClassesResult.Effect effect(org.qchain.exact.longrun.Structure generic,
+            org.qchain.exact.longrun.Structure s, List<String> names) {
+        List<String> absorbing = new ArrayList<>();
         for (int a : s.absorbing()) {
             if (!generic.absorbing().contains(a)) {
-                parts.add(names.get(a) + " can no longer leave");
+                absorbing.add(names.get(a));
             }
         }
-        if (parts.isEmpty() || !generic.classes().equals(s.classes())) {
-            List<String> cls = new ArrayList<>();
+        Optional<List<org.qchain.result.ClassesResult.ChainClass>> classes = Optional.empty();
+        if (absorbing.isEmpty() || !generic.classes().equals(s.classes())) {
+            List<org.qchain.result.ClassesResult.ChainClass> cls = new ArrayList<>();
             for (int c = 0; c < s.classes().size(); c++) {
-                cls.add("{" + String.join(", ", s.classes().get(c).stream().map(names::get).toList()) + "}"
-                    + (s.closed().get(c) ? " closed" : "") + (s.closed().get(c) && s.periods().get(c) > 1
-                    ? " period " + s.periods().get(c) : ""));
+                cls.add(new org.qchain.result.ClassesResult.ChainClass(s.classes().get(c).stream().map(names::get)
+                    .toList(), s.closed().get(c), s.periods().get(c)));
             }
-            parts.add("classes become " + String.join(", ", cls));
+            classes = Optional.of(cls);
         }
-        return String.join("; ", parts);
+        return new org.qchain.result.ClassesResult.Effect(absorbing, classes);
     }
 }

@@ -8,7 +8,6 @@ import org.qchain.analysis.Analysis;
 import org.qchain.analysis.ClosedQuery;
 import org.qchain.analysis.LoadedModel;
 import org.qchain.analysis.Start;
-import org.qchain.format.OutputFormat;
 import org.qchain.result.ClosedResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.ITypeConverter;
@@ -112,10 +111,6 @@ final class ClosedCommand implements Callable<Integer> {
         }
         Optional<Start> start = startOptions.given() ? startOptions.start()
             : Optional.ofNullable(from).map(f -> Start.state(f, "--from"));
-        if (output.format == OutputFormat.CSV) {
-            throw new ParameterException(spec.commandLine(),
-                "--format csv is not available for closed forms; use text, json, latex or markdown");
-        }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         ClosedQuery q = new ClosedQuery(form, start, to, terms.maxTerms, output.digits(), digitLimit.maxDigits,

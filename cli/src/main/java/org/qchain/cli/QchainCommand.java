@@ -4,7 +4,6 @@ import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayDeque;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Deque;
 import java.util.LinkedHashMap;
@@ -13,12 +12,10 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import org.qchain.format.Caution;
-import org.qchain.format.OutputFormat;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.HelpCommand;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine.Spec;
 
 /**
@@ -113,22 +110,6 @@ public final class QchainCommand implements Callable<Integer> {
     }
 
     /**
-     * {@code closed} shares the output options but refuses {@code csv}: its {@code --format} help and completion list
-     * only the formats it writes.
-     */
-    private static void offerClosedFormats(CommandSpec closed) {
-        OptionSpec f = closed.findOption("--format");
-        List<String> words = Arrays.stream(OutputFormat.values()).filter(x -> x != OutputFormat.CSV)
-            .map(OutputFormat::word).toList();
-        closed.remove(f);
-        closed.addOption(OptionSpec.builder(f)
-            .description("Output format: " + String.join(", ", words) + " (default: " + OutputFormat.TEXT.word()
-                + "); csv is not available for closed forms.")
-            .completionCandidates(words)
-            .build());
-    }
-
-    /**
      * The configured command tree.
      *
      * @param progressAllowed whether long work may show progress on stderr; tests pass {@code false}
@@ -174,9 +155,6 @@ public final class QchainCommand implements Callable<Integer> {
                 .exitCodeList(codes)
                 .footerHeading("%n")
                 .footer(Caution.TEXT);
-            if (c.getCommandSpec().name().equals("closed")) {
-                offerClosedFormats(c.getCommandSpec());
-            }
             todo.addAll(c.getSubcommands().values());
         }
         return cl;

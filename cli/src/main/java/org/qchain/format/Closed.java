@@ -71,7 +71,7 @@ final class Closed {
     static String longRunHeading(ClosedResult r, ClosedResult.LongRun lr) {
         String n = r.names().step();
         String m = r.names().period();
-        String where = lr.conditions().isEmpty() ? "" : " where " + String.join(", ", lr.conditions());
+        String where = lr.conditions().isEmpty() ? "" : " where " + conditions(lr.conditions());
         if (!lr.periodic()) {
             return pn(r) + " converges as " + n + " grows" + where + "; the limit";
         }
@@ -98,7 +98,7 @@ final class Closed {
                 .append(" inside the parameters' domains.");
         }
         if (!lr.notProved().isEmpty()) {
-            sb.append("Not shown to hold throughout the parameters' domains: ").append(String.join(", ", lr.notProved()))
+            sb.append("Not shown to hold throughout the parameters' domains: ").append(conditions(lr.notProved()))
                 .append('.');
         }
         if (!lr.special().isEmpty()) {
@@ -308,6 +308,11 @@ final class Closed {
             return (r.conditions().size() == 1 ? " It" : " They") + " always hold"
                 + (r.conditions().size() == 1 ? "s" : "") + " inside the parameters' domains.";
         }
-        return " Not shown to hold throughout the parameters' domains: " + String.join(", ", r.notProved()) + ".";
+        return " Not shown to hold throughout the parameters' domains: " + conditions(r.notProved()) + ".";
+    }
+
+    /** Conditions in plain syntax, comma-separated: {@code 1 + 4*a != 0, a != 0}. */
+    static String conditions(List<org.qchain.result.Condition> cs) {
+        return String.join(", ", org.qchain.result.Condition.plain(cs));
     }
 }

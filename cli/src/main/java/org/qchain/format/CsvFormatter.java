@@ -26,7 +26,7 @@ import org.qchain.result.VerifyResult;
  * plain CSV matrix form that the model parser reads back: the output of {@code step -n N --format csv} is itself a
  * valid model (the N-step chain).
  */
-final class CsvFormatter extends Layout {
+final class CsvFormatter extends DocLayout {
     CsvFormatter(int digits) {
         super(digits);
     }
@@ -188,10 +188,117 @@ final class CsvFormatter extends Layout {
         return sb.toString();
     }
 
-    /** No CSV layout for closed forms: the command refuses {@code --format csv} before any work. */
+    /** The columns of {@link #closed}; each record fills those that apply to its kind and leaves the others empty. */
+    static final List<String> CLOSED_HEADER = List.of("record", "from", "to", "r", "name", "formula", "valid_from",
+        "multiplicity", "decimal", "proved");
+
+    /**
+     * Closed forms as one long table, one record per fact, the kind in the first column: {@code entry} (a cell of
+     * P^n, its generating function or its recurrence, with valid_from), for a recurrence its {@code coefficient}
+     * c_r (r = 1 .. d) and {@code initial} value u(r) records, {@code condition} (a condition of the
+     * formulas and whether it is proved inside the domains), {@code factor} (an irreducible factor of det(xI - P)
+     * with its multiplicity; the name of a named one, as {@code rootsum} uses it), {@code eigenvalue} (its value,
+     * its name, the multiplicity of its factor and its decimal at the point), {@code limit} (the limit of each
+     * printed cell, or of each subsequence r of a periodic chain, with its decimal), {@code rate} (the convergence
+     * rate and its value), {@code long_run_condition}, {@code special_point}, then {@code substituted} (a value
+     * given with {@code --at} and substituted before solving) and {@code point} (each parameter's value at the
+     * point of the decimals). Formulas are in plain syntax, written out (no names of repeated pieces).
+     */
     @Override
     public String closed(ClosedResult r) {
-        throw new UnsupportedOperationException("no CSV layout for closed forms");
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, CLOSED_HEADER);
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.cols().size(); j++) {
+                String validFrom = switch (r.form()) {
+                    case GF -> "";
+                    case RECURRENCE -> String.valueOf(r.recurrences().get(i).get(j).validFrom());
+                    case MATRIX -> String.valueOf(r.validFrom());
+                };
+                closedRecord(sb, "entry", r.rows().get(i), r.cols().get(j), "", "", r.cells().get(i).get(j).plain(),
+                    validFrom, "", "", "");
+            }
+        }
+        if (r.form() == ClosedResult.Form.RECURRENCE) {
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.cols().size(); j++) {
+                    ClosedResult.Recurrence rec = r.recurrences().get(i).get(j);
+                    for (int k = 0; k < rec.coefficients().size(); k++) {
+                        closedRecord(sb, "coefficient", r.rows().get(i), r.cols().get(j), String.valueOf(k + 1), "",
+                            rec.coefficients().get(k).plain(), String.valueOf(rec.validFrom()), "", "", "");
+                    }
+                    for (int k = 0; k < rec.initial().size(); k++) {
+                        closedRecord(sb, "initial", r.rows().get(i), r.cols().get(j), String.valueOf(k), "",
+                            rec.initial().get(k).plain(), "", "", "", "");
+                    }
+                }
+            }
+        }
+        for (org.qchain.result.Condition c : r.conditions()) {
+            closedRecord(sb, "condition", "", "", "", "", c.plain(), "", "", "", String.valueOf(c.proved()));
+        }
+        for (ClosedResult.Eigen e : r.eigenvalues()) {
+            String name = e.kind().equals("roots") ? rootName(r, e) : "";
+            closedRecord(sb, "factor", "", "", "", name, e.factor().plain(), "", String.valueOf(e.multiplicity()),
+                "", "");
+        }
+        for (ClosedResult.Eigen e : r.eigenvalues()) {
+            List<String> dec = Closed.eigenDecimalList(r, e);
+            String m = String.valueOf(e.multiplicity());
+            if (e.kind().equals("roots")) {
+                // one record per root of the named factor: the decimals tell them apart
+                String name = rootName(r, e);
+                for (String d : dec.isEmpty() ? List.of("") : dec) {
+                    closedRecord(sb, "eigenvalue", "", "", "", name, e.values().get(0).plain(), "", m, d, "");
+                }
+                continue;
+            }
+            for (int k = 0; k < e.values().size(); k++) {
+                closedRecord(sb, "eigenvalue", "", "", "", k < e.names().size() ? e.names().get(k) : "",
+                    e.values().get(k).plain(), "", m, k < dec.size() ? dec.get(k) : "", "");
+            }
+        }
+        r.longRun().ifPresent(lr -> closedLongRun(sb, r, lr));
+        r.substituted().forEach((name, v) -> closedRecord(sb, "substituted", "", "", "", name, v.toString(), "", "",
+            "", ""));
+        r.point().ifPresent(p -> p.values().forEach((name, v) -> closedRecord(sb, "point", "", "", "", name,
+            v.toString(), "", "", "", "")));
+        return sb.toString();
+    }
+
+    private void closedLongRun(StringBuilder sb, ClosedResult r, ClosedResult.LongRun lr) {
+        List<List<List<String>>> dec = Closed.limitDecimals(r, lr);
+        for (int k = 0; k < lr.limits().size(); k++) {
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.cols().size(); j++) {
+                    closedRecord(sb, "limit", r.rows().get(i), r.cols().get(j), String.valueOf(k), "",
+                        lr.limits().get(k).get(i).get(j).plain(), "", "",
+                        dec.isEmpty() ? "" : dec.get(k).get(i).get(j), "");
+                }
+            }
+        }
+        closedRecord(sb, "rate", "", "", "", "", lr.rate().plain(), "", "",
+            lr.rateValue().map(v -> Closed.real(r, v)).orElse(""), "");
+        for (org.qchain.result.Condition c : lr.conditions()) {
+            closedRecord(sb, "long_run_condition", "", "", "", "", c.plain(), "", "", "", String.valueOf(c.proved()));
+        }
+        for (org.qchain.result.Point p : lr.special()) {
+            closedRecord(sb, "special_point", "", "", "", "", p.text(), "", "", "", "");
+        }
+    }
+
+    /** The name of a factor of degree 3 or more ({@code f1}), as the formulas' {@code rootsum} calls it. */
+    private static String rootName(ClosedResult r, ClosedResult.Eigen e) {
+        for (ClosedResult.Roots rt : r.roots()) {
+            if (rt.polynomial().plain().equals(e.factor().plain())) {
+                return rt.name();
+            }
+        }
+        return "";
+    }
+
+    private static void closedRecord(StringBuilder sb, String... fields) {
+        Text.csvRecord(sb, List.of(fields));
     }
 
     @Override

@@ -14,7 +14,8 @@ import org.qchain.result.TransientResult;
 import org.qchain.result.VerifyResult;
 
 /**
- * Lays out any result as text of one format: one method per result type. Formatters never compute beyond rounding
+ * Lays out any result as text of one format: one method per result type, and every format has a layout for every
+ * result type (none throws for a type it cannot lay out). Formatters never compute beyond rounding
  * an exact value to the digits they were made with ({@link OutputFormat#formatter(int)}).
  */
 public interface Formatter {
@@ -24,7 +25,6 @@ public interface Formatter {
      *
      * @param result what to print
      * @return the formatted text
-     * @throws UnsupportedOperationException if this format has no layout for the result (CSV for closed forms)
      */
     default String format(Result result) {
         if (result instanceof StepResult.Matrix m) {
@@ -86,7 +86,6 @@ public interface Formatter {
      * @param result what to print
      * @param out    where to write
      * @throws IOException if {@code out} fails
-     * @throws UnsupportedOperationException if this format has no layout for the result
      */
     default void write(Result result, Appendable out) throws IOException {
         out.append(format(result));

@@ -16,6 +16,7 @@ import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
 import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
+import org.qchain.result.Condition;
 import org.qchain.result.Point;
 import org.qchain.result.SensResult;
 import org.qchain.result.StepResult;
@@ -276,7 +277,7 @@ final class JsonFormatter extends Layout {
         Json j = Json.object()
             .string("n_symbol", r.nSymbol())
             .number("valid_from", r.validFrom())
-            .strings("conditions", r.conditions())
+            .strings("conditions", Condition.plain(r.conditions()))
             .strings("states", r.states());
         switch (r.selection()) {
             case ENTRY:
@@ -309,7 +310,7 @@ final class JsonFormatter extends Layout {
             j.object("substituted", sub);
         }
         if (!r.isSeries()) {
-            j.strings("conditions_not_proved", r.notProved());
+            j.strings("conditions_not_proved", Condition.plain(r.notProved()));
         }
         if (r.form() == ClosedResult.Form.GF) {
             j.string("variable", r.names().series());
@@ -354,8 +355,8 @@ final class JsonFormatter extends Layout {
                     special.add(p.text());
                 }
                 l.string("rate_of", lr.periodic() ? "subsequences" : "powers").bool("exact", lr.exact())
-                    .number("exact_from", lr.exactFrom()).strings("conditions", lr.conditions())
-                    .strings("conditions_not_proved", lr.notProved()).strings("special_points", special);
+                    .number("exact_from", lr.exactFrom()).strings("conditions", Condition.plain(lr.conditions()))
+                    .strings("conditions_not_proved", Condition.plain(lr.notProved())).strings("special_points", special);
                 j.object("long_run", l);
             });
             r.point().ifPresent(p -> j.string("at", p.text()));
@@ -580,11 +581,6 @@ final class JsonFormatter extends Layout {
 
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
-    @Override
-    String render(Sections.Doc d) {
-        throw new UnsupportedOperationException("JSON lays out its own fields");
-    }
-
     private static List<List<String>> plain(List<List<org.qchain.result.Formula>> m) {
         return m.stream().map(r -> r.stream().map(org.qchain.result.Formula::plain).toList()).toList();
     }
@@ -617,8 +613,8 @@ final class JsonFormatter extends Layout {
             .objects("classes", r.classes(), c -> Json.object().strings("states", c.states()).bool("closed", c.closed())
                 .number("period", c.period()))
             .strings("absorbing", r.absorbing()).strings("transient", r.transients())
-            .objects("special_values", r.specialValues(), v -> Json.object().string("condition", v.condition())
-                .string("effect", v.effect()))
+            .objects("special_values", r.specialValues(), v -> Json.object().string("condition", Sections.specialCondition(v))
+                .string("effect", Sections.effect(v.effect())))
             .stringRows("graph", plain(r.graph()));
         r.at().ifPresent(p -> j.object("at", point(p)));
         return leftOut(j, r.brief(), "graph").strings("warnings", r.warnings()).close() + "\n";

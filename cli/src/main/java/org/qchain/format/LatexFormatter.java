@@ -22,7 +22,7 @@ import org.qchain.result.VerifyResult;
  * LaTeX for reports: tabulars with {@code \frac} entries and state names as text (special characters escaped),
  * formulas in {@code align*}, the caution as a comment. Needs no package beyond standard LaTeX and amsmath.
  */
-final class LatexFormatter extends Layout {
+final class LatexFormatter extends DocLayout {
     LatexFormatter(int digits) {
         super(digits);
     }
@@ -302,7 +302,7 @@ final class LatexFormatter extends Layout {
         if (!r.isSeries()) {
             sb.append("% valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
-                sb.append(" where ").append(String.join(", ", r.conditions())).append('.');
+                sb.append(" where ").append(Closed.conditions(r.conditions())).append('.');
             }
             sb.append(Closed.domainNote(r)).append('\n');
         }

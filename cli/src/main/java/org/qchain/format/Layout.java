@@ -123,22 +123,4 @@ abstract class Layout implements Formatter {
 
     /** The one-step matrix as formulas, with the conditions. */
     abstract String symbolicCheck(CheckResult.Symbolic s);
-
-    @Override
-    public String classes(org.qchain.result.ClassesResult r) {
-        return render(Sections.of(r));
-    }
-
-    @Override
-    public String longRun(org.qchain.result.LongRunResult r) {
-        return render(Sections.of(r));
-    }
-
-    @Override
-    public String absorb(org.qchain.result.AbsorbResult r) {
-        return render(Sections.of(r));
-    }
-
-    /** Renders the tables of a {@code classes}, {@code longrun} or {@code absorb} result. */
-    abstract String render(Sections.Doc d);
 }

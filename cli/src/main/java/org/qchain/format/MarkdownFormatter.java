@@ -19,7 +19,7 @@ import org.qchain.result.SymbolicStepResult;
 import org.qchain.result.VerifyResult;
 
 /** Markdown (pipe tables) for pasting into reports: exact values and decimals in tables, then the caution. */
-final class MarkdownFormatter extends Layout {
+final class MarkdownFormatter extends DocLayout {
     MarkdownFormatter(int digits) {
         super(digits);
     }
@@ -239,8 +239,8 @@ final class MarkdownFormatter extends Layout {
             sb.append("; valid for ").append(r.names().step()).append(" ≥ ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
                 List<String> c = new ArrayList<>();
-                for (String s : r.conditions()) {
-                    c.add("`" + Text.code(s) + "`");
+                for (org.qchain.result.Condition s : r.conditions()) {
+                    c.add("`" + Text.code(s.plain()) + "`");
                 }
                 sb.append(" where ").append(String.join(", ", c));
             }

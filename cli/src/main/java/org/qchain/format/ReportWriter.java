@@ -341,11 +341,11 @@ abstract class ReportWriter implements ReportLayout {
             + String.join(", ", c.parameters())) + "."));
         if (!c.conditions().isEmpty()) {
             paragraph(t("Where:"));
-            bullets(c.conditions().stream().map(cond -> List.of(formula(cond))).toList());
+            bullets(c.conditions().stream().map(cond -> List.<Span>of(new Math(cond))).toList());
         }
         if (!c.notProved().isEmpty()) {
             paragraph(t("Not shown to hold throughout the parameters' domains:"));
-            bullets(c.notProved().stream().map(cond -> List.of(formula(cond))).toList());
+            bullets(c.notProved().stream().map(cond -> List.<Span>of(new Math(cond))).toList());
         }
         String n = c.names().step();
         for (int i = 0; i < c.rows().size(); i++) {

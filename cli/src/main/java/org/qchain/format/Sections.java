@@ -57,7 +57,7 @@ final class Sections {
         if (!r.specialValues().isEmpty()) {
             List<List<Formula>> sv = new ArrayList<>();
             for (ClassesResult.SpecialValue v : r.specialValues()) {
-                sv.add(List.of(word(v.condition()), word(v.effect())));
+                sv.add(List.of(word(specialCondition(v)), word(effect(v.effect()))));
             }
             t.add(new Table("Parameter values that change the structure", List.of("condition", "effect"), sv));
         }
@@ -68,6 +68,34 @@ final class Sections {
             notes.add("left out (--brief): the " + (r.continuous() ? "rate table" : "one-step graph"));
         }
         return new Doc("Structure of " + r.source() + params(r.parameters()) + at(r.at()), t, notes);
+    }
+
+    /**
+     * Where a special value lies, as every format prints it: {@code p = 0}, or {@code p - r = 0 (if it vanishes
+     * inside the domains: not decided)} when its zeros inside the domains were not decided.
+     */
+    static String specialCondition(ClassesResult.SpecialValue v) {
+        return v.condition().plain() + (v.condition().proved() ? "" : " (if it vanishes inside the domains: not decided)");
+    }
+
+    /**
+     * What changes at a special value, in words: {@code Worn can no longer leave}, {@code classes become {A, B}
+     * closed period 2, {C}}, or both separated by {@code ; }.
+     */
+    static String effect(ClassesResult.Effect e) {
+        List<String> parts = new ArrayList<>();
+        for (String a : e.absorbing()) {
+            parts.add(a + " can no longer leave");
+        }
+        e.classes().ifPresent(classes -> {
+            List<String> cls = new ArrayList<>();
+            for (ClassesResult.ChainClass c : classes) {
+                cls.add("{" + String.join(", ", c.states()) + "}" + (c.closed() ? " closed" : "")
+                    + (c.closed() && c.period() > 1 ? " period " + c.period() : ""));
+            }
+            parts.add("classes become " + String.join(", ", cls));
+        });
+        return String.join("; ", parts);
     }
 
     static Doc of(LongRunResult r) {

@@ -24,7 +24,7 @@ import org.qchain.result.VerifyResult;
  * exact fraction (exact last, so long fractions do not push other columns apart); for formulas, aligned tables; then
  * the caution.
  */
-final class TextFormatter extends Layout {
+final class TextFormatter extends DocLayout {
     /** Lines of the decimal overview stay within this many characters where they can. */
     static final int WIDTH = 100;
 
@@ -367,7 +367,7 @@ final class TextFormatter extends Layout {
         if (!r.isSeries()) {
             sb.append("Valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
-                sb.append(" where ").append(String.join(", ", r.conditions()));
+                sb.append(" where ").append(Closed.conditions(r.conditions()));
             }
             sb.append('.');
             sb.append(Closed.domainNote(r));

@@ -62,9 +62,26 @@ public record ClassesResult(String source, List<String> states, List<String> par
     /**
      * A parameter value at which the structure differs from the generic one.
      *
-     * @param condition such as {@code p = 0}
-     * @param effect    what changes, such as {@code Worn can no longer leave}
+     * @param condition where: {@code p = 0}, or a polynomial's zero set {@code p - r = 0}; {@link Condition#proved()}
+     *                  says whether it is shown to be met inside (or on the edge of) the parameters' domains (false: a
+     *                  polynomial whose zeros inside the domains were not decided)
+     * @param effect    what changes there
      */
-    public record SpecialValue(String condition, String effect) {
+    public record SpecialValue(Condition condition, Effect effect) {
+    }
+
+    /**
+     * How the structure at a special value differs from the generic one.
+     *
+     * @param absorbing the states that become absorbing (can no longer leave), in model order
+     * @param classes   the communicating classes there, when they differ from the generic ones or no state becomes
+     *                  absorbing; empty otherwise
+     */
+    public record Effect(List<String> absorbing, java.util.Optional<List<ChainClass>> classes) {
+        /** Copies the lists. */
+        public Effect {
+            absorbing = List.copyOf(absorbing);
+            classes = classes.map(List::copyOf);
+        }
     }
 }

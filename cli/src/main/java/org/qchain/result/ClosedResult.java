@@ -21,8 +21,8 @@ import org.qchain.exact.certified.CertifiedReal;
  * @param form        which form is printed
  * @param nSymbol     the symbol of the step count, {@code n}
  * @param validFrom   the least n from which every printed formula holds
- * @param conditions  parameter conditions, each {@code "POLY != 0"}
- * @param notProved   the conditions not shown to hold for every value inside the parameters' domains
+ * @param conditions  the conditions on the parameters under which the formulas hold, each {@code POLY != 0} with
+ *                    POLY an irreducible polynomial, and whether it is shown to hold throughout the domains
  * @param states      all state names, in model order
  * @param parameters  the free parameters the formulas use
  * @param selection   which part of P^n is printed
@@ -52,8 +52,8 @@ import org.qchain.exact.certified.CertifiedReal;
  *                    {@code {Up, Worn}}, each cell the sum of their entries) when {@code start} is given; empty
  *                    otherwise
  */
-public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
-                           List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<Condition> conditions,
+                           List<String> states, List<String> parameters, Selection selection,
                            List<String> rows, List<String> cols, List<List<Formula>> cells,
                            List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                            List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
@@ -65,7 +65,6 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
     /** Copies the lists. */
     public ClosedResult {
         conditions = List.copyOf(conditions);
-        notProved = List.copyOf(notProved);
         states = List.copyOf(states);
         parameters = List.copyOf(parameters);
         rows = List.copyOf(rows);
@@ -83,21 +82,21 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
     }
 
     /** As the canonical constructor without a start or a set of final states. */
-    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
-                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<Condition> conditions,
+                        List<String> states, List<String> parameters, Selection selection,
                         List<String> rows, List<String> cols, List<List<Formula>> cells,
                         List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                         List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
                         Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored,
                         java.util.Map<String, org.qchain.exact.Rational> substituted) {
-        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+        this(source, form, nSymbol, validFrom, conditions, states, parameters, selection, rows, cols, cells,
             recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where, namedCells, factored,
             substituted, java.util.Map.of(), List.of());
     }
 
     /** The same result with the start and the set of final states it was asked for (see {@link #start()}). */
     public ClosedResult withStart(java.util.Map<String, org.qchain.exact.Rational> startWeights, List<String> to) {
-        return new ClosedResult(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection,
+        return new ClosedResult(source, form, nSymbol, validFrom, conditions, states, parameters, selection,
             rows, cols, cells, recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where,
             namedCells, factored, substituted, startWeights, to);
     }
@@ -108,15 +107,20 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
     }
 
     /** As the canonical constructor with nothing substituted. */
-    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
-                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<Condition> conditions,
+                        List<String> states, List<String> parameters, Selection selection,
                         List<String> rows, List<String> cols, List<List<Formula>> cells,
                         List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                         List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
                         Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored) {
-        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+        this(source, form, nSymbol, validFrom, conditions, states, parameters, selection, rows, cols, cells,
             recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where, namedCells, factored,
             java.util.Map.of());
+    }
+
+    /** The conditions not shown to hold for every value inside the parameters' domains, in order. */
+    public List<Condition> notProved() {
+        return Condition.notProved(conditions);
     }
 
     /** The substituted values as {@code p=1/10, r=1/4}; empty when none. */
@@ -129,12 +133,12 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
     }
 
     /** As the canonical constructor with nothing named. */
-    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
-                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<Condition> conditions,
+                        List<String> states, List<String> parameters, Selection selection,
                         List<String> rows, List<String> cols, List<List<Formula>> cells,
                         List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                         List<Roots> roots, Optional<Point> point, int digits, List<String> warnings, Names names) {
-        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+        this(source, form, nSymbol, validFrom, conditions, states, parameters, selection, rows, cols, cells,
             recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, List.of(), List.of(), false);
     }
 
@@ -176,12 +180,12 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
     }
 
     /** As the canonical constructor with the usual symbols ({@link Names#DEFAULT}). */
-    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
-                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<Condition> conditions,
+                        List<String> states, List<String> parameters, Selection selection,
                         List<String> rows, List<String> cols, List<List<Formula>> cells,
                         List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                         List<Roots> roots, Optional<Point> point, int digits, List<String> warnings) {
-        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+        this(source, form, nSymbol, validFrom, conditions, states, parameters, selection, rows, cols, cells,
             recurrences, eigenvalues, longRun, roots, point, digits, warnings, Names.DEFAULT);
     }
 
@@ -273,8 +277,7 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      *                   P^(dm + r) (the second-largest modulus of P itself is then 1)
      * @param rateValue  its value at the point, when the point is known
      * @param conditions the conditions on the parameters under which this long run holds (no eigenvalue becomes a
-     *                   root of unity)
-     * @param notProved  those of {@code conditions} not shown to hold throughout the parameters' domains
+     *                   root of unity), each with whether it is shown to hold throughout the parameters' domains
      * @param special    corners of the parameters' box where a condition (of the formulas or the long run) fails
      * @param exact      whether no other eigenvalue than roots of unity and 0 exists: P^n (or each subsequence) equals
      *                   its limit from n = {@code exactFrom} on
@@ -282,20 +285,24 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
      * @param values     the limits at the point, exactly, shaped like {@code limits}; empty without a point
      */
     public record LongRun(int period, List<List<List<Formula>>> limits, Formula rate, Optional<CertifiedReal> rateValue,
-                          List<String> conditions, List<String> notProved, List<Point> special, boolean exact,
+                          List<Condition> conditions, List<Point> special, boolean exact,
                           int exactFrom, List<List<List<Rational>>> values) {
         /** Copies the lists. */
         public LongRun {
             limits = limits.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
             values = values.stream().map(m -> m.stream().map(List::copyOf).toList()).toList();
             conditions = List.copyOf(conditions);
-            notProved = List.copyOf(notProved);
             special = List.copyOf(special);
+        }
+
+        /** Those of {@link #conditions()} not shown to hold throughout the parameters' domains, in order. */
+        public List<Condition> notProved() {
+            return Condition.notProved(conditions);
         }
 
         /** Without conditions, special points or values (a rate of {@code 0} means exact from n = 0). */
         public LongRun(int period, List<List<List<Formula>>> limits, Formula rate, Optional<CertifiedReal> rateValue) {
-            this(period, limits, rate, rateValue, List.of(), List.of(), List.of(), rate.plain().equals("0"), 0,
+            this(period, limits, rate, rateValue, List.of(), List.of(), rate.plain().equals("0"), 0,
                 List.of());
         }
 

@@ -35,7 +35,7 @@ class ClosedCommandTest {
 
     static Stream<Case> cases() {
         List<Case> out = new ArrayList<>();
-        for (String f : new String[] {"text", "json", "markdown", "latex"}) {
+        for (String f : new String[] {"text", "json", "markdown", "latex", "csv"}) {
             String ext = f.equals("text") ? "txt" : f.equals("markdown") ? "md" : f.equals("latex") ? "tex" : f;
             out.add(new Case("matrix." + ext, List.of(BEACON, "--format", f)));
             out.add(new Case("row." + ext, List.of(BEACON, "--start", "Lit", "--format", f)));
@@ -45,16 +45,24 @@ class ClosedCommandTest {
         }
         // a is given, b keeps its nominal value 1/2 for the numeric rate
         out.add(new Case("at.txt", List.of(BEACON, "--at", "a=1/10", "--from", "Lit")));
+        out.add(new Case("at.csv", List.of(BEACON, "--at", "a=1/10", "--from", "Lit", "--format", "csv")));
         // numeric chains: a Jordan block (binomial terms) and a period-2 chain
         out.add(new Case("jordan.json", List.of(Cli.model("closed-jordan.chain"), "--format", "json")));
         out.add(new Case("periodic.txt", List.of(Cli.model("closed-periodic.chain"))));
+        // CSV: the limits of each subsequence r, a double eigenvalue, the roots of a named cubic, --factor
+        out.add(new Case("periodic.csv", List.of(Cli.model("closed-periodic.chain"), "--format", "csv")));
+        out.add(new Case("jordan.csv", List.of(Cli.model("closed-jordan.chain"), "--format", "csv")));
+        out.add(new Case("cubic.csv", List.of(Cli.model("closed-cubic.chain"), "--from", "Run", "--to", "Run",
+            "--format", "csv")));
+        out.add(new Case("plant-factor.csv", List.of(Cli.model("plant.chain"), "--from", "Up", "--to", "Down",
+            "--factor", "--format", "csv")));
         // regression (issue 8): parameters named n and x move the formulas' symbols; closed domains with a
         // periodic corner (n = x = 1) state the long run's condition and the special points
         out.add(new Case("names.txt", List.of(Cli.model("closed-names.chain"))));
         out.add(new Case("names.json", List.of(Cli.model("closed-names.chain"), "--form", "gf", "--from", "Running",
             "--to", "Broken", "--format", "json")));
         // an irreducible quadratic factor (square roots) in every format, and a named cubic with numeric roots
-        for (String f : new String[] {"text", "json", "markdown", "latex"}) {
+        for (String f : new String[] {"text", "json", "markdown", "latex", "csv"}) {
             String ext = f.equals("text") ? "txt" : f.equals("markdown") ? "md" : f.equals("latex") ? "tex" : f;
             out.add(new Case("quadratic." + ext, List.of(Cli.model("closed-stages.chain"), "--from", "Working",
                 "--to", "Fixing", "--format", f)));
@@ -123,6 +131,64 @@ class ClosedCommandTest {
             e.out());
     }
 
+    /** The columns of closed's CSV, as docs/commands.md lists them. */
+    private static final List<String> CSV_HEADER = List.of("record", "from", "to", "r", "name", "formula",
+        "valid_from", "multiplicity", "decimal", "proved");
+
+    @Test
+    void csvIsOneRfc4180TableWithOneKindPerRecord() {
+        java.util.Set<String> kinds = java.util.Set.of("entry", "coefficient", "initial", "condition", "factor",
+            "eigenvalue", "limit", "rate", "long_run_condition", "special_point", "substituted", "point");
+        for (List<String> args : List.of(List.of(BEACON), List.of(Cli.model("closed-names.chain")),
+                List.of(BEACON, "--at", "a=1/10"),
+                List.of(Cli.model("closed-cubic.chain")), List.of(Cli.model("plant.chain"), "--from", "Up"),
+                List.of(BEACON, "--form", "recurrence"), List.of(BEACON, "--form", "gf", "--from", "Dark"))) {
+            List<String> all = new ArrayList<>(List.of("closed"));
+            all.addAll(args);
+            all.addAll(List.of("--format", "csv"));
+            Cli.Result r = Cli.run(all.toArray(new String[0]));
+            assertEquals(0, r.code(), r::toString);
+            assertEquals("", r.err());
+            List<List<String>> records = Rfc4180.parse(r.out());
+            assertEquals(CSV_HEADER, records.get(0), args.toString());
+            for (List<String> rec : records.subList(1, records.size())) {
+                assertEquals(CSV_HEADER.size(), rec.size(), rec::toString);
+                assertTrue(kinds.contains(rec.get(0)), rec::toString);
+                assertTrue(List.of("", "true", "false").contains(rec.get(9)), rec::toString);
+                assertEquals(rec.get(0).endsWith("condition"), !rec.get(9).isEmpty(), rec::toString);
+            }
+        }
+    }
+
+    @Test
+    void csvFormulasReadBackToTheExactPowers() {
+        // each entry of P^n, read back from the CSV and evaluated at n = 5, a = 1/3, b = 1/5, is step's exact value;
+        // each limit is the entry of the stationary law, b/(a + b) = 3/8 for Lit (Grinstead and Snell, ch. 11,
+        // from memory)
+        Cli.Result c = Cli.run("closed", BEACON, "--format", "csv");
+        Cli.Result s = Cli.run("step", BEACON, "-n", "5", "--at", "a=1/3", "--at", "b=1/5", "--format", "csv");
+        assertEquals(0, s.code(), s::toString);
+        List<List<String>> step = Rfc4180.parse(s.out());
+        java.util.Map<String, org.qchain.exact.Rational> at = java.util.Map.of("n", org.qchain.exact.Rational.of(5),
+            "a", org.qchain.exact.Rational.of(1, 3), "b", org.qchain.exact.Rational.of(1, 5));
+        int entries = 0;
+        for (List<String> rec : Rfc4180.parse(c.out())) {
+            if (rec.get(0).equals("entry")) {
+                // step's records: n,from,to,value,decimal,formula
+                List<String> same = step.stream().filter(x -> x.get(1).equals(rec.get(1)) && x.get(2).equals(rec.get(2)))
+                    .findFirst().orElseThrow();
+                assertEquals(org.qchain.exact.Rational.parse(same.get(3)),
+                    org.qchain.result.FormulaTree.parse(rec.get(5)).evaluate(at).orElseThrow(), rec::toString);
+                entries++;
+            }
+            if (rec.get(0).equals("limit") && rec.get(2).equals("Lit")) {
+                assertEquals(org.qchain.exact.Rational.of(3, 8),
+                    org.qchain.result.FormulaTree.parse(rec.get(5)).evaluate(at).orElseThrow(), rec::toString);
+            }
+        }
+        assertEquals(4, entries);
+    }
+
     private static void assertUsage(String message, String... args) {
         Cli.Result r = Cli.run(args);
         assertEquals(2, r.code(), r::toString);
@@ -138,8 +204,6 @@ class ClosedCommandTest {
             "--from", "Dark");
         assertUsage("invalid --from 'Gone': not a state of " + BEACON + " (states: Lit, Dark)", "closed", BEACON,
             "--from", "Gone");
-        assertUsage("--format csv is not available for closed forms; use text, json, latex or markdown", "closed",
-            BEACON, "--format", "csv");
         assertUsage("--factor applies to --form matrix (the closed form in n)", "closed", BEACON, "--form", "gf",
             "--factor");
         assertUsage("Invalid value for option '--form': 'series' is not a form; use matrix, gf or recurrence",

@@ -478,10 +478,28 @@ public final class ClosedForm {
      */
     public List<String> conditionsNotProved(Map<String, Domain> domains) {
         List<String> out = new ArrayList<>();
-        for (int k = 0; k < conditionPolys.size(); k++) {
-            if (!DomainCheck.holdsThroughout(field, conditionPolys.get(k), domains)) {
-                out.add(conditions.get(k));
+        for (Condition c : conditions(domains)) {
+            if (!c.holdsThroughout()) {
+                out.add(c.text());
             }
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The conditions of {@link #conditions()} as values, each {@code POLY != 0} with its LaTeX and whether it is
+     * shown to hold for every parameter value inside the given domains (the check of
+     * {@link #conditionsNotProved(Map)}).
+     *
+     * @param domains the domain of each parameter (a parameter without one counts as unproved)
+     * @return the conditions, in the order of {@link #conditions()}
+     */
+    public List<Condition> conditions(Map<String, Domain> domains) {
+        List<Condition> out = new ArrayList<>();
+        for (GenPolynomial<BigRational> p : conditionPolys) {
+            Fml f = field.formula(p);
+            out.add(new Condition(Fml.plain(f), Fml.latex(f), Rational.ZERO,
+                DomainCheck.holdsThroughout(field, p, domains)));
         }
         return List.copyOf(out);
     }
@@ -879,8 +897,8 @@ public final class ClosedForm {
         }
         Fml rate = moduli.isEmpty() ? Fml.ZERO : (moduli.size() == 1 ? moduli.get(0) : new Fml.Call("max", List.copyOf(moduli)));
         List<String> conds = new ArrayList<>();
-        for (LongRunCondition c : longRunConditions()) {
-            conds.add(c.text);
+        for (LongRunCondition c : longRunConditionList()) {
+            conds.add(c.text());
         }
         return new LongRun(d, limits, Fml.plain(rate), Fml.latex(rate), conds, moduli.isEmpty(), validFrom, limitsLatex);
     }
@@ -955,8 +973,15 @@ public final class ClosedForm {
         return SpectralParts.valuesAt(field, g, at);
     }
 
-    /** A condition of the long run: {@code poly != 0} (poly empty: not decidable here, never proved). */
-    private record LongRunCondition(String text, java.util.Optional<GenPolynomial<BigRational>> poly) {
+    /**
+     * A condition of the long run: {@code left != right}, which fails exactly where {@code poly} vanishes (poly
+     * empty: not decidable here, never proved).
+     */
+    private record LongRunCondition(String left, String leftLatex, Rational right,
+                                    java.util.Optional<GenPolynomial<BigRational>> poly) {
+        String text() {
+            return left + " != " + right;
+        }
     }
 
     private List<LongRunCondition> longRunConditionCache;
@@ -968,7 +993,7 @@ public final class ClosedForm {
      * where P is stochastic, an eigenvalue of modulus 1 is a k-th root of unity with k at most s: Perron-Frobenius,
      * see Seneta, Non-negative Matrices and Markov Chains, ch. 1; from memory).
      */
-    private synchronized List<LongRunCondition> longRunConditions() {
+    private synchronized List<LongRunCondition> longRunConditionList() {
         if (longRunConditionCache != null) {
             return longRunConditionCache;
         }
@@ -991,7 +1016,8 @@ public final class ClosedForm {
                     List<GenPolynomial<BigRational>> fs = field.irreducibleFactors(diff.num);
                     if (fs.size() == 1) {
                         if (seen.add(key(fs.get(0)))) {
-                            out.add(new LongRunCondition(Fml.plain(field.formula(g.lambda)) + " != " + v,
+                            Fml lambda = field.formula(g.lambda);
+                            out.add(new LongRunCondition(Fml.plain(lambda), Fml.latex(lambda), Rational.of(v),
                                 java.util.Optional.of(fs.get(0))));
                         }
                     } else {
@@ -1015,7 +1041,8 @@ public final class ClosedForm {
     private void addFactors(List<LongRunCondition> out, java.util.Set<String> seen, List<GenPolynomial<BigRational>> fs) {
         for (GenPolynomial<BigRational> p : fs) {
             if (seen.add(key(p))) {
-                out.add(new LongRunCondition(key(p) + " != 0", java.util.Optional.of(p)));
+                Fml f = field.formula(p);
+                out.add(new LongRunCondition(Fml.plain(f), Fml.latex(f), Rational.ZERO, java.util.Optional.of(p)));
             }
         }
     }
@@ -1038,10 +1065,26 @@ public final class ClosedForm {
      */
     public List<String> longRunNotProved(Map<String, Domain> domains) {
         List<String> out = new ArrayList<>();
-        for (LongRunCondition c : longRunConditions()) {
-            if (c.poly.isEmpty() || !DomainCheck.holdsThroughout(field, c.poly.get(), domains)) {
-                out.add(c.text);
+        for (Condition c : longRunConditions(domains)) {
+            if (!c.holdsThroughout()) {
+                out.add(c.text());
             }
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The conditions of {@link LongRun#conditions()} as values, each with its LaTeX and whether it is shown to hold
+     * throughout the given domains (the check of {@link #longRunNotProved(Map)}).
+     *
+     * @param domains the domain of each parameter
+     * @return the conditions, in the order of {@link LongRun#conditions()}
+     */
+    public List<Condition> longRunConditions(Map<String, Domain> domains) {
+        List<Condition> out = new ArrayList<>();
+        for (LongRunCondition c : longRunConditionList()) {
+            out.add(new Condition(c.left(), c.leftLatex(), c.right(),
+                c.poly().isPresent() && DomainCheck.holdsThroughout(field, c.poly().get(), domains)));
         }
         return List.copyOf(out);
     }
@@ -1055,7 +1098,7 @@ public final class ClosedForm {
      */
     public List<Map<String, Rational>> specialCorners(Map<String, Domain> domains) {
         List<GenPolynomial<BigRational>> polys = new ArrayList<>(conditionPolys);
-        for (LongRunCondition c : longRunConditions()) {
+        for (LongRunCondition c : longRunConditionList()) {
             c.poly.ifPresent(polys::add);
         }
         return SpectralParts.corners(field, polys, domains);
