@@ -211,6 +211,10 @@ public final class Rational implements Comparable<Rational> {
             return this;
         }
         if (den.equals(o.den)) {
+            if (num.equals(o.num)) {
+                // 2 p/q in lowest terms without a gcd: gcd(2p, q) = gcd(2, q) as gcd(p, q) = 1
+                return den.testBit(0) ? new Rational(num.shiftLeft(1), den) : new Rational(num, den.shiftRight(1));
+            }
             return of(num.add(o.num), den);
         }
         // Henrici's sum (D. E. Knuth, The Art of Computer Programming, vol. 2, 4.5.1): with g = gcd(q1, q2),
