@@ -10,7 +10,7 @@ import java.math.BigInteger;
  * quadratic time with a large constant: on the thousands-of-digit fractions of the exact linear solves Lehmer's
  * method is 2 to 3 times faster ({@code docs/performance.md}, issue 9). Small operands go to {@code BigInteger.gcd}.
  */
-final class Gcd {
+public final class Gcd {
     private Gcd() {
     }
 
@@ -18,7 +18,7 @@ final class Gcd {
     static final int LEHMER_BITS = 256;
 
     /** {@code gcd(|a|, |b|)}, with {@code gcd(0, 0) = 0}. */
-    static BigInteger of(BigInteger a, BigInteger b) {
+    public static BigInteger of(BigInteger a, BigInteger b) {
         if (a.signum() < 0) {
             a = a.negate();
         }
