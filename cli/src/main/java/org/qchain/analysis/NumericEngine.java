@@ -186,6 +186,14 @@ final class NumericEngine {
      */
     static void guardSolve(LoadedModel model, long maxDigits) {
         RationalMatrix p = chainMatrix(model);
+        guardSolve(p, maxDigits, (double) p.rows() * p.rows());
+    }
+
+    /**
+     * {@link #guardSolve(LoadedModel, long)} for a result of {@code values} entries (each about twice the digits of
+     * the common denominator): with {@code --brief} the n x n tables are left out, and the result is a few vectors.
+     */
+    static void guardSolve(RationalMatrix p, long maxDigits, double values) {
         int n = p.rows();
         double det = 0;
         for (int i = 0; i < n; i++) {
@@ -201,7 +209,7 @@ final class NumericEngine {
             }
             det += l.bitLength() * Math.log10(2) + Math.log10(Math.max(2, nz + 1));
         }
-        long digits = (long) Math.min(Long.MAX_VALUE / 4.0, 2.0 * det * n * n);
+        long digits = (long) Math.min(Long.MAX_VALUE / 4.0, 2.0 * det * values);
         if (digits > maxDigits) {
             throw new QchainException(ErrorKey.SOLVE_TOO_LARGE, n, digits, maxDigits, MAX_DIGITS_OPTION);
         }
@@ -227,13 +235,39 @@ final class NumericEngine {
     }
 
     static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q, Progress progress) {
-        guardSolve(model, q.maxDigits());
+        RationalMatrix p = chainMatrix(model);
+        int n = p.rows();
+        if (q.brief() && !q.passage()) {
+            // the stationary laws and mean recurrence times (2n values) and the absorption of each transient state
+            // into each closed class
+            long closed = org.qchain.exact.longrun.Structure.of(ChainResults.graph(model,
+                org.qchain.exact.longrun.Arithmetic.RATIONAL, rows(model))).closedClasses().size();
+            guardSolve(p, q.maxDigits(), (double) n * (2 + closed));
+        } else {
+            guardSolve(p, q.maxDigits(), (double) n * n);
+        }
         return ChainResults.longRun(model, q, org.qchain.exact.longrun.Arithmetic.rational(progress), rows(model),
             org.qchain.result.ExactValue::new, List.of(), List.of());
     }
 
     static org.qchain.result.AbsorbResult absorb(LoadedModel model, AbsorbQuery q, Progress progress) {
-        guardSolve(model, q.limits().maxDigits());
+        RationalMatrix p = chainMatrix(model);
+        int n = p.rows();
+        if (q.limits().brief() && q.rewards().isEmpty()) {
+            // without N (and without rewards, whose long-run average needs the limit of P^n): t, its variance (twice
+            // the digits) and one absorption probability per absorbing state, for each state
+            long absorbing = q.absorbing().size();
+            for (int i = 0; i < n; i++) {
+                boolean leaves = false;
+                for (int j = 0; j < n && !leaves; j++) {
+                    leaves = j != i && !p.get(i, j).isZero();
+                }
+                absorbing += leaves ? 0 : 1;
+            }
+            guardSolve(p, q.limits().maxDigits(), (double) n * (3 + Math.min(n, absorbing)));
+        } else {
+            guardSolve(p, q.limits().maxDigits(), (double) n * n);
+        }
         return ChainResults.absorb(model, q, org.qchain.exact.longrun.Arithmetic.rational(progress), rows(model),
             org.qchain.result.ExactValue::new, List.of(), List.of());
     }

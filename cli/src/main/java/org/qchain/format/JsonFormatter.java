@@ -582,7 +582,7 @@ final class JsonFormatter extends Layout {
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
     private static List<List<String>> plain(List<List<org.qchain.result.Formula>> m) {
-        return m.stream().map(r -> r.stream().map(org.qchain.result.Formula::plain).toList()).toList();
+        return m.stream().map(Layout::plainTexts).toList();
     }
 
     /** With {@code --brief}: {@code "left_out":[field]} (the field itself stays, empty). */
@@ -600,8 +600,9 @@ final class JsonFormatter extends Layout {
         Json j = Json.object();
         // values may be empty (a continuous chain's state that is never left has no mean return time); otherwise
         // there is one per state
+        List<String> texts = plainTexts(values);
         for (int i = 0; i < (values.isEmpty() ? 0 : states.size()); i++) {
-            j.string(states.get(i), values.get(i).plain());
+            j.string(states.get(i), texts.get(i));
         }
         return j;
     }

@@ -667,16 +667,23 @@ final class TextFormatter extends DocLayout {
             sb.append('\n').append(t.title()).append('\n');
             TextTable tt = new TextTable("  ");
             tt.addRow(t.header());
+            List<String> texts = plainTexts(t.rows().stream().flatMap(List::stream).toList());
+            int k = 0;
             for (java.util.List<org.qchain.result.Formula> row : t.rows()) {
-                tt.addRow(row.stream().map(this::cell).toList());
+                List<String> cells = new ArrayList<>(row.size());
+                for (org.qchain.result.Formula f : row) {
+                    cells.add(cell(f, texts.get(k++)));
+                }
+                tt.addRow(cells);
             }
             sb.append(tt.render());
         }
         return sb.append('\n').append(Caution.TEXT).append('\n').toString();
     }
 
-    private String cell(org.qchain.result.Formula f) {
-        return Sections.exact(f).filter(r -> !r.isInteger()).map(r -> r + " (" + dec(r) + ")").orElse(f.plain());
+    /** A table cell: the plain text of {@code f}, with the decimal after a fraction. */
+    private String cell(org.qchain.result.Formula f, String plain) {
+        return Sections.exact(f).filter(r -> !r.isInteger()).map(r -> plain + " (" + dec(r) + ")").orElse(plain);
     }
 
     // --- distributions after n steps -----------------------------------------------------------------------------
