@@ -772,6 +772,98 @@ final class SymbolicEngine {
             x -> new RatFunFormula(x, false), p.occurringVariables(), checked(model).warnings());
     }
 
+    // --- avail ---------------------------------------------------------------------------------------------------
+
+    /**
+     * The figures of merit as formulas in the parameters: the exact module's one availability algorithm
+     * ({@link org.qchain.exact.ctmc.Availability}) run in the rational functions of the parameters, the values
+     * given with --at substituted first. The conditions are the irreducible factors of every figure's denominator
+     * and of every rate (each rate is taken as positive: the structure the formulas belong to), each checked
+     * throughout the domains. Where every parameter has a value, the exact figures there come from the numeric
+     * engine and must equal the formulas evaluated at the point.
+     */
+    static org.qchain.result.SymbolicAvailabilityResult availability(LoadedModel model, AvailabilityQuery q,
+            List<Integer> up, Progress progress) {
+        guardStates(model, q.maxStates());
+        Model m = model.model();
+        RatFunMatrix p = substituted(model);
+        org.qchain.symbolic.linear.RatFunArithmetic f = org.qchain.symbolic.linear.RatFunArithmetic.of(p.ring());
+        List<List<RatFun>> rows = rows(p);
+        org.qchain.exact.ctmc.Availability.Figures<RatFun> fig = org.qchain.exact.ctmc.Availability.of(f, rows, up,
+            f.of(q.hoursPerYear()));
+        List<String> states = m.states();
+        Map<String, Formula> pi = new LinkedHashMap<>();
+        Map<String, Optional<Formula>> mttf = new LinkedHashMap<>();
+        List<RatFun> all = new ArrayList<>(List.of(fig.availability(), fig.failureFrequency()));
+        for (int i = 0; i < states.size(); i++) {
+            pi.put(states.get(i), new RatFunFormula(fig.stationary().get(i), false));
+            all.add(fig.stationary().get(i));
+        }
+        for (int i : fig.up()) {
+            mttf.put(states.get(i), fig.mttf().get(i).map(x -> new RatFunFormula(x, false)));
+            fig.mttf().get(i).ifPresent(all::add);
+        }
+        fig.meanUpTime().ifPresent(all::add);
+        fig.meanDownTime().ifPresent(all::add);
+        java.util.LinkedHashSet<org.qchain.symbolic.Poly> factors = new java.util.LinkedHashSet<>();
+        for (int i = 0; i < rows.size(); i++) {
+            for (int j = 0; j < rows.size(); j++) {
+                RatFun x = rows.get(i).get(j);
+                if (i != j && !x.isZero()) {
+                    addFactors(factors, x.numerator());
+                    addFactors(factors, x.denominator());
+                }
+            }
+        }
+        for (RatFun x : all) {
+            addFactors(factors, x.denominator());
+        }
+        Map<String, Domain> domains = new LinkedHashMap<>();
+        m.params().forEach(d -> domains.put(d.name(), d.domain()));
+        List<org.qchain.result.SymbolicAvailabilityResult.Condition> conditions = new ArrayList<>();
+        for (org.qchain.symbolic.Poly c : factors) {
+            conditions.add(new org.qchain.result.SymbolicAvailabilityResult.Condition(Formulas.plain(c) + " != 0",
+                Formulas.of(RatFun.of(c), false, true) + " \\neq 0", org.qchain.symbolic.BoxSign.nonZero(c, domains)));
+        }
+        Optional<org.qchain.result.AvailabilityResult> at = Optional.empty();
+        if (model.complete()) {
+            org.qchain.result.AvailabilityResult exact = ContinuousEngine.availability(model, q, progress);
+            Map<String, Rational> pt = model.point().orElseThrow().values();
+            requireEqual(fig.availability().evaluate(pt), exact.availability());
+            requireEqual(fig.failureFrequency().evaluate(pt), exact.failureFrequency());
+            for (int i = 0; i < states.size(); i++) {
+                requireEqual(fig.stationary().get(i).evaluate(pt), exact.stationary().get(states.get(i)));
+            }
+            for (int i : fig.up()) {
+                if (fig.mttf().get(i).isPresent() && exact.mttf().get(states.get(i)).isPresent()) {
+                    requireEqual(fig.mttf().get(i).get().evaluate(pt), exact.mttf().get(states.get(i)).get());
+                }
+            }
+            at = Optional.of(exact);
+        }
+        Map<String, Rational> given = new LinkedHashMap<>();
+        new java.util.TreeMap<>(model.given()).forEach(given::put);
+        return new org.qchain.result.SymbolicAvailabilityResult(m.source(), p.occurringVariables(),
+            fig.up().stream().map(states::get).toList(), states, pi, new RatFunFormula(fig.availability(), false),
+            new RatFunFormula(fig.unavailability(), false), q.hoursPerYear(),
+            new RatFunFormula(fig.downHoursPerYear(), false), new RatFunFormula(fig.failureFrequency(), false),
+            fig.meanUpTime().map(x -> new RatFunFormula(x, false)),
+            fig.meanDownTime().map(x -> new RatFunFormula(x, false)), mttf, conditions, given, at,
+            checked(model).warnings());
+    }
+
+    /** The irreducible non-constant factors of a polynomial, each once, normalised by the factorisation. */
+    private static void addFactors(java.util.Set<org.qchain.symbolic.Poly> out, org.qchain.symbolic.Poly p) {
+        if (p.isConstant()) {
+            return;
+        }
+        for (org.qchain.symbolic.Poly.Factor fac : p.factor().factors()) {
+            if (!fac.base().isConstant()) {
+                out.add(fac.base());
+            }
+        }
+    }
+
     /**
      * Parameter values inside or on the edge of the domains where an entry vanishes (a root of a factor of its
      * numerator that is linear in one parameter) and the structure then differs from the generic one.
@@ -901,17 +993,12 @@ final class SymbolicEngine {
                 return Vanishing.SOMEWHERE;
             }
         }
-        Map<List<Integer>, Rational> terms = new java.util.HashMap<>();
-        List<String> ringVars = c.ring().variables();
-        for (org.qchain.symbolic.Poly.Term t : c.terms()) {
-            List<Integer> e = new ArrayList<>();
-            for (String v : vars) {
-                e.add(t.exponents().get(ringVars.indexOf(v)));
-            }
-            terms.merge(e, pos > 0 ? t.coefficient() : t.coefficient().negate(), Rational::add);
+        Map<String, Domain> open = new LinkedHashMap<>();
+        for (int i = 0; i < vars.size(); i++) {
+            open.put(vars.get(i), inside.get(i));
         }
-        return pos + neg > 0 && org.qchain.symbolic.BoxSign.positive(terms, inside) ? Vanishing.NEVER
-            : Vanishing.UNDECIDED;
+        return pos + neg > 0 && org.qchain.symbolic.BoxSign.positive(pos > 0 ? c : c.negate(), open)
+            ? Vanishing.NEVER : Vanishing.UNDECIDED;
     }
 
     /** What changes between two structures, in words. */

@@ -249,6 +249,30 @@ final class CsvFormatter extends Layout {
         return sb.toString();
     }
 
+    /**
+     * {@code figure,formula,latex,exact,decimal}: one record a figure (the exact value and decimal at the point when
+     * every parameter has one), then one a condition ({@code condition (proved)} or {@code condition (not proved)}).
+     */
+    @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("figure", "formula", "latex", "exact", "decimal"));
+        List<List<String>> at = r.atPoint().map(a -> Continuous.figures(a, digits)).orElse(List.of());
+        List<Continuous.FormulaRow> rows = Continuous.formulas(r);
+        for (int k = 0; k < rows.size(); k++) {
+            Continuous.FormulaRow f = rows.get(k);
+            Text.csvRecord(sb, List.of(f.name(), f.plain(), f.latex(), at.isEmpty() ? "" : at.get(k).get(1),
+                at.isEmpty() ? "" : at.get(k).get(2)));
+        }
+        for (org.qchain.result.SymbolicAvailabilityResult.Condition c : r.conditions()) {
+            Text.csvRecord(sb, List.of(c.proved() ? "condition (proved)" : "condition (not proved)", c.condition(),
+                c.latex(), "", ""));
+        }
+        r.atPoint().ifPresent(a -> Continuous.points(a).forEach(p -> Text.csvRecord(sb,
+            List.of(p.get(0), "", "", "", p.get(1)))));
+        return sb.toString();
+    }
+
     @Override
     public String rateSens(RateSensResult r) {
         StringBuilder sb = new StringBuilder();

@@ -463,6 +463,17 @@ final class JsonFormatter extends Layout {
 
     @Override
     public String availability(AvailabilityResult r) {
+        Json j = figures(r);
+        r.at().ifPresent(p -> j.object("at", point(p)));
+        j.number("digits", digits)
+            .string("model", r.source())
+            .strings("warnings", r.warnings())
+            .string("caution", Caution.TEXT);
+        return j.close() + "\n";
+    }
+
+    /** The exact figures of a numeric availability result, up to the point availabilities. */
+    private Json figures(AvailabilityResult r) {
         Json mttf = Json.object();
         Json mttfDec = Json.object();
         r.mttf().forEach((s, v) -> {
@@ -471,7 +482,7 @@ final class JsonFormatter extends Layout {
         });
         Json pi = Json.object();
         r.stationary().forEach((s, v) -> pi.string(s, v.toString()));
-        Json j = Json.object()
+        return Json.object()
             .strings("up", r.up())
             .string("steady_state_availability", r.availability().toString())
             .object("mttf", mttf)
@@ -496,7 +507,58 @@ final class JsonFormatter extends Layout {
                 .string("decimal", p.value().text())
                 .string("status", p.value().status().name().toLowerCase(java.util.Locale.ROOT))
                 .string("bound", Continuous.bound(p.value().enclosure().width())));
-        r.at().ifPresent(p -> j.object("at", point(p)));
+    }
+
+    @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        Json mttf = Json.object();
+        Json mttfTex = Json.object();
+        r.mttf().forEach((s, v) -> {
+            mttf.string(s, v.map(org.qchain.result.Formula::plain).orElse("inf"));
+            mttfTex.string(s, v.map(org.qchain.result.Formula::latex).orElse("\\infty"));
+        });
+        Json pi = Json.object();
+        Json piTex = Json.object();
+        r.stationary().forEach((s, v) -> {
+            pi.string(s, v.plain());
+            piTex.string(s, v.latex());
+        });
+        Json j = Json.object()
+            .strings("up", r.up())
+            .string("steady_state_availability", r.availability().plain())
+            .object("mttf", mttf)
+            .string("mean_up_time", r.meanUpTime().map(org.qchain.result.Formula::plain).orElse("undefined"))
+            .string("mean_down_time", r.meanDownTime().map(org.qchain.result.Formula::plain).orElse("undefined"))
+            .string("failure_frequency", r.failureFrequency().plain())
+            .string("unavailability", r.unavailability().plain())
+            .string("hours_per_year", r.hoursPerYear().toString())
+            .string("down_hours_per_year", r.downHoursPerYear().plain())
+            .object("stationary", pi)
+            .string("kind", "symbolic")
+            .strings("parameters", r.parameters())
+            .object("latex", Json.object()
+                .string("steady_state_availability", r.availability().latex())
+                .object("mttf", mttfTex)
+                .string("mean_up_time", r.meanUpTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
+                .string("mean_down_time", r.meanDownTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
+                .string("failure_frequency", r.failureFrequency().latex())
+                .string("unavailability", r.unavailability().latex())
+                .string("down_hours_per_year", r.downHoursPerYear().latex())
+                .object("stationary", piTex))
+            .objects("conditions", r.conditions(), c -> Json.object()
+                .string("condition", c.condition())
+                .string("latex", c.latex())
+                .bool("proved", c.proved()));
+        if (!r.substituted().isEmpty()) {
+            Json sub = Json.object();
+            r.substituted().forEach((k, v) -> sub.string(k, v.toString()));
+            j.object("substituted", sub);
+        }
+        r.atPoint().ifPresent(a -> {
+            Json values = figures(a);
+            a.at().ifPresent(p -> values.object("at", point(p)));
+            j.object("values_at_point", values);
+        });
         j.number("digits", digits)
             .string("model", r.source())
             .strings("warnings", r.warnings())

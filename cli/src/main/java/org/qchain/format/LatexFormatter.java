@@ -455,6 +455,42 @@ final class LatexFormatter extends Layout {
     }
 
     @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% Availability of ").append(Text.comment(r.source())).append("; up: ")
+            .append(Text.comment(String.join(", ", r.up()))).append("; formulas in ")
+            .append(Text.comment(r.parameters().isEmpty() ? "no parameter" : String.join(", ", r.parameters())))
+            .append('\n');
+        if (!r.substituted().isEmpty()) {
+            sb.append("% substituted before solving (given with --at): ").append(Text.comment(r.substitutedText()))
+                .append('\n');
+        }
+        sb.append("\\begin{tabular}{ll}\n figure & formula \\\\ \\hline\n");
+        for (Continuous.FormulaRow f : Continuous.formulas(r)) {
+            sb.append(Text.latex(f.name())).append(" & $").append(f.latex()).append("$ \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+        if (!r.conditions().isEmpty()) {
+            sb.append("% ").append(Text.comment(Continuous.CONDITIONS)).append('\n');
+            sb.append("\\begin{itemize}\n");
+            r.conditions().forEach(c -> sb.append("\\item $").append(c.latex()).append("$: ")
+                .append(Text.latex(Continuous.proof(c))).append('\n'));
+            sb.append("\\end{itemize}\n");
+        }
+        r.atPoint().ifPresent(a -> {
+            sb.append("% values at ").append(Text.comment(a.at().map(p -> p.text() + " (" + p.origin() + ")")
+                .orElse("the point"))).append(", exactly\n");
+            sb.append("\\begin{tabular}{lll}\n figure & exact & decimal \\\\ \\hline\n");
+            for (List<String> f : Continuous.figures(a, digits)) {
+                sb.append(Text.latex(f.get(0))).append(" & ").append(Text.latex(f.get(1))).append(" & ")
+                    .append(Text.latex(f.get(2))).append(" \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+        });
+        return caution(sb);
+    }
+
+    @Override
     public String rateSens(RateSensResult r) {
         StringBuilder sb = new StringBuilder();
         sb.append("% Sensitivity of ").append(Text.comment(Continuous.figureName(r))).append(" to ")

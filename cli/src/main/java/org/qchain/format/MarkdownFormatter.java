@@ -417,6 +417,38 @@ final class MarkdownFormatter extends Layout {
     }
 
     @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**Availability** of `").append(Text.code(r.source())).append("` (up: ")
+            .append(Text.markdown(String.join(", ", r.up()))).append("; formulas in ")
+            .append(Text.markdown(r.parameters().isEmpty() ? "no parameter" : String.join(", ", r.parameters())))
+            .append(")");
+        if (!r.substituted().isEmpty()) {
+            sb.append(" Substituted before solving (given with --at): `").append(Text.code(r.substitutedText()))
+                .append("`.");
+        }
+        sb.append("\n\n");
+        line(sb, List.of("figure", "formula"));
+        line(sb, separator(2));
+        Continuous.formulas(r).forEach(f -> line(sb, List.of(Text.markdown(f.name()),
+            f.formula().isPresent() ? "`" + Text.code(f.plain()) + "`" : Text.markdown(f.plain()))));
+        if (!r.conditions().isEmpty()) {
+            sb.append('\n').append(Text.markdown(Continuous.CONDITIONS)).append("\n\n");
+            r.conditions().forEach(c -> sb.append("- `").append(Text.code(c.condition())).append("`: ")
+                .append(Text.markdown(Continuous.proof(c))).append('\n'));
+        }
+        r.atPoint().ifPresent(a -> {
+            sb.append("\nValues at ").append(Text.markdown(a.at().map(p -> p.text() + " (" + p.origin() + ")")
+                .orElse("the point"))).append(", exactly:\n\n");
+            line(sb, List.of("figure", "exact", "decimal"));
+            line(sb, separator(3));
+            Continuous.figures(a, digits).forEach(f -> line(sb, f.stream().map(Text::markdown).toList()));
+            Continuous.points(a).forEach(p -> line(sb, List.of(Text.markdown(p.get(0)), "", p.get(1))));
+        });
+        return caution(sb);
+    }
+
+    @Override
     public String rateSens(RateSensResult r) {
         StringBuilder sb = new StringBuilder();
         sb.append("**Sensitivity** of ").append(Text.markdown(Continuous.figureName(r))).append(" to `")

@@ -609,6 +609,13 @@ final class TextFormatter extends Layout {
         sb.append("Availability of ").append(r.source()).append(" (continuous chain; up: ")
             .append(String.join(", ", r.up())).append("; every other state is down)\n").append(parameters(r.at()))
             .append('\n');
+        figures(sb, r);
+        sb.append('\n').append(Continuous.UNITS).append('\n');
+        return end(sb);
+    }
+
+    /** The exact figures' table and the point availabilities of a numeric result. */
+    private void figures(StringBuilder sb, AvailabilityResult r) {
         TextTable table = new TextTable().addRow("figure", "decimal", "exact");
         for (List<String> f : Continuous.figures(r, digits)) {
             table.addRow(f.get(0), f.get(2), f.get(1));
@@ -620,7 +627,31 @@ final class TextFormatter extends Layout {
             Continuous.points(r).forEach(pts::addRow);
             sb.append(pts.render());
         }
-        sb.append("\nTimes are in the unit of the model's rates; failure frequency is per that unit.\n");
+    }
+
+    @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        StringBuilder sb = new StringBuilder(Continuous.symbolicTitle(r)).append('\n');
+        if (!r.substituted().isEmpty()) {
+            sb.append("Substituted before solving (given with --at): ").append(r.substitutedText()).append('\n');
+        }
+        sb.append('\n');
+        TextTable table = new TextTable().addRow("figure", "formula");
+        Continuous.formulas(r).forEach(f -> table.addRow(f.name(), f.plain()));
+        sb.append(table.render());
+        if (!r.conditions().isEmpty()) {
+            sb.append('\n').append(Continuous.CONDITIONS).append('\n');
+            TextTable c = new TextTable("  ");
+            r.conditions().forEach(x -> c.addRow(x.condition(), Continuous.proof(x)));
+            sb.append(c.render());
+        }
+        r.atPoint().ifPresent(a -> {
+            sb.append('\n').append("Values at ").append(a.at().map(p -> p.text() + " (" + p.origin() + ")")
+                .orElse("the point")).append(", exactly (the formulas evaluated there):\n");
+            figures(sb, a);
+        });
+        r.warnings().forEach(w -> sb.append("Warning: ").append(w).append('\n'));
+        sb.append('\n').append(Continuous.UNITS).append('\n');
         return end(sb);
     }
 
