@@ -163,7 +163,9 @@ public final class Analysis {
      * @throws QchainException for an unknown state or parameter, a bad sweep, a power past a size limit
      */
     public static SensResult sens(LoadedModel model, SensQuery q, Progress progress) {
-        model.requireDiscrete("qchain sens needs a discrete chain (continuous chains are not supported yet)");
+        model.requireDiscrete("qchain sens -n counts the steps of a discrete chain; for a continuous chain give the"
+            + " time (qchain sens MODEL -t T --from A --to B --wrt P) or differentiate a figure of merit (qchain sens"
+            + " MODEL --of availability|unavailability|mttf|failure-frequency --wrt P)");
         SizeGuard.check(model, q);
         return Interrupts.guarded(() -> SymbolicEngine.sens(model, q, progress));
     }
@@ -393,18 +395,18 @@ public final class Analysis {
     }
 
     /**
-     * The validated one-step matrix.
+     * The validated one-step matrix, or for a continuous chain the validated generator with its total rates out
+     * and mean holding times.
      *
      * @param model the loaded model (already validated by loading)
      * @param q     the query
-     * @return the numeric or symbolic check result
+     * @return the numeric or symbolic check result ({@link CheckResult.Generator} for a continuous chain)
      */
     public static CheckResult check(LoadedModel model, CheckQuery q) {
-        model.requireDiscrete("qchain check needs a discrete chain (continuous chains are not supported yet)");
         if (route(model, q) == Route.SYMBOLIC) {
             return Interrupts.guarded(() -> SymbolicEngine.check(model));
         }
-        return NumericEngine.check(model);
+        return ChainResults.continuous(model) ? NumericEngine.generatorCheck(model) : NumericEngine.check(model);
     }
 
     /** The route of {@code classes}, {@code longrun} and {@code absorb}: numeric when every used parameter has a value. */

@@ -487,6 +487,9 @@ final class SymbolicEngine {
     static CheckResult check(LoadedModel model) {
         Model m = model.model();
         Checked ctx = checked(model);
+        if (m.kind() == org.qchain.exact.model.ChainKind.CONTINUOUS) {
+            return generatorCheck(model, ctx);
+        }
         List<List<Formula>> entries = new ArrayList<>();
         for (int i = 0; i < m.size(); i++) {
             List<Formula> row = new ArrayList<>();
@@ -497,6 +500,34 @@ final class SymbolicEngine {
         }
         return new CheckResult.Symbolic(m.source(), m.kind().word(), m.states(), m.usedParameters(), entries,
             ctx.warnings());
+    }
+
+    /**
+     * The generator as formulas: rows sum to 0 identically (the diagonal is minus the row's rates; asserted), the
+     * off-diagonal rates were checked to be at least 0 over the domains when the model was loaded (the located
+     * conditions are the warnings), the total rate out of each state and its mean holding time.
+     */
+    private static CheckResult generatorCheck(LoadedModel model, Checked ctx) {
+        RatFunMatrix p = ctx.p();
+        List<List<Formula>> rows = new ArrayList<>();
+        List<Formula> out = new ArrayList<>();
+        List<Optional<Formula>> holding = new ArrayList<>();
+        for (int i = 0; i < p.size(); i++) {
+            if (!p.rowSum(i).isZero()) {
+                throw new QchainException(ErrorKey.INTERNAL, "row " + model.states().get(i) + " of the generator sums"
+                    + " to " + Formulas.plain(p.rowSum(i)) + ", not identically 0");
+            }
+            List<Formula> row = new ArrayList<>();
+            for (int j = 0; j < p.size(); j++) {
+                row.add(new RatFunFormula(p.get(i, j), false));
+            }
+            rows.add(row);
+            RatFun q = p.get(i, i).negate();
+            out.add(new RatFunFormula(q, false));
+            holding.add(q.isZero() ? Optional.empty() : Optional.of(new RatFunFormula(q.reciprocal(), true)));
+        }
+        return new CheckResult.Generator(model.source(), model.states(), model.model().usedParameters(), true, rows,
+            out, holding, NumericEngine.upNames(model), Optional.empty(), ctx.warnings());
     }
 
     // --- closed ------------------------------------------------------------------------------------------------
@@ -796,11 +827,11 @@ final class SymbolicEngine {
         Map<String, Optional<Formula>> mttf = new LinkedHashMap<>();
         List<RatFun> all = new ArrayList<>(List.of(fig.availability(), fig.failureFrequency()));
         for (int i = 0; i < states.size(); i++) {
-            pi.put(states.get(i), new RatFunFormula(fig.stationary().get(i), false));
+            pi.put(states.get(i), new RatFunFormula(fig.stationary().get(i), true));
             all.add(fig.stationary().get(i));
         }
         for (int i : fig.up()) {
-            mttf.put(states.get(i), fig.mttf().get(i).map(x -> new RatFunFormula(x, false)));
+            mttf.put(states.get(i), fig.mttf().get(i).map(x -> new RatFunFormula(x, true)));
             fig.mttf().get(i).ifPresent(all::add);
         }
         fig.meanUpTime().ifPresent(all::add);
@@ -844,11 +875,11 @@ final class SymbolicEngine {
         Map<String, Rational> given = new LinkedHashMap<>();
         new java.util.TreeMap<>(model.given()).forEach(given::put);
         return new org.qchain.result.SymbolicAvailabilityResult(m.source(), p.occurringVariables(),
-            fig.up().stream().map(states::get).toList(), states, pi, new RatFunFormula(fig.availability(), false),
-            new RatFunFormula(fig.unavailability(), false), q.hoursPerYear(),
-            new RatFunFormula(fig.downHoursPerYear(), false), new RatFunFormula(fig.failureFrequency(), false),
-            fig.meanUpTime().map(x -> new RatFunFormula(x, false)),
-            fig.meanDownTime().map(x -> new RatFunFormula(x, false)), mttf, conditions, given, at,
+            fig.up().stream().map(states::get).toList(), states, pi, new RatFunFormula(fig.availability(), true),
+            new RatFunFormula(fig.unavailability(), true), q.hoursPerYear(),
+            new RatFunFormula(fig.downHoursPerYear(), true), new RatFunFormula(fig.failureFrequency(), true),
+            fig.meanUpTime().map(x -> new RatFunFormula(x, true)),
+            fig.meanDownTime().map(x -> new RatFunFormula(x, true)), mttf, conditions, given, at,
             checked(model).warnings());
     }
 

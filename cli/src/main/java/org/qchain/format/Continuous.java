@@ -161,6 +161,65 @@ final class Continuous {
     /** The closing sentence about units. */
     static final String UNITS = "Times are in the unit of the model's rates; failure frequency is per that unit.";
 
+    /** The title of a generator check. */
+    static String generatorTitle(org.qchain.result.CheckResult.Generator g) {
+        int n = g.states().size();
+        return "Generator Q of " + g.source() + " (continuous chain, " + n + (n == 1 ? " state)" : " states)")
+            + (g.symbolic() ? " as exact rational functions of " + (g.parameters().isEmpty() ? "(no parameters)"
+            : String.join(", ", g.parameters())) : "");
+    }
+
+    /** What a generator's entries are. */
+    static final String GENERATOR_NOTE = "Row i, column j: rate from state i to state j (per unit of time); diagonal:"
+        + " minus the total rate out of state i.";
+
+    /** What an unbounded holding time prints as. */
+    static final String NEVER_LEFT = "inf (never left)";
+
+    /** The generator's closing verdict, as the discrete check's {@code OK:} line. */
+    static String generatorVerdict(org.qchain.result.CheckResult.Generator g) {
+        int n = g.states().size();
+        String head = "OK: " + n + (n == 1 ? " state" : " states") + ", continuous, rows sum to 0";
+        if (!g.symbolic()) {
+            return head + ", off-diagonal rates >= 0";
+        }
+        return head + " identically; " + (g.warnings().isEmpty()
+            ? "off-diagonal rates >= 0 on the whole parameter domain"
+            : g.warnings().size() + (g.warnings().size() == 1 ? " condition" : " conditions")
+                + " on the parameters (above)");
+    }
+
+    /** The sentence before a generator's located conditions. */
+    static final String RATE_CONDITIONS = "Conditions (each off-diagonal rate must be at least 0 for Q to be a"
+        + " generator):";
+
+    /** The operating and down states, as a sentence; empty without an {@code up} line. */
+    static Optional<String> upDown(org.qchain.result.CheckResult.Generator g) {
+        return g.up().map(u -> "Up (operating) states: " + String.join(", ", u) + "; down: "
+            + (g.down().isEmpty() ? "(none)" : String.join(", ", g.down())) + ".");
+    }
+
+    /**
+     * Per state: name, total rate out, mean holding time; exact values add a decimal after each ({@code 1/250
+     * (0.004)} style is the caller's: the cells here are the exact text and the decimal, or the formula and "").
+     */
+    static List<List<String>> stateRows(org.qchain.result.CheckResult.Generator g, int digits) {
+        List<List<String>> out = new ArrayList<>();
+        for (int i = 0; i < g.states().size(); i++) {
+            Formula q = g.exitRates().get(i);
+            Optional<Formula> h = g.holding().get(i);
+            out.add(List.of(g.states().get(i), q.plain(), decimalOf(q, digits),
+                h.map(Formula::plain).orElse(NEVER_LEFT), h.map(x -> decimalOf(x, digits)).orElse(g.symbolic() ? ""
+                    : "inf")));
+        }
+        return out;
+    }
+
+    /** The decimal of an exact value, or "" for a formula. */
+    static String decimalOf(Formula f, int digits) {
+        return Sections.exact(f).map(r -> Text.decimal(r, digits)).orElse("");
+    }
+
     /** The point availabilities, one row each: {@code A(t)} label, decimal (certified). */
     static List<List<String>> points(AvailabilityResult r) {
         List<List<String>> out = new ArrayList<>();

@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.Formula;
 import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -192,6 +193,33 @@ final class CsvFormatter extends Layout {
     @Override
     public String closed(ClosedResult r) {
         throw new UnsupportedOperationException("no CSV layout for closed forms");
+    }
+
+    /**
+     * {@code quantity,from,to,exact,decimal} (exact values) or {@code quantity,from,to,formula}: the rates
+     * ({@code rate}), then per state the total rate out and the mean holding time ({@code to} empty).
+     */
+    @Override
+    String generatorCheck(CheckResult.Generator g) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, g.symbolic() ? List.of("quantity", "from", "to", "formula")
+            : List.of("quantity", "from", "to", "exact", "decimal"));
+        for (int i = 0; i < g.states().size(); i++) {
+            for (int j = 0; j < g.states().size(); j++) {
+                Formula f = g.entries().get(i).get(j);
+                record(sb, g, List.of("rate", g.states().get(i), g.states().get(j), f.plain(),
+                    Continuous.decimalOf(f, digits)));
+            }
+        }
+        for (List<String> r : Continuous.stateRows(g, digits)) {
+            record(sb, g, List.of("total rate out", r.get(0), "", r.get(1), r.get(2)));
+            record(sb, g, List.of("mean holding time", r.get(0), "", r.get(3), r.get(4)));
+        }
+        return sb.toString();
+    }
+
+    private static void record(StringBuilder sb, CheckResult.Generator g, List<String> cells) {
+        Text.csvRecord(sb, g.symbolic() ? cells.subList(0, 4) : cells);
     }
 
     @Override

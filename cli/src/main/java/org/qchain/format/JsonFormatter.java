@@ -14,6 +14,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.Formula;
 import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Point;
@@ -379,6 +380,43 @@ final class JsonFormatter extends Layout {
     }
 
     // --- check -------------------------------------------------------------------------------------------------
+
+    @Override
+    String generatorCheck(CheckResult.Generator g) {
+        List<List<String>> plain = g.entries().stream().map(r -> r.stream().map(Formula::plain).toList()).toList();
+        Json out = Json.object();
+        Json hold = Json.object();
+        Json outDec = Json.object();
+        Json holdDec = Json.object();
+        for (List<String> r : Continuous.stateRows(g, digits)) {
+            out.string(r.get(0), r.get(1));
+            hold.string(r.get(0), g.holding().get(g.states().indexOf(r.get(0))).isPresent() ? r.get(3) : "inf");
+            outDec.string(r.get(0), r.get(2));
+            holdDec.string(r.get(0), r.get(4));
+        }
+        Json j = Json.object().string("kind", "continuous").strings("states", g.states());
+        if (g.symbolic()) {
+            j.strings("parameters", g.parameters());
+        }
+        j.stringRows("matrix", plain);
+        if (!g.symbolic()) {
+            j.stringRows("decimals", g.entries().stream().map(r -> r.stream()
+                .map(f -> Continuous.decimalOf(f, digits)).toList()).toList());
+        }
+        j.object("exit_rates", out).object("mean_holding_times", hold);
+        if (!g.symbolic()) {
+            j.object("decimals_exit_rates", outDec).object("decimals_mean_holding_times", holdDec);
+        }
+        g.up().ifPresent(u -> j.strings("up", u).strings("down", g.down()));
+        if (g.symbolic()) {
+            j.strings("conditions", g.warnings());
+        }
+        g.at().ifPresent(p -> j.object("at", point(p)));
+        if (!g.symbolic()) {
+            j.number("digits", digits);
+        }
+        return j.string("model", g.source()).strings("warnings", g.warnings()).close() + "\n";
+    }
 
     @Override
     String symbolicCheck(CheckResult.Symbolic s) {

@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.Formula;
 import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -367,6 +368,33 @@ final class LatexFormatter extends Layout {
     }
 
     // --- check -------------------------------------------------------------------------------------------------
+
+    @Override
+    String generatorCheck(CheckResult.Generator g) {
+        StringBuilder sb = new StringBuilder("% ").append(Text.comment(Continuous.generatorTitle(g)));
+        g.at().ifPresent(p -> sb.append("; parameters at ").append(Text.comment(p.text())).append(" (")
+            .append(p.origin()).append(")"));
+        sb.append('\n').append("% ").append(Text.comment(Continuous.GENERATOR_NOTE)).append('\n');
+        sb.append("\\[\nQ = \\begin{pmatrix}\n");
+        List<String> lines = new ArrayList<>();
+        for (List<Formula> row : g.entries()) {
+            lines.add(String.join(" & ", row.stream().map(Formula::latex).toList()));
+        }
+        sb.append(String.join(" \\\\\n", lines)).append("\n\\end{pmatrix}\n\\]\n");
+        sb.append("% rows and columns: ").append(Text.comment(String.join(", ", g.states()))).append('\n');
+        sb.append("\\begin{tabular}{lll}\n state & total rate out $q_i$ & mean holding time $1/q_i$ \\\\ \\hline\n");
+        for (int i = 0; i < g.states().size(); i++) {
+            sb.append(Text.latex(g.states().get(i))).append(" & $").append(g.exitRates().get(i).latex()).append("$ & $")
+                .append(g.holding().get(i).map(Formula::latex).orElse("\\infty")).append("$ \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+        Continuous.upDown(g).ifPresent(u -> sb.append("% ").append(Text.comment(u)).append('\n'));
+        for (String w : g.warnings()) {
+            sb.append("% condition: ").append(Text.comment(w)).append('\n');
+        }
+        sb.append("% ").append(Text.comment(Continuous.generatorVerdict(g))).append('\n');
+        return caution(sb);
+    }
 
     @Override
     String symbolicCheck(CheckResult.Symbolic s) {

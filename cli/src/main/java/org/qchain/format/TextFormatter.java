@@ -527,6 +527,41 @@ final class TextFormatter extends Layout {
     }
 
     @Override
+    String generatorCheck(CheckResult.Generator g) {
+        StringBuilder sb = new StringBuilder(Continuous.generatorTitle(g)).append('\n');
+        sb.append(Continuous.GENERATOR_NOTE).append('\n').append(parameters(g.at())).append('\n');
+        List<List<String>> plain = new ArrayList<>();
+        for (List<org.qchain.result.Formula> row : g.entries()) {
+            plain.add(row.stream().map(org.qchain.result.Formula::plain).toList());
+        }
+        if (g.symbolic()) {
+            overview(sb, g.states(), plain);
+        } else {
+            sb.append("Decimals (").append(Text.digits(digits)).append("):\n");
+            List<List<String>> decimals = new ArrayList<>();
+            for (List<org.qchain.result.Formula> row : g.entries()) {
+                decimals.add(row.stream().map(f -> Continuous.decimalOf(f, digits)).toList());
+            }
+            overview(sb, g.states(), decimals);
+            sb.append("Exact values:\n");
+            overview(sb, g.states(), plain);
+        }
+        TextTable t = g.symbolic() ? new TextTable().addRow("state", "total rate out q_i", "mean holding time 1/q_i")
+            : new TextTable().addRow("state", "total rate out q_i", "decimal", "mean holding time 1/q_i", "decimal");
+        for (List<String> r : Continuous.stateRows(g, digits)) {
+            t.addRow(g.symbolic() ? List.of(r.get(0), r.get(1), r.get(3)) : r);
+        }
+        sb.append(t.render());
+        Continuous.upDown(g).ifPresent(u -> sb.append('\n').append(u).append('\n'));
+        if (!g.warnings().isEmpty()) {
+            sb.append('\n').append(Continuous.RATE_CONDITIONS).append('\n');
+            g.warnings().forEach(w -> sb.append("  ").append(w).append('\n'));
+        }
+        close(sb);
+        return sb.append(Continuous.generatorVerdict(g)).append('\n').toString();
+    }
+
+    @Override
     String symbolicCheck(CheckResult.Symbolic s) {
         StringBuilder sb = new StringBuilder();
         int size = s.states().size();
@@ -650,7 +685,6 @@ final class TextFormatter extends Layout {
                 .orElse("the point")).append(", exactly (the formulas evaluated there):\n");
             figures(sb, a);
         });
-        r.warnings().forEach(w -> sb.append("Warning: ").append(w).append('\n'));
         sb.append('\n').append(Continuous.UNITS).append('\n');
         return end(sb);
     }
