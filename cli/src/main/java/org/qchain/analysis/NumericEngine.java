@@ -177,6 +177,41 @@ final class NumericEngine {
         return new CheckResult.Numeric(new StepResult.Matrix(header(model, 1, List.of()), states, rows));
     }
 
+    /**
+     * The generator of a continuous chain at the point (validated at load: no negative rate, rows summing to 0 by
+     * construction), with each state's total rate out and mean holding time.
+     */
+    static CheckResult generatorCheck(LoadedModel model) {
+        RationalMatrix g = model.generator("qchain check");
+        List<List<org.qchain.result.Formula>> rows = new ArrayList<>();
+        List<org.qchain.result.Formula> out = new ArrayList<>();
+        List<java.util.Optional<org.qchain.result.Formula>> holding = new ArrayList<>();
+        for (int i = 0; i < g.rows(); i++) {
+            List<org.qchain.result.Formula> row = new ArrayList<>();
+            Rational sum = Rational.ZERO;
+            for (int j = 0; j < g.cols(); j++) {
+                row.add(new org.qchain.result.ExactValue(g.get(i, j)));
+                sum = sum.add(g.get(i, j));
+            }
+            if (!sum.isZero()) {
+                throw new QchainException(ErrorKey.INTERNAL, "row " + model.states().get(i) + " of the generator sums"
+                    + " to " + sum + ", not 0");
+            }
+            rows.add(row);
+            Rational q = g.get(i, i).negate();
+            out.add(new org.qchain.result.ExactValue(q));
+            holding.add(q.isZero() ? java.util.Optional.empty()
+                : java.util.Optional.of(new org.qchain.result.ExactValue(q.reciprocal())));
+        }
+        return new CheckResult.Generator(model.source(), model.states(), List.of(), false, rows, out, holding,
+            upNames(model), model.point().filter(p -> !p.isEmpty()), List.of());
+    }
+
+    /** The names on the model's {@code up} line, if it has one. */
+    static java.util.Optional<List<String>> upNames(LoadedModel model) {
+        return model.model().upStates().map(ix -> ix.stream().map(i -> model.states().get(i)).toList());
+    }
+
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
     /**

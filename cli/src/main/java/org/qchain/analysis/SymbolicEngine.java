@@ -488,6 +488,9 @@ final class SymbolicEngine {
     static CheckResult check(LoadedModel model) {
         Model m = model.model();
         Checked ctx = checked(model);
+        if (m.kind() == org.qchain.exact.model.ChainKind.CONTINUOUS) {
+            return generatorCheck(model, ctx);
+        }
         List<List<Formula>> entries = new ArrayList<>();
         for (int i = 0; i < m.size(); i++) {
             List<Formula> row = new ArrayList<>();
@@ -498,6 +501,34 @@ final class SymbolicEngine {
         }
         return new CheckResult.Symbolic(m.source(), m.kind().word(), m.states(), m.usedParameters(), entries,
             ctx.warnings());
+    }
+
+    /**
+     * The generator as formulas: rows sum to 0 identically (the diagonal is minus the row's rates; asserted), the
+     * off-diagonal rates were checked to be at least 0 over the domains when the model was loaded (the located
+     * conditions are the warnings), the total rate out of each state and its mean holding time.
+     */
+    private static CheckResult generatorCheck(LoadedModel model, Checked ctx) {
+        RatFunMatrix p = ctx.p();
+        List<List<Formula>> rows = new ArrayList<>();
+        List<Formula> out = new ArrayList<>();
+        List<Optional<Formula>> holding = new ArrayList<>();
+        for (int i = 0; i < p.size(); i++) {
+            if (!p.rowSum(i).isZero()) {
+                throw new QchainException(ErrorKey.INTERNAL, "row " + model.states().get(i) + " of the generator sums"
+                    + " to " + Formulas.plain(p.rowSum(i)) + ", not identically 0");
+            }
+            List<Formula> row = new ArrayList<>();
+            for (int j = 0; j < p.size(); j++) {
+                row.add(new RatFunFormula(p.get(i, j), false));
+            }
+            rows.add(row);
+            RatFun q = p.get(i, i).negate();
+            out.add(new RatFunFormula(q, false));
+            holding.add(q.isZero() ? Optional.empty() : Optional.of(new RatFunFormula(q.reciprocal(), true)));
+        }
+        return new CheckResult.Generator(model.source(), model.states(), model.model().usedParameters(), true, rows,
+            out, holding, NumericEngine.upNames(model), Optional.empty(), ctx.warnings());
     }
 
     // --- closed ------------------------------------------------------------------------------------------------
@@ -830,6 +861,98 @@ final class SymbolicEngine {
             x -> new RatFunFormula(x, false), p.occurringVariables(), checked(model).warnings());
     }
 
+    // --- avail ---------------------------------------------------------------------------------------------------
+
+    /**
+     * The figures of merit as formulas in the parameters: the exact module's one availability algorithm
+     * ({@link org.qchain.exact.ctmc.Availability}) run in the rational functions of the parameters, the values
+     * given with --at substituted first. The conditions are the irreducible factors of every figure's denominator
+     * and of every rate (each rate is taken as positive: the structure the formulas belong to), each checked
+     * throughout the domains. Where every parameter has a value, the exact figures there come from the numeric
+     * engine and must equal the formulas evaluated at the point.
+     */
+    static org.qchain.result.SymbolicAvailabilityResult availability(LoadedModel model, AvailabilityQuery q,
+            List<Integer> up, Progress progress) {
+        guardStates(model, q.maxStates());
+        Model m = model.model();
+        RatFunMatrix p = substituted(model);
+        org.qchain.symbolic.linear.RatFunArithmetic f = org.qchain.symbolic.linear.RatFunArithmetic.of(p.ring());
+        List<List<RatFun>> rows = rows(p);
+        org.qchain.exact.ctmc.Availability.Figures<RatFun> fig = org.qchain.exact.ctmc.Availability.of(f, rows, up,
+            f.of(q.hoursPerYear()));
+        List<String> states = m.states();
+        Map<String, Formula> pi = new LinkedHashMap<>();
+        Map<String, Optional<Formula>> mttf = new LinkedHashMap<>();
+        List<RatFun> all = new ArrayList<>(List.of(fig.availability(), fig.failureFrequency()));
+        for (int i = 0; i < states.size(); i++) {
+            pi.put(states.get(i), new RatFunFormula(fig.stationary().get(i), true));
+            all.add(fig.stationary().get(i));
+        }
+        for (int i : fig.up()) {
+            mttf.put(states.get(i), fig.mttf().get(i).map(x -> new RatFunFormula(x, true)));
+            fig.mttf().get(i).ifPresent(all::add);
+        }
+        fig.meanUpTime().ifPresent(all::add);
+        fig.meanDownTime().ifPresent(all::add);
+        java.util.LinkedHashSet<org.qchain.symbolic.Poly> factors = new java.util.LinkedHashSet<>();
+        for (int i = 0; i < rows.size(); i++) {
+            for (int j = 0; j < rows.size(); j++) {
+                RatFun x = rows.get(i).get(j);
+                if (i != j && !x.isZero()) {
+                    addFactors(factors, x.numerator());
+                    addFactors(factors, x.denominator());
+                }
+            }
+        }
+        for (RatFun x : all) {
+            addFactors(factors, x.denominator());
+        }
+        Map<String, Domain> domains = new LinkedHashMap<>();
+        m.params().forEach(d -> domains.put(d.name(), d.domain()));
+        List<org.qchain.result.SymbolicAvailabilityResult.Condition> conditions = new ArrayList<>();
+        for (org.qchain.symbolic.Poly c : factors) {
+            conditions.add(new org.qchain.result.SymbolicAvailabilityResult.Condition(Formulas.plain(c) + " != 0",
+                Formulas.of(RatFun.of(c), false, true) + " \\neq 0", org.qchain.symbolic.BoxSign.nonZero(c, domains)));
+        }
+        Optional<org.qchain.result.AvailabilityResult> at = Optional.empty();
+        if (model.complete()) {
+            org.qchain.result.AvailabilityResult exact = ContinuousEngine.availability(model, q, progress);
+            Map<String, Rational> pt = model.point().orElseThrow().values();
+            requireEqual(fig.availability().evaluate(pt), exact.availability());
+            requireEqual(fig.failureFrequency().evaluate(pt), exact.failureFrequency());
+            for (int i = 0; i < states.size(); i++) {
+                requireEqual(fig.stationary().get(i).evaluate(pt), exact.stationary().get(states.get(i)));
+            }
+            for (int i : fig.up()) {
+                if (fig.mttf().get(i).isPresent() && exact.mttf().get(states.get(i)).isPresent()) {
+                    requireEqual(fig.mttf().get(i).get().evaluate(pt), exact.mttf().get(states.get(i)).get());
+                }
+            }
+            at = Optional.of(exact);
+        }
+        Map<String, Rational> given = new LinkedHashMap<>();
+        new java.util.TreeMap<>(model.given()).forEach(given::put);
+        return new org.qchain.result.SymbolicAvailabilityResult(m.source(), p.occurringVariables(),
+            fig.up().stream().map(states::get).toList(), states, pi, new RatFunFormula(fig.availability(), true),
+            new RatFunFormula(fig.unavailability(), true), q.hoursPerYear(),
+            new RatFunFormula(fig.downHoursPerYear(), true), new RatFunFormula(fig.failureFrequency(), true),
+            fig.meanUpTime().map(x -> new RatFunFormula(x, true)),
+            fig.meanDownTime().map(x -> new RatFunFormula(x, true)), mttf, conditions, given, at,
+            checked(model).warnings());
+    }
+
+    /** The irreducible non-constant factors of a polynomial, each once, normalised by the factorisation. */
+    private static void addFactors(java.util.Set<org.qchain.symbolic.Poly> out, org.qchain.symbolic.Poly p) {
+        if (p.isConstant()) {
+            return;
+        }
+        for (org.qchain.symbolic.Poly.Factor fac : p.factor().factors()) {
+            if (!fac.base().isConstant()) {
+                out.add(fac.base());
+            }
+        }
+    }
+
     /**
      * Parameter values inside or on the edge of the domains where an entry vanishes (a root of a factor of its
      * numerator that is linear in one parameter) and the structure then differs from the generic one.
@@ -960,17 +1083,12 @@ final class SymbolicEngine {
                 return Vanishing.SOMEWHERE;
             }
         }
-        Map<List<Integer>, Rational> terms = new java.util.HashMap<>();
-        List<String> ringVars = c.ring().variables();
-        for (org.qchain.symbolic.Poly.Term t : c.terms()) {
-            List<Integer> e = new ArrayList<>();
-            for (String v : vars) {
-                e.add(t.exponents().get(ringVars.indexOf(v)));
-            }
-            terms.merge(e, pos > 0 ? t.coefficient() : t.coefficient().negate(), Rational::add);
+        Map<String, Domain> open = new LinkedHashMap<>();
+        for (int i = 0; i < vars.size(); i++) {
+            open.put(vars.get(i), inside.get(i));
         }
-        return pos + neg > 0 && org.qchain.symbolic.BoxSign.positive(terms, inside) ? Vanishing.NEVER
-            : Vanishing.UNDECIDED;
+        return pos + neg > 0 && org.qchain.symbolic.BoxSign.positive(pos > 0 ? c : c.negate(), open)
+            ? Vanishing.NEVER : Vanishing.UNDECIDED;
     }
 
     /** What changes between two structures: the states that become absorbing, and the classes when they change. */

@@ -14,6 +14,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.Formula;
 import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Condition;
@@ -404,6 +405,43 @@ final class JsonFormatter extends Layout {
     // --- check -------------------------------------------------------------------------------------------------
 
     @Override
+    String generatorCheck(CheckResult.Generator g) {
+        List<List<String>> plain = g.entries().stream().map(r -> r.stream().map(Formula::plain).toList()).toList();
+        Json out = Json.object();
+        Json hold = Json.object();
+        Json outDec = Json.object();
+        Json holdDec = Json.object();
+        for (List<String> r : Continuous.stateRows(g, digits)) {
+            out.string(r.get(0), r.get(1));
+            hold.string(r.get(0), g.holding().get(g.states().indexOf(r.get(0))).isPresent() ? r.get(3) : "inf");
+            outDec.string(r.get(0), r.get(2));
+            holdDec.string(r.get(0), r.get(4));
+        }
+        Json j = Json.object().string("kind", "continuous").strings("states", g.states());
+        if (g.symbolic()) {
+            j.strings("parameters", g.parameters());
+        }
+        j.stringRows("matrix", plain);
+        if (!g.symbolic()) {
+            j.stringRows("decimals", g.entries().stream().map(r -> r.stream()
+                .map(f -> Continuous.decimalOf(f, digits)).toList()).toList());
+        }
+        j.object("exit_rates", out).object("mean_holding_times", hold);
+        if (!g.symbolic()) {
+            j.object("decimals_exit_rates", outDec).object("decimals_mean_holding_times", holdDec);
+        }
+        g.up().ifPresent(u -> j.strings("up", u).strings("down", g.down()));
+        if (g.symbolic()) {
+            j.strings("conditions", g.warnings());
+        }
+        g.at().ifPresent(p -> j.object("at", point(p)));
+        if (!g.symbolic()) {
+            j.number("digits", digits);
+        }
+        return j.string("model", g.source()).strings("warnings", g.warnings()).close() + "\n";
+    }
+
+    @Override
     String symbolicCheck(CheckResult.Symbolic s) {
         return Json.object().string("kind", s.kind()).strings("states", s.states())
             .strings("parameters", s.parameters()).stringRows("matrix", Symbolic.plain(s.entries()))
@@ -486,6 +524,17 @@ final class JsonFormatter extends Layout {
 
     @Override
     public String availability(AvailabilityResult r) {
+        Json j = figures(r);
+        r.at().ifPresent(p -> j.object("at", point(p)));
+        j.number("digits", digits)
+            .string("model", r.source())
+            .strings("warnings", r.warnings())
+            .string("caution", Caution.TEXT);
+        return j.close() + "\n";
+    }
+
+    /** The exact figures of a numeric availability result, up to the point availabilities. */
+    private Json figures(AvailabilityResult r) {
         Json mttf = Json.object();
         Json mttfDec = Json.object();
         r.mttf().forEach((s, v) -> {
@@ -494,7 +543,7 @@ final class JsonFormatter extends Layout {
         });
         Json pi = Json.object();
         r.stationary().forEach((s, v) -> pi.string(s, v.toString()));
-        Json j = Json.object()
+        return Json.object()
             .strings("up", r.up())
             .string("steady_state_availability", r.availability().toString())
             .object("mttf", mttf)
@@ -519,7 +568,58 @@ final class JsonFormatter extends Layout {
                 .string("decimal", p.value().text())
                 .string("status", p.value().status().name().toLowerCase(java.util.Locale.ROOT))
                 .string("bound", Continuous.bound(p.value().enclosure().width())));
-        r.at().ifPresent(p -> j.object("at", point(p)));
+    }
+
+    @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        Json mttf = Json.object();
+        Json mttfTex = Json.object();
+        r.mttf().forEach((s, v) -> {
+            mttf.string(s, v.map(org.qchain.result.Formula::plain).orElse("inf"));
+            mttfTex.string(s, v.map(org.qchain.result.Formula::latex).orElse("\\infty"));
+        });
+        Json pi = Json.object();
+        Json piTex = Json.object();
+        r.stationary().forEach((s, v) -> {
+            pi.string(s, v.plain());
+            piTex.string(s, v.latex());
+        });
+        Json j = Json.object()
+            .strings("up", r.up())
+            .string("steady_state_availability", r.availability().plain())
+            .object("mttf", mttf)
+            .string("mean_up_time", r.meanUpTime().map(org.qchain.result.Formula::plain).orElse("undefined"))
+            .string("mean_down_time", r.meanDownTime().map(org.qchain.result.Formula::plain).orElse("undefined"))
+            .string("failure_frequency", r.failureFrequency().plain())
+            .string("unavailability", r.unavailability().plain())
+            .string("hours_per_year", r.hoursPerYear().toString())
+            .string("down_hours_per_year", r.downHoursPerYear().plain())
+            .object("stationary", pi)
+            .string("kind", "symbolic")
+            .strings("parameters", r.parameters())
+            .object("latex", Json.object()
+                .string("steady_state_availability", r.availability().latex())
+                .object("mttf", mttfTex)
+                .string("mean_up_time", r.meanUpTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
+                .string("mean_down_time", r.meanDownTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
+                .string("failure_frequency", r.failureFrequency().latex())
+                .string("unavailability", r.unavailability().latex())
+                .string("down_hours_per_year", r.downHoursPerYear().latex())
+                .object("stationary", piTex))
+            .objects("conditions", r.conditions(), c -> Json.object()
+                .string("condition", c.condition())
+                .string("latex", c.latex())
+                .bool("proved", c.proved()));
+        if (!r.substituted().isEmpty()) {
+            Json sub = Json.object();
+            r.substituted().forEach((k, v) -> sub.string(k, v.toString()));
+            j.object("substituted", sub);
+        }
+        r.atPoint().ifPresent(a -> {
+            Json values = figures(a);
+            a.at().ifPresent(p -> values.object("at", point(p)));
+            j.object("values_at_point", values);
+        });
         j.number("digits", digits)
             .string("model", r.source())
             .strings("warnings", r.warnings())

@@ -168,8 +168,14 @@ abstract class Layout implements Formatter {
         if (c instanceof CheckResult.Numeric n) {
             return numericCheck(n);
         }
+        if (c instanceof CheckResult.Generator g) {
+            return generatorCheck(g);
+        }
         return symbolicCheck((CheckResult.Symbolic) c);
     }
+
+    /** The generator of a continuous chain, its total rates out and mean holding times, exact or as formulas. */
+    abstract String generatorCheck(CheckResult.Generator g);
 
     /** The one-step matrix of a model checked at numeric values. */
     String numericCheck(CheckResult.Numeric n) {
