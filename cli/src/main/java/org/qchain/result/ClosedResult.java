@@ -44,6 +44,16 @@ import org.qchain.exact.certified.CertifiedReal;
  *                    rationals ({@code closed --factor})
  * @param substituted the parameter values given with {@code --at} and substituted before the closed form was found
  *                    (the formulas are in the other parameters); empty when none
+ * @param kind        {@link Kind#DISCRETE}: P^n in a symbolic n; {@link Kind#CONTINUOUS}: P(t) = exp(Qt) in a
+ *                    symbolic time (then {@code nSymbol} and {@code names().step()} are the time symbol, validFrom is
+ *                    0, the long run is the limit as t grows and its rate the largest real part of the eigenvalues
+ *                    other than 0, and {@code names().variable()} is the variable of det(xI - Q))
+ * @param timeSymbol  the time symbol of a continuous chain's formulas ({@code t} unless a parameter has that name);
+ *                    empty for a discrete chain
+ * @param transformSymbol the variable of the Laplace transforms ({@code s} unless a parameter has that name); empty
+ *                    for a discrete chain
+ * @param transforms  a continuous chain's Laplace transforms {@code (sI - Q)^-1}, shaped like {@code cells}; empty
+ *                    for a discrete chain
  */
 public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
                            List<String> notProved, List<String> states, List<String> parameters, Selection selection,
@@ -51,8 +61,53 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
                            List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                            List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
                            Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored,
-                           java.util.Map<String, org.qchain.exact.Rational> substituted)
+                           java.util.Map<String, org.qchain.exact.Rational> substituted, Kind kind,
+                           String timeSymbol, String transformSymbol, List<List<Formula>> transforms)
     implements Result {
+
+    /** Which closed form: of P^n (a discrete chain) or of P(t) (a continuous chain). */
+    public enum Kind {
+        /** P^n in a symbolic n. */
+        DISCRETE("discrete"),
+        /** P(t) = exp(Qt) in a symbolic t. */
+        CONTINUOUS("continuous");
+
+        private final String word;
+
+        Kind(String word) {
+            this.word = word;
+        }
+
+        /** The word of the JSON field {@code kind}. */
+        public String word() {
+            return word;
+        }
+    }
+
+    /** As the canonical constructor for a discrete chain. */
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<String> conditions,
+                        List<String> notProved, List<String> states, List<String> parameters, Selection selection,
+                        List<String> rows, List<String> cols, List<List<Formula>> cells,
+                        List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
+                        List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
+                        Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored,
+                        java.util.Map<String, org.qchain.exact.Rational> substituted) {
+        this(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection, rows, cols, cells,
+            recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where, namedCells, factored,
+            substituted, Kind.DISCRETE, "", "", List.of());
+    }
+
+    /** Whether this is the closed form of a continuous chain's P(t). */
+    public boolean continuous() {
+        return kind == Kind.CONTINUOUS;
+    }
+
+    /** The same result with the values given with {@code --at} recorded as substituted. */
+    public ClosedResult withSubstituted(java.util.Map<String, org.qchain.exact.Rational> values) {
+        return new ClosedResult(source, form, nSymbol, validFrom, conditions, notProved, states, parameters, selection,
+            rows, cols, cells, recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where,
+            namedCells, factored, values, kind, timeSymbol, transformSymbol, transforms);
+    }
 
     /** Copies the lists. */
     public ClosedResult {
@@ -70,6 +125,8 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
         where = List.copyOf(where);
         namedCells = namedCells.stream().map(List::copyOf).toList();
         substituted = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(substituted));
+        java.util.Objects.requireNonNull(kind, "kind");
+        transforms = transforms.stream().map(List::copyOf).toList();
     }
 
     /** As the canonical constructor with nothing substituted. */
