@@ -388,26 +388,37 @@ abstract class ReportWriter implements ReportLayout {
             }
             for (int r = 0; r < l.limits().size(); r++) {
                 paragraph(t(l.periodic() ? "Limit of P^(" + l.period() + "m + " + r + "):" : "Limit as n grows:"));
-                List<List<Span>> items = new ArrayList<>();
-                for (int i = 0; i < c.rows().size(); i++) {
-                    for (int j = 0; j < c.cols().size(); j++) {
-                        List<Span> item = new ArrayList<>();
-                        item.add(new Math(new Entry("∞", c.rows().get(i), c.cols().get(j))));
-                        item.add(new Txt(" = "));
-                        item.add(formula(l.limits().get(r).get(i).get(j).plain()));
-                        if (!l.values().isEmpty()) {
-                            item.add(new Txt(" ≈ " + Text.decimal(l.values().get(r).get(i).get(j), digits)));
-                        }
-                        items.add(item);
-                    }
-                }
-                bullets(items);
+                limits(c, l, r, (from, to) -> new Entry("∞", from, to));
             }
-            List<Span> rate = new ArrayList<>(t("Convergence rate (second-largest eigenvalue modulus): "));
-            rate.add(formula(l.rate().plain()));
-            l.rateValue().ifPresent(v -> rate.add(new Txt(" = " + Closed.real(c, v))));
-            paragraph(rate);
+            rate(c, l, "Convergence rate (second-largest eigenvalue modulus): ");
         });
+    }
+
+    /** The limits of the r-th subsequence as a list, each entry named by {@code lhs}. */
+    private void limits(ClosedResult c, ClosedResult.LongRun l, int r,
+                        java.util.function.BiFunction<String, String, Formula> lhs) {
+        List<List<Span>> items = new ArrayList<>();
+        for (int i = 0; i < c.rows().size(); i++) {
+            for (int j = 0; j < c.cols().size(); j++) {
+                List<Span> item = new ArrayList<>();
+                item.add(new Math(lhs.apply(c.rows().get(i), c.cols().get(j))));
+                item.add(new Txt(" = "));
+                item.add(formula(l.limits().get(r).get(i).get(j).plain()));
+                if (!l.values().isEmpty()) {
+                    item.add(new Txt(" ≈ " + Text.decimal(l.values().get(r).get(i).get(j), digits)));
+                }
+                items.add(item);
+            }
+        }
+        bullets(items);
+    }
+
+    /** The rate paragraph: the label, the formula and its value at the point. */
+    private void rate(ClosedResult c, ClosedResult.LongRun l, String label) {
+        List<Span> rate = new ArrayList<>(t(label));
+        rate.add(formula(l.rate().plain()));
+        l.rateValue().ifPresent(v -> rate.add(new Txt(" = " + Closed.real(c, v))));
+        paragraph(rate);
     }
 
     /** A continuous chain's P(t) in t: conditions, entries, Laplace transforms, eigenvalues of Q, limit and rate. */
@@ -438,24 +449,8 @@ abstract class ReportWriter implements ReportLayout {
         eigenvalueList(c, "Eigenvalues, by irreducible factor of det(xI − Q):");
         c.longRun().ifPresent(l -> {
             paragraph(t("Limit as " + t + " grows (the eigenvalue-0 term):"));
-            List<List<Span>> items = new ArrayList<>();
-            for (int i = 0; i < c.rows().size(); i++) {
-                for (int j = 0; j < c.cols().size(); j++) {
-                    List<Span> item = new ArrayList<>();
-                    item.add(new Math(new TimeEntry("P", "∞", c.rows().get(i), c.cols().get(j))));
-                    item.add(new Txt(" = "));
-                    item.add(formula(l.limits().get(0).get(i).get(j).plain()));
-                    if (!l.values().isEmpty()) {
-                        item.add(new Txt(" ≈ " + Text.decimal(l.values().get(0).get(i).get(j), digits)));
-                    }
-                    items.add(item);
-                }
-            }
-            bullets(items);
-            List<Span> rate = new ArrayList<>(t("Rate (largest real part of the eigenvalues other than 0): "));
-            rate.add(formula(l.rate().plain()));
-            l.rateValue().ifPresent(v -> rate.add(new Txt(" = " + Closed.real(c, v))));
-            paragraph(rate);
+            limits(c, l, 0, (from, to) -> new TimeEntry("P", "∞", from, to));
+            rate(c, l, "Rate (largest real part of the eigenvalues other than 0): ");
         });
     }
 
