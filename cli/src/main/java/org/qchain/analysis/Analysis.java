@@ -3,6 +3,7 @@ package org.qchain.analysis;
 import java.util.Optional;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.ctmc.Generators;
+import org.qchain.exact.model.ChainKind;
 import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.result.AvailabilityResult;
@@ -47,6 +48,9 @@ public final class Analysis {
         }
         if (query instanceof ClosedQuery q) {
             return closed(model, q, progress);
+        }
+        if (query instanceof TransientFormQuery q) {
+            return transientForm(model, q, progress);
         }
         if (query instanceof TransientQuery q) {
             return transientProbabilities(model, q, progress);
@@ -171,16 +175,22 @@ public final class Analysis {
     }
 
     /**
-     * Closed forms in n.
+     * Closed forms: of P^n in a symbolic n for a discrete chain, of P(t) = exp(Qt) in a symbolic t (with the Laplace
+     * transforms) for a continuous one.
      *
      * @param model    the loaded model
      * @param q        the query
      * @param progress told about long work
      * @return the result
-     * @throws QchainException for an unknown state, a chain past the size limit
+     * @throws QchainException for an unknown state, a chain past the size limit, a series form (generating function,
+     *                         recurrence) of a continuous chain
      */
     public static ClosedResult closed(LoadedModel model, ClosedQuery q, Progress progress) {
-        model.requireDiscrete("closed forms in n are for discrete-time chains");
+        if (model.model().kind() == ChainKind.CONTINUOUS && q.form() != ClosedResult.Form.MATRIX) {
+            throw new QchainException(ErrorKey.WRONG_KIND, model.model().kind().word(), "the " + q.form().word()
+                + " form is for discrete-time chains (a continuous chain's closed form comes with its Laplace"
+                + " transforms)");
+        }
         SizeGuard.check(model, q);
         return Interrupts.guarded(() -> SymbolicEngine.closed(model, q, progress));
     }
@@ -211,6 +221,32 @@ public final class Analysis {
      */
     public static TransientResult transientProbabilities(LoadedModel model, TransientQuery q, Progress progress) {
         return ContinuousEngine.transientProbabilities(model, q, progress);
+    }
+
+    /**
+     * {@code P(t)} of a continuous chain with its parameters symbolic ({@code step -t} with a parameter without a
+     * value, or {@code --symbolic}): the closed form in t, the same at each given time as formulas in the
+     * parameters, and, when every parameter has a value, the certified decimals there. Every size estimate (the
+     * closed form's terms and digits, the certified decimals' work) is decided before any engine runs.
+     *
+     * @param model    the loaded model
+     * @param q        the query
+     * @param progress told about long work
+     * @return the result
+     * @throws QchainException for a discrete chain, an unknown state, a chain past a size limit, an interruption
+     */
+    public static org.qchain.result.SymbolicTransientResult transientForm(LoadedModel model, TransientFormQuery q,
+                                                                          Progress progress) {
+        if (model.model().kind() != ChainKind.CONTINUOUS) {
+            throw new QchainException(ErrorKey.WRONG_KIND, model.model().kind().word(),
+                "qchain step -t needs a continuous chain");
+        }
+        SizeGuard.check(model, q.closed());
+        Optional<TransientQuery> numeric = model.complete() ? Optional.of(new TransientQuery(q.times(), q.from(),
+            q.digits(), org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_BITS, q.maxWork())) : Optional.empty();
+        numeric.ifPresent(n -> ContinuousEngine.guardWork(model.generator("qchain step -t"), n));
+        return Interrupts.guarded(() -> SymbolicEngine.transientForm(model, q,
+            numeric.map(n -> ContinuousEngine.transientProbabilities(model, n, progress)), progress));
     }
 
     /**

@@ -6,5 +6,5 @@ package org.qchain.analysis;
  */
 public sealed interface Query permits StepQuery, SensQuery, ClosedQuery, CheckQuery, VerifyQuery,
     TransientQuery, AvailabilityQuery, RateSensQuery, DistributionQuery, LongRunQuery, AbsorbQuery, ClassesQuery,
-    TransientSensQuery {
+    TransientSensQuery, TransientFormQuery {
 }

@@ -315,11 +315,6 @@ public final class Report {
 
     private ReportResult.ClosedSection closed() {
         List<String> notes = new ArrayList<>();
-        if (continuous()) {
-            notes.add("A closed form of P(t) = exp(Qt) in t is not available yet for continuous chains; P(t)"
-                + " is given as certified decimals at chosen times instead (section steps, or qchain step -t).");
-            return new ReportResult.ClosedSection(Optional.empty(), notes);
-        }
         if (model.states().size() > q.closedMaxStates()) {
             done++;
             notes.add("The closed form is left out for chains of more than " + q.closedMaxStates() + " states (it"

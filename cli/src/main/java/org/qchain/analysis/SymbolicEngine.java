@@ -31,6 +31,9 @@ import org.qchain.symbolic.closed.LongRun;
 import org.qchain.symbolic.closed.Recurrence;
 import org.qchain.symbolic.closed.RootPolynomial;
 import org.qchain.symbolic.closed.SeriesForm;
+import org.qchain.symbolic.closed.TimeFormula;
+import org.qchain.symbolic.closed.TimeSymbols;
+import org.qchain.symbolic.closed.TransientForm;
 import org.qchain.symbolic.sensitivity.EntrySensitivity;
 import org.qchain.symbolic.sensitivity.PointSensitivity;
 import org.qchain.symbolic.sensitivity.Sensitivity;
@@ -539,6 +542,21 @@ final class SymbolicEngine {
         Checked ctx = checked(model);
         Cells cells = Cells.of(model, q);
         SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
+        if (m.kind() == org.qchain.exact.model.ChainKind.CONTINUOUS) {
+            if (q.start().isPresent() && q.from().isEmpty()) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, q.fromName(), q.start().get().text(),
+                    "a start distribution is not supported on a continuous chain yet; give one state with --from");
+            }
+            if (q.toStates().size() > 1) {
+                throw new QchainException(ErrorKey.BAD_ARGUMENT, "--to", String.join(",", q.toStates()),
+                    "a set of final states is not supported on a continuous chain yet; give one state");
+            }
+            Optional<Integer> row = q.from().map(s -> model.state(q.fromName(), s));
+            Optional<Integer> col = q.toStates().stream().findFirst().map(s -> model.state("--to", s));
+            ClosedResult r = fromTransientForm(model, q, ClosedForms.ofGenerator(m, model.given(), limits, progress),
+                row, col);
+            return model.given().isEmpty() ? r : substituted(r, model.given());
+        }
         ClosedResult r = q.form() == ClosedResult.Form.MATRIX
             ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), cells, ctx)
             : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), cells);
@@ -616,9 +634,32 @@ final class SymbolicEngine {
     private static ClosedResult substituted(ClosedResult r, Map<String, Rational> given) {
         Map<String, Rational> ordered = new java.util.LinkedHashMap<>();
         new java.util.TreeMap<>(given).forEach(ordered::put);
-        return new ClosedResult(r.source(), r.form(), r.nSymbol(), r.validFrom(), r.conditions(), r.states(), r.parameters(), r.selection(), r.rows(), r.cols(), r.cells(), r.recurrences(), r.eigenvalues(),
-            r.longRun(), r.roots(), r.point(), r.digits(), r.warnings(), r.names(), r.where(), r.namedCells(),
-            r.factored(), ordered, r.start(), r.toStates());
+        return r.withSubstituted(ordered);
+    }
+
+    private static List<Integer> indices(Model m, Optional<Integer> pick) {
+        List<Integer> out = new ArrayList<>();
+        if (pick.isPresent()) {
+            out.add(pick.get());
+        } else {
+            for (int i = 0; i < m.size(); i++) {
+                out.add(i);
+            }
+        }
+        return out;
+    }
+
+    private static List<String> names(Model m, List<Integer> idx) {
+        List<String> out = new ArrayList<>();
+        for (int i : idx) {
+            out.add(m.states().get(i));
+        }
+        return out;
+    }
+
+    private static ClosedResult.Selection selection(Optional<Integer> row, Optional<Integer> col) {
+        return col.isPresent() ? ClosedResult.Selection.ENTRY
+            : (row.isPresent() ? ClosedResult.Selection.ROW : ClosedResult.Selection.MATRIX);
     }
 
     /** The values at which numbers are shown: the given ones, then nominal values; empty unless all are known. */
@@ -651,13 +692,7 @@ final class SymbolicEngine {
             cells.add(line);
             namedCells.add(named);
         }
-        List<ClosedResult.Where> where = new ArrayList<>();
-        String eigenPrefix = cf.symbols().eigenPrefix();
-        for (org.qchain.symbolic.closed.Definition d : cf.definitions()) {
-            String index = d.name().substring(eigenPrefix.length());
-            where.add(new ClosedResult.Where(d.name(), d.eigenvalue() ? "λ" + index : d.name(),
-                d.eigenvalue() ? "\\lambda_{" + index + "}" : d.name(), d.eigenvalue(), Formula.of(d.plain(), d.latex())));
-        }
+        List<ClosedResult.Where> where = where(cf.definitions(), cf.symbols().eigenPrefix());
         List<String> warnings = new ArrayList<>();
         Optional<Point> pt = point(model, cf.parameters());
         Optional<CertifiedReal> rateValue = Optional.empty();
@@ -680,13 +715,7 @@ final class SymbolicEngine {
                 warnings.add(e.detail());
             }
         }
-        List<ClosedResult.Eigen> eig = new ArrayList<>();
-        for (int k = 0; k < cf.eigenvalues().size(); k++) {
-            Eigenvalue e = cf.eigenvalues().get(k);
-            eig.add(new ClosedResult.Eigen(Formula.of(e.factor(), e.factorLatex()), e.multiplicity(), e.jordanIndex(),
-                e.kind(), formulas(e.values(), e.valuesLatex()),
-                eigenAtPoint.isEmpty() ? List.of() : eigenAtPoint.get(k), e.valueNames()));
-        }
+        List<ClosedResult.Eigen> eig = eigens(cf.eigenvalues(), eigenAtPoint);
         List<ClosedResult.Roots> roots = new ArrayList<>();
         if (named.isEmpty()) {
             for (Eigenvalue e : cf.eigenvalues()) {
@@ -763,6 +792,205 @@ final class SymbolicEngine {
                 c.holdsThroughout()));
         }
         return out;
+    }
+
+    /**
+     * P(t) with symbolic parameters: the closed form of each shown entry in t, at each asked time, with the
+     * certified decimals at the point (computed by the caller, numerically) when every parameter has a value.
+     */
+    static org.qchain.result.SymbolicTransientResult transientForm(LoadedModel model, TransientFormQuery q,
+                                                                   Optional<org.qchain.result.TransientResult> values,
+                                                                   Progress progress) {
+        Model m = model.model();
+        Checked ctx = checked(model);
+        Optional<Integer> row = q.from().map(s -> model.state("--from", s));
+        SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
+        TransientForm tf = ClosedForms.ofGenerator(m, model.given(), limits, progress);
+        List<Integer> ri = indices(m, row);
+        List<Integer> ci = indices(m, Optional.empty());
+        List<List<Formula>> cells = new ArrayList<>();
+        List<List<Formula>> namedCells = new ArrayList<>();
+        for (int i : ri) {
+            List<Formula> line = new ArrayList<>();
+            List<Formula> named = new ArrayList<>();
+            for (int j : ci) {
+                TimeFormula f = tf.entry(i, j, q.factor());
+                line.add(Formula.of(f.plain(), f.latex()));
+                named.add(Formula.of(f.namedPlain(), f.namedLatex()));
+            }
+            cells.add(line);
+            namedCells.add(named);
+        }
+        List<ClosedResult.Where> where = where(tf.definitions(), tf.symbols().others().eigenPrefix());
+        List<org.qchain.result.SymbolicTransientResult.AtTime> times = new ArrayList<>();
+        for (Rational t : q.times()) {
+            List<List<Formula>> at = new ArrayList<>();
+            List<List<Formula>> plain = new ArrayList<>();
+            for (int i : ri) {
+                List<Formula> line = new ArrayList<>();
+                List<Formula> full = new ArrayList<>();
+                for (int j : ci) {
+                    TimeFormula f = tf.entryAt(i, j, t, q.factor());
+                    line.add(where.isEmpty() ? Formula.of(f.plain(), f.latex()) : Formula.of(f.namedPlain(), f.namedLatex()));
+                    full.add(Formula.of(f.plain(), f.latex()));
+                }
+                at.add(line);
+                plain.add(full);
+            }
+            times.add(new org.qchain.result.SymbolicTransientResult.AtTime(t, at, plain));
+        }
+        Map<String, Domain> domains = new LinkedHashMap<>();
+        for (String name : tf.parameters()) {
+            m.param(name).ifPresent(d -> domains.put(name, d.domain()));
+        }
+        List<String> warnings = new ArrayList<>(ctx.warnings());
+        Optional<Point> pt = point(model, tf.parameters()).filter(p -> !p.isEmpty());
+        if (pt.isPresent()) {
+            try {
+                tf.checkPoint(pt.get().values());
+            } catch (QchainException e) {
+                if (e.key() != ErrorKey.CLOSED_FORM_CONDITION) {
+                    throw e;
+                }
+                warnings.add(e.detail());
+            }
+        }
+        Map<String, Rational> given = new LinkedHashMap<>();
+        new java.util.TreeMap<>(model.given()).forEach(given::put);
+        return new org.qchain.result.SymbolicTransientResult(m.source(), m.states(), q.from(), tf.symbols().time(),
+            tf.parameters(), tf.conditions(), tf.conditionsNotProved(domains), names(m, ri), cells, where,
+            where.isEmpty() ? List.of() : namedCells, times, values, pt, given, q.factor(), q.digits(), warnings);
+    }
+
+    /** The factors and their eigenvalues as results, with their values at the point when there are any. */
+    private static List<ClosedResult.Eigen> eigens(List<Eigenvalue> es, List<List<CertifiedComplex>> atPoint) {
+        List<ClosedResult.Eigen> eig = new ArrayList<>();
+        for (int k = 0; k < es.size(); k++) {
+            Eigenvalue e = es.get(k);
+            eig.add(new ClosedResult.Eigen(Formula.of(e.factor(), e.factorLatex()), e.multiplicity(), e.jordanIndex(),
+                e.kind(), formulas(e.values(), e.valuesLatex()), atPoint.isEmpty() ? List.of() : atPoint.get(k),
+                e.valueNames()));
+        }
+        return eig;
+    }
+
+    /** The named pieces of a closed form (a square root, eigenvalues l1, l2 printed as λ1, λ2). */
+    private static List<ClosedResult.Where> where(List<org.qchain.symbolic.closed.Definition> defs, String eigenPrefix) {
+        List<ClosedResult.Where> where = new ArrayList<>();
+        for (org.qchain.symbolic.closed.Definition d : defs) {
+            String index = d.name().substring(eigenPrefix.length());
+            where.add(new ClosedResult.Where(d.name(), d.eigenvalue() ? "λ" + index : d.name(),
+                d.eigenvalue() ? "\\lambda_{" + index + "}" : d.name(), d.eigenvalue(), Formula.of(d.plain(), d.latex())));
+        }
+        return where;
+    }
+
+    /** The rows ri and columns ci of a full grid. */
+    private static <T> List<List<T>> picked(List<List<T>> full, List<Integer> ri, List<Integer> ci) {
+        List<List<T>> out = new ArrayList<>();
+        for (int i : ri) {
+            List<T> r = new ArrayList<>();
+            for (int j : ci) {
+                r.add(full.get(i).get(j));
+            }
+            out.add(r);
+        }
+        return out;
+    }
+
+    /**
+     * The closed form of a continuous chain's P(t) as a result: the cells in t, their Laplace transforms, the
+     * eigenvalues of Q, the limit as t grows with its rate (the largest real part of the other eigenvalues), values
+     * at the point when every parameter has one.
+     */
+    private static ClosedResult fromTransientForm(LoadedModel model, ClosedQuery q, TransientForm tf,
+                                                  Optional<Integer> row, Optional<Integer> col) {
+        Model m = model.model();
+        List<Integer> ri = indices(m, row);
+        List<Integer> ci = indices(m, col);
+        List<List<Formula>> cells = new ArrayList<>();
+        List<List<Formula>> namedCells = new ArrayList<>();
+        List<List<Formula>> transforms = new ArrayList<>();
+        for (int i : ri) {
+            List<Formula> line = new ArrayList<>();
+            List<Formula> named = new ArrayList<>();
+            List<Formula> lt = new ArrayList<>();
+            for (int j : ci) {
+                TimeFormula f = tf.entry(i, j, q.factor());
+                line.add(Formula.of(f.plain(), f.latex()));
+                named.add(Formula.of(f.namedPlain(), f.namedLatex()));
+                org.qchain.symbolic.closed.GeneratingFunction g = tf.laplaceTransform(i, j);
+                lt.add(Formula.of(g.plain(), g.latex()));
+            }
+            cells.add(line);
+            namedCells.add(named);
+            transforms.add(lt);
+        }
+        TimeSymbols sy = tf.symbols();
+        List<ClosedResult.Where> where = where(tf.definitions(), sy.others().eigenPrefix());
+        List<String> warnings = new ArrayList<>();
+        Optional<Point> pt = point(model, tf.parameters());
+        Optional<CertifiedReal> rateValue = Optional.empty();
+        List<RootPolynomial> named = List.of();
+        List<List<CertifiedComplex>> eigenAtPoint = List.of();
+        List<RationalMatrix> limitValues = List.of();
+        if (pt.isPresent()) {
+            try {
+                tf.checkPoint(pt.get().values());
+                rateValue = Optional.of(tf.rateAt(pt.get().values()));
+                named = tf.rootPolynomials(pt.get().values());
+                eigenAtPoint = tf.eigenvaluesAt(pt.get().values());
+                if (tf.hasLimit()) {
+                    limitValues = List.of(tf.limitAt(pt.get().values()));
+                }
+            } catch (QchainException e) {
+                if (e.key() != ErrorKey.CLOSED_FORM_CONDITION) {
+                    throw e;
+                }
+                warnings.add(e.detail());
+            }
+        }
+        List<ClosedResult.Eigen> eig = eigens(tf.eigenvalues(), eigenAtPoint);
+        List<ClosedResult.Roots> roots = new ArrayList<>();
+        for (RootPolynomial r : named.isEmpty() ? tf.rootPolynomials(null) : named) {
+            roots.add(new ClosedResult.Roots(r.name(), Formula.of(r.polynomial(), r.latex()), r.roots()));
+        }
+        List<List<String>> lim = tf.limit(q.factor(), false);
+        List<List<String>> limLatex = tf.limit(q.factor(), true);
+        List<List<Formula>> limit = new ArrayList<>();
+        for (int i : ri) {
+            List<Formula> r = new ArrayList<>();
+            for (int j : ci) {
+                r.add(Formula.of(lim.get(i).get(j), limLatex.get(i).get(j)));
+            }
+            limit.add(r);
+        }
+        List<List<List<Rational>>> values = new ArrayList<>();
+        for (RationalMatrix full : limitValues) {
+            List<List<Rational>> grid = new ArrayList<>();
+            for (int i = 0; i < full.rows(); i++) {
+                grid.add(List.of(full.row(i)));
+            }
+            values.add(picked(grid, ri, ci));
+        }
+        Map<String, Domain> domains = new LinkedHashMap<>();
+        for (String name : tf.parameters()) {
+            m.param(name).ifPresent(d -> domains.put(name, d.domain()));
+        }
+        List<Point> special = new ArrayList<>();
+        for (Map<String, Rational> c : tf.specialCorners(domains)) {
+            special.add(new Point(c));
+        }
+        Optional<ClosedResult.LongRun> longRun = tf.hasLimit() ? Optional.of(new ClosedResult.LongRun(1,
+            List.of(limit), Formula.of(tf.rate(false), tf.rate(true)), rateValue,
+            conditions(tf.longRunConditions(domains)), special, tf.constant(), 0, values)) : Optional.empty();
+        ClosedResult.Names names = new ClosedResult.Names(sy.time(), sy.others().period(), sy.others().variable(),
+            sy.transform(), sy.others().sequence());
+        return new ClosedResult(m.source(), ClosedResult.Form.MATRIX, sy.time(), 0, conditions(tf.conditions(domains)),
+            m.states(), tf.parameters(), selection(row, col), names(m, ri),
+            names(m, ci), cells, List.of(), eig, longRun, roots, pt.filter(p -> !p.isEmpty()), q.digits(), warnings,
+            names, where, where.isEmpty() ? List.of() : namedCells, q.factor(), Map.of(), Map.of(), List.of(),
+            ClosedResult.Kind.CONTINUOUS, sy.time(), sy.transform(), transforms);
     }
 
     /** Formulas from the engine's two printed forms, pairwise. */

@@ -20,13 +20,17 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.TypeConversionException;
 
 /**
- * {@code qchain closed}: P^n as formulas in a symbolic n and the free parameters. The options become a
+ * {@code qchain closed}: P^n as formulas in a symbolic n and the free parameters (a continuous chain: P(t) in a
+ * symbolic t). The options become a
  * {@link ClosedQuery}; {@link Analysis#closed} does the work.
  */
 @Command(name = "closed", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
         "P^n of a discrete chain as one formula in a symbolic n (and the parameters without a value), valid for every"
             + " n from the stated valid_from on, under the stated parameter conditions.",
+        "For a continuous chain: P(t) = exp(Qt) as formulas in a symbolic t (sums of t^j*exp(lambda*t) terms over the"
+            + " eigenvalues of the generator Q), valid for every t >= 0 under the stated conditions, with the limit as"
+            + " t grows and the Laplace transforms (sI - Q)^-1.",
         "Without --from: the whole matrix. With --start A (or --from A): that row. With --from A --to B: one entry."
             + " --start Healthy=3/5 --start Ill=2/5: the distribution after n steps (the start's weighted sum of the"
             + " rows); --to Up,Worn: the probability of being in one of them (the sum of their entries), each as one"
@@ -73,8 +77,9 @@ final class ClosedCommand implements Callable<Integer> {
     StartOptions startOptions;
 
     @Option(names = "--form", paramLabel = "FORM", converter = FormConverter.class, defaultValue = "matrix",
-        description = "What to print: matrix (closed form in n, the default), gf (generating function in z) or"
-            + " recurrence (linear recurrence in n with initial values).")
+        description = "What to print: matrix (closed form in n, or in t for a continuous chain; the default), gf"
+            + " (generating function in z) or recurrence (linear recurrence in n with initial values); gf and"
+            + " recurrence are for discrete chains.")
     ClosedResult.Form form = ClosedResult.Form.MATRIX;
 
     @Mixin

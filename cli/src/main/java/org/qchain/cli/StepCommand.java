@@ -11,6 +11,7 @@ import org.qchain.analysis.Start;
 import org.qchain.analysis.LoadedModel;
 import org.qchain.analysis.Route;
 import org.qchain.analysis.StepQuery;
+import org.qchain.analysis.TransientFormQuery;
 import org.qchain.analysis.TransientQuery;
 import org.qchain.format.OutputFormat;
 import org.qchain.result.Result;
@@ -39,7 +40,9 @@ import picocli.CommandLine.Spec;
             + " exact value, without the exact fractions: for n too large for exact numbers, and for large sparse"
             + " models.",
         "Continuous chains: -t T (several: -t 1,2,5 or a range -t 0..10:2) gives P(t) = exp(Qt) as certified"
-            + " decimals: every printed digit is proven, and the bound (widest enclosure) is printed."})
+            + " decimals: every printed digit is proven, and the bound (widest enclosure) is printed. With a parameter"
+            + " without a value (or --symbolic): P(t) as its closed form in t and the parameters, and at each T as"
+            + " formulas in the parameters (with certified decimals where every parameter has a value)."})
 final class StepCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -211,14 +214,31 @@ final class StepCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    /** {@code -t}: P(t) of a continuous chain as certified decimals. */
+    /**
+     * {@code -t}: P(t) of a continuous chain as certified decimals; with a parameter without a value, or with
+     * {@code --symbolic}, the closed form in t and at each time (formulas in the parameters).
+     */
     private Integer continuous() {
-        if (!to.isEmpty() || startOptions.given() || paths != null || symbolic || symbolicOptions.factor) {
-            throw new ParameterException(spec.commandLine(), "-t takes --from, --digits, --max-work, --format and --output;"
-                + " --to, --start, --paths, --symbolic and --factor are for discrete chains");
+        if (!to.isEmpty() || startOptions.given() || paths != null) {
+            throw new ParameterException(spec.commandLine(), "-t takes --from, --digits, --max-work, --symbolic,"
+                + " --factor, --format and --output; --to, --start and --paths are for discrete chains");
+        }
+        if (certified && symbolic) {
+            throw new ParameterException(spec.commandLine(), "--certified and --symbolic exclude each other");
         }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
+        if (symbolic || !loaded.complete()) {
+            TransientFormQuery sq = new TransientFormQuery(times.times(), Optional.ofNullable(from), output.digits(),
+                symbolicOptions.factor, symbolicOptions.maxTerms(), digitLimit.maxDigits, maxWork);
+            Result result = root.run(spec, progress -> Analysis.transientForm(loaded, sq, progress));
+            Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
+            return ExitCodes.OK;
+        }
+        if (symbolicOptions.factor) {
+            throw new ParameterException(spec.commandLine(), "--factor applies to symbolic results: the model has"
+                + " values for all its parameters (use --symbolic to keep them symbolic)");
+        }
         TransientQuery q = new TransientQuery(times.times(), Optional.ofNullable(from), output.digits(),
             org.qchain.exact.certified.CertifiedPowers.DEFAULT_MAX_BITS, maxWork);
         Result result = root.run(spec, progress -> Analysis.transientProbabilities(loaded, q, progress));

@@ -13,6 +13,33 @@ final class Closed {
     private Closed() {
     }
 
+    /** {@code discrete chain} or {@code continuous chain}. */
+    static String chain(ClosedResult r) {
+        return r.kind().word() + " chain";
+    }
+
+    /** The matrix whose eigenvalues the form uses: P, or a continuous chain's generator Q. */
+    static String matrix(ClosedResult r) {
+        return r.continuous() ? "Q" : "P";
+    }
+
+    /** {@code det(xI - P)} or {@code det(xI - Q)}. */
+    static String det(ClosedResult r) {
+        return "det(" + r.names().variable() + "I - " + matrix(r) + ")";
+    }
+
+    /** The label of a continuous chain's Laplace transform of a cell: {@code L(A -> B; s)}. */
+    static String transformLabel(ClosedResult r, String from, String to) {
+        return "L(" + from + " -> " + to + "; " + r.transformSymbol() + ")";
+    }
+
+    /** The heading of the Laplace transforms. */
+    static String transformHeading(ClosedResult r) {
+        String s = r.transformSymbol();
+        return "Laplace transforms L(" + s + ") = integral from 0 to infinity of exp(-" + s + "*" + r.timeSymbol() + ")*"
+            + pn(r) + " d" + r.timeSymbol() + ", entries of (" + s + "I - Q)^-1";
+    }
+
     /** What a cell is: {@code P^n(A -> B)} or {@code G(A -> B; z)}, in the result's own symbols. */
     static String label(ClosedResult r, String from, String to) {
         String arrow = from + " -> " + to;
@@ -21,11 +48,14 @@ final class Closed {
 
     /** {@code P^n} with the step symbol. */
     static String pn(ClosedResult r) {
-        return "P^" + r.names().step();
+        return r.continuous() ? "P(" + r.timeSymbol() + ")" : "P^" + r.names().step();
     }
 
     static String what(ClosedResult r) {
         ClosedResult.Names s = r.names();
+        if (r.continuous()) {
+            return "closed form in " + r.timeSymbol() + ", P(" + r.timeSymbol() + ") = exp(Q*" + r.timeSymbol() + ")";
+        }
         switch (r.form()) {
             case GF:
                 return "generating functions G(" + s.series() + ") = sum over " + s.step() + " of " + pn(r) + " "
@@ -45,14 +75,24 @@ final class Closed {
         ClosedResult.Names s = r.names();
         List<String> moved = new ArrayList<>();
         for (ClosedResult.Where w : r.where()) {
-            if (!w.name().matches(w.eigenvalue() ? "l[0-9]+" : "s[0-9]*")) {
+            // a continuous chain's square root is R (s is the Laplace transforms' variable)
+            if (!w.name().matches(w.eigenvalue() ? "l[0-9]+" : r.continuous() ? "R[0-9]*" : "s[0-9]*")) {
                 moved.add(w.eigenvalue() ? w.name() + " (" + w.symbol() + ") an eigenvalue" : w.name() + " a square root");
             }
         }
-        if (s.usual() && moved.isEmpty()) {
+        boolean usual = r.continuous() ? r.timeSymbol().equals("t") && r.transformSymbol().equals("s")
+            && s.variable().equals("x") : s.usual();
+        if (usual && moved.isEmpty()) {
             return "";
         }
         List<String> parts = new ArrayList<>();
+        if (r.continuous()) {
+            parts.add(r.timeSymbol() + " is the time");
+            parts.add(r.transformSymbol() + " the variable of the Laplace transforms");
+            parts.add(s.variable() + " the variable of " + det(r));
+            parts.addAll(moved);
+            return "Symbols (chosen apart from the parameter names): " + String.join(", ", parts) + ".";
+        }
         parts.add(s.step() + " is the step count");
         if (!r.isSeries()) {
             parts.add(s.variable() + " the variable of det(" + s.variable() + "I - P)");
@@ -72,6 +112,9 @@ final class Closed {
         String n = r.names().step();
         String m = r.names().period();
         String where = lr.conditions().isEmpty() ? "" : " where " + conditions(lr.conditions());
+        if (r.continuous()) {
+            return pn(r) + " converges as " + n + " grows" + where + "; the limit (the eigenvalue-0 term)";
+        }
         if (!lr.periodic()) {
             return pn(r) + " converges as " + n + " grows" + where + "; the limit";
         }
@@ -213,6 +256,7 @@ final class Closed {
         for (ClosedResult.Eigen e : r.eigenvalues()) {
             for (int k = 0; k < e.names().size(); k++) {
                 s = s.replace("abs(" + e.values().get(k).plain() + ")", "abs(" + e.names().get(k) + ")");
+                s = s.replace("re(" + e.values().get(k).plain() + ")", "re(" + e.names().get(k) + ")");
             }
         }
         return symbols ? shown(r, s) : s;
@@ -286,6 +330,12 @@ final class Closed {
     /** The rate sentence: what the number means, or that the long run is reached exactly. */
     static String rateLine(ClosedResult r, ClosedResult.LongRun lr) {
         String n = r.names().step();
+        if (r.continuous()) {
+            return lr.exact() ? pn(r) + " equals its limit for every " + n + " >= 0 (no eigenvalue other than 0)"
+                : "Rate (largest real part of the eigenvalues other than 0; " + pn(r)
+                    + " approaches its limit like exp(rate*" + n + "), the modulus is the decay rate): "
+                    + rate(r, lr, true);
+        }
         if (lr.exact()) {
             return lr.periodic()
                 ? "Exact from " + n + " = " + lr.exactFrom() + ": P^(" + n + " + " + lr.period() + ") = " + pn(r)

@@ -268,4 +268,72 @@ final class Continuous {
             decimal(r.elasticity(), "undefined", digits)));
         return out;
     }
+
+    // --- P(t) with symbolic parameters -------------------------------------------------------------------------
+
+    /** The heading of a symbolic P(t). */
+    static String symbolicTitle(org.qchain.result.SymbolicTransientResult r) {
+        String t = r.timeSymbol();
+        return "P(" + t + ") for " + r.source() + " (continuous chain): closed form in " + t + ", P(" + t
+            + ") = exp(Q*" + t + ")" + (r.parameters().isEmpty() ? ""
+            : "; parameters symbolic: " + String.join(", ", r.parameters()));
+    }
+
+    /** {@code Valid for t >= 0 where ...} with what is known of the conditions inside the domains. */
+    static String symbolicValidity(org.qchain.result.SymbolicTransientResult r) {
+        StringBuilder sb = new StringBuilder("Valid for ").append(r.timeSymbol()).append(" >= 0");
+        if (!r.conditions().isEmpty()) {
+            sb.append(" where ").append(String.join(", ", r.conditions())).append('.');
+            sb.append(r.notProved().isEmpty()
+                ? (r.conditions().size() == 1 ? " It always holds" : " They always hold") + " inside the parameters'"
+                    + " domains."
+                : " Not shown to hold throughout the parameters' domains: " + String.join(", ", r.notProved()) + ".");
+        } else {
+            sb.append('.');
+        }
+        return sb.toString();
+    }
+
+    /** The label of an entry: {@code P(t)(Up -> Down)} with the time's symbol or value. */
+    static String symbolicLabel(String time, String from, String to) {
+        return "P(" + time + ")(" + from + " -> " + to + ")";
+    }
+
+    /** {@code where s = ...} in text syntax (eigenvalues as λ1, λ2); empty when nothing is named. */
+    static String symbolicWhere(org.qchain.result.SymbolicTransientResult r, boolean symbols) {
+        if (r.where().isEmpty()) {
+            return "";
+        }
+        List<String> parts = new ArrayList<>();
+        for (org.qchain.result.ClosedResult.Where w : r.where()) {
+            parts.add((symbols ? w.symbol() : w.name()) + " = " + symbolicShown(r, w.value().plain(), symbols));
+        }
+        return "where " + String.join(", ", parts);
+    }
+
+    /** A plain formula with each eigenvalue's name as its symbol (λ1) when {@code symbols}. */
+    static String symbolicShown(org.qchain.result.SymbolicTransientResult r, String plain, boolean symbols) {
+        String out = plain;
+        if (symbols) {
+            for (org.qchain.result.ClosedResult.Where w : r.where()) {
+                if (!w.symbol().equals(w.name())) {
+                    out = out.replaceAll("\\b" + java.util.regex.Pattern.quote(w.name()) + "\\b",
+                        java.util.regex.Matcher.quoteReplacement(w.symbol()));
+                }
+            }
+        }
+        return out;
+    }
+
+    /** The certified decimals at time index k, shaped like the cells; empty without values. */
+    static List<List<CertifiedDecimal>> symbolicDecimals(org.qchain.result.SymbolicTransientResult r, int k) {
+        return r.values().map(v -> v.times().get(k).rows()).orElse(List.of());
+    }
+
+    /** The sentence on the decimals of time index k; empty without values. */
+    static String symbolicDecimalNote(org.qchain.result.SymbolicTransientResult r, int k) {
+        return r.values().map(v -> "≈: certified decimals at " + r.point().map(p -> p.text() + " (" + p.origin() + ")")
+            .orElse("the model's values") + ", " + Text.digits(r.digits()) + "; " + boundSentence(v.times().get(k)))
+            .orElse("");
+    }
 }

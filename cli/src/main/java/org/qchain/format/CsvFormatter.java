@@ -376,6 +376,34 @@ final class CsvFormatter extends DocLayout {
     }
 
     @Override
+    public String symbolicTransient(org.qchain.result.SymbolicTransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        boolean decimals = r.values().isPresent();
+        Text.csvRecord(sb, decimals ? List.of("t", "from", "to", "formula", "decimal", "bound")
+            : List.of("t", "from", "to", "formula"));
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.states().size(); j++) {
+                Text.csvRecord(sb, decimals ? List.of(r.timeSymbol(), r.rows().get(i), r.states().get(j),
+                    r.cells().get(i).get(j).plain(), "", "") : List.of(r.timeSymbol(), r.rows().get(i), r.states().get(j),
+                    r.cells().get(i).get(j).plain()));
+            }
+        }
+        for (int k = 0; k < r.times().size(); k++) {
+            org.qchain.result.SymbolicTransientResult.AtTime at = r.times().get(k);
+            List<List<org.qchain.exact.certified.CertifiedDecimal>> dec = Continuous.symbolicDecimals(r, k);
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.states().size(); j++) {
+                    String f = at.plainCells().get(i).get(j).plain();
+                    Text.csvRecord(sb, decimals ? List.of(at.t().toString(), r.rows().get(i), r.states().get(j), f,
+                        dec.get(i).get(j).text(), Continuous.bound(r.values().get().times().get(k).bound()))
+                        : List.of(at.t().toString(), r.rows().get(i), r.states().get(j), f));
+                }
+            }
+        }
+        return sb.toString();
+    }
+
+    @Override
     public String availability(AvailabilityResult r) {
         StringBuilder sb = new StringBuilder();
         Text.csvRecord(sb, List.of("figure", "exact", "decimal"));

@@ -51,6 +51,9 @@ public interface Formatter {
         if (result instanceof TransientResult t) {
             return transientProbabilities(t);
         }
+        if (result instanceof org.qchain.result.SymbolicTransientResult t) {
+            return symbolicTransient(t);
+        }
         if (result instanceof AvailabilityResult a) {
             return availability(a);
         }
@@ -120,6 +123,9 @@ public interface Formatter {
 
     /** P(t) of a continuous chain as certified decimals. */
     String transientProbabilities(TransientResult r);
+
+    /** P(t) of a continuous chain with symbolic parameters: the closed form in t and at the given times. */
+    String symbolicTransient(org.qchain.result.SymbolicTransientResult r);
 
     /** Figures of merit of a repairable system. */
     String availability(AvailabilityResult r);

@@ -355,7 +355,7 @@ final class JsonFormatter extends Layout {
                 for (org.qchain.result.Point p : lr.special()) {
                     special.add(p.text());
                 }
-                l.string("rate_of", lr.periodic() ? "subsequences" : "powers").bool("exact", lr.exact())
+                l.string("rate_of", r.continuous() ? "real_parts" : lr.periodic() ? "subsequences" : "powers").bool("exact", lr.exact())
                     .number("exact_from", lr.exactFrom()).strings("conditions", Condition.plain(lr.conditions()))
                     .strings("conditions_not_proved", Condition.plain(lr.notProved())).strings("special_points", special);
                 j.object("long_run", l);
@@ -363,11 +363,27 @@ final class JsonFormatter extends Layout {
             r.point().ifPresent(p -> j.string("at", p.text()));
         }
         ClosedResult.Names names = r.names();
-        j.string("kind", "discrete").string("model", r.source()).number("digits", r.digits())
+        Json symbols = Json.object().string("step", names.step()).string("period", names.period())
+            .string("variable", names.variable()).string("series", names.series())
+            .string("sequence", names.sequence());
+        if (r.continuous()) {
+            symbols.string("time", r.timeSymbol()).string("transform", r.transformSymbol());
+            j.string("t_symbol", r.timeSymbol()).string("transform_variable", r.transformSymbol());
+            List<List<String>> lt = Symbolic.plain(r.transforms());
+            switch (r.selection()) {
+                case ENTRY:
+                    j.string("transform", lt.get(0).get(0));
+                    break;
+                case ROW:
+                    j.strings("transform_row", lt.get(0));
+                    break;
+                default:
+                    j.stringRows("transform_matrix", lt);
+            }
+        }
+        j.string("kind", r.kind().word()).string("model", r.source()).number("digits", r.digits())
             .strings("warnings", r.warnings())
-            .object("symbols", Json.object().string("step", names.step()).string("period", names.period())
-                .string("variable", names.variable()).string("series", names.series())
-                .string("sequence", names.sequence()));
+            .object("symbols", symbols);
         return j.close() + "\n";
     }
 
@@ -515,6 +531,45 @@ final class JsonFormatter extends Layout {
                     .map(d -> d.status().name().toLowerCase(java.util.Locale.ROOT)).toList()).toList())
                 .string("uniformization_rate", at.uniformizationRate().toString())
                 .string("model", r.source())
+                .strings("warnings", r.warnings())
+                .string("caution", Caution.TEXT);
+            sb.append(j.close()).append('\n');
+        }
+        return sb.toString();
+    }
+
+    @Override
+    public String symbolicTransient(org.qchain.result.SymbolicTransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        for (int k = 0; k < r.times().size(); k++) {
+            org.qchain.result.SymbolicTransientResult.AtTime at = r.times().get(k);
+            List<List<org.qchain.exact.certified.CertifiedDecimal>> dec = Continuous.symbolicDecimals(r, k);
+            Json j = Json.object()
+                .string("kind", "continuous")
+                .string("t", at.t().toString())
+                .stringRows("matrix", Symbolic.plain(at.plainCells()));
+            if (!dec.isEmpty()) {
+                j.stringRows("decimals", dec.stream().map(row -> row.stream()
+                    .map(org.qchain.exact.certified.CertifiedDecimal::text).toList()).toList());
+                j.string("bound", Continuous.bound(r.values().get().times().get(k).bound()));
+                r.point().ifPresent(p -> j.string("at", p.text()));
+            }
+            j.number("digits", digits)
+                .bool("symbolic", true)
+                .string("t_symbol", r.timeSymbol())
+                .stringRows("formula", Symbolic.plain(r.cells()))
+                .strings("parameters", r.parameters())
+                .strings("conditions", r.conditions())
+                .strings("conditions_not_proved", r.notProved())
+                .strings("states", r.states())
+                .strings("rows", r.rows())
+                .bool("factored", r.factored());
+            if (!r.substituted().isEmpty()) {
+                Json sub = Json.object();
+                r.substituted().forEach((name, v) -> sub.string(name, v.toString()));
+                j.object("substituted", sub);
+            }
+            j.string("model", r.source())
                 .strings("warnings", r.warnings())
                 .string("caution", Caution.TEXT);
             sb.append(j.close()).append('\n');

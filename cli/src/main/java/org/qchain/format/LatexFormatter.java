@@ -247,6 +247,7 @@ final class LatexFormatter extends DocLayout {
                         + "}";
                     String lhs = lr.periodic()
                         ? "\\lim_{" + m + " \\to \\infty} P^{" + lr.period() + m + " + " + k + "}_{" + idx + "}"
+                        : r.continuous() ? "\\lim_{" + n + " \\to \\infty} P_{" + idx + "}(" + n + ")"
                         : "\\lim_{" + n + " \\to \\infty} P^{" + n + "}_{" + idx + "}";
                     ClosedResult.LongRun l = lr;
                     String exact = l.limits().get(k).get(i).get(j).latex();
@@ -298,7 +299,7 @@ final class LatexFormatter extends DocLayout {
     @Override
     public String closed(ClosedResult r) {
         StringBuilder sb = new StringBuilder();
-        sb.append("% ").append(Closed.pn(r)).append(" for ").append(Text.comment(r.source())).append(" (discrete chain): ").append(Closed.what(r))
+        sb.append("% ").append(Closed.pn(r)).append(" for ").append(Text.comment(r.source())).append(" (").append(Closed.chain(r)).append("): ").append(Closed.what(r))
             .append('\n');
         if (!r.isSeries()) {
             sb.append("% valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
@@ -318,15 +319,16 @@ final class LatexFormatter extends DocLayout {
             sb.append("% ").append(Text.comment(Closed.combinationNote(r))).append('\n');
         }
         if (!Closed.factoredNote(r).isEmpty()) {
-            sb.append("% ").append(Closed.factoredNote(r)).append(" det(").append(r.names().variable())
-                .append("I - P) = ").append(Closed.characteristicPolynomial(r)).append('\n');
+            sb.append("% ").append(Closed.factoredNote(r)).append(' ').append(Closed.det(r))
+                .append(" = ").append(Closed.characteristicPolynomial(r)).append('\n');
         }
         sb.append("\\begin{align*}\n");
         List<String> lines = new ArrayList<>();
         for (int i = 0; i < r.rows().size(); i++) {
             for (int j = 0; j < r.cols().size(); j++) {
                 String idx = "\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.cols().get(j)) + "}";
-                String lhs = r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(" + r.names().series() + ")"
+                String lhs = r.continuous() ? "P_{" + idx + "}(" + r.timeSymbol() + ")"
+                    : r.form() == ClosedResult.Form.GF ? "G_{" + idx + "}(" + r.names().series() + ")"
                     : "P^{" + r.names().step() + "}_{" + idx + "}";
                 String rhs = r.form() == ClosedResult.Form.RECURRENCE ? r.shownCells().get(i).get(j).latex()
                     : broken(r.shownCells().get(i).get(j).latex());
@@ -339,6 +341,17 @@ final class LatexFormatter extends DocLayout {
                 + w.value().latex());
         }
         sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
+        if (r.continuous()) {
+            sb.append("% ").append(Text.comment(Closed.transformHeading(r))).append("\n\\begin{align*}\n");
+            List<String> tl = new ArrayList<>();
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.cols().size(); j++) {
+                    tl.add("\\hat{P}_{\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.cols().get(j))
+                        + "}}(" + r.transformSymbol() + ") &= " + broken(r.transforms().get(i).get(j).latex()));
+                }
+            }
+            sb.append(String.join(" \\\\\n", tl)).append("\n\\end{align*}\n");
+        }
         for (ClosedResult.Eigen e : r.eigenvalues()) {
             sb.append("% eigenvalue ").append(String.join(", ", Closed.plain(e.values()))).append(" from ").append(e.factor().plain());
             if (e.multiplicity() > 1) {
@@ -462,6 +475,44 @@ final class LatexFormatter extends DocLayout {
                 sb.append(" \\\\\n");
             }
             sb.append("\\end{tabular}\n");
+        }
+        return caution(sb);
+    }
+
+    @Override
+    public String symbolicTransient(org.qchain.result.SymbolicTransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% ").append(Text.comment(Continuous.symbolicTitle(r))).append("\n% ")
+            .append(Text.comment(Continuous.symbolicValidity(r))).append("\n\\begin{align*}\n");
+        List<String> lines = new ArrayList<>();
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.states().size(); j++) {
+                lines.add("P_{\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.states().get(j)) + "}}("
+                    + r.timeSymbol() + ") &= " + broken(r.shownCells().get(i).get(j).latex()));
+            }
+        }
+        for (int k = 0; k < r.where().size(); k++) {
+            org.qchain.result.ClosedResult.Where w = r.where().get(k);
+            lines.add((k == 0 ? "&\\text{where } " : "&\\phantom{\\text{where }} ") + w.latexName() + " = "
+                + w.value().latex());
+        }
+        for (int k = 0; k < r.times().size(); k++) {
+            org.qchain.result.SymbolicTransientResult.AtTime at = r.times().get(k);
+            List<List<org.qchain.exact.certified.CertifiedDecimal>> dec = Continuous.symbolicDecimals(r, k);
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.states().size(); j++) {
+                    lines.add("P_{\\text{" + Text.latex(r.rows().get(i)) + "},\\text{" + Text.latex(r.states().get(j))
+                        + "}}(" + at.t() + ") &= " + broken(at.cells().get(i).get(j).latex())
+                        + (dec.isEmpty() ? "" : " \\approx " + dec.get(i).get(j).text()));
+                }
+            }
+        }
+        sb.append(String.join(" \\\\\n", lines)).append("\n\\end{align*}\n");
+        for (int k = 0; k < r.times().size(); k++) {
+            String note = Continuous.symbolicDecimalNote(r, k);
+            if (!note.isEmpty()) {
+                sb.append("% t = ").append(r.times().get(k).t()).append(": ").append(Text.comment(note)).append('\n');
+            }
         }
         return caution(sb);
     }

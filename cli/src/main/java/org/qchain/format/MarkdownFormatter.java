@@ -235,7 +235,7 @@ final class MarkdownFormatter extends DocLayout {
     public String closed(ClosedResult r) {
         StringBuilder sb = new StringBuilder();
         sb.append("**").append(Closed.pn(r)).append("** for `").append(Text.code(r.source()))
-            .append("` (discrete chain): ").append(Closed.what(r));
+            .append("` (").append(Closed.chain(r)).append("): ").append(Closed.what(r));
         if (!r.isSeries()) {
             sb.append("; valid for ").append(r.names().step()).append(" ≥ ").append(r.validFrom());
             if (!r.conditions().isEmpty()) {
@@ -273,6 +273,17 @@ final class MarkdownFormatter extends DocLayout {
         }
         if (!r.where().isEmpty()) {
             sb.append("\n`").append(Text.code(Closed.whereLine(r))).append("`\n");
+        }
+        if (r.continuous()) {
+            sb.append('\n').append(Text.markdown(Closed.transformHeading(r))).append(":\n\n| from | to | L(")
+                .append(Text.markdown(r.transformSymbol())).append(") |\n| --- | --- | --- |\n");
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.cols().size(); j++) {
+                    sb.append("| ").append(Text.markdown(r.rows().get(i))).append(" | ")
+                        .append(Text.markdown(r.cols().get(j))).append(" | `")
+                        .append(Text.code(r.transforms().get(i).get(j).plain())).append("` |\n");
+                }
+            }
         }
         if (!r.eigenvalues().isEmpty()) {
             sb.append("\nEigenvalues:\n\n");
@@ -440,6 +451,43 @@ final class MarkdownFormatter extends DocLayout {
             line(sb, separator(g.get(0).size()));
             g.subList(1, g.size()).forEach(row -> line(sb, row.stream().map(Text::markdown).toList()));
             sb.append("\n").append(Continuous.boundSentence(at)).append(".\n");
+        }
+        return caution(sb);
+    }
+
+    @Override
+    public String symbolicTransient(org.qchain.result.SymbolicTransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append(Text.markdown(Continuous.symbolicTitle(r))).append(". ").append(Text.markdown(Continuous.symbolicValidity(r)))
+            .append("\n\n| from | to | P(").append(Text.markdown(r.timeSymbol())).append(") |\n| --- | --- | --- |\n");
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.states().size(); j++) {
+                sb.append("| ").append(Text.markdown(r.rows().get(i))).append(" | ").append(Text.markdown(r.states().get(j)))
+                    .append(" | `").append(Text.code(Continuous.symbolicShown(r, r.shownCells().get(i).get(j).plain(), true)))
+                    .append("` |\n");
+            }
+        }
+        if (!r.where().isEmpty()) {
+            sb.append("\n`").append(Text.code(Continuous.symbolicWhere(r, true))).append("`\n");
+        }
+        for (int k = 0; k < r.times().size(); k++) {
+            org.qchain.result.SymbolicTransientResult.AtTime at = r.times().get(k);
+            List<List<org.qchain.exact.certified.CertifiedDecimal>> dec = Continuous.symbolicDecimals(r, k);
+            sb.append("\n").append(Text.markdown(r.timeSymbol())).append(" = ").append(at.t()).append(":\n\n| from | to | P("
+                + at.t() + ") |").append(dec.isEmpty() ? "" : " decimal |").append("\n| --- | --- | --- |")
+                .append(dec.isEmpty() ? "" : " ---: |").append('\n');
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.states().size(); j++) {
+                    sb.append("| ").append(Text.markdown(r.rows().get(i))).append(" | ")
+                        .append(Text.markdown(r.states().get(j))).append(" | `")
+                        .append(Text.code(Continuous.symbolicShown(r, at.cells().get(i).get(j).plain(), true))).append("` |")
+                        .append(dec.isEmpty() ? "" : " " + dec.get(i).get(j).text() + " |").append('\n');
+                }
+            }
+            String note = Continuous.symbolicDecimalNote(r, k);
+            if (!note.isEmpty()) {
+                sb.append('\n').append(Text.markdown(note)).append(".\n");
+            }
         }
         return caution(sb);
     }

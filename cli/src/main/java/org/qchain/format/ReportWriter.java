@@ -105,6 +105,29 @@ abstract class ReportWriter implements ReportLayout {
         }
     }
 
+    /** {@code P(i -> j)(t)} (or its Laplace transform {@code L(i -> j)(s)}) as a formula that prints itself. */
+    record TimeEntry(String name, String time, String from, String to) implements Formula {
+        @Override
+        public String plain() {
+            return name + "(" + from + " -> " + to + ")(" + time + ")";
+        }
+
+        @Override
+        public String latex() {
+            String n = name.equals("L") ? "\\hat{P}" : name;
+            return n + "_{\\text{" + Text.latex(from) + "} \\to \\text{" + Text.latex(to) + "}}("
+                + (time.equals("∞") ? "\\infty" : time) + ")";
+        }
+
+        @Override
+        public String mathml() {
+            String n = name.equals("L") ? "<mover><mi>P</mi><mo>^</mo></mover>" : "<mi>" + name + "</mi>";
+            return "<math xmlns=\"http://www.w3.org/1998/Math/MathML\"><msub>" + n + "<mrow><mtext>" + SvgPlot.xml(from)
+                + "</mtext><mo>&#x2192;</mo><mtext>" + SvgPlot.xml(to) + "</mtext></mrow></msub><mo>(</mo><mi>"
+                + SvgPlot.xml(time) + "</mi><mo>)</mo></math>";
+        }
+    }
+
     /** A formula equal to a left side: {@code lhs = rhs}. */
     record Equation(Formula lhs, Formula rhs) implements Formula {
         @Override
@@ -337,6 +360,10 @@ abstract class ReportWriter implements ReportLayout {
     }
 
     private void closed(ClosedResult c) {
+        if (c.continuous()) {
+            continuousClosed(c);
+            return;
+        }
         paragraph(t("Valid for n ≥ " + c.validFrom() + (c.parameters().isEmpty() ? "" : "; parameters (symbolic): "
             + String.join(", ", c.parameters())) + "."));
         if (!c.conditions().isEmpty()) {
@@ -353,25 +380,7 @@ abstract class ReportWriter implements ReportLayout {
                 display(new Equation(new Entry(n, c.rows().get(i), c.cols().get(j)), c.cells().get(i).get(j)));
             }
         }
-        if (!c.eigenvalues().isEmpty()) {
-            paragraph(t("Eigenvalues, by irreducible factor of det(xI − P):"));
-            List<List<Span>> items = new ArrayList<>();
-            for (ClosedResult.Eigen e : c.eigenvalues()) {
-                List<Span> item = new ArrayList<>();
-                item.add(new Math(e.factor()));
-                item.add(new Txt(e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() + "): " : ": "));
-                for (int k = 0; k < e.values().size(); k++) {
-                    item.add(k > 0 ? new Txt(", ") : new Txt(""));
-                    item.add(formula(e.values().get(k).plain()));
-                }
-                String decimals = Closed.eigenDecimals(c, e);
-                if (!decimals.isEmpty()) {
-                    item.add(new Txt(" ≈ " + decimals));
-                }
-                items.add(item);
-            }
-            bullets(items);
-        }
+        eigenvalueList(c, "Eigenvalues, by irreducible factor of det(xI − P):");
         c.longRun().ifPresent(l -> {
             if (l.periodic()) {
                 paragraph(t("Period " + l.period() + ": P^n does not converge; each subsequence P^(" + l.period()
@@ -379,26 +388,94 @@ abstract class ReportWriter implements ReportLayout {
             }
             for (int r = 0; r < l.limits().size(); r++) {
                 paragraph(t(l.periodic() ? "Limit of P^(" + l.period() + "m + " + r + "):" : "Limit as n grows:"));
-                List<List<Span>> items = new ArrayList<>();
-                for (int i = 0; i < c.rows().size(); i++) {
-                    for (int j = 0; j < c.cols().size(); j++) {
-                        List<Span> item = new ArrayList<>();
-                        item.add(new Math(new Entry("∞", c.rows().get(i), c.cols().get(j))));
-                        item.add(new Txt(" = "));
-                        item.add(formula(l.limits().get(r).get(i).get(j).plain()));
-                        if (!l.values().isEmpty()) {
-                            item.add(new Txt(" ≈ " + Text.decimal(l.values().get(r).get(i).get(j), digits)));
-                        }
-                        items.add(item);
-                    }
-                }
-                bullets(items);
+                limits(c, l, r, (from, to) -> new Entry("∞", from, to));
             }
-            List<Span> rate = new ArrayList<>(t("Convergence rate (second-largest eigenvalue modulus): "));
-            rate.add(formula(l.rate().plain()));
-            l.rateValue().ifPresent(v -> rate.add(new Txt(" = " + Closed.real(c, v))));
-            paragraph(rate);
+            rate(c, l, "Convergence rate (second-largest eigenvalue modulus): ");
         });
+    }
+
+    /** The limits of the r-th subsequence as a list, each entry named by {@code lhs}. */
+    private void limits(ClosedResult c, ClosedResult.LongRun l, int r,
+                        java.util.function.BiFunction<String, String, Formula> lhs) {
+        List<List<Span>> items = new ArrayList<>();
+        for (int i = 0; i < c.rows().size(); i++) {
+            for (int j = 0; j < c.cols().size(); j++) {
+                List<Span> item = new ArrayList<>();
+                item.add(new Math(lhs.apply(c.rows().get(i), c.cols().get(j))));
+                item.add(new Txt(" = "));
+                item.add(formula(l.limits().get(r).get(i).get(j).plain()));
+                if (!l.values().isEmpty()) {
+                    item.add(new Txt(" ≈ " + Text.decimal(l.values().get(r).get(i).get(j), digits)));
+                }
+                items.add(item);
+            }
+        }
+        bullets(items);
+    }
+
+    /** The rate paragraph: the label, the formula and its value at the point. */
+    private void rate(ClosedResult c, ClosedResult.LongRun l, String label) {
+        List<Span> rate = new ArrayList<>(t(label));
+        rate.add(formula(l.rate().plain()));
+        l.rateValue().ifPresent(v -> rate.add(new Txt(" = " + Closed.real(c, v))));
+        paragraph(rate);
+    }
+
+    /** A continuous chain's P(t) in t: conditions, entries, Laplace transforms, eigenvalues of Q, limit and rate. */
+    private void continuousClosed(ClosedResult c) {
+        String t = c.timeSymbol();
+        paragraph(t("P(" + t + ") = exp(Q" + t + ") in closed form, valid for " + t + " ≥ 0" + (c.parameters().isEmpty()
+            ? "" : "; parameters (symbolic): " + String.join(", ", c.parameters())) + "."));
+        if (!c.conditions().isEmpty()) {
+            paragraph(t("Where:"));
+            bullets(c.conditions().stream().map(cond -> List.<Span>of(new Math(cond))).toList());
+        }
+        if (!c.notProved().isEmpty()) {
+            paragraph(t("Not shown to hold throughout the parameters' domains:"));
+            bullets(c.notProved().stream().map(cond -> List.<Span>of(new Math(cond))).toList());
+        }
+        for (int i = 0; i < c.rows().size(); i++) {
+            for (int j = 0; j < c.cols().size(); j++) {
+                display(new Equation(new TimeEntry("P", t, c.rows().get(i), c.cols().get(j)), c.cells().get(i).get(j)));
+            }
+        }
+        paragraph(t("Laplace transforms, the entries of (" + c.transformSymbol() + "I − Q)^−1:"));
+        for (int i = 0; i < c.rows().size(); i++) {
+            for (int j = 0; j < c.cols().size(); j++) {
+                display(new Equation(new TimeEntry("L", c.transformSymbol(), c.rows().get(i), c.cols().get(j)),
+                    c.transforms().get(i).get(j)));
+            }
+        }
+        eigenvalueList(c, "Eigenvalues, by irreducible factor of det(xI − Q):");
+        c.longRun().ifPresent(l -> {
+            paragraph(t("Limit as " + t + " grows (the eigenvalue-0 term):"));
+            limits(c, l, 0, (from, to) -> new TimeEntry("P", "∞", from, to));
+            rate(c, l, "Rate (largest real part of the eigenvalues other than 0): ");
+        });
+    }
+
+    /** The factors of the characteristic polynomial and their eigenvalues, as a list under a heading. */
+    private void eigenvalueList(ClosedResult c, String heading) {
+        if (c.eigenvalues().isEmpty()) {
+        return;
+        }
+        paragraph(t(heading));
+        List<List<Span>> items = new ArrayList<>();
+        for (ClosedResult.Eigen e : c.eigenvalues()) {
+            List<Span> item = new ArrayList<>();
+            item.add(new Math(e.factor()));
+            item.add(new Txt(e.multiplicity() > 1 ? " (multiplicity " + e.multiplicity() + "): " : ": "));
+            for (int k = 0; k < e.values().size(); k++) {
+                item.add(k > 0 ? new Txt(", ") : new Txt(""));
+                item.add(formula(e.values().get(k).plain()));
+            }
+            String decimals = Closed.eigenDecimals(c, e);
+            if (!decimals.isEmpty()) {
+                item.add(new Txt(" ≈ " + decimals));
+            }
+            items.add(item);
+        }
+        bullets(items);
     }
 
     private void classes(ClassesResult c) {

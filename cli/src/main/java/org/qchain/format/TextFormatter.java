@@ -362,7 +362,7 @@ final class TextFormatter extends DocLayout {
     @Override
     public String closed(ClosedResult r) {
         StringBuilder sb = new StringBuilder();
-        sb.append(Closed.pn(r)).append(" for ").append(r.source()).append(" (discrete chain): ").append(Closed.what(r))
+        sb.append(Closed.pn(r)).append(" for ").append(r.source()).append(" (").append(Closed.chain(r)).append("): ").append(Closed.what(r))
             .append('\n');
         if (!r.isSeries()) {
             sb.append("Valid for ").append(r.names().step()).append(" >= ").append(r.validFrom());
@@ -405,8 +405,20 @@ final class TextFormatter extends DocLayout {
         if (!r.where().isEmpty()) {
             sb.append(Closed.whereLine(r)).append('\n');
         }
+        if (r.continuous()) {
+            sb.append('\n').append(Closed.transformHeading(r)).append(":\n");
+            List<String> tl = new ArrayList<>();
+            List<String> tv = new ArrayList<>();
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.cols().size(); j++) {
+                    tl.add(Closed.transformLabel(r, r.rows().get(i), r.cols().get(j)));
+                    tv.add(r.transforms().get(i).get(j).plain());
+                }
+            }
+            aligned(sb, tl, " = ", tv, "  ");
+        }
         if (!r.eigenvalues().isEmpty()) {
-            sb.append("\nEigenvalues, by irreducible factor of det(").append(r.names().variable()).append("I - P):\n");
+            sb.append("\nEigenvalues, by irreducible factor of ").append(Closed.det(r)).append(":\n");
             List<String> facts = new ArrayList<>();
             List<String> vals = new ArrayList<>();
             boolean decimals = false;
@@ -425,7 +437,7 @@ final class TextFormatter extends DocLayout {
                     .append(" significant digits)\n");
             }
             if (r.factored()) {
-                sb.append("  det(").append(r.names().variable()).append("I - P) = ")
+                sb.append("  ").append(Closed.det(r)).append(" = ")
                     .append(Closed.characteristicPolynomial(r)).append('\n');
             }
         }
@@ -637,6 +649,53 @@ final class TextFormatter extends DocLayout {
             Continuous.grid(r, at).forEach(table::addRow);
             sb.append(table.render());
             sb.append(Continuous.boundSentence(at)).append(".\n");
+        }
+        return end(sb);
+    }
+
+    @Override
+    public String symbolicTransient(org.qchain.result.SymbolicTransientResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append(Continuous.symbolicTitle(r)).append('\n').append(Continuous.symbolicValidity(r)).append('\n');
+        if (!r.substituted().isEmpty()) {
+            List<String> v = new ArrayList<>();
+            r.substituted().forEach((k, x) -> v.add(k + "=" + x));
+            sb.append("Substituted before solving (given with --at): ").append(String.join(", ", v)).append('\n');
+        }
+        if (r.factored()) {
+            sb.append("Coefficients: numerator and denominator factored over the rationals.\n");
+        }
+        sb.append('\n');
+        List<String> labels = new ArrayList<>();
+        List<String> values = new ArrayList<>();
+        for (int i = 0; i < r.rows().size(); i++) {
+            for (int j = 0; j < r.states().size(); j++) {
+                labels.add(Continuous.symbolicLabel(r.timeSymbol(), r.rows().get(i), r.states().get(j)));
+                values.add(Continuous.symbolicShown(r, r.shownCells().get(i).get(j).plain(), true));
+            }
+        }
+        aligned(sb, labels, " = ", values, "");
+        if (!r.where().isEmpty()) {
+            sb.append(Continuous.symbolicWhere(r, true)).append('\n');
+        }
+        for (int k = 0; k < r.times().size(); k++) {
+            org.qchain.result.SymbolicTransientResult.AtTime at = r.times().get(k);
+            sb.append('\n').append(r.timeSymbol()).append(" = ").append(at.t()).append(":\n");
+            List<List<org.qchain.exact.certified.CertifiedDecimal>> dec = Continuous.symbolicDecimals(r, k);
+            List<String> l = new ArrayList<>();
+            List<String> v = new ArrayList<>();
+            for (int i = 0; i < r.rows().size(); i++) {
+                for (int j = 0; j < r.states().size(); j++) {
+                    l.add(Continuous.symbolicLabel(at.t().toString(), r.rows().get(i), r.states().get(j)));
+                    v.add(Continuous.symbolicShown(r, at.cells().get(i).get(j).plain(), true)
+                        + (dec.isEmpty() ? "" : "  ≈ " + dec.get(i).get(j).text()));
+                }
+            }
+            aligned(sb, l, " = ", v, "  ");
+            String note = Continuous.symbolicDecimalNote(r, k);
+            if (!note.isEmpty()) {
+                sb.append("  (").append(note).append(")\n");
+            }
         }
         return end(sb);
     }

@@ -51,6 +51,16 @@ import org.qchain.exact.certified.CertifiedReal;
  * @param toStates    the final states of a set ({@code --to Up,Worn}: one column, {@code cols} holding its text
  *                    {@code {Up, Worn}}, each cell the sum of their entries) when {@code start} is given; empty
  *                    otherwise
+ * @param kind        {@link Kind#DISCRETE}: P^n in a symbolic n; {@link Kind#CONTINUOUS}: P(t) = exp(Qt) in a
+ *                    symbolic time (then {@code nSymbol} and {@code names().step()} are the time symbol, validFrom is
+ *                    0, the long run is the limit as t grows and its rate the largest real part of the eigenvalues
+ *                    other than 0, and {@code names().variable()} is the variable of det(xI - Q))
+ * @param timeSymbol  the time symbol of a continuous chain's formulas ({@code t} unless a parameter has that name);
+ *                    empty for a discrete chain
+ * @param transformSymbol the variable of the Laplace transforms ({@code s} unless a parameter has that name); empty
+ *                    for a discrete chain
+ * @param transforms  a continuous chain's Laplace transforms {@code (sI - Q)^-1}, shaped like {@code cells}; empty
+ *                    for a discrete chain
  */
 public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<Condition> conditions,
                            List<String> states, List<String> parameters, Selection selection,
@@ -59,8 +69,40 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
                            List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
                            Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored,
                            java.util.Map<String, org.qchain.exact.Rational> substituted,
-                           java.util.Map<String, org.qchain.exact.Rational> start, List<String> toStates)
+                           java.util.Map<String, org.qchain.exact.Rational> start, List<String> toStates, Kind kind,
+                           String timeSymbol, String transformSymbol, List<List<Formula>> transforms)
     implements Result {
+
+    /** Which closed form: of P^n (a discrete chain) or of P(t) (a continuous chain). */
+    public enum Kind {
+        /** P^n in a symbolic n. */
+        DISCRETE("discrete"),
+        /** P(t) = exp(Qt) in a symbolic t. */
+        CONTINUOUS("continuous");
+
+        private final String word;
+
+        Kind(String word) {
+            this.word = word;
+        }
+
+        /** The word of the JSON field {@code kind}. */
+        public String word() {
+            return word;
+        }
+    }
+
+    /** Whether this is the closed form of a continuous chain's P(t). */
+    public boolean continuous() {
+        return kind == Kind.CONTINUOUS;
+    }
+
+    /** The same result with the values given with {@code --at} recorded as substituted. */
+    public ClosedResult withSubstituted(java.util.Map<String, org.qchain.exact.Rational> values) {
+        return new ClosedResult(source, form, nSymbol, validFrom, conditions, states, parameters, selection,
+            rows, cols, cells, recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where,
+            namedCells, factored, values, start, toStates, kind, timeSymbol, transformSymbol, transforms);
+    }
 
     /** Copies the lists. */
     public ClosedResult {
@@ -79,6 +121,8 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
         substituted = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(substituted));
         start = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(start));
         toStates = List.copyOf(toStates);
+        java.util.Objects.requireNonNull(kind, "kind");
+        transforms = transforms.stream().map(List::copyOf).toList();
     }
 
     /** As the canonical constructor without a start or a set of final states. */
@@ -91,14 +135,14 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
                         java.util.Map<String, org.qchain.exact.Rational> substituted) {
         this(source, form, nSymbol, validFrom, conditions, states, parameters, selection, rows, cols, cells,
             recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where, namedCells, factored,
-            substituted, java.util.Map.of(), List.of());
+            substituted, java.util.Map.of(), List.of(), Kind.DISCRETE, "", "", List.of());
     }
 
     /** The same result with the start and the set of final states it was asked for (see {@link #start()}). */
     public ClosedResult withStart(java.util.Map<String, org.qchain.exact.Rational> startWeights, List<String> to) {
         return new ClosedResult(source, form, nSymbol, validFrom, conditions, states, parameters, selection,
             rows, cols, cells, recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where,
-            namedCells, factored, substituted, startWeights, to);
+            namedCells, factored, substituted, startWeights, to, kind, timeSymbol, transformSymbol, transforms);
     }
 
     /** Whether the start is a distribution over more than one state. */

@@ -8,7 +8,7 @@ import java.util.List;
  */
 public sealed interface Result permits StepResult, CertifiedStepResult, SymbolicStepResult, SensResult, ClosedResult,
     CheckResult, TransientResult, AvailabilityResult, RateSensResult, VerifyResult, ClassesResult, LongRunResult,
-    AbsorbResult, DistributionResult, TransientSensResult, SymbolicAvailabilityResult {
+    AbsorbResult, DistributionResult, TransientSensResult, SymbolicAvailabilityResult, SymbolicTransientResult {
 
     /** The model file name as the user gave it. */
     String source();

@@ -211,4 +211,28 @@ class SizeGuardTest {
         assertEquals(java.util.List.of("S59"), closed.states());
         assertEquals("1", closed.stationary().get(0).plain());
     }
+
+    @Test
+    void continuousClosedFormsAndSymbolicStepsAreRefusedBeforeTheClosedFormEngine() {
+        LoadedModel gen = LoadedModel.load(Path.of("../docs/examples/generator-set.chain"), Map.of());
+        ClosedQuery q = new ClosedQuery(org.qchain.result.ClosedResult.Form.MATRIX, Optional.empty(), "--from",
+            Optional.empty(), 2, 12);
+        assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE,
+            assertThrows(QchainException.class, () -> Analysis.run(gen, q, NO_ENGINE)).key());
+        TransientFormQuery t = new TransientFormQuery(java.util.List.of(Rational.ONE), Optional.empty(), 12, false, 2,
+            ClosedQuery.DEFAULT_MAX_DIGITS, 1_000_000);
+        assertEquals(ErrorKey.SYMBOLIC_TOO_LARGE,
+            assertThrows(QchainException.class, () -> Analysis.run(gen, t, NO_ENGINE)).key());
+        // rates without parameters: the digit bound applies
+        LoadedModel numeric = LoadedModel.load(Path.of("src/test/resources/models/continuous.chain"), Map.of());
+        ClosedQuery tiny = new ClosedQuery(org.qchain.result.ClosedResult.Form.MATRIX, Optional.empty(), "--from",
+            Optional.empty(), StepQuery.DEFAULT_MAX_TERMS, 12, 1);
+        assertEquals(ErrorKey.RESULT_TOO_LARGE,
+            assertThrows(QchainException.class, () -> Analysis.run(numeric, tiny, NO_ENGINE)).key());
+        // the certified decimals at the point: their work estimate refuses before either engine
+        TransientFormQuery work = new TransientFormQuery(java.util.List.of(Rational.ONE), Optional.empty(), 12, false,
+            StepQuery.DEFAULT_MAX_TERMS, ClosedQuery.DEFAULT_MAX_DIGITS, 1);
+        assertEquals(ErrorKey.TRANSIENT_TOO_LARGE,
+            assertThrows(QchainException.class, () -> Analysis.run(numeric, work, NO_ENGINE)).key());
+    }
 }

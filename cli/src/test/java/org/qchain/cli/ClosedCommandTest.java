@@ -210,8 +210,8 @@ class ClosedCommandTest {
             "closed", BEACON, "--form", "series");
         assertUsage("invalid --at 'a=2': value 2 of parameter 'a' is outside its domain (0, 1)", "closed", BEACON,
             "--at", "a=2");
-        assertUsage("this is a continuous chain; closed forms in n are for discrete-time chains", "closed",
-            Cli.model("continuous.chain"));
+        assertUsage("this is a continuous chain; the gf form is for discrete-time chains (a continuous chain's closed"
+            + " form comes with its Laplace transforms)", "closed", Cli.model("continuous.chain"), "--form", "gf");
     }
 
     @Test

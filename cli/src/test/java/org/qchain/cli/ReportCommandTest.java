@@ -131,14 +131,15 @@ class ReportCommandTest {
     }
 
     @Test
-    void continuousChainGetsAvailabilityAndTheClosedFormNote() throws Exception {
+    void continuousChainGetsAvailabilityAndTheClosedFormInT() throws Exception {
         Path out = dir.resolve("gen.md");
         Cli.Result r = Cli.run("report", Cli.model("generator-set.chain"), "-o", out.toString(), "-t", "1,24");
         assertEquals(0, r.code(), r::toString);
         String md = Files.readString(out);
         assertTrue(md.contains("## Transition probabilities P(t)"));
         assertTrue(md.contains("### P(t) at t = 24"));
-        assertTrue(md.contains("A closed form of P(t) = exp(Qt) in t is not available yet for continuous chains"));
+        assertTrue(md.contains("## Closed form in t"), md);
+        assertTrue(md.contains("P(t) = exp(Qt) in closed form, valid for t ≥ 0; parameters (symbolic): lam, mu."), md);
         assertTrue(md.contains("| steady-state availability | $\\frac{16375}{16393}$ ≈ 0.998901970353 |"), md);
     }
 }

@@ -338,11 +338,14 @@ class ReportLayoutTest {
     }
 
     @Test
-    void continuousReportHasAvailabilityAndSaysTheClosedFormIsNotAvailableYet() throws Exception {
+    void continuousReportHasAvailabilityAndTheClosedFormInT() throws Exception {
         ReportResult r = report("generator-set.chain");
         String html = ReportFormat.HTML.layout(12).render(r, "g").main();
         Document d = xml(html);
-        assertTrue(html.contains("not available yet for continuous chains"));
+        // the closed form of P(t) from the first state, its Laplace transforms and the limit (the eigenvalue-0 term)
+        assertTrue(html.contains("Closed form in t"), html);
+        assertTrue(html.contains("Laplace transforms"), html);
+        assertTrue(html.contains("Limit as t grows"), html);
         assertTrue(html.contains("steady-state availability"));
         NodeList lines = d.getElementsByTagNameNS("http://www.w3.org/2000/svg", "polyline");
         assertEquals(2, lines.getLength(), "A(t) and the sweep");

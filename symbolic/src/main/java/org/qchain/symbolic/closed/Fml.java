@@ -292,6 +292,14 @@ sealed interface Fml {
                         return "\\left|" + args.get(0) + "\\right|";
                     case "rootsum":
                         return "\\sum_{" + args.get(1) + "(r) = 0} r^{" + args.get(0) + "}";
+                    case "exp":
+                        return "e^{" + args.get(0) + "}";
+                    case "rootsumexp":
+                        return "\\sum_{" + args.get(2) + "(r) = 0} r^{" + args.get(0) + "} e^{r " + args.get(1) + "}";
+                    case "re":
+                        return "\\operatorname{Re}\\left(" + args.get(0) + "\\right)";
+                    case "maxre":
+                        return "\\max_{" + args.get(0) + "(r) = 0} \\operatorname{Re} r";
                     default:
                         String name = c.name().length() == 1 ? c.name() : "\\operatorname{" + c.name() + "}";
                         return name + "\\left(" + String.join(", ", args) + "\\right)";

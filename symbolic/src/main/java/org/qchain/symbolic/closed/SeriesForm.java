@@ -193,6 +193,20 @@ public final class SeriesForm {
                 l = lcm(l, q.den);
             }
         }
+        if (descending) {
+            // the transform also clears the rational constants: coprime integer coefficients throughout
+            java.math.BigInteger d = java.math.BigInteger.ONE;
+            Quotient<BigRational> lq = new Quotient<>(field.field, l);
+            for (GenPolynomial<Quotient<BigRational>> p : parts) {
+                for (Quotient<BigRational> q : p.getMap().values()) {
+                    for (BigRational c : q.multiply(lq).num.getMap().values()) {
+                        java.math.BigInteger cd = c.denominator();
+                        d = d.divide(d.gcd(cd)).multiply(cd);
+                    }
+                }
+            }
+            l = l.multiply(new BigRational(d));
+        }
         Fml num = polynomial(parts.get(0), l, variable, descending);
         Fml den = polynomial(parts.get(1), l, variable, descending);
         Fml whole = Fml.isOne(den) ? num : Fml.div(num, den);

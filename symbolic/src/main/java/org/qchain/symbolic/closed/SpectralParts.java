@@ -148,7 +148,9 @@ final class SpectralParts {
         for (Spectral.Group g : groups) {
             // a linear factor reads x - (lambda), the way its eigenvalue is printed
             Fml f = g.kind == Spectral.Kind.LINEAR && !g.lambda.isZERO()
-                ? Fml.sum(Fml.name(variable), Fml.neg(field.formula(g.lambda)))
+                ? (Fml.plain(field.formula(g.lambda)).startsWith("-")
+                    ? Fml.sum(Fml.name(variable), field.formula(g.lambda.negate())) // x + lam + mu, not x - (-lam - mu)
+                    : Fml.sum(Fml.name(variable), Fml.neg(field.formula(g.lambda))))
                 : field.formula(g.factor, variable);
             List<String> values = new ArrayList<>();
             List<String> valuesLatex = new ArrayList<>();

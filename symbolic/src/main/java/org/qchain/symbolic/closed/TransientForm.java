@@ -322,6 +322,99 @@ public final class TransientForm {
         return timeFormula(combinationPick(start, weights), timeValue(t), factored);
     }
 
+    // --- values at a point ------------------------------------------------------------------------------------
+
+    /**
+     * Entry (i, j) of P(t) at a rational time and a parameter point, from the closed form, as a certified number:
+     * exact coefficients, the eigenvalues as certified numbers, and e^(lambda t) enclosed in complex interval
+     * arithmetic ({@code ExpBoxes}) at a precision raised until the requested digits are settled.
+     *
+     * @param t  the time, at least 0
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return the value
+     * @throws IllegalArgumentException  if t is negative
+     * @throws IndexOutOfBoundsException if i or j is out of range
+     * @throws QchainException           as {@link #checkPoint}
+     */
+    public CertifiedReal valueAt(int i, int j, Rational t, Map<String, Rational> at) {
+        return value(entryPick(i, j), t, at);
+    }
+
+    /**
+     * {@link #combination(List, List, boolean)} at a rational time and a parameter point, as a certified number (e.g.
+     * the point availability A(t) at the point).
+     *
+     * @throws IllegalArgumentException if t is negative or a vector's length differs from the number of states
+     * @throws QchainException          as {@link #checkPoint}
+     */
+    public CertifiedReal combinationValueAt(List<Rational> start, List<Rational> weights, Rational t,
+                                            Map<String, Rational> at) {
+        return value(combinationPick(start, weights), t, at);
+    }
+
+    /** One group at the point: coefficients c.get(j).get(m) of t^j/j! r^m e^(rt), and its eigenvalues. */
+    private record GroupAt(List<List<Rational>> coefficients, List<CertifiedComplex> roots) {
+    }
+
+    private CertifiedReal value(Function<Quotient<BigRational>[][], Quotient<BigRational>> pick, Rational t,
+                                Map<String, Rational> at) {
+        timeValue(t);
+        checkPoint(at);
+        List<GroupAt> parts = new ArrayList<>();
+        boolean zeroValue = true;
+        for (Spectral.Group g : groups) {
+            List<List<Rational>> c = new ArrayList<>();
+            if (g.kind == Spectral.Kind.LINEAR) {
+                for (Quotient<BigRational>[][] nj : g.nilpotent) {
+                    c.add(List.of(ParamField.rational(SpectralParts.substitute(field, pick.apply(nj), at))));
+                }
+            } else {
+                for (List<Quotient<BigRational>[][]> cj : g.c) {
+                    List<Rational> row = new ArrayList<>();
+                    for (Quotient<BigRational>[][] cjm : cj) {
+                        row.add(ParamField.rational(SpectralParts.substitute(field, pick.apply(cjm), at)));
+                    }
+                    c.add(row);
+                }
+            }
+            boolean zero = c.stream().allMatch(r -> r.stream().allMatch(Rational::isZero));
+            if (!zero) {
+                zeroValue = false;
+                parts.add(new GroupAt(c, SpectralParts.valuesAt(field, g, at)));
+            }
+        }
+        if (zeroValue) {
+            return CertifiedReal.exact(Rational.ZERO);
+        }
+        List<Rational> powers = new ArrayList<>();
+        Rational tj = Rational.ONE;
+        int most = parts.stream().mapToInt(g -> g.coefficients().size()).max().orElse(1);
+        for (int j = 0; j < most; j++) {
+            // t^j / j!
+            powers.add(tj);
+            tj = tj.multiply(t).divide(Rational.of(j + 1));
+        }
+        return CertifiedReal.enclosed(bits -> {
+            ExpBoxes e = new ExpBoxes(bits + 64);
+            ExpBoxes.Box total = e.zero();
+            for (GroupAt g : parts) {
+                for (CertifiedComplex r : g.roots()) {
+                    ExpBoxes.Box rb = e.of(r);
+                    ExpBoxes.Box sum = e.zero();
+                    for (int j = 0; j < g.coefficients().size(); j++) {
+                        ExpBoxes.Box rm = e.one();
+                        for (Rational c : g.coefficients().get(j)) {
+                            sum = e.add(sum, e.scale(rm, c.multiply(powers.get(j))));
+                            rm = e.multiply(rm, rb);
+                        }
+                    }
+                    total = e.add(total, e.multiply(sum, e.exp(e.scale(rb, t))));
+                }
+            }
+            return e.real(total);
+        });
+    }
+
     // --- what goes with the formulas ---------------------------------------------------------------------------
 
     /** The symbols of the formulas (time, transform variable, ...), none a parameter's name. */
@@ -490,6 +583,38 @@ public final class TransientForm {
         List<String> out = new ArrayList<>();
         for (GenPolynomial<BigRational> p : longRunPolys) {
             out.add(SpectralParts.key(field, p) + " != 0");
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The conditions of {@link #conditions()} as values, each {@code POLY != 0} with its LaTeX and whether it is
+     * shown to hold for every parameter value inside the given domains (the check of
+     * {@link #conditionsNotProved(Map)}).
+     *
+     * @param domains the domain of each parameter (a parameter without one counts as unproved)
+     * @return the conditions, in the order of {@link #conditions()}
+     */
+    public List<Condition> conditions(Map<String, Domain> domains) {
+        return typed(conditionPolys, domains);
+    }
+
+    /**
+     * The conditions of {@link #longRunConditions()} as values, as {@link #conditions(Map)}.
+     *
+     * @param domains the domain of each parameter
+     * @return the conditions, in the order of {@link #longRunConditions()}
+     */
+    public List<Condition> longRunConditions(Map<String, Domain> domains) {
+        return typed(longRunPolys, domains);
+    }
+
+    private List<Condition> typed(List<GenPolynomial<BigRational>> polys, Map<String, Domain> domains) {
+        List<Condition> out = new ArrayList<>();
+        for (GenPolynomial<BigRational> p : polys) {
+            Fml f = field.formula(p);
+            out.add(new Condition(Fml.plain(f), Fml.latex(f), Rational.ZERO, DomainCheck.holdsThroughout(field, p,
+                domains)));
         }
         return List.copyOf(out);
     }

@@ -109,6 +109,63 @@ class TransientFormTest {
     }
 
     @Test
+    void closedFormAtRationalTimesMatchesCertifiedUniformization() {
+        // common practice, no source: two independent routes to exp(Qt) (the closed form with e^(lambda t) enclosed in
+        // interval arithmetic, and the exact module's uniformization with a bounded truncation) give the same
+        // correctly rounded decimals
+        Random rnd = new Random(31337);
+        List<Rational> times = List.of(Rational.of(1, 3), Rational.of(2), Rational.of(7, 2));
+        for (int k = 0; k < 6; k++) {
+            Model m = randomGenerator(rnd, 2 + rnd.nextInt(3), false);
+            TransientForm tf = ClosedForms.ofGenerator(m, Map.of());
+            RationalMatrix q = RatFunMatrix.fromModel(m).evaluate(Map.of());
+            org.qchain.exact.certified.CertifiedDecimal[][][] ref = org.qchain.exact.certified.CertifiedTransient
+                .decimals(q, times, 12, 4096, org.qchain.exact.Progress.NONE);
+            for (int n = 0; n < times.size(); n++) {
+                for (int i = 0; i < m.size(); i++) {
+                    for (int j = 0; j < m.size(); j++) {
+                        assertEquals(ref[n][i][j].text(), tf.valueAt(i, j, times.get(n), Map.of()).decimal(12).text(),
+                            m.source() + " t=" + times.get(n) + " (" + i + "," + j + ")");
+                    }
+                }
+            }
+        }
+    }
+
+    @Test
+    void pointAvailabilityOfTheTwoUnitsAtAPointMatchesUniformization() {
+        // the two-unit system at lam = 1/500, mu = 1/12 (invented figures), A(24) from both up: the closed form's
+        // combination (start row Both, up vector (1, 1, 0)) against the certified uniformization's P(24) row
+        Map<String, Rational> at = Map.of("lam", Rational.of(1, 500), "mu", Rational.of(1, 12));
+        TransientForm tf = ClosedForms.ofGenerator(TWO_UNITS, Map.of());
+        RationalMatrix q = RatFunMatrix.fromModel(TWO_UNITS).evaluate(at);
+        org.qchain.exact.certified.CertifiedDecimal[][][] ref = org.qchain.exact.certified.CertifiedTransient
+            .decimals(q, List.of(Rational.of(24)), 15, 4096, org.qchain.exact.Progress.NONE);
+        assertEquals(ref[0][0][2].text(), tf.valueAt(0, 2, Rational.of(24), at).decimal(15).text());
+        String availability = tf.combinationValueAt(List.of(Rational.ONE, Rational.ZERO, Rational.ZERO),
+            List.of(Rational.ONE, Rational.ONE, Rational.ZERO), Rational.of(24), at).decimal(12).text();
+        // A(24) = 1 - P(24)(Both -> None) = 1 - 0.000661871711626... (docs/commands.md shows the row)
+        assertEquals("0.999338128288", availability);
+    }
+
+    @Test
+    void longRunLimitIsTheStationaryLaw() {
+        // common practice, no source: the limit of P(t) has every row equal to the stationary law pi Q = 0, sum 1;
+        // for the two units pi = (mu^2, 2 lam mu, 2 lam^2)/(mu^2 + 2 lam mu + 2 lam^2) (Rausand and Hoyland, ch. on
+        // Markov models; from memory)
+        TransientForm tf = ClosedForms.ofGenerator(TWO_UNITS, Map.of());
+        Map<String, Rational> at = Map.of("lam", Rational.of(1, 10), "mu", Rational.of(1, 2));
+        RationalMatrix limit = tf.limitAt(at);
+        Rational d = Rational.of(1, 4).add(Rational.of(1, 10)).add(Rational.of(1, 50));
+        for (int i = 0; i < 3; i++) {
+            assertEquals(Rational.of(1, 4).divide(d), limit.get(i, 0));
+            assertEquals(Rational.of(1, 10).divide(d), limit.get(i, 1));
+            assertEquals(Rational.of(1, 50).divide(d), limit.get(i, 2));
+        }
+        assertTrue(tf.longRunConditions().isEmpty());
+    }
+
+    @Test
     void symbolsNeverCollideWithParameters() {
         Model m = ModelParser.parse("ts.chain", "chain continuous\nparam t\nparam s\nstates A B\nA B t\nB A s\n");
         TransientForm tf = ClosedForms.ofGenerator(m, Map.of());
