@@ -25,9 +25,9 @@ import picocli.CommandLine.TypeConversionException;
 /** {@code qchain absorb}: time to absorption, absorption probabilities, rewards, first passage. */
 @Command(name = "absorb", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     sortOptions = false, description = {
-        "Absorption of a discrete chain: the expected visits N = (I - Q)^-1, the expected number of steps until"
-            + " absorption and its variance, and the probability of ending in each absorbing state, exactly or as"
-            + " formulas in the parameters.",
+        "Absorption of a chain, discrete or continuous: the expected visits N = (I - Q)^-1, the expected number of"
+            + " steps until absorption and its variance, and the probability of ending in each absorbing state,"
+            + " exactly or as formulas in the parameters.",
         "--absorbing A,B makes states absorbing (the time to first reach them). --reward FILE (lines STATE VALUE)"
             + " adds the expected reward until absorption, the long-run average reward per step and, with"
             + " --discount V, the expected discounted reward. --steps N adds the distribution of the first-passage"

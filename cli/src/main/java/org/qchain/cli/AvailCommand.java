@@ -20,7 +20,8 @@ import picocli.CommandLine.Spec;
 /** {@code qchain avail}: figures of merit of a repairable system. */
 @Command(name = "avail", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
-        "Figures of merit of a repairable system: a continuous chain whose 'up' line marks the operating states.",
+        "Figures of merit of a repairable system (a continuous chain whose 'up' line marks the operating states),"
+            + " exactly or as formulas in the parameters.",
         "Exact: steady-state availability and unavailability, down hours per year, failure frequency (failures per"
             + " unit of time in the long run), mean up and down time per cycle, mean time to failure (MTTF: expected"
             + " time to first reach a down state) from each up state, and the long-run share of every state.",

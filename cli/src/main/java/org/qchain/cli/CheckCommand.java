@@ -15,8 +15,12 @@ import picocli.CommandLine.Spec;
 /** {@code qchain check}: validates a model and prints its one-step matrix. */
 @Command(name = "check", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
-        "Validate a model file and print its one-step matrix (exact and decimal).",
+        "Validate a model file and print its one-step matrix, or the generator Q of a continuous chain (exact and"
+            + " decimal, or as formulas in the parameters).",
         "The last line is \"OK: ...\" when the model is valid (text); any error is reported as file:line:col.",
+        "A continuous chain also shows each state's total rate out q_i and mean holding time 1/q_i, and its up and"
+            + " down states when the model has an 'up' line; with parameters without a value, the conditions"
+            + " under which the off-diagonal rates stay at least 0 over the parameters' domains.",
         "--format json, csv, markdown or latex lay the same matrix out as step does (n = 1); -o FILE writes it"
             + " atomically, never over the model file."})
 final class CheckCommand implements Callable<Integer> {

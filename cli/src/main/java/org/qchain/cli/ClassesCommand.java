@@ -14,8 +14,8 @@ import picocli.CommandLine.Spec;
 /** {@code qchain classes}: communicating classes, closed and transient, periods, absorbing states. */
 @Command(name = "classes", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     sortOptions = false, description = {
-        "The communicating classes of a discrete chain: which are closed (the chain stays once inside) and which"
-            + " transient, the period of each class, the absorbing states and the one-step graph.",
+        "The communicating classes of a chain, discrete or continuous: which are closed (the chain stays once"
+            + " inside) and which transient, the period of each class, the absorbing states and the one-step graph.",
         "With parameters without a value: the structure for generic values inside their domains, and the values"
             + " inside or on the edge of the domains that change it.",
         "A continuous chain (rates) has the classes of its rate graph; it is never periodic, and the table shows"

@@ -15,9 +15,10 @@ import picocli.CommandLine.Spec;
 /** {@code qchain longrun}: stationary laws, absorption into closed classes, the limit of P^n. */
 @Command(name = "longrun", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
     sortOptions = false, description = {
-        "Where a discrete chain settles: the stationary law of each closed class with mean recurrence times 1/pi,"
-            + " the probability of ending in each closed class from each transient state, and the full limit of"
-            + " P^n (of its averages when a closed class is periodic), exactly or as formulas in the parameters.",
+        "Where a chain settles, discrete or continuous: the stationary law of each closed class with mean"
+            + " recurrence times 1/pi, the probability of ending in each closed class from each transient state, and"
+            + " the full limit of P^n (of its averages when a closed class is periodic), exactly or as formulas in"
+            + " the parameters.",
         "--passage adds the mean first-passage times between all states of an irreducible chain.",
         "A continuous chain (rates): the stationary law from pi Q = 0, the limit of P(t) as t grows, mean return"
             + " times 1/(pi_i q_i) and first-passage times in the model's time unit."})

@@ -26,8 +26,9 @@ import picocli.CommandLine.Spec;
  * caution footer on every help); {@link #run(String[])} is the process entry point used by {@link Main}.
  */
 @Command(name = "qchain", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
-    description = "Exact n-step transition probabilities of Markov chains: exact fractions, with correctly rounded"
-        + " decimals beside them.",
+    description = "Markov chains solved exactly: transition probabilities, closed forms, long-run and absorption"
+        + " figures and figures of merit of discrete and continuous chains, as exact fractions with correctly"
+        + " rounded decimals beside them, or as formulas in the parameters.",
     subcommands = {})
 public final class QchainCommand implements Callable<Integer> {
     /**

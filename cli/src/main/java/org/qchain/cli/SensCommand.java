@@ -22,7 +22,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "sens", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
-        "Sensitivity of the n-step probability P^n(FROM -> TO) to a parameter: its exact derivative and elasticity.",
+        "Sensitivity to a parameter, with its exact derivative and elasticity: of P^n(FROM -> TO) of a discrete"
+            + " chain, or of P(t) and of the figures of merit (availability, MTTF, ...) of a continuous chain.",
         "P and dP/dp are printed as formulas in the parameters, with their values and the elasticity (p/P) dP/dp at"
             + " the nominal values (or --at).",
         "With --sweep: a table of P and dP/dp over exact values of the parameter, exact and decimal.",

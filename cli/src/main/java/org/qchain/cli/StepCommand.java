@@ -26,7 +26,8 @@ import picocli.CommandLine.Spec;
 /** {@code qchain step}: exact n-step transition probabilities. */
 @Command(name = "step", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class, sortOptions = false,
     description = {
-        "Exact n-step transition probabilities P^n of a discrete chain, as fractions with decimals beside them.",
+        "Transition probabilities: P^n of a discrete chain as exact fractions with decimals beside them, or P(t) of a"
+            + " continuous chain at given times (-t) as certified decimals.",
         "Without --from: the whole matrix. With --from: that row (where the chain may be after n steps).",
         "With --from and --to: one probability; add --paths K for its K most probable paths. --to Up,Worn: the"
             + " probability of being in one of those states (the sum of their entries).",

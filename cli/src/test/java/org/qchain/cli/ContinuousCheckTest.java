@@ -81,4 +81,20 @@ class ContinuousCheckTest {
             + " figure of merit (qchain sens MODEL --of availability|unavailability|mttf|failure-frequency --wrt P)\n",
             r.err());
     }
+
+    @Test
+    void helpNamesContinuousChainsWhereTheCommandsTakeThem() {
+        Cli.Result r = Cli.run("--help");
+        assertEquals(0, r.code(), r::toString);
+        String flat = r.out().replaceAll("\\s+", " ");
+        assertTrue(flat.startsWith("Usage: qchain [-hV] [COMMAND] Markov chains solved exactly: transition"
+            + " probabilities, closed forms, long-run and absorption figures and figures of merit of discrete and"
+            + " continuous chains"), flat);
+        for (String phrase : new String[] {"classes The communicating classes of a chain, discrete or continuous",
+            "longrun Where a chain settles, discrete or continuous", "absorb Absorption of a chain, discrete or"
+            + " continuous", "check Validate a model file and print its one-step matrix, or the generator Q of a"
+            + " continuous chain", "or P(t) of a continuous chain at given times (-t)"}) {
+            assertTrue(flat.contains(phrase), phrase);
+        }
+    }
 }
