@@ -67,10 +67,14 @@ final class SymbolicEngine {
         }
     }
 
-    /** Maps the model into its parameter ring and checks it there; throws the first error, located. */
-    static SymbolicValidation validate(Model m) {
+    /**
+     * Maps the model into its parameter ring and checks it there, deciding range conditions at the values used
+     * (nominal, overridden by those given with --at) and naming where they came from; throws the first error,
+     * located.
+     */
+    static SymbolicValidation validate(Model m, Map<String, Rational> known, java.util.Set<String> given) {
         RatFunMatrix p = RatFunMatrix.fromModel(m);
-        CheckReport report = ParameterCheck.check(m, p);
+        CheckReport report = ParameterCheck.check(m, p, known, given);
         report.throwIfErrors();
         return new Checked(p, grouped(report.warnings()));
     }
@@ -510,7 +514,7 @@ final class SymbolicEngine {
         SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
         ClosedResult r = q.form() == ClosedResult.Form.MATRIX
             ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), cells, ctx)
-            : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), cells);
+            : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), cells, ctx.warnings());
         r = model.given().isEmpty() ? r : substituted(r, model.given());
         return cells.combined ? r.withStart(cells.startWeights, cells.toStates) : r;
     }
@@ -628,7 +632,8 @@ final class SymbolicEngine {
             where.add(new ClosedResult.Where(d.name(), d.eigenvalue() ? "λ" + index : d.name(),
                 d.eigenvalue() ? "\\lambda_{" + index + "}" : d.name(), d.eigenvalue(), Formula.of(d.plain(), d.latex())));
         }
-        List<String> warnings = new ArrayList<>();
+        // the range conditions of the symbolic check first, as every symbolic command states them
+        List<String> warnings = new ArrayList<>(ctx.warnings());
         Optional<Point> pt = point(model, cf.parameters());
         Optional<CertifiedReal> rateValue = Optional.empty();
         List<RootPolynomial> named = List.of();
@@ -740,7 +745,7 @@ final class SymbolicEngine {
         return new ClosedResult.Names(s.step(), s.period(), s.variable(), s.series(), s.sequence());
     }
 
-    private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Cells sel) {
+    private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Cells sel, List<String> warnings) {
         List<List<Formula>> cells = new ArrayList<>();
         List<List<ClosedResult.Recurrence>> recs = new ArrayList<>();
         int validFrom = 0;
@@ -767,7 +772,7 @@ final class SymbolicEngine {
         }
         return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(), List.of(),
             m.states(), sf.parameters(), sel.selection(), sel.rowLabels(), sel.colLabels(), cells, recs, List.of(),
-            Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of(), names(sf.symbols()));
+            Optional.empty(), List.of(), Optional.empty(), q.digits(), warnings, names(sf.symbols()));
     }
 
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
