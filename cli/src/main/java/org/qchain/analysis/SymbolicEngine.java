@@ -710,7 +710,8 @@ final class SymbolicEngine {
         }
         ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits,
             Formula.of(lr.rate(), lr.rateLatex()), rateValue,
-            lr.conditions(), cf.longRunNotProved(domains), special, lr.exact(),
+            lr.conditions(), cf.longRunNotProved(domains), special,
+            lr.exact() || sel.selection() != ClosedResult.Selection.MATRIX && sel.all().stream().allMatch(cf::settled),
             // the printed cells are exactly periodic (or constant) from their own valid-from on
             Math.min(lr.exactFrom(), validFrom), values);
         // the conditions of the printed formulas only (a combination's cancelled terms need none), in the order of

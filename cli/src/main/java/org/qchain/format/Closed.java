@@ -286,6 +286,13 @@ final class Closed {
     /** The rate sentence: what the number means, or that the long run is reached exactly. */
     static String rateLine(ClosedResult r, ClosedResult.LongRun lr) {
         String n = r.names().step();
+        if (lr.exact() && !lr.rate().plain().equals("0")) {
+            // the chain converges, but the terms of its other eigenvalues cancel in the printed formulas
+            return "Exact from " + n + " = " + lr.exactFrom() + ": the formulas equal their limits" + (lr.periodic()
+                ? " on each subsequence" : "") + " (the terms of the other eigenvalues cancel); the chain's "
+                + (lr.periodic() ? "rate of each subsequence: " : "convergence rate (second-largest eigenvalue"
+                + " modulus): ") + rate(r, lr, true);
+        }
         if (lr.exact()) {
             return lr.periodic()
                 ? "Exact from " + n + " = " + lr.exactFrom() + ": P^(" + n + " + " + lr.period() + ") = " + pn(r)

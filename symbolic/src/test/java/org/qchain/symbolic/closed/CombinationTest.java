@@ -207,6 +207,10 @@ class CombinationTest {
         // a start off the stationary law keeps the eigenvalue 1 - 2a term, with the combined coefficient
         Combination off = Combination.of(Map.of(0, Rational.of(3, 4), 1, Rational.of(1, 4)), List.of(0));
         assertEquals("1/2 + 1/4*(1 - 2*a)^n", cs.plain(off, false, false));
+        // the stationary start is settled (exactly its limit), the other start is not
+        assertTrue(cs.settled(half));
+        assertTrue(!cs.settled(off));
+        assertEquals(List.of(Rational.of(1, 2)), cs.longRunAt(off, Map.of("a", Rational.of(1, 3))));
     }
 
     @Test
