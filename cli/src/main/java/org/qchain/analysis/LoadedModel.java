@@ -376,7 +376,7 @@ public final class LoadedModel {
                 s = symbolic;
                 if (s == null) {
                     // the only reference to the symbolic side: numeric runs never reach it
-                    s = Interrupts.guarded(() -> SymbolicEngine.validate(model));
+                    s = Interrupts.guarded(() -> SymbolicEngine.validate(model, known, given.keySet()));
                     symbolic = s;
                 }
             }

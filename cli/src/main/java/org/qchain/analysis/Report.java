@@ -325,7 +325,9 @@ public final class Report {
         ClosedQuery c = new ClosedQuery(ClosedResult.Form.MATRIX, Optional.of(from()), "--from",
             to.stream().findFirst(), q.maxTerms(), q.digits(), q.maxDigits());
         Optional<ClosedResult> r = ask(c, "the closed form", notes).map(ClosedResult.class::cast);
-        r.ifPresent(x -> warnings.addAll(x.warnings()));
+        // the range conditions of the symbolic check are the model section's; the rest are the closed form's own
+        r.ifPresent(x -> x.warnings().stream().filter(w -> !model.symbolic().warnings().contains(w))
+            .forEach(warnings::add));
         return new ReportResult.ClosedSection(r, notes);
     }
 

@@ -70,10 +70,14 @@ final class SymbolicEngine {
         }
     }
 
-    /** Maps the model into its parameter ring and checks it there; throws the first error, located. */
-    static SymbolicValidation validate(Model m) {
+    /**
+     * Maps the model into its parameter ring and checks it there, deciding range conditions at the values used
+     * (nominal, overridden by those given with --at) and naming where they came from; throws the first error,
+     * located.
+     */
+    static SymbolicValidation validate(Model m, Map<String, Rational> known, java.util.Set<String> given) {
         RatFunMatrix p = RatFunMatrix.fromModel(m);
-        CheckReport report = ParameterCheck.check(m, p);
+        CheckReport report = ParameterCheck.check(m, p, known, given);
         report.throwIfErrors();
         return new Checked(p, grouped(report.warnings()));
     }
@@ -559,7 +563,7 @@ final class SymbolicEngine {
         }
         ClosedResult r = q.form() == ClosedResult.Form.MATRIX
             ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), cells, ctx)
-            : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), cells);
+            : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), cells, ctx.warnings());
         r = model.given().isEmpty() ? r : substituted(r, model.given());
         return cells.combined ? r.withStart(cells.startWeights, cells.toStates) : r;
     }
@@ -693,7 +697,8 @@ final class SymbolicEngine {
             namedCells.add(named);
         }
         List<ClosedResult.Where> where = where(cf.definitions(), cf.symbols().eigenPrefix());
-        List<String> warnings = new ArrayList<>();
+        // the range conditions of the symbolic check first, as every symbolic command states them
+        List<String> warnings = new ArrayList<>(ctx.warnings());
         Optional<Point> pt = point(model, cf.parameters());
         Optional<CertifiedReal> rateValue = Optional.empty();
         List<RootPolynomial> named = List.of();
@@ -764,7 +769,8 @@ final class SymbolicEngine {
         }
         ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits,
             Formula.of(lr.rate(), lr.rateLatex()), rateValue,
-            conditions(cf.longRunConditions(domains)), special, lr.exact(),
+            conditions(cf.longRunConditions(domains)), special,
+            lr.exact() || sel.selection() != ClosedResult.Selection.MATRIX && sel.all().stream().allMatch(cf::settled),
             // the printed cells are exactly periodic (or constant) from their own valid-from on
             Math.min(lr.exactFrom(), validFrom), values);
         // the conditions of the printed formulas only (a combination's cancelled terms need none), in the order of
@@ -1006,7 +1012,7 @@ final class SymbolicEngine {
         return new ClosedResult.Names(s.step(), s.period(), s.variable(), s.series(), s.sequence());
     }
 
-    private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Cells sel) {
+    private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Cells sel, List<String> warnings) {
         List<List<Formula>> cells = new ArrayList<>();
         List<List<ClosedResult.Recurrence>> recs = new ArrayList<>();
         int validFrom = 0;
@@ -1033,7 +1039,7 @@ final class SymbolicEngine {
         }
         return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(),
             m.states(), sf.parameters(), sel.selection(), sel.rowLabels(), sel.colLabels(), cells, recs, List.of(),
-            Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of(), names(sf.symbols()));
+            Optional.empty(), List.of(), Optional.empty(), q.digits(), warnings, names(sf.symbols()));
     }
 
     // --- classes, longrun, absorb --------------------------------------------------------------------------------

@@ -33,8 +33,8 @@ import picocli.CommandLine.TypeConversionException;
             + " t grows and the Laplace transforms (sI - Q)^-1.",
         "Without --from: the whole matrix. With --start A (or --from A): that row. With --from A --to B: one entry."
             + " --start Healthy=3/5 --start Ill=2/5: the distribution after n steps (the start's weighted sum of the"
-            + " rows); --to Up,Worn: the probability of being in one of them (the sum of their entries), each as one"
-            + " formula built from the combined coefficients.",
+            + " rows); --to with several states: the probability of being in one of them (the sum of their"
+            + " entries); each as one formula built from the combined coefficients.",
         "--form gf prints the generating functions sum_n P^n z^n, --form recurrence the linear recurrences with"
             + " their initial values; these exist for every chain.",
         "Parameters given with --at are substituted first; all others stay symbolic. Numeric values (convergence"

@@ -336,6 +336,13 @@ final class Closed {
                     + " approaches its limit like exp(rate*" + n + "), the modulus is the decay rate): "
                     + rate(r, lr, true);
         }
+        if (lr.exact() && !lr.rate().plain().equals("0")) {
+            // the chain converges, but the terms of its other eigenvalues cancel in the printed formulas
+            return "Exact from " + n + " = " + lr.exactFrom() + ": the formulas equal their limits" + (lr.periodic()
+                ? " on each subsequence" : "") + " (the terms of the other eigenvalues cancel); the chain's "
+                + (lr.periodic() ? "rate of each subsequence: " : "convergence rate (second-largest eigenvalue"
+                + " modulus): ") + rate(r, lr, true);
+        }
         if (lr.exact()) {
             return lr.periodic()
                 ? "Exact from " + n + " = " + lr.exactFrom() + ": P^(" + n + " + " + lr.period() + ") = " + pn(r)

@@ -43,19 +43,7 @@ public record Point(Map<String, Rational> values, Set<String> given) {
      * {@code p given with --at, r nominal}.
      */
     public String origin() {
-        if (given.isEmpty()) {
-            return "nominal values";
-        }
-        if (given.size() == values.size()) {
-            return "given with --at";
-        }
-        List<String> nominal = new ArrayList<>();
-        for (String name : values.keySet()) {
-            if (!given.contains(name)) {
-                nominal.add(name);
-            }
-        }
-        return String.join(", ", given) + " given with --at, " + String.join(", ", nominal) + " nominal";
+        return org.qchain.exact.model.ValueOrigin.of(values.keySet(), given);
     }
 
     /** Whether no parameter has a value here. */

@@ -22,7 +22,8 @@ class SensGradientTest {
         Cli.Result r = Cli.run("sens", PUMP, "-n", "2", "--from", "Up", "--to", "Worn,Down", "--wrt", "p,r", "--at",
             "p=1/10");
         assertEquals(0, r.code(), r::toString);
-        assertEquals(WARNING, r.err());
+        assertEquals(WARNING.replace("results hold only where it does", "holds at p=1/10, r=1/4 (p given with --at, r"
+            + " nominal)"), r.err());
         assertEquals("Sensitivity of P^2(Up -> {Worn, Down}) to p, r for " + PUMP + " (discrete chain), parameters"
             + " p, r\n"
             + "P is the probability of being in one of {Worn, Down} after 2 steps, starting in Up.\n"

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 class WarningsOnceTest {
     private static final String MODEL = Cli.model("twin-wear.chain");
     private static final String WARNING = "qchain: warning: " + MODEL + ":7:1: LineA->LineA is 1 - p - r: needs"
-        + " p + r <= 1; fails near p=1, r=1 (a corner of the domain); holds at the nominal values p=1/10, r=1/4;"
+        + " p + r <= 1; fails near p=1, r=1 (a corner of the domain); holds at p=1/10, r=1/4 (nominal values);"
         + " the same for LineB->LineB (" + MODEL + ":9:1)";
 
     private static long count(String text, String part) {
@@ -33,6 +33,23 @@ class WarningsOnceTest {
         }
     }
 
+    // regression (issue 8): values given with --at were called "the nominal values" in the warning
+    @Test
+    void theWarningNamesWhereTheValuesCameFrom() {
+        Cli.Result at = Cli.run("step", MODEL, "-n", "2", "--symbolic", "--at", "p=1/5", "--at", "r=1/3");
+        assertEquals(0, at.code(), at::toString);
+        assertEquals(WARNING.replace("p=1/10, r=1/4 (nominal values)", "p=1/5, r=1/3 (given with --at)") + "\n",
+            at.err());
+        Cli.Result mixed = Cli.run("step", MODEL, "-n", "2", "--symbolic", "--at", "r=1/3");
+        assertEquals(WARNING.replace("p=1/10, r=1/4 (nominal values)", "p=1/10, r=1/3 (r given with --at, p nominal)")
+            + "\n", mixed.err());
+        // closed states the same range condition (the closed form assumes a stochastic matrix)
+        Cli.Result closed = Cli.run("closed", MODEL, "--at", "r=1/3", "--from", "LineA", "--to", "LineB");
+        assertEquals(0, closed.code(), closed::toString);
+        assertEquals(WARNING.replace("p=1/10, r=1/4 (nominal values)", "p=1/10, r=1/3 (r given with --at, p nominal)")
+            + "\n", closed.err());
+    }
+
     @Test
     void manyAlikeEntriesAreNamedUpToFiveThenCounted() {
         // eight lines L1..L8, each L_i -> L_i = 1 - p - r (lines 7, 9, ..., 21 of the model)
@@ -40,7 +57,7 @@ class WarningsOnceTest {
         Cli.Result r = Cli.run("step", model, "-n", "1", "--symbolic");
         assertEquals(0, r.code(), r::toString);
         assertEquals("qchain: warning: " + model + ":7:1: L1->L1 is 1 - p - r: needs p + r <= 1; fails near p=1, r=1"
-            + " (a corner of the domain); holds at the nominal values p=1/10, r=1/4; the same for L2->L2 (" + model
+            + " (a corner of the domain); holds at p=1/10, r=1/4 (nominal values); the same for L2->L2 (" + model
             + ":9:1), L3->L3 (" + model + ":11:1), L4->L4 (" + model + ":13:1), L5->L5 (" + model + ":15:1), L6->L6 ("
             + model + ":17:1) and 2 more entries\n", r.err());
     }

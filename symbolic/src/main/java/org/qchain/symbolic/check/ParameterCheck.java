@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import org.qchain.exact.ErrorKey;
 import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
@@ -14,6 +15,7 @@ import org.qchain.exact.model.Domain;
 import org.qchain.exact.model.Model;
 import org.qchain.exact.model.ParamDecl;
 import org.qchain.exact.model.Transition;
+import org.qchain.exact.model.ValueOrigin;
 import org.qchain.symbolic.Formulas;
 import org.qchain.symbolic.Poly;
 import org.qchain.symbolic.RatFun;
@@ -43,8 +45,9 @@ import org.qchain.symbolic.RatFunMatrix;
  *   </li>
  * </ul>
  * An entry that can leave the range is a <b>warning</b> (the results hold under the printed condition) when every
- * parameter it uses has a nominal value that satisfies the condition, or when some parameter has no nominal value;
- * it is an <b>error</b> when the nominal values break it.
+ * parameter it uses has a value (nominal, or given with {@code --at}) and the values satisfy the condition, or when
+ * some parameter has no value; it is an <b>error</b> when the values break it. The message names the values and
+ * where they came from ({@link ValueOrigin}: {@code nominal values}, {@code given with --at}, or mixed).
  */
 public final class ParameterCheck {
     /** The bisection budget per bound. */
@@ -72,13 +75,27 @@ public final class ParameterCheck {
      * @return the findings
      */
     public static CheckReport check(Model model, RatFunMatrix p) {
+        return check(model, p, model.nominalValues(), Set.of());
+    }
+
+    /**
+     * Checks a model at the values a command uses: an entry's range condition is decided at them when every
+     * parameter it uses has one, and the message says where they came from.
+     *
+     * @param model  the model
+     * @param p      {@code RatFunMatrix.fromModel(model)}
+     * @param values the values known (nominal ones overridden by those given with {@code --at})
+     * @param given  the names whose values were given with {@code --at}
+     * @return the findings
+     */
+    public static CheckReport check(Model model, RatFunMatrix p, Map<String, Rational> values, Set<String> given) {
         List<Finding> out = new ArrayList<>();
         int n = model.size();
         Map<String, Domain> domains = new LinkedHashMap<>();
         for (ParamDecl d : model.params()) {
             domains.put(d.name(), d.domain());
         }
-        Map<String, Rational> nominal = model.nominalValues();
+        Map<String, Rational> nominal = values;
         boolean discrete = model.kind() == ChainKind.DISCRETE;
         for (int i = 0; i < n; i++) {
             if (discrete) {
@@ -105,7 +122,7 @@ public final class ParameterCheck {
                     pos = ts.isEmpty() ? Optional.empty() : Optional.ofNullable(ts.get(ts.size() - 1).pos());
                 }
                 String label = model.states().get(i) + "->" + model.states().get(j);
-                checkEntry(out, i, j, label, f, discrete, domains, nominal, pos);
+                checkEntry(out, i, j, label, f, discrete, domains, nominal, given, pos);
             }
         }
         return new CheckReport(out);
@@ -120,7 +137,7 @@ public final class ParameterCheck {
 
     private static void checkEntry(List<Finding> out, int i, int j, String label, RatFun f, boolean discrete,
                                    Map<String, Domain> domains, Map<String, Rational> nominal,
-                                   Optional<SourcePos> pos) {
+                                   Set<String> given, Optional<SourcePos> pos) {
         if (f.occurringVariables().isEmpty()) {
             return; // constants are checked by the exact module (and by the parser) with the value in the message
         }
@@ -157,13 +174,14 @@ public final class ParameterCheck {
                 } catch (QchainException e) {
                     gv = null;
                 }
+                String origin = " (" + ValueOrigin.of(at.keySet(), given) + ")";
                 if (gv == null || gv.signum() < 0) {
                     sev = Finding.Severity.ERROR;
-                    detail.append("; the nominal values ").append(pointText(at)).append(" break it (")
+                    detail.append("; the values ").append(pointText(at)).append(origin).append(" break it (")
                         .append(label).append(" = ").append(gv == null ? "undefined" : f.evaluate(at).toString())
                         .append(')');
                 } else {
-                    detail.append("; holds at the nominal values ").append(pointText(at));
+                    detail.append("; holds at ").append(pointText(at)).append(origin);
                 }
             } else {
                 detail.append("; results hold only where it does");

@@ -752,6 +752,23 @@ public final class ClosedForm {
         return List.copyOf(out);
     }
 
+    /**
+     * Whether the formula of a combination has no term of an eigenvalue other than the roots of unity (and 0): its
+     * value is then exactly its long-run limit (or periodic) from {@link #validFrom(Combination)} on, even where the
+     * chain itself still converges (a start at the stationary law, the whole state space).
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public boolean settled(Combination c) {
+        Cell cell = cell(c);
+        for (Spectral.Group g : spectral.groups) {
+            if (g.unitOrder == 0 && g != zero && occurs(g, cell)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** The period d of the long run: the lcm of the orders of the eigenvalues that are roots of unity. */
     private int period() {
         int d = 1;

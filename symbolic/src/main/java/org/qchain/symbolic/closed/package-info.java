@@ -70,6 +70,11 @@
  * conditions (no eigenvalue generically inside the unit circle becomes a root of unity: cyclotomic resultants), and
  * {@link org.qchain.symbolic.closed.ClosedForm#specialCorners} the corners of the domains where a condition fails.
  *
+ * <p>A linear combination of entries, {@code sum_i s_i sum_(j in To) P^n(i, j)} (a start distribution and a set of
+ * final states), is a {@link org.qchain.symbolic.closed.Combination}: its closed form, conditions, valid-from,
+ * limits, generating function and recurrence come from each group's coefficient matrices combined as
+ * {@code s C 1_To} before any printing or simplification, so terms whose combined coefficient is 0 vanish.
+ *
  * <h2>Continuous chains</h2>
  * {@link org.qchain.symbolic.closed.ClosedForms#ofGenerator} applies the same decomposition to a generator Q and
  * gives {@link org.qchain.symbolic.closed.TransientForm}: P(t) = exp(Qt) as {@code sum_k sum_j Z_kj t^j e^(lambda_k t)}

@@ -36,7 +36,7 @@ class ParameterCheckTest {
         Finding f = rep.warnings().get(0);
         assertEquals(ErrorKey.SYMBOLIC_RANGE, f.key());
         assertEquals("S1->S1 is 1 - p - r: needs p + r <= 1; fails near p=1, r=1 (a corner of the domain);"
-            + " holds at the nominal values p=1/20, r=1/4", f.message());
+            + " holds at p=1/20, r=1/4 (nominal values)", f.message());
         assertEquals("p + r <= 1", f.condition());
         assertTrue(f.decided());
         assertEquals(Optional.of(Map.of("p", Rational.ONE, "r", Rational.ONE)), f.witness());
@@ -46,10 +46,28 @@ class ParameterCheckTest {
     void nominalValuesThatBreakTheConditionAreAnError() {
         CheckReport rep = ParameterCheck.check(pump(Rational.of(1, 2), Rational.of(3, 4)));
         assertEquals(1, rep.errors().size());
-        assertTrue(rep.errors().get(0).message().endsWith("the nominal values p=1/2, r=3/4 break it (S1->S1 = -1/4)"),
-            rep.errors().get(0).message());
+        assertTrue(rep.errors().get(0).message().endsWith("the values p=1/2, r=3/4 (nominal values) break it"
+            + " (S1->S1 = -1/4)"), rep.errors().get(0).message());
         QchainException e = assertThrows(QchainException.class, rep::throwIfErrors);
         assertEquals(ErrorKey.SYMBOLIC_RANGE, e.key());
+    }
+
+    // regression (issue 8): values given with --at were called "the nominal values"; the message names the origin
+    @Test
+    void theMessageNamesWhereTheValuesCameFrom() {
+        Model m = pump(Rational.of(1, 20), Rational.of(1, 4));
+        var at = ParameterCheck.check(m, org.qchain.symbolic.RatFunMatrix.fromModel(m),
+            Map.of("p", Rational.of(1, 10), "r", Rational.of(1, 5)), java.util.Set.of("p", "r"));
+        assertTrue(at.warnings().get(0).message().endsWith("; holds at p=1/10, r=1/5 (given with --at)"),
+            at.warnings().get(0).message());
+        var mixed = ParameterCheck.check(m, org.qchain.symbolic.RatFunMatrix.fromModel(m),
+            Map.of("p", Rational.of(1, 20), "r", Rational.of(1, 5)), java.util.Set.of("r"));
+        assertTrue(mixed.warnings().get(0).message().endsWith("; holds at p=1/20, r=1/5 (r given with --at, p"
+            + " nominal)"), mixed.warnings().get(0).message());
+        var broken = ParameterCheck.check(m, org.qchain.symbolic.RatFunMatrix.fromModel(m),
+            Map.of("p", Rational.of(1, 20), "r", Rational.ONE), java.util.Set.of("r"));
+        assertTrue(broken.errors().get(0).message().endsWith("the values p=1/20, r=1 (r given with --at, p nominal)"
+            + " break it (S1->S1 = -1/20)"), broken.errors().get(0).message());
     }
 
     @Test

@@ -7,6 +7,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Random;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.model.ChainKind;
@@ -20,6 +21,33 @@ import org.qchain.symbolic.RatFunMatrix;
 /** Test helpers: chains from matrices of expression text (read by the model parser), and the check every closed form must pass. */
 final class Chains {
     private Chains() {
+    }
+
+    /** Entries of random chains with the parameters a and b, each below 1/2 for a, b in (0, 1). */
+    static final String[] SYMBOLIC = {"0", "0", "a", "b", "a/2", "b/3", "1/4", "a*b", "1/5"};
+    /** Entries of random chains without parameters. */
+    static final String[] NUMERIC = {"0", "0", "1/2", "1/3", "1/4", "1/6", "2/7", "1/10"};
+
+    /**
+     * A random chain of s states: at most two off-diagonal entries a row from the pool, the diagonal the rest.
+     */
+    static Model random(Random rnd, int s, String[] pool, List<String> params) {
+        String[][] rows = new String[s][s];
+        for (int i = 0; i < s; i++) {
+            List<String> off = new ArrayList<>();
+            for (int j = 0; j < s; j++) {
+                if (j != i) {
+                    // at most two non-zero entries a row keep the sum below 1 for values in (0, 1/2)
+                    String e = off.size() < 2 ? pool[rnd.nextInt(pool.length)] : "0";
+                    rows[i][j] = e;
+                    if (!e.equals("0")) {
+                        off.add(e);
+                    }
+                }
+            }
+            rows[i][i] = off.isEmpty() ? "1" : "1 - (" + String.join(" + ", off) + ")";
+        }
+        return Chains.model(params, rows);
     }
 
     /** A discrete model whose entries are given as expression text (parameters: single names). */
