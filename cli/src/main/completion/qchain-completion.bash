@@ -624,8 +624,8 @@ function _picocli_qchain_avail() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-t' '--time' '--from' '--hours-per-year' '--max-work' '--format' '--digits' '-o' '--output'"
+  local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-t' '--time' '--from' '--hours-per-year' '--max-work' '--max-states' '--format' '--digits' '-o' '--output'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -650,6 +650,9 @@ function _picocli_qchain_avail() {
       return
       ;;
     '--max-work')
+      return
+      ;;
+    '--max-states')
       return
       ;;
     '--format')

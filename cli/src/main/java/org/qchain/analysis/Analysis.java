@@ -52,7 +52,8 @@ public final class Analysis {
             return transientProbabilities(model, q, progress);
         }
         if (query instanceof AvailabilityQuery q) {
-            return availability(model, q, progress);
+            return route(model, q) == Route.SYMBOLIC ? availabilityFormulas(model, q, progress)
+                : availability(model, q, progress);
         }
         if (query instanceof TransientSensQuery q) {
             return transientSens(model, q, progress);
@@ -162,7 +163,9 @@ public final class Analysis {
      * @throws QchainException for an unknown state or parameter, a bad sweep, a power past a size limit
      */
     public static SensResult sens(LoadedModel model, SensQuery q, Progress progress) {
-        model.requireDiscrete("qchain sens needs a discrete chain (continuous chains are not supported yet)");
+        model.requireDiscrete("qchain sens -n counts the steps of a discrete chain; for a continuous chain give the"
+            + " time (qchain sens MODEL -t T --from A --to B --wrt P) or differentiate a figure of merit (qchain sens"
+            + " MODEL --of availability|unavailability|mttf|failure-frequency --wrt P)");
         SizeGuard.check(model, q);
         return Interrupts.guarded(() -> SymbolicEngine.sens(model, q, progress));
     }
@@ -211,7 +214,20 @@ public final class Analysis {
     }
 
     /**
-     * Figures of merit of a repairable system (a continuous chain with an {@code up} line).
+     * The route of an availability query: symbolic when asked for or when a used parameter has no value.
+     *
+     * @param model the loaded model
+     * @param q     the query
+     * @return the route
+     */
+    public static Route route(LoadedModel model, AvailabilityQuery q) {
+        return q.symbolic() || !model.complete() ? Route.SYMBOLIC : Route.NUMERIC;
+    }
+
+    /**
+     * Figures of merit of a repairable system (a continuous chain with an {@code up} line), exactly at the
+     * parameter point (the numeric route; {@link #run} picks the route, {@link #availabilityFormulas} is the
+     * symbolic one).
      *
      * @param model    the loaded model
      * @param q        the query
@@ -222,6 +238,34 @@ public final class Analysis {
      */
     public static AvailabilityResult availability(LoadedModel model, AvailabilityQuery q, Progress progress) {
         return ContinuousEngine.availability(model, q, progress);
+    }
+
+    /**
+     * Figures of merit of a repairable system as formulas in its parameters (values given with {@code --at}
+     * substituted first), with the conditions under which they hold and, where every parameter has a value, the
+     * exact figures there (equal to the formulas evaluated at the point).
+     *
+     * @param model    the loaded model
+     * @param q        the query
+     * @param progress told about long work
+     * @return the result
+     * @throws QchainException NO_UP_STATES without an {@code up} line; for a discrete chain; for point availabilities
+     *                         at given times while a parameter has no value; for more states than the query's limit;
+     *                         for a chain whose long-run law depends on the start (for generic parameter values);
+     *                         an unknown state; an interruption
+     */
+    public static org.qchain.result.SymbolicAvailabilityResult availabilityFormulas(LoadedModel model,
+            AvailabilityQuery q, Progress progress) {
+        model.requireContinuous("qchain avail needs a continuous chain");
+        java.util.List<Integer> up = model.model().upStates().orElseThrow(() ->
+            new QchainException(ErrorKey.NO_UP_STATES, "qchain avail"));
+        q.from().ifPresent(f -> model.state("--from", f));
+        if (!q.times().isEmpty() && !model.complete()) {
+            throw new QchainException(AnalysisKey.NEEDS_VALUES, "the point availability A(t) at given times",
+                String.join(", ", model.free()), "without -t, qchain avail gives the steady-state figures and the"
+                    + " MTTF as formulas in the parameters");
+        }
+        return Interrupts.guarded(() -> SymbolicEngine.availability(model, q, up, progress));
     }
 
     /**
@@ -351,18 +395,18 @@ public final class Analysis {
     }
 
     /**
-     * The validated one-step matrix.
+     * The validated one-step matrix, or for a continuous chain the validated generator with its total rates out
+     * and mean holding times.
      *
      * @param model the loaded model (already validated by loading)
      * @param q     the query
-     * @return the numeric or symbolic check result
+     * @return the numeric or symbolic check result ({@link CheckResult.Generator} for a continuous chain)
      */
     public static CheckResult check(LoadedModel model, CheckQuery q) {
-        model.requireDiscrete("qchain check needs a discrete chain (continuous chains are not supported yet)");
         if (route(model, q) == Route.SYMBOLIC) {
             return Interrupts.guarded(() -> SymbolicEngine.check(model));
         }
-        return NumericEngine.check(model);
+        return ChainResults.continuous(model) ? NumericEngine.generatorCheck(model) : NumericEngine.check(model);
     }
 
     /** The route of {@code classes}, {@code longrun} and {@code absorb}: numeric when every used parameter has a value. */

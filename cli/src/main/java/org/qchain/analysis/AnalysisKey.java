@@ -12,7 +12,12 @@ public enum AnalysisKey implements MessageKey {
         + " of a symbolic chain depend on the parameters)"),
     /** {0}: what was asked ({@code --start}, a {@code --to} set, a list of n); {1}: the parameters without a value. */
     DISTRIBUTION_NEEDS_VALUES("{0} needs a value for every parameter (parameters without a value: {1}; give them"
-        + " with --at NAME=VALUE); formulas in the parameters are given for one n at a time");
+        + " with --at NAME=VALUE); formulas in the parameters are given for one n at a time"),
+    /**
+     * {0}: what was asked; {1}: the parameters without a value; {2}: what works without the values.
+     */
+    NEEDS_VALUES("{0} needs a value for every parameter (parameters without a value: {1}; give them with --at"
+        + " NAME=VALUE); {2}");
 
     private final String pattern;
 

@@ -17,9 +17,12 @@ import org.qchain.exact.ctmc.Availability;
  * @param maxBits      the largest working precision for them, in bits
  * @param maxWork      refuse point availabilities whose estimated work (multiplications of fixed-point numbers, as
  *                     for {@code step -t}) passes this
+ * @param symbolic     keep every parameter symbolic even where values are known (the figures as formulas, with
+ *                     their values at the point); a model with a parameter without a value is symbolic anyway
+ * @param maxStates    refuse symbolic solves of more states than this
  */
 public record AvailabilityQuery(Optional<String> from, List<Rational> times, Rational hoursPerYear, int digits,
-                                int maxBits, long maxWork) implements Query {
+                                int maxBits, long maxWork, boolean symbolic, int maxStates) implements Query {
     /**
      * Checks the ranges.
      *
@@ -27,9 +30,16 @@ public record AvailabilityQuery(Optional<String> from, List<Rational> times, Rat
      */
     public AvailabilityQuery {
         times = List.copyOf(times);
-        if (times.stream().anyMatch(t -> t.signum() < 0) || hoursPerYear.signum() <= 0 || digits < 1) {
-            throw new IllegalArgumentException("need times >= 0, hours per year > 0, digits >= 1");
+        if (times.stream().anyMatch(t -> t.signum() < 0) || hoursPerYear.signum() <= 0 || digits < 1
+            || maxStates < 1) {
+            throw new IllegalArgumentException("need times >= 0, hours per year > 0, digits >= 1, max states >= 1");
         }
+    }
+
+    /** Numeric where every parameter has a value, with the default limit on the states of a symbolic solve. */
+    public AvailabilityQuery(Optional<String> from, List<Rational> times, Rational hoursPerYear, int digits,
+                             int maxBits, long maxWork) {
+        this(from, times, hoursPerYear, digits, maxBits, maxWork, false, LongRunQuery.DEFAULT_MAX_STATES);
     }
 
     /** With the default work limit. */

@@ -49,7 +49,7 @@ final class ContinuousEngine {
         RationalMatrix g = model.generator("qchain avail");
         List<Integer> up = model.model().upStates().orElseThrow(() ->
             new QchainException(ErrorKey.NO_UP_STATES, "qchain avail"));
-        Availability.Figures f = Availability.of(g, up, q.hoursPerYear());
+        Availability.Figures<Rational> f = Availability.of(g, up, q.hoursPerYear());
         List<String> states = model.states();
         Map<String, Rational> pi = new LinkedHashMap<>();
         for (int i = 0; i < states.size(); i++) {

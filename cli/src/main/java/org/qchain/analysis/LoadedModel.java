@@ -356,6 +356,18 @@ public final class LoadedModel {
         }
     }
 
+    /**
+     * Refuses a model that is not a continuous chain.
+     *
+     * @param why the reason, as the message's second part
+     * @throws QchainException {@link ErrorKey#WRONG_KIND}
+     */
+    void requireContinuous(String why) {
+        if (model.kind() != ChainKind.CONTINUOUS) {
+            throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(), why);
+        }
+    }
+
     /** The symbolic check of the model (rows sum to 1 identically; range conditions), computed once. */
     SymbolicValidation symbolic() {
         SymbolicValidation s = symbolic;

@@ -177,6 +177,41 @@ final class NumericEngine {
         return new CheckResult.Numeric(new StepResult.Matrix(header(model, 1, List.of()), states, rows));
     }
 
+    /**
+     * The generator of a continuous chain at the point (validated at load: no negative rate, rows summing to 0 by
+     * construction), with each state's total rate out and mean holding time.
+     */
+    static CheckResult generatorCheck(LoadedModel model) {
+        RationalMatrix g = model.generator("qchain check");
+        List<List<org.qchain.result.Formula>> rows = new ArrayList<>();
+        List<org.qchain.result.Formula> out = new ArrayList<>();
+        List<java.util.Optional<org.qchain.result.Formula>> holding = new ArrayList<>();
+        for (int i = 0; i < g.rows(); i++) {
+            List<org.qchain.result.Formula> row = new ArrayList<>();
+            Rational sum = Rational.ZERO;
+            for (int j = 0; j < g.cols(); j++) {
+                row.add(new org.qchain.result.ExactValue(g.get(i, j)));
+                sum = sum.add(g.get(i, j));
+            }
+            if (!sum.isZero()) {
+                throw new QchainException(ErrorKey.INTERNAL, "row " + model.states().get(i) + " of the generator sums"
+                    + " to " + sum + ", not 0");
+            }
+            rows.add(row);
+            Rational q = g.get(i, i).negate();
+            out.add(new org.qchain.result.ExactValue(q));
+            holding.add(q.isZero() ? java.util.Optional.empty()
+                : java.util.Optional.of(new org.qchain.result.ExactValue(q.reciprocal())));
+        }
+        return new CheckResult.Generator(model.source(), model.states(), List.of(), false, rows, out, holding,
+            upNames(model), model.point().filter(p -> !p.isEmpty()), List.of());
+    }
+
+    /** The names on the model's {@code up} line, if it has one. */
+    static java.util.Optional<List<String>> upNames(LoadedModel model) {
+        return model.model().upStates().map(ix -> ix.stream().map(i -> model.states().get(i)).toList());
+    }
+
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
     /**
@@ -186,6 +221,14 @@ final class NumericEngine {
      */
     static void guardSolve(LoadedModel model, long maxDigits) {
         RationalMatrix p = chainMatrix(model);
+        guardSolve(p, maxDigits, (double) p.rows() * p.rows());
+    }
+
+    /**
+     * {@link #guardSolve(LoadedModel, long)} for a result of {@code values} entries (each about twice the digits of
+     * the common denominator): with {@code --brief} the n x n tables are left out, and the result is a few vectors.
+     */
+    static void guardSolve(RationalMatrix p, long maxDigits, double values) {
         int n = p.rows();
         double det = 0;
         for (int i = 0; i < n; i++) {
@@ -201,7 +244,7 @@ final class NumericEngine {
             }
             det += l.bitLength() * Math.log10(2) + Math.log10(Math.max(2, nz + 1));
         }
-        long digits = (long) Math.min(Long.MAX_VALUE / 4.0, 2.0 * det * n * n);
+        long digits = (long) Math.min(Long.MAX_VALUE / 4.0, 2.0 * det * values);
         if (digits > maxDigits) {
             throw new QchainException(ErrorKey.SOLVE_TOO_LARGE, n, digits, maxDigits, MAX_DIGITS_OPTION);
         }
@@ -227,13 +270,39 @@ final class NumericEngine {
     }
 
     static org.qchain.result.LongRunResult longRun(LoadedModel model, LongRunQuery q, Progress progress) {
-        guardSolve(model, q.maxDigits());
+        RationalMatrix p = chainMatrix(model);
+        int n = p.rows();
+        if (q.brief() && !q.passage()) {
+            // the stationary laws and mean recurrence times (2n values) and the absorption of each transient state
+            // into each closed class
+            long closed = org.qchain.exact.longrun.Structure.of(ChainResults.graph(model,
+                org.qchain.exact.longrun.Arithmetic.RATIONAL, rows(model))).closedClasses().size();
+            guardSolve(p, q.maxDigits(), (double) n * (2 + closed));
+        } else {
+            guardSolve(p, q.maxDigits(), (double) n * n);
+        }
         return ChainResults.longRun(model, q, org.qchain.exact.longrun.Arithmetic.rational(progress), rows(model),
             org.qchain.result.ExactValue::new, List.of(), List.of());
     }
 
     static org.qchain.result.AbsorbResult absorb(LoadedModel model, AbsorbQuery q, Progress progress) {
-        guardSolve(model, q.limits().maxDigits());
+        RationalMatrix p = chainMatrix(model);
+        int n = p.rows();
+        if (q.limits().brief() && q.rewards().isEmpty()) {
+            // without N (and without rewards, whose long-run average needs the limit of P^n): t, its variance (twice
+            // the digits) and one absorption probability per absorbing state, for each state
+            long absorbing = q.absorbing().size();
+            for (int i = 0; i < n; i++) {
+                boolean leaves = false;
+                for (int j = 0; j < n && !leaves; j++) {
+                    leaves = j != i && !p.get(i, j).isZero();
+                }
+                absorbing += leaves ? 0 : 1;
+            }
+            guardSolve(p, q.limits().maxDigits(), (double) n * (3 + Math.min(n, absorbing)));
+        } else {
+            guardSolve(p, q.limits().maxDigits(), (double) n * n);
+        }
         return ChainResults.absorb(model, q, org.qchain.exact.longrun.Arithmetic.rational(progress), rows(model),
             org.qchain.result.ExactValue::new, List.of(), List.of());
     }

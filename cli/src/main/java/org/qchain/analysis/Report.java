@@ -367,7 +367,12 @@ public final class Report {
         } else {
             AvailabilityQuery aq = new AvailabilityQuery(q.from(), List.of(), org.qchain.exact.ctmc.Availability
                 .HOURS_PER_YEAR, q.digits(), CertifiedPowers.DEFAULT_MAX_BITS);
-            a = ask(aq, "availability", notes).map(AvailabilityResult.class::cast);
+            Optional<org.qchain.result.Result> r = ask(aq, "availability", notes);
+            if (r.isPresent() && !(r.get() instanceof AvailabilityResult)) {
+                notes.add("availability: the figures are formulas in the parameters here; qchain avail "
+                    + model.source() + " prints them");
+            }
+            a = r.filter(AvailabilityResult.class::isInstance).map(AvailabilityResult.class::cast);
         }
         return new ReportResult.LongRunSection(base.classes(), base.longRun(), base.absorb(), a, notes);
     }
@@ -544,7 +549,8 @@ public final class Report {
         if (model.model().upStates().isPresent()) {
             AvailabilityQuery aq = new AvailabilityQuery(q.from(), ts, org.qchain.exact.ctmc.Availability
                 .HOURS_PER_YEAR, 6, CertifiedPowers.DEFAULT_MAX_BITS);
-            Optional<AvailabilityResult> a = ask(aq, "A(t) for the plot", notes).map(AvailabilityResult.class::cast);
+            Optional<AvailabilityResult> a = ask(aq, "A(t) for the plot", notes)
+                .filter(AvailabilityResult.class::isInstance).map(AvailabilityResult.class::cast);
             done++;
             if (a.isEmpty()) {
                 return Optional.empty();

@@ -65,8 +65,10 @@ final class SizeGuard {
 
     /** A closed-form query. */
     static void check(LoadedModel model, ClosedQuery q) {
-        q.from().ifPresent(s -> model.state(q.fromName(), s));
-        q.to().ifPresent(s -> model.state("--to", s));
+        q.start().ifPresent(s -> s.weights().keySet().forEach(name -> model.state(s.option(), name)));
+        for (String t : q.toStates()) {
+            model.state("--to", t);
+        }
         symbolic(() -> SymbolicEngine.requireWithin(model, q));
     }
 

@@ -24,6 +24,7 @@ import org.qchain.symbolic.check.CheckReport;
 import org.qchain.symbolic.check.Finding;
 import org.qchain.symbolic.check.ParameterCheck;
 import org.qchain.symbolic.closed.ClosedForm;
+import org.qchain.symbolic.closed.Combination;
 import org.qchain.symbolic.closed.ClosedForms;
 import org.qchain.symbolic.closed.Eigenvalue;
 import org.qchain.symbolic.closed.LongRun;
@@ -487,6 +488,9 @@ final class SymbolicEngine {
     static CheckResult check(LoadedModel model) {
         Model m = model.model();
         Checked ctx = checked(model);
+        if (m.kind() == org.qchain.exact.model.ChainKind.CONTINUOUS) {
+            return generatorCheck(model, ctx);
+        }
         List<List<Formula>> entries = new ArrayList<>();
         for (int i = 0; i < m.size(); i++) {
             List<Formula> row = new ArrayList<>();
@@ -499,19 +503,113 @@ final class SymbolicEngine {
             ctx.warnings());
     }
 
+    /**
+     * The generator as formulas: rows sum to 0 identically (the diagonal is minus the row's rates; asserted), the
+     * off-diagonal rates were checked to be at least 0 over the domains when the model was loaded (the located
+     * conditions are the warnings), the total rate out of each state and its mean holding time.
+     */
+    private static CheckResult generatorCheck(LoadedModel model, Checked ctx) {
+        RatFunMatrix p = ctx.p();
+        List<List<Formula>> rows = new ArrayList<>();
+        List<Formula> out = new ArrayList<>();
+        List<Optional<Formula>> holding = new ArrayList<>();
+        for (int i = 0; i < p.size(); i++) {
+            if (!p.rowSum(i).isZero()) {
+                throw new QchainException(ErrorKey.INTERNAL, "row " + model.states().get(i) + " of the generator sums"
+                    + " to " + Formulas.plain(p.rowSum(i)) + ", not identically 0");
+            }
+            List<Formula> row = new ArrayList<>();
+            for (int j = 0; j < p.size(); j++) {
+                row.add(new RatFunFormula(p.get(i, j), false));
+            }
+            rows.add(row);
+            RatFun q = p.get(i, i).negate();
+            out.add(new RatFunFormula(q, false));
+            holding.add(q.isZero() ? Optional.empty() : Optional.of(new RatFunFormula(q.reciprocal(), true)));
+        }
+        return new CheckResult.Generator(model.source(), model.states(), model.model().usedParameters(), true, rows,
+            out, holding, NumericEngine.upNames(model), Optional.empty(), ctx.warnings());
+    }
+
     // --- closed ------------------------------------------------------------------------------------------------
 
     static ClosedResult closed(LoadedModel model, ClosedQuery q, Progress progress) {
         Model m = model.model();
         // the symbolic check, as for every symbolic query: rows must sum to 1 identically
         Checked ctx = checked(model);
-        Optional<Integer> row = q.from().map(s -> model.state(q.fromName(), s));
-        Optional<Integer> col = q.to().map(s -> model.state("--to", s));
+        Cells cells = Cells.of(model, q);
         SymbolicLimits limits = new SymbolicLimits(q.maxTerms(), q.maxDigits());
         ClosedResult r = q.form() == ClosedResult.Form.MATRIX
-            ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), row, col, ctx)
-            : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), row, col);
-        return model.given().isEmpty() ? r : substituted(r, model.given());
+            ? fromClosedForm(model, q, ClosedForms.of(m, model.given(), limits, progress), cells, ctx)
+            : fromSeries(m, q, ClosedForms.series(m, model.given(), limits, progress), cells);
+        r = model.given().isEmpty() ? r : substituted(r, model.given());
+        return cells.combined ? r.withStart(cells.startWeights, cells.toStates) : r;
+    }
+
+    /**
+     * The cells a closed-form query prints: rows (each state, one starting state, or one start distribution) by
+     * columns (each state, one final state, or one set of final states), each cell one {@link Combination} of the
+     * entries of P^n, with the labels the result shows.
+     */
+    private record Cells(List<String> rowLabels, List<String> colLabels, List<List<Combination>> grid,
+                         ClosedResult.Selection selection, boolean combined, Map<String, Rational> startWeights,
+                         List<String> toStates) {
+        static Cells of(LoadedModel model, ClosedQuery q) {
+            int s = model.model().size();
+            List<Map<Integer, Rational>> rows = new ArrayList<>();
+            List<String> rowLabels = new ArrayList<>();
+            Map<String, Rational> weights = new LinkedHashMap<>();
+            if (q.start().isPresent()) {
+                Start st = q.start().get();
+                Map<Integer, Rational> w = new LinkedHashMap<>();
+                st.weights().forEach((name, v) -> w.put(model.state(st.option(), name), v));
+                weights.putAll(st.weights());
+                rows.add(w);
+                rowLabels.add(st.text());
+            } else {
+                for (int i = 0; i < s; i++) {
+                    rows.add(Map.of(i, Rational.ONE));
+                    rowLabels.add(model.model().states().get(i));
+                }
+            }
+            List<List<Integer>> cols = new ArrayList<>();
+            List<String> colLabels = new ArrayList<>();
+            if (!q.toStates().isEmpty()) {
+                List<Integer> c = new ArrayList<>();
+                for (String t : q.toStates()) {
+                    c.add(model.state("--to", t));
+                }
+                cols.add(c);
+                colLabels.add(q.toStates().size() == 1 ? q.toStates().get(0)
+                    : "{" + String.join(", ", q.toStates()) + "}");
+            } else {
+                for (int j = 0; j < s; j++) {
+                    cols.add(List.of(j));
+                    colLabels.add(model.model().states().get(j));
+                }
+            }
+            List<List<Combination>> grid = new ArrayList<>();
+            for (Map<Integer, Rational> r : rows) {
+                List<Combination> line = new ArrayList<>();
+                for (List<Integer> c : cols) {
+                    line.add(r.size() == 1 && c.size() == 1 && r.values().iterator().next().isOne()
+                        ? Combination.entry(r.keySet().iterator().next(), c.get(0)) : Combination.of(r, c));
+                }
+                grid.add(line);
+            }
+            ClosedResult.Selection sel = !q.toStates().isEmpty() ? ClosedResult.Selection.ENTRY
+                : (q.start().isPresent() ? ClosedResult.Selection.ROW : ClosedResult.Selection.MATRIX);
+            // a start given as --start, or a set of final states: the result names them (as step does)
+            boolean combined = q.start().isPresent() && (q.fromName().equals("--start") || q.toStates().size() > 1);
+            return new Cells(rowLabels, colLabels, grid, sel, combined, weights, q.toStates());
+        }
+
+        /** Every cell, row by row. */
+        List<Combination> all() {
+            List<Combination> out = new ArrayList<>();
+            grid.forEach(out::addAll);
+            return out;
+        }
     }
 
     /** The result with the values given with --at, which were substituted before the closed form was found. */
@@ -520,32 +618,7 @@ final class SymbolicEngine {
         new java.util.TreeMap<>(given).forEach(ordered::put);
         return new ClosedResult(r.source(), r.form(), r.nSymbol(), r.validFrom(), r.conditions(), r.states(), r.parameters(), r.selection(), r.rows(), r.cols(), r.cells(), r.recurrences(), r.eigenvalues(),
             r.longRun(), r.roots(), r.point(), r.digits(), r.warnings(), r.names(), r.where(), r.namedCells(),
-            r.factored(), ordered);
-    }
-
-    private static List<Integer> indices(Model m, Optional<Integer> pick) {
-        List<Integer> out = new ArrayList<>();
-        if (pick.isPresent()) {
-            out.add(pick.get());
-        } else {
-            for (int i = 0; i < m.size(); i++) {
-                out.add(i);
-            }
-        }
-        return out;
-    }
-
-    private static List<String> names(Model m, List<Integer> idx) {
-        List<String> out = new ArrayList<>();
-        for (int i : idx) {
-            out.add(m.states().get(i));
-        }
-        return out;
-    }
-
-    private static ClosedResult.Selection selection(Optional<Integer> row, Optional<Integer> col) {
-        return col.isPresent() ? ClosedResult.Selection.ENTRY
-            : (row.isPresent() ? ClosedResult.Selection.ROW : ClosedResult.Selection.MATRIX);
+            r.factored(), ordered, r.start(), r.toStates());
     }
 
     /** The values at which numbers are shown: the given ones, then nominal values; empty unless all are known. */
@@ -561,21 +634,19 @@ final class SymbolicEngine {
         return Optional.of(new Point(p, model.given().keySet()));
     }
 
-    private static ClosedResult fromClosedForm(LoadedModel model, ClosedQuery q, ClosedForm cf,
-                                               Optional<Integer> row, Optional<Integer> col, Checked ctx) {
+    private static ClosedResult fromClosedForm(LoadedModel model, ClosedQuery q, ClosedForm cf, Cells sel,
+                                               Checked ctx) {
         Model m = model.model();
-        List<Integer> ri = indices(m, row);
-        List<Integer> ci = indices(m, col);
         List<List<Formula>> cells = new ArrayList<>();
         List<List<Formula>> namedCells = new ArrayList<>();
         int validFrom = 0;
-        for (int i : ri) {
+        for (List<Combination> row : sel.grid()) {
             List<Formula> line = new ArrayList<>();
             List<Formula> named = new ArrayList<>();
-            for (int j : ci) {
-                line.add(Formula.of(cf.plain(i, j, false, q.factor()), cf.latex(i, j, false, q.factor())));
-                named.add(Formula.of(cf.plain(i, j, true, q.factor()), cf.latex(i, j, true, q.factor())));
-                validFrom = Math.max(validFrom, cf.validFrom(i, j));
+            for (Combination c : row) {
+                line.add(Formula.of(cf.plain(c, false, q.factor()), cf.latex(c, false, q.factor())));
+                named.add(Formula.of(cf.plain(c, true, q.factor()), cf.latex(c, true, q.factor())));
+                validFrom = Math.max(validFrom, cf.validFrom(c));
             }
             cells.add(line);
             namedCells.add(named);
@@ -631,25 +702,24 @@ final class SymbolicEngine {
         LongRun lr = cf.longRun(q.factor());
         List<List<List<Formula>>> limits = new ArrayList<>();
         for (int k = 0; k < lr.limits().size(); k++) {
-            List<List<String>> full = lr.limits().get(k);
-            List<List<String>> fullLatex = lr.limitsLatex().get(k);
             List<List<Formula>> picked = new ArrayList<>();
-            for (int i : ri) {
+            for (List<Combination> row : sel.grid()) {
                 List<Formula> r = new ArrayList<>();
-                for (int j : ci) {
-                    r.add(Formula.of(full.get(i).get(j), fullLatex.get(i).get(j)));
+                for (Combination c : row) {
+                    List<String> f = cf.limits(c, q.factor()).get(k);
+                    r.add(Formula.of(f.get(0), f.get(1)));
                 }
                 picked.add(r);
             }
             limits.add(picked);
         }
         List<List<List<Rational>>> values = new ArrayList<>();
-        for (RationalMatrix full : limitValues) {
+        for (int k = 0; k < limitValues.size(); k++) {
             List<List<Rational>> picked = new ArrayList<>();
-            for (int i : ri) {
+            for (List<Combination> row : sel.grid()) {
                 List<Rational> r = new ArrayList<>();
-                for (int j : ci) {
-                    r.add(full.get(i, j));
+                for (Combination c : row) {
+                    r.add(cf.longRunAt(c, pt.orElseThrow().values()).get(k));
                 }
                 picked.add(r);
             }
@@ -665,10 +735,22 @@ final class SymbolicEngine {
         }
         ClosedResult.LongRun longRun = new ClosedResult.LongRun(lr.period(), limits,
             Formula.of(lr.rate(), lr.rateLatex()), rateValue,
-            conditions(cf.longRunConditions(domains)), special, lr.exact(), lr.exactFrom(), values);
-        return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, conditions(cf.conditions(domains)),
-            m.states(), cf.parameters(), selection(row, col), names(m, ri),
-            names(m, ci), cells, List.of(), eig, Optional.of(longRun), roots,
+            conditions(cf.longRunConditions(domains)), special, lr.exact(),
+            // the printed cells are exactly periodic (or constant) from their own valid-from on
+            Math.min(lr.exactFrom(), validFrom), values);
+        // the conditions of the printed formulas only (a combination's cancelled terms need none), in the order of
+        // the whole matrix's conditions
+        List<org.qchain.symbolic.closed.Condition> conds = cf.conditions(domains);
+        if (sel.selection() != ClosedResult.Selection.MATRIX) {
+            java.util.Set<String> own = new java.util.HashSet<>();
+            for (Combination c : sel.all()) {
+                own.addAll(cf.conditions(c));
+            }
+            conds = conds.stream().filter(k -> own.contains(k.text())).toList();
+        }
+        return new ClosedResult(m.source(), q.form(), cf.nSymbol(), validFrom, conditions(conds),
+            m.states(), cf.parameters(), sel.selection(), sel.rowLabels(),
+            sel.colLabels(), cells, List.of(), eig, Optional.of(longRun), roots,
             pt.filter(p -> !p.isEmpty()), q.digits(), warnings, names(cf.symbols()), where,
             where.isEmpty() ? List.of() : namedCells, q.factor());
     }
@@ -696,22 +778,20 @@ final class SymbolicEngine {
         return new ClosedResult.Names(s.step(), s.period(), s.variable(), s.series(), s.sequence());
     }
 
-    private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Optional<Integer> row,
-                                           Optional<Integer> col) {
-        List<Integer> ri = indices(m, row);
-        List<Integer> ci = indices(m, col);
+    private static ClosedResult fromSeries(Model m, ClosedQuery q, SeriesForm sf, Cells sel) {
         List<List<Formula>> cells = new ArrayList<>();
         List<List<ClosedResult.Recurrence>> recs = new ArrayList<>();
         int validFrom = 0;
         boolean gf = q.form() == ClosedResult.Form.GF;
-        for (int i : ri) {
+        for (List<Combination> row : sel.grid()) {
             List<Formula> line = new ArrayList<>();
             List<ClosedResult.Recurrence> rr = new ArrayList<>();
-            for (int j : ci) {
+            for (Combination c : row) {
                 if (gf) {
-                    line.add(Formula.of(sf.generatingFunction(i, j).plain(), sf.generatingFunction(i, j).latex()));
+                    org.qchain.symbolic.closed.GeneratingFunction g = sf.generatingFunction(c);
+                    line.add(Formula.of(g.plain(), g.latex()));
                 } else {
-                    Recurrence r = sf.recurrence(i, j);
+                    Recurrence r = sf.recurrence(c);
                     line.add(Formula.of(r.plain(), r.latex()));
                     rr.add(new ClosedResult.Recurrence(formulas(r.coefficients(), r.coefficientsLatex()), r.validFrom(),
                         formulas(r.initial(), r.initialLatex())));
@@ -724,7 +804,7 @@ final class SymbolicEngine {
             }
         }
         return new ClosedResult(m.source(), q.form(), sf.symbols().step(), validFrom, List.of(),
-            m.states(), sf.parameters(), selection(row, col), names(m, ri), names(m, ci), cells, recs, List.of(),
+            m.states(), sf.parameters(), sel.selection(), sel.rowLabels(), sel.colLabels(), cells, recs, List.of(),
             Optional.empty(), List.of(), Optional.empty(), q.digits(), List.of(), names(sf.symbols()));
     }
 
@@ -779,6 +859,98 @@ final class SymbolicEngine {
         RatFunMatrix p = substituted(model);
         return ChainResults.absorb(model, q, org.qchain.symbolic.linear.RatFunArithmetic.of(p.ring()), rows(p),
             x -> new RatFunFormula(x, false), p.occurringVariables(), checked(model).warnings());
+    }
+
+    // --- avail ---------------------------------------------------------------------------------------------------
+
+    /**
+     * The figures of merit as formulas in the parameters: the exact module's one availability algorithm
+     * ({@link org.qchain.exact.ctmc.Availability}) run in the rational functions of the parameters, the values
+     * given with --at substituted first. The conditions are the irreducible factors of every figure's denominator
+     * and of every rate (each rate is taken as positive: the structure the formulas belong to), each checked
+     * throughout the domains. Where every parameter has a value, the exact figures there come from the numeric
+     * engine and must equal the formulas evaluated at the point.
+     */
+    static org.qchain.result.SymbolicAvailabilityResult availability(LoadedModel model, AvailabilityQuery q,
+            List<Integer> up, Progress progress) {
+        guardStates(model, q.maxStates());
+        Model m = model.model();
+        RatFunMatrix p = substituted(model);
+        org.qchain.symbolic.linear.RatFunArithmetic f = org.qchain.symbolic.linear.RatFunArithmetic.of(p.ring());
+        List<List<RatFun>> rows = rows(p);
+        org.qchain.exact.ctmc.Availability.Figures<RatFun> fig = org.qchain.exact.ctmc.Availability.of(f, rows, up,
+            f.of(q.hoursPerYear()));
+        List<String> states = m.states();
+        Map<String, Formula> pi = new LinkedHashMap<>();
+        Map<String, Optional<Formula>> mttf = new LinkedHashMap<>();
+        List<RatFun> all = new ArrayList<>(List.of(fig.availability(), fig.failureFrequency()));
+        for (int i = 0; i < states.size(); i++) {
+            pi.put(states.get(i), new RatFunFormula(fig.stationary().get(i), true));
+            all.add(fig.stationary().get(i));
+        }
+        for (int i : fig.up()) {
+            mttf.put(states.get(i), fig.mttf().get(i).map(x -> new RatFunFormula(x, true)));
+            fig.mttf().get(i).ifPresent(all::add);
+        }
+        fig.meanUpTime().ifPresent(all::add);
+        fig.meanDownTime().ifPresent(all::add);
+        java.util.LinkedHashSet<org.qchain.symbolic.Poly> factors = new java.util.LinkedHashSet<>();
+        for (int i = 0; i < rows.size(); i++) {
+            for (int j = 0; j < rows.size(); j++) {
+                RatFun x = rows.get(i).get(j);
+                if (i != j && !x.isZero()) {
+                    addFactors(factors, x.numerator());
+                    addFactors(factors, x.denominator());
+                }
+            }
+        }
+        for (RatFun x : all) {
+            addFactors(factors, x.denominator());
+        }
+        Map<String, Domain> domains = new LinkedHashMap<>();
+        m.params().forEach(d -> domains.put(d.name(), d.domain()));
+        List<org.qchain.result.SymbolicAvailabilityResult.Condition> conditions = new ArrayList<>();
+        for (org.qchain.symbolic.Poly c : factors) {
+            conditions.add(new org.qchain.result.SymbolicAvailabilityResult.Condition(Formulas.plain(c) + " != 0",
+                Formulas.of(RatFun.of(c), false, true) + " \\neq 0", org.qchain.symbolic.BoxSign.nonZero(c, domains)));
+        }
+        Optional<org.qchain.result.AvailabilityResult> at = Optional.empty();
+        if (model.complete()) {
+            org.qchain.result.AvailabilityResult exact = ContinuousEngine.availability(model, q, progress);
+            Map<String, Rational> pt = model.point().orElseThrow().values();
+            requireEqual(fig.availability().evaluate(pt), exact.availability());
+            requireEqual(fig.failureFrequency().evaluate(pt), exact.failureFrequency());
+            for (int i = 0; i < states.size(); i++) {
+                requireEqual(fig.stationary().get(i).evaluate(pt), exact.stationary().get(states.get(i)));
+            }
+            for (int i : fig.up()) {
+                if (fig.mttf().get(i).isPresent() && exact.mttf().get(states.get(i)).isPresent()) {
+                    requireEqual(fig.mttf().get(i).get().evaluate(pt), exact.mttf().get(states.get(i)).get());
+                }
+            }
+            at = Optional.of(exact);
+        }
+        Map<String, Rational> given = new LinkedHashMap<>();
+        new java.util.TreeMap<>(model.given()).forEach(given::put);
+        return new org.qchain.result.SymbolicAvailabilityResult(m.source(), p.occurringVariables(),
+            fig.up().stream().map(states::get).toList(), states, pi, new RatFunFormula(fig.availability(), true),
+            new RatFunFormula(fig.unavailability(), true), q.hoursPerYear(),
+            new RatFunFormula(fig.downHoursPerYear(), true), new RatFunFormula(fig.failureFrequency(), true),
+            fig.meanUpTime().map(x -> new RatFunFormula(x, true)),
+            fig.meanDownTime().map(x -> new RatFunFormula(x, true)), mttf, conditions, given, at,
+            checked(model).warnings());
+    }
+
+    /** The irreducible non-constant factors of a polynomial, each once, normalised by the factorisation. */
+    private static void addFactors(java.util.Set<org.qchain.symbolic.Poly> out, org.qchain.symbolic.Poly p) {
+        if (p.isConstant()) {
+            return;
+        }
+        for (org.qchain.symbolic.Poly.Factor fac : p.factor().factors()) {
+            if (!fac.base().isConstant()) {
+                out.add(fac.base());
+            }
+        }
     }
 
     /**
@@ -911,17 +1083,12 @@ final class SymbolicEngine {
                 return Vanishing.SOMEWHERE;
             }
         }
-        Map<List<Integer>, Rational> terms = new java.util.HashMap<>();
-        List<String> ringVars = c.ring().variables();
-        for (org.qchain.symbolic.Poly.Term t : c.terms()) {
-            List<Integer> e = new ArrayList<>();
-            for (String v : vars) {
-                e.add(t.exponents().get(ringVars.indexOf(v)));
-            }
-            terms.merge(e, pos > 0 ? t.coefficient() : t.coefficient().negate(), Rational::add);
+        Map<String, Domain> open = new LinkedHashMap<>();
+        for (int i = 0; i < vars.size(); i++) {
+            open.put(vars.get(i), inside.get(i));
         }
-        return pos + neg > 0 && org.qchain.symbolic.BoxSign.positive(terms, inside) ? Vanishing.NEVER
-            : Vanishing.UNDECIDED;
+        return pos + neg > 0 && org.qchain.symbolic.BoxSign.positive(pos > 0 ? c : c.negate(), open)
+            ? Vanishing.NEVER : Vanishing.UNDECIDED;
     }
 
     /** What changes between two structures: the states that become absorbing, and the classes when they change. */

@@ -68,7 +68,7 @@ final class Verification {
                 RationalMatrix g = model.generator("qchain verify --what " + q.what().word());
                 List<Integer> up = model.model().upStates().orElseThrow(() ->
                     new QchainException(ErrorKey.NO_UP_STATES, "qchain verify --what " + q.what().word()));
-                Availability.Figures f = Availability.of(g, up, Availability.HOURS_PER_YEAR);
+                Availability.Figures<Rational> f = Availability.of(g, up, Availability.HOURS_PER_YEAR);
                 if (q.what() == VerifyQuery.What.AVAILABILITY) {
                     target = Target.scalar("steady-state availability");
                     Rational av = f.availability();

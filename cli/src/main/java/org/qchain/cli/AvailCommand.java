@@ -6,6 +6,7 @@ import java.util.concurrent.Callable;
 import org.qchain.analysis.Analysis;
 import org.qchain.analysis.AvailabilityQuery;
 import org.qchain.analysis.LoadedModel;
+import org.qchain.analysis.LongRunQuery;
 import org.qchain.exact.Rational;
 import org.qchain.exact.certified.CertifiedPowers;
 import org.qchain.result.Result;
@@ -23,7 +24,9 @@ import picocli.CommandLine.Spec;
         "Exact: steady-state availability and unavailability, down hours per year, failure frequency (failures per"
             + " unit of time in the long run), mean up and down time per cycle, mean time to failure (MTTF: expected"
             + " time to first reach a down state) from each up state, and the long-run share of every state.",
-        "With -t: point availability A(t) from --from (default: the first up state) as certified decimals."})
+        "With -t: point availability A(t) from --from (default: the first up state) as certified decimals.",
+        "Parameters without a value (or --symbolic): the same figures as formulas in the parameters, with the"
+            + " conditions under which they hold, and their exact values where every parameter has one."})
 final class AvailCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -54,17 +57,30 @@ final class AvailCommand implements Callable<Integer> {
             + " fixed-point numbers (default: ${DEFAULT-VALUE}).")
     long maxWork = CertifiedPowers.DEFAULT_MAX_WORK;
 
+    @Option(names = "--symbolic", description = "Keep every parameter symbolic, even those with nominal values:"
+        + " formulas, with their values at the point. Models with a parameter without a value are symbolic anyway.")
+    boolean symbolic;
+
+    @Option(names = "--max-states", paramLabel = "S", defaultValue = "" + LongRunQuery.DEFAULT_MAX_STATES,
+        description = "Refuse symbolic solves of more than S states (default: ${DEFAULT-VALUE}).")
+    int maxStates = LongRunQuery.DEFAULT_MAX_STATES;
+
     @Mixin
     OutputOptions output;
 
     @Override
     public Integer call() {
         Rational h = hoursPerYear;
+        if (maxStates < 1) {
+            throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+                "Invalid value for option '--max-states': " + maxStates + " (must be at least 1)");
+        }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         AvailabilityQuery q = new AvailabilityQuery(Optional.ofNullable(from),
-            times == null ? List.of() : times.times(), h, output.digits(), CertifiedPowers.DEFAULT_MAX_BITS, maxWork);
-        Result result = root.run(spec, progress -> Analysis.availability(loaded, q, progress));
+            times == null ? List.of() : times.times(), h, output.digits(), CertifiedPowers.DEFAULT_MAX_BITS, maxWork,
+            symbolic, maxStates);
+        Result result = root.run(spec, progress -> Analysis.run(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;
     }

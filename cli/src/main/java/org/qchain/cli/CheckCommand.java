@@ -42,7 +42,8 @@ final class CheckCommand implements Callable<Integer> {
         CheckResult result = Analysis.check(loaded, new CheckQuery(symbolic));
         // a symbolic check's conditions are its report (the "Conditions" section on stdout): not again on stderr
         Emitter.emit(spec, output.formatter().format(result),
-            result instanceof CheckResult.Symbolic ? java.util.List.of() : result.warnings(), output.output());
+            result instanceof CheckResult.Symbolic || result instanceof CheckResult.Generator ? java.util.List.of()
+                : result.warnings(), output.output());
         return ExitCodes.OK;
     }
 }

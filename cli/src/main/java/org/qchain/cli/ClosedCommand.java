@@ -1,5 +1,7 @@
 package org.qchain.cli;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.qchain.analysis.Analysis;
@@ -25,7 +27,10 @@ import picocli.CommandLine.TypeConversionException;
     description = {
         "P^n of a discrete chain as one formula in a symbolic n (and the parameters without a value), valid for every"
             + " n from the stated valid_from on, under the stated parameter conditions.",
-        "Without --from: the whole matrix. With --start A (or --from A): that row. With --from A --to B: one entry.",
+        "Without --from: the whole matrix. With --start A (or --from A): that row. With --from A --to B: one entry."
+            + " --start Healthy=3/5 --start Ill=2/5: the distribution after n steps (the start's weighted sum of the"
+            + " rows); --to Up,Worn: the probability of being in one of them (the sum of their entries), each as one"
+            + " formula built from the combined coefficients.",
         "--form gf prints the generating functions sum_n P^n z^n, --form recurrence the linear recurrences with"
             + " their initial values; these exist for every chain.",
         "Parameters given with --at are substituted first; all others stay symbolic. Numeric values (convergence"
@@ -58,10 +63,12 @@ final class ClosedCommand implements Callable<Integer> {
         + " one entry.")
     String from;
 
-    @Option(names = "--to", paramLabel = "STATE", description = "Final state (needs --from): print one entry.")
-    String to;
+    @Option(names = "--to", paramLabel = "STATE", split = ",", splitSynopsisLabel = ",",
+        description = "Final state (needs --from or --start): print one probability; several (--to Up,Worn): the"
+            + " probability of being in one of them, the sum of their entries.")
+    List<String> to = new ArrayList<>();
 
-    /** {@code --start}, shared with {@code step}; closed forms take one initial state. */
+    /** {@code --start}, shared with {@code step}: the initial state or an initial distribution. */
     @Mixin
     StartOptions startOptions;
 
@@ -86,13 +93,15 @@ final class ClosedCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (to != null && from == null && !startOptions.given()) {
+        if (!to.isEmpty() && from == null && !startOptions.given()) {
             throw new ParameterException(spec.commandLine(), "--to needs --from (the starting state) or --start (the"
-                + " initial state)");
+                + " initial state or distribution)");
         }
-        if (to != null && to.contains(",")) {
-            throw new ParameterException(spec.commandLine(), "closed --to takes one state: the closed form of the"
-                + " probability of a set of states is not computed (step and sens take --to " + to + ")");
+        for (int k = 0; k < to.size(); k++) {
+            if (to.subList(0, k).contains(to.get(k))) {
+                throw new ParameterException(spec.commandLine(), "--to names " + to.get(k) + " twice; give each state"
+                    + " once");
+            }
         }
         if (startOptions.given() && from != null) {
             throw new ParameterException(spec.commandLine(), "--start and --from both name the starting state; give one");
@@ -100,18 +109,12 @@ final class ClosedCommand implements Callable<Integer> {
         if (factor && form != ClosedResult.Form.MATRIX) {
             throw new ParameterException(spec.commandLine(), "--factor applies to --form matrix (the closed form in n)");
         }
-        String start = null;
-        if (startOptions.given()) {
-            Start s = startOptions.start().orElseThrow();
-            start = s.single().orElseThrow(() -> new ParameterException(spec.commandLine(), "closed --start takes one"
-                + " initial state (--start Healthy); the closed form from an initial distribution is not computed"
-                + " (step --start gives its exact values for given n)"));
-        }
+        Optional<Start> start = startOptions.given() ? startOptions.start()
+            : Optional.ofNullable(from).map(f -> Start.state(f, "--from"));
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
-        ClosedQuery q = new ClosedQuery(form, Optional.ofNullable(start != null ? start : from),
-            start != null ? "--start" : "--from", Optional.ofNullable(to), terms.maxTerms, output.digits(),
-            digitLimit.maxDigits, factor);
+        ClosedQuery q = new ClosedQuery(form, start, to, terms.maxTerms, output.digits(), digitLimit.maxDigits,
+            factor);
         ClosedResult result = root.run(spec, progress -> Analysis.closed(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

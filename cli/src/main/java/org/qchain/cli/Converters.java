@@ -134,6 +134,16 @@ final class Converters {
         long single() {
             return ns.get(0);
         }
+
+        /**
+         * The record's usual text, written out: picocli takes the text of every option value it sets (for its
+         * trace), and a record's generated {@code toString} links its method handles at first use, which spins
+         * about forty classes at every start.
+         */
+        @Override
+        public String toString() {
+            return "StepList[ns=" + ns + ", series=" + series + "]";
+        }
     }
 
     /** A limit on digits: an integer {@code >= 1}. */
@@ -325,6 +335,11 @@ final class Converters {
 
     /** The times an option gave, in order. */
     record TimeList(java.util.List<org.qchain.exact.Rational> times) {
+        /** The record's usual text, written out (see {@link StepList#toString()}). */
+        @Override
+        public String toString() {
+            return "TimeList[times=" + times + "]";
+        }
     }
 
     /** A positive rational: an integer, a fraction {@code p/q} or a decimal, read exactly. */

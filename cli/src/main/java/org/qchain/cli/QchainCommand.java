@@ -40,6 +40,8 @@ public final class QchainCommand implements Callable<Integer> {
         LongRunCommand.class, AbsorbCommand.class, ReportCommand.class, DemoCommand.class, CompletionCommand.class, HelpCommand.class);
     /** Commands that need the whole tree: the demo, the completion script and help on other commands. */
     private static final List<String> NEED_ALL = List.of("demo", "completion", "help");
+    /** The root's version options: given alone, they need no subcommand at all. */
+    private static final List<String> VERSION_OPTIONS = List.of("--version", "-V");
 
     /** Milliseconds the Ctrl-C hook waits for the work to stop and clean up before the JVM halts. */
     private static final long INTERRUPT_GRACE_MS = 3000;
@@ -116,15 +118,18 @@ public final class QchainCommand implements Callable<Integer> {
      * @return the command line, ready for {@code setOut}/{@code setErr} and {@code execute}
      */
     public static CommandLine newCommandLine(boolean progressAllowed) {
-        return newCommandLine(progressAllowed, new Errors(), null);
+        return newCommandLine(progressAllowed, new Errors(), new String[0]);
     }
 
     /**
      * The command tree, with only the subcommand named by {@code first} when it names one that runs on its own
-     * (the whole tree otherwise, or when {@code first} is null): what the process needs for its arguments.
+     * (the whole tree otherwise, or when {@code first} is null), and none for {@code --version} alone: what the
+     * process needs for its arguments.
      */
-    private static CommandLine newCommandLine(boolean progressAllowed, Errors errors, String first) {
+    static CommandLine newCommandLine(boolean progressAllowed, Errors errors, String[] args) {
         CommandLine cl = new CommandLine(new QchainCommand(progressAllowed));
+        String first = args.length > 0 ? args[0] : null;
+        boolean versionOnly = args.length == 1 && VERSION_OPTIONS.contains(first);
         Class<?> only = null;
         if (first != null && !NEED_ALL.contains(first)) {
             for (Class<?> c : SUBCOMMANDS) {
@@ -134,7 +139,7 @@ public final class QchainCommand implements Callable<Integer> {
             }
         }
         for (Class<?> c : SUBCOMMANDS) {
-            if (only == null || c == only) {
+            if (!versionOnly && (only == null || c == only)) {
                 cl.addSubcommand(newInstance(c));
             }
         }
@@ -183,7 +188,7 @@ public final class QchainCommand implements Callable<Integer> {
         Errors errors = new Errors();
         CountDownLatch done = new CountDownLatch(1);
         Thread worker = Thread.currentThread();
-        CommandLine cl = newCommandLine(stderrIsTerminal(), errors, args.length > 0 ? args[0] : null);
+        CommandLine cl = newCommandLine(stderrIsTerminal(), errors, args);
         QchainCommand root = cl.getCommand();
         Runtime.getRuntime().addShutdownHook(new Thread(() -> {
             if (done.getCount() > 0) {

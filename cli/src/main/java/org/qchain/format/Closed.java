@@ -233,6 +233,28 @@ final class Closed {
         return String.join("*", parts);
     }
 
+    /**
+     * What a start distribution and a set of final states mean in the cells; empty for rows and entries:
+     * {@code The start is the distribution Up=1/2, Worn=1/2 (each formula is the weighted sum of those rows of P^n);
+     * {Worn, Down} is the probability of being in one of these states (the sum of their entries).}
+     */
+    static String combinationNote(ClosedResult r) {
+        List<String> parts = new ArrayList<>();
+        if (r.startsFromDistribution()) {
+            parts.add("the start is the distribution " + r.rows().get(0) + " (each formula is the weighted sum of those"
+                + " rows of " + pn(r) + ")");
+        }
+        if (r.toStates().size() > 1) {
+            parts.add(r.cols().get(0) + " is the probability of being in one of these states (the sum of their"
+                + " entries)");
+        }
+        if (parts.isEmpty()) {
+            return "";
+        }
+        String text = String.join("; ", parts) + ".";
+        return Character.toUpperCase(text.charAt(0)) + text.substring(1);
+    }
+
     /** The note of {@code --factor}; empty without it. */
     static String factoredNote(ClosedResult r) {
         return r.factored() ? "Coefficients and limits: numerator and denominator factored over the rationals." : "";

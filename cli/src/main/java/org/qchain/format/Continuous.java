@@ -8,6 +8,8 @@ import org.qchain.exact.Decimals;
 import org.qchain.exact.Rational;
 import org.qchain.exact.certified.CertifiedDecimal;
 import org.qchain.result.AvailabilityResult;
+import org.qchain.result.Formula;
+import org.qchain.result.SymbolicAvailabilityResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 
@@ -75,19 +77,147 @@ final class Continuous {
      */
     static List<List<String>> figures(AvailabilityResult r, int digits) {
         List<List<String>> out = new ArrayList<>();
-        out.add(List.of("steady-state availability", r.availability().toString(), Text.decimal(r.availability(), digits)));
-        out.add(List.of("steady-state unavailability", r.unavailability().toString(),
-            Text.decimal(r.unavailability(), digits)));
-        out.add(List.of("down time per year (" + r.hoursPerYear() + " " + YEAR_NOTE + ")",
-            r.downHoursPerYear().toString(), Text.decimal(r.downHoursPerYear(), digits)));
-        out.add(List.of("failure frequency", r.failureFrequency().toString(), Text.decimal(r.failureFrequency(), digits)));
-        out.add(List.of("mean up time per cycle", exact(r.meanUpTime(), "undefined (never fails)"),
-            decimal(r.meanUpTime(), "undefined", digits)));
-        out.add(List.of("mean down time per cycle", exact(r.meanDownTime(), "undefined (never fails)"),
+        out.add(List.of(AVAILABILITY, r.availability().toString(), Text.decimal(r.availability(), digits)));
+        out.add(List.of(UNAVAILABILITY, r.unavailability().toString(), Text.decimal(r.unavailability(), digits)));
+        out.add(List.of(downTime(r.hoursPerYear()), r.downHoursPerYear().toString(),
+            Text.decimal(r.downHoursPerYear(), digits)));
+        out.add(List.of(FREQUENCY, r.failureFrequency().toString(), Text.decimal(r.failureFrequency(), digits)));
+        out.add(List.of(MEAN_UP, exact(r.meanUpTime(), NEVER_FAILS), decimal(r.meanUpTime(), "undefined", digits)));
+        out.add(List.of(MEAN_DOWN, exact(r.meanDownTime(), NEVER_FAILS),
             decimal(r.meanDownTime(), "undefined", digits)));
-        r.mttf().forEach((s, v) -> out.add(List.of("MTTF from " + s, exact(v, "inf"), decimal(v, "inf", digits))));
-        r.stationary().forEach((s, v) -> out.add(List.of("long-run share of " + s, v.toString(), Text.decimal(v, digits))));
+        r.mttf().forEach((s, v) -> out.add(List.of(mttf(s), exact(v, "inf"), decimal(v, "inf", digits))));
+        r.stationary().forEach((s, v) -> out.add(List.of(share(s), v.toString(), Text.decimal(v, digits))));
         return out;
+    }
+
+    /** The figures' names, the same in every format and on both routes. */
+    static final String AVAILABILITY = "steady-state availability";
+    static final String UNAVAILABILITY = "steady-state unavailability";
+    static final String FREQUENCY = "failure frequency";
+    static final String MEAN_UP = "mean up time per cycle";
+    static final String MEAN_DOWN = "mean down time per cycle";
+    static final String NEVER_FAILS = "undefined (never fails)";
+
+    static String downTime(Rational hoursPerYear) {
+        return "down time per year (" + hoursPerYear + " " + YEAR_NOTE + ")";
+    }
+
+    static String mttf(String state) {
+        return "MTTF from " + state;
+    }
+
+    static String share(String state) {
+        return "long-run share of " + state;
+    }
+
+    /**
+     * One figure as a formula.
+     *
+     * @param name    the figure's name
+     * @param formula the formula; empty when the figure is infinite or undefined
+     * @param none    what to print instead
+     */
+    record FormulaRow(String name, Optional<Formula> formula, String none) {
+        String plain() {
+            return formula.map(Formula::plain).orElse(none);
+        }
+
+        String latex() {
+            return formula.map(Formula::latex).orElse("\\text{" + Text.latex(none) + "}");
+        }
+    }
+
+    /** The figures of a symbolic availability result, in the order of {@link #figures}. */
+    static List<FormulaRow> formulas(SymbolicAvailabilityResult r) {
+        List<FormulaRow> out = new ArrayList<>();
+        out.add(new FormulaRow(AVAILABILITY, Optional.of(r.availability()), ""));
+        out.add(new FormulaRow(UNAVAILABILITY, Optional.of(r.unavailability()), ""));
+        out.add(new FormulaRow(downTime(r.hoursPerYear()), Optional.of(r.downHoursPerYear()), ""));
+        out.add(new FormulaRow(FREQUENCY, Optional.of(r.failureFrequency()), ""));
+        out.add(new FormulaRow(MEAN_UP, r.meanUpTime(), NEVER_FAILS));
+        out.add(new FormulaRow(MEAN_DOWN, r.meanDownTime(), NEVER_FAILS));
+        r.mttf().forEach((s, v) -> out.add(new FormulaRow(mttf(s), v, "inf")));
+        r.stationary().forEach((s, v) -> out.add(new FormulaRow(share(s), Optional.of(v), "")));
+        return out;
+    }
+
+    /** The title line's words about a symbolic availability result. */
+    static String symbolicTitle(SymbolicAvailabilityResult r) {
+        return "Availability of " + r.source() + " (continuous chain; up: " + String.join(", ", r.up())
+            + "; every other state is down; formulas in " + (r.parameters().isEmpty() ? "no parameter"
+            : String.join(", ", r.parameters())) + ")";
+    }
+
+    /** The sentence before the conditions. */
+    static final String CONDITIONS = "Conditions: the formulas hold where none of these vanishes (factors of the"
+        + " denominators and of the rates):";
+
+    /** What a condition's check found. */
+    static String proof(SymbolicAvailabilityResult.Condition c) {
+        return c.proved() ? "holds throughout the parameters' domains (proved)"
+            : "not proved throughout the domains: the formulas hold only where it does";
+    }
+
+    /** The closing sentence about units. */
+    static final String UNITS = "Times are in the unit of the model's rates; failure frequency is per that unit.";
+
+    /** The title of a generator check. */
+    static String generatorTitle(org.qchain.result.CheckResult.Generator g) {
+        int n = g.states().size();
+        return "Generator Q of " + g.source() + " (continuous chain, " + n + (n == 1 ? " state)" : " states)")
+            + (g.symbolic() ? " as exact rational functions of " + (g.parameters().isEmpty() ? "(no parameters)"
+            : String.join(", ", g.parameters())) : "");
+    }
+
+    /** What a generator's entries are. */
+    static final String GENERATOR_NOTE = "Row i, column j: rate from state i to state j (per unit of time); diagonal:"
+        + " minus the total rate out of state i.";
+
+    /** What an unbounded holding time prints as. */
+    static final String NEVER_LEFT = "inf (never left)";
+
+    /** The generator's closing verdict, as the discrete check's {@code OK:} line. */
+    static String generatorVerdict(org.qchain.result.CheckResult.Generator g) {
+        int n = g.states().size();
+        String head = "OK: " + n + (n == 1 ? " state" : " states") + ", continuous, rows sum to 0";
+        if (!g.symbolic()) {
+            return head + ", off-diagonal rates >= 0";
+        }
+        return head + " identically; " + (g.warnings().isEmpty()
+            ? "off-diagonal rates >= 0 on the whole parameter domain"
+            : g.warnings().size() + (g.warnings().size() == 1 ? " condition" : " conditions")
+                + " on the parameters (above)");
+    }
+
+    /** The sentence before a generator's located conditions. */
+    static final String RATE_CONDITIONS = "Conditions (each off-diagonal rate must be at least 0 for Q to be a"
+        + " generator):";
+
+    /** The operating and down states, as a sentence; empty without an {@code up} line. */
+    static Optional<String> upDown(org.qchain.result.CheckResult.Generator g) {
+        return g.up().map(u -> "Up (operating) states: " + String.join(", ", u) + "; down: "
+            + (g.down().isEmpty() ? "(none)" : String.join(", ", g.down())) + ".");
+    }
+
+    /**
+     * Per state: name, total rate out, mean holding time; exact values add a decimal after each ({@code 1/250
+     * (0.004)} style is the caller's: the cells here are the exact text and the decimal, or the formula and "").
+     */
+    static List<List<String>> stateRows(org.qchain.result.CheckResult.Generator g, int digits) {
+        List<List<String>> out = new ArrayList<>();
+        for (int i = 0; i < g.states().size(); i++) {
+            Formula q = g.exitRates().get(i);
+            Optional<Formula> h = g.holding().get(i);
+            out.add(List.of(g.states().get(i), q.plain(), decimalOf(q, digits),
+                h.map(Formula::plain).orElse(NEVER_LEFT), h.map(x -> decimalOf(x, digits)).orElse(g.symbolic() ? ""
+                    : "inf")));
+        }
+        return out;
+    }
+
+    /** The decimal of an exact value, or "" for a formula. */
+    static String decimalOf(Formula f, int digits) {
+        return Sections.exact(f).map(r -> Text.decimal(r, digits)).orElse("");
     }
 
     /** The point availabilities, one row each: {@code A(t)} label, decimal (certified). */

@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.Formula;
 import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -301,6 +302,33 @@ final class CsvFormatter extends DocLayout {
         Text.csvRecord(sb, List.of(fields));
     }
 
+    /**
+     * {@code quantity,from,to,exact,decimal} (exact values) or {@code quantity,from,to,formula}: the rates
+     * ({@code rate}), then per state the total rate out and the mean holding time ({@code to} empty).
+     */
+    @Override
+    String generatorCheck(CheckResult.Generator g) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, g.symbolic() ? List.of("quantity", "from", "to", "formula")
+            : List.of("quantity", "from", "to", "exact", "decimal"));
+        for (int i = 0; i < g.states().size(); i++) {
+            for (int j = 0; j < g.states().size(); j++) {
+                Formula f = g.entries().get(i).get(j);
+                record(sb, g, List.of("rate", g.states().get(i), g.states().get(j), f.plain(),
+                    Continuous.decimalOf(f, digits)));
+            }
+        }
+        for (List<String> r : Continuous.stateRows(g, digits)) {
+            record(sb, g, List.of("total rate out", r.get(0), "", r.get(1), r.get(2)));
+            record(sb, g, List.of("mean holding time", r.get(0), "", r.get(3), r.get(4)));
+        }
+        return sb.toString();
+    }
+
+    private static void record(StringBuilder sb, CheckResult.Generator g, List<String> cells) {
+        Text.csvRecord(sb, g.symbolic() ? cells.subList(0, 4) : cells);
+    }
+
     @Override
     String symbolicCheck(CheckResult.Symbolic s) {
         StringBuilder sb = new StringBuilder();
@@ -353,6 +381,30 @@ final class CsvFormatter extends DocLayout {
         Text.csvRecord(sb, List.of("figure", "exact", "decimal"));
         Continuous.figures(r, digits).forEach(f -> Text.csvRecord(sb, f));
         Continuous.points(r).forEach(p -> Text.csvRecord(sb, List.of(p.get(0), "", p.get(1))));
+        return sb.toString();
+    }
+
+    /**
+     * {@code figure,formula,latex,exact,decimal}: one record a figure (the exact value and decimal at the point when
+     * every parameter has one), then one a condition ({@code condition (proved)} or {@code condition (not proved)}).
+     */
+    @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        Text.csvRecord(sb, List.of("figure", "formula", "latex", "exact", "decimal"));
+        List<List<String>> at = r.atPoint().map(a -> Continuous.figures(a, digits)).orElse(List.of());
+        List<Continuous.FormulaRow> rows = Continuous.formulas(r);
+        for (int k = 0; k < rows.size(); k++) {
+            Continuous.FormulaRow f = rows.get(k);
+            Text.csvRecord(sb, List.of(f.name(), f.plain(), f.latex(), at.isEmpty() ? "" : at.get(k).get(1),
+                at.isEmpty() ? "" : at.get(k).get(2)));
+        }
+        for (org.qchain.result.SymbolicAvailabilityResult.Condition c : r.conditions()) {
+            Text.csvRecord(sb, List.of(c.proved() ? "condition (proved)" : "condition (not proved)", c.condition(),
+                c.latex(), "", ""));
+        }
+        r.atPoint().ifPresent(a -> Continuous.points(a).forEach(p -> Text.csvRecord(sb,
+            List.of(p.get(0), "", "", "", p.get(1)))));
         return sb.toString();
     }
 

@@ -54,6 +54,9 @@ public interface Formatter {
         if (result instanceof AvailabilityResult a) {
             return availability(a);
         }
+        if (result instanceof org.qchain.result.SymbolicAvailabilityResult a) {
+            return symbolicAvailability(a);
+        }
         if (result instanceof RateSensResult r) {
             return rateSens(r);
         }
@@ -120,6 +123,9 @@ public interface Formatter {
 
     /** Figures of merit of a repairable system. */
     String availability(AvailabilityResult r);
+
+    /** Figures of merit as formulas in the parameters, with their conditions. */
+    String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r);
 
     /** The derivative of a figure of merit with respect to a rate. */
     String rateSens(RateSensResult r);

@@ -14,6 +14,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.Formula;
 import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.Condition;
@@ -281,10 +282,24 @@ final class JsonFormatter extends Layout {
             .strings("states", r.states());
         switch (r.selection()) {
             case ENTRY:
-                j.string("from", r.rows().get(0)).string("to", r.cols().get(0)).string("formula", cells.get(0).get(0));
+                // with --start or a --to set, as step's entry shape: the start's probabilities and the states of --to
+                j.string("from", r.rows().get(0));
+                if (!r.start().isEmpty()) {
+                    j.object("start", startJson(r));
+                }
+                j.string("to", r.toStates().isEmpty() ? r.cols().get(0) : String.join(",", r.toStates()));
+                if (!r.toStates().isEmpty()) {
+                    j.strings("to_states", r.toStates());
+                }
+                j.string("formula", cells.get(0).get(0));
                 break;
             case ROW:
-                j.string("start", r.rows().get(0)).strings("row", cells.get(0));
+                // "start" is the row's start as text (a state, or Healthy=3/5, Ill=2/5); the probabilities apart
+                j.string("start", r.rows().get(0));
+                if (!r.start().isEmpty()) {
+                    j.object("start_distribution", startJson(r));
+                }
+                j.strings("row", cells.get(0));
                 break;
             default:
                 j.stringRows("matrix", cells);
@@ -305,7 +320,8 @@ final class JsonFormatter extends Layout {
             List<Object[]> items = new ArrayList<>();
             for (int i = 0; i < r.rows().size(); i++) {
                 for (int k = 0; k < r.cols().size(); k++) {
-                    items.add(new Object[] {r.rows().get(i), r.cols().get(k), r.recurrences().get(i).get(k)});
+                    String to = r.toStates().isEmpty() ? r.cols().get(k) : String.join(",", r.toStates());
+                    items.add(new Object[] {r.rows().get(i), to, r.recurrences().get(i).get(k)});
                 }
             }
             j.objects("recurrences", items, c -> {
@@ -355,6 +371,13 @@ final class JsonFormatter extends Layout {
         return j.close() + "\n";
     }
 
+    /** The start's probabilities, {@code {"Healthy":"3/5","Ill":"2/5"}}. */
+    private static Json startJson(ClosedResult r) {
+        Json o = Json.object();
+        r.start().forEach((k, v) -> o.string(k, v.toString()));
+        return o;
+    }
+
     private static Json limitJson(ClosedResult r, int k, List<List<String>> grid, List<List<List<String>>> dec) {
         Json l = Json.object().number("r", k);
         switch (r.selection()) {
@@ -380,6 +403,43 @@ final class JsonFormatter extends Layout {
     }
 
     // --- check -------------------------------------------------------------------------------------------------
+
+    @Override
+    String generatorCheck(CheckResult.Generator g) {
+        List<List<String>> plain = g.entries().stream().map(r -> r.stream().map(Formula::plain).toList()).toList();
+        Json out = Json.object();
+        Json hold = Json.object();
+        Json outDec = Json.object();
+        Json holdDec = Json.object();
+        for (List<String> r : Continuous.stateRows(g, digits)) {
+            out.string(r.get(0), r.get(1));
+            hold.string(r.get(0), g.holding().get(g.states().indexOf(r.get(0))).isPresent() ? r.get(3) : "inf");
+            outDec.string(r.get(0), r.get(2));
+            holdDec.string(r.get(0), r.get(4));
+        }
+        Json j = Json.object().string("kind", "continuous").strings("states", g.states());
+        if (g.symbolic()) {
+            j.strings("parameters", g.parameters());
+        }
+        j.stringRows("matrix", plain);
+        if (!g.symbolic()) {
+            j.stringRows("decimals", g.entries().stream().map(r -> r.stream()
+                .map(f -> Continuous.decimalOf(f, digits)).toList()).toList());
+        }
+        j.object("exit_rates", out).object("mean_holding_times", hold);
+        if (!g.symbolic()) {
+            j.object("decimals_exit_rates", outDec).object("decimals_mean_holding_times", holdDec);
+        }
+        g.up().ifPresent(u -> j.strings("up", u).strings("down", g.down()));
+        if (g.symbolic()) {
+            j.strings("conditions", g.warnings());
+        }
+        g.at().ifPresent(p -> j.object("at", point(p)));
+        if (!g.symbolic()) {
+            j.number("digits", digits);
+        }
+        return j.string("model", g.source()).strings("warnings", g.warnings()).close() + "\n";
+    }
 
     @Override
     String symbolicCheck(CheckResult.Symbolic s) {
@@ -464,6 +524,17 @@ final class JsonFormatter extends Layout {
 
     @Override
     public String availability(AvailabilityResult r) {
+        Json j = figures(r);
+        r.at().ifPresent(p -> j.object("at", point(p)));
+        j.number("digits", digits)
+            .string("model", r.source())
+            .strings("warnings", r.warnings())
+            .string("caution", Caution.TEXT);
+        return j.close() + "\n";
+    }
+
+    /** The exact figures of a numeric availability result, up to the point availabilities. */
+    private Json figures(AvailabilityResult r) {
         Json mttf = Json.object();
         Json mttfDec = Json.object();
         r.mttf().forEach((s, v) -> {
@@ -472,7 +543,7 @@ final class JsonFormatter extends Layout {
         });
         Json pi = Json.object();
         r.stationary().forEach((s, v) -> pi.string(s, v.toString()));
-        Json j = Json.object()
+        return Json.object()
             .strings("up", r.up())
             .string("steady_state_availability", r.availability().toString())
             .object("mttf", mttf)
@@ -497,7 +568,58 @@ final class JsonFormatter extends Layout {
                 .string("decimal", p.value().text())
                 .string("status", p.value().status().name().toLowerCase(java.util.Locale.ROOT))
                 .string("bound", Continuous.bound(p.value().enclosure().width())));
-        r.at().ifPresent(p -> j.object("at", point(p)));
+    }
+
+    @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        Json mttf = Json.object();
+        Json mttfTex = Json.object();
+        r.mttf().forEach((s, v) -> {
+            mttf.string(s, v.map(org.qchain.result.Formula::plain).orElse("inf"));
+            mttfTex.string(s, v.map(org.qchain.result.Formula::latex).orElse("\\infty"));
+        });
+        Json pi = Json.object();
+        Json piTex = Json.object();
+        r.stationary().forEach((s, v) -> {
+            pi.string(s, v.plain());
+            piTex.string(s, v.latex());
+        });
+        Json j = Json.object()
+            .strings("up", r.up())
+            .string("steady_state_availability", r.availability().plain())
+            .object("mttf", mttf)
+            .string("mean_up_time", r.meanUpTime().map(org.qchain.result.Formula::plain).orElse("undefined"))
+            .string("mean_down_time", r.meanDownTime().map(org.qchain.result.Formula::plain).orElse("undefined"))
+            .string("failure_frequency", r.failureFrequency().plain())
+            .string("unavailability", r.unavailability().plain())
+            .string("hours_per_year", r.hoursPerYear().toString())
+            .string("down_hours_per_year", r.downHoursPerYear().plain())
+            .object("stationary", pi)
+            .string("kind", "symbolic")
+            .strings("parameters", r.parameters())
+            .object("latex", Json.object()
+                .string("steady_state_availability", r.availability().latex())
+                .object("mttf", mttfTex)
+                .string("mean_up_time", r.meanUpTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
+                .string("mean_down_time", r.meanDownTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
+                .string("failure_frequency", r.failureFrequency().latex())
+                .string("unavailability", r.unavailability().latex())
+                .string("down_hours_per_year", r.downHoursPerYear().latex())
+                .object("stationary", piTex))
+            .objects("conditions", r.conditions(), c -> Json.object()
+                .string("condition", c.condition())
+                .string("latex", c.latex())
+                .bool("proved", c.proved()));
+        if (!r.substituted().isEmpty()) {
+            Json sub = Json.object();
+            r.substituted().forEach((k, v) -> sub.string(k, v.toString()));
+            j.object("substituted", sub);
+        }
+        r.atPoint().ifPresent(a -> {
+            Json values = figures(a);
+            a.at().ifPresent(p -> values.object("at", point(p)));
+            j.object("values_at_point", values);
+        });
         j.number("digits", digits)
             .string("model", r.source())
             .strings("warnings", r.warnings())
@@ -560,7 +682,7 @@ final class JsonFormatter extends Layout {
     // --- classes, longrun, absorb --------------------------------------------------------------------------------
 
     private static List<List<String>> plain(List<List<org.qchain.result.Formula>> m) {
-        return m.stream().map(r -> r.stream().map(org.qchain.result.Formula::plain).toList()).toList();
+        return m.stream().map(Layout::plainTexts).toList();
     }
 
     /** With {@code --brief}: {@code "left_out":[field]} (the field itself stays, empty). */
@@ -578,8 +700,9 @@ final class JsonFormatter extends Layout {
         Json j = Json.object();
         // values may be empty (a continuous chain's state that is never left has no mean return time); otherwise
         // there is one per state
+        List<String> texts = plainTexts(values);
         for (int i = 0; i < (values.isEmpty() ? 0 : states.size()); i++) {
-            j.string(states.get(i), values.get(i).plain());
+            j.string(states.get(i), texts.get(i));
         }
         return j;
     }

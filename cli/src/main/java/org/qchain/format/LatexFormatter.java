@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.Formula;
 import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -313,6 +314,9 @@ final class LatexFormatter extends DocLayout {
             sb.append("% substituted before solving (given with --at): ").append(Text.comment(r.substitutedText()))
                 .append('\n');
         }
+        if (!Closed.combinationNote(r).isEmpty()) {
+            sb.append("% ").append(Text.comment(Closed.combinationNote(r))).append('\n');
+        }
         if (!Closed.factoredNote(r).isEmpty()) {
             sb.append("% ").append(Closed.factoredNote(r)).append(" det(").append(r.names().variable())
                 .append("I - P) = ").append(Closed.characteristicPolynomial(r)).append('\n');
@@ -367,6 +371,33 @@ final class LatexFormatter extends DocLayout {
     }
 
     // --- check -------------------------------------------------------------------------------------------------
+
+    @Override
+    String generatorCheck(CheckResult.Generator g) {
+        StringBuilder sb = new StringBuilder("% ").append(Text.comment(Continuous.generatorTitle(g)));
+        g.at().ifPresent(p -> sb.append("; parameters at ").append(Text.comment(p.text())).append(" (")
+            .append(p.origin()).append(")"));
+        sb.append('\n').append("% ").append(Text.comment(Continuous.GENERATOR_NOTE)).append('\n');
+        sb.append("\\[\nQ = \\begin{pmatrix}\n");
+        List<String> lines = new ArrayList<>();
+        for (List<Formula> row : g.entries()) {
+            lines.add(String.join(" & ", row.stream().map(Formula::latex).toList()));
+        }
+        sb.append(String.join(" \\\\\n", lines)).append("\n\\end{pmatrix}\n\\]\n");
+        sb.append("% rows and columns: ").append(Text.comment(String.join(", ", g.states()))).append('\n');
+        sb.append("\\begin{tabular}{lll}\n state & total rate out $q_i$ & mean holding time $1/q_i$ \\\\ \\hline\n");
+        for (int i = 0; i < g.states().size(); i++) {
+            sb.append(Text.latex(g.states().get(i))).append(" & $").append(g.exitRates().get(i).latex()).append("$ & $")
+                .append(g.holding().get(i).map(Formula::latex).orElse("\\infty")).append("$ \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+        Continuous.upDown(g).ifPresent(u -> sb.append("% ").append(Text.comment(u)).append('\n'));
+        for (String w : g.warnings()) {
+            sb.append("% condition: ").append(Text.comment(w)).append('\n');
+        }
+        sb.append("% ").append(Text.comment(Continuous.generatorVerdict(g))).append('\n');
+        return caution(sb);
+    }
 
     @Override
     String symbolicCheck(CheckResult.Symbolic s) {
@@ -451,6 +482,42 @@ final class LatexFormatter extends DocLayout {
             sb.append(Text.latex(p.get(0))).append(" & & ").append(Text.latex(p.get(1))).append(" \\\\\n");
         }
         sb.append("\\end{tabular}\n");
+        return caution(sb);
+    }
+
+    @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("% Availability of ").append(Text.comment(r.source())).append("; up: ")
+            .append(Text.comment(String.join(", ", r.up()))).append("; formulas in ")
+            .append(Text.comment(r.parameters().isEmpty() ? "no parameter" : String.join(", ", r.parameters())))
+            .append('\n');
+        if (!r.substituted().isEmpty()) {
+            sb.append("% substituted before solving (given with --at): ").append(Text.comment(r.substitutedText()))
+                .append('\n');
+        }
+        sb.append("\\begin{tabular}{ll}\n figure & formula \\\\ \\hline\n");
+        for (Continuous.FormulaRow f : Continuous.formulas(r)) {
+            sb.append(Text.latex(f.name())).append(" & $").append(f.latex()).append("$ \\\\\n");
+        }
+        sb.append("\\end{tabular}\n");
+        if (!r.conditions().isEmpty()) {
+            sb.append("% ").append(Text.comment(Continuous.CONDITIONS)).append('\n');
+            sb.append("\\begin{itemize}\n");
+            r.conditions().forEach(c -> sb.append("\\item $").append(c.latex()).append("$: ")
+                .append(Text.latex(Continuous.proof(c))).append('\n'));
+            sb.append("\\end{itemize}\n");
+        }
+        r.atPoint().ifPresent(a -> {
+            sb.append("% values at ").append(Text.comment(a.at().map(p -> p.text() + " (" + p.origin() + ")")
+                .orElse("the point"))).append(", exactly\n");
+            sb.append("\\begin{tabular}{lll}\n figure & exact & decimal \\\\ \\hline\n");
+            for (List<String> f : Continuous.figures(a, digits)) {
+                sb.append(Text.latex(f.get(0))).append(" & ").append(Text.latex(f.get(1))).append(" & ")
+                    .append(Text.latex(f.get(2))).append(" \\\\\n");
+            }
+            sb.append("\\end{tabular}\n");
+        });
         return caution(sb);
     }
 

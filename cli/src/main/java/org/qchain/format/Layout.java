@@ -2,12 +2,20 @@ package org.qchain.format;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.math.BigInteger;
+import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.function.Consumer;
+import java.util.stream.IntStream;
+import org.qchain.exact.DecimalText;
 import org.qchain.exact.Rational;
 import org.qchain.exact.floats.Binary64;
 import org.qchain.exact.floats.FloatText;
 import org.qchain.result.CheckResult;
+import org.qchain.result.ExactValue;
+import org.qchain.result.Formula;
 import org.qchain.result.Result;
 import org.qchain.result.StepResult;
 
@@ -62,6 +70,53 @@ abstract class Layout implements Formatter {
         return sink.text();
     }
 
+    /** Below this many bits in all, {@link #plainTexts} converts on the calling thread alone. */
+    static final long PARALLEL_TEXT_BITS = 200_000;
+
+    /**
+     * The plain texts of many formulas, in order, each equal to its {@link Formula#plain()}: exact values by the fast
+     * decimal conversion ({@link DecimalText}), each distinct denominator once (the entries of one exact solve share
+     * a few denominators of thousands of digits), on all cores when there are many digits; other formulas by
+     * {@code plain()}.
+     */
+    static List<String> plainTexts(List<? extends Formula> fs) {
+        int n = fs.size();
+        int[] numAt = new int[n];
+        int[] denAt = new int[n];
+        List<BigInteger> todo = new ArrayList<>();
+        Map<BigInteger, Integer> dens = new HashMap<>();
+        long bits = 0;
+        for (int i = 0; i < n; i++) {
+            numAt[i] = -1;
+            denAt[i] = -1;
+            if (fs.get(i) instanceof ExactValue e) {
+                Rational r = e.value();
+                numAt[i] = todo.size();
+                todo.add(r.numerator());
+                bits += r.numerator().bitLength();
+                if (!r.isInteger()) {
+                    Integer k = dens.get(r.denominator());
+                    if (k == null) {
+                        k = todo.size();
+                        todo.add(r.denominator());
+                        dens.put(r.denominator(), k);
+                        bits += r.denominator().bitLength();
+                    }
+                    denAt[i] = k;
+                }
+            }
+        }
+        String[] texts = new String[todo.size()];
+        IntStream range = IntStream.range(0, texts.length);
+        (bits >= PARALLEL_TEXT_BITS ? range.parallel() : range).forEach(k -> texts[k] = DecimalText.toString(todo.get(k)));
+        List<String> out = new ArrayList<>(n);
+        for (int i = 0; i < n; i++) {
+            out.add(numAt[i] < 0 ? fs.get(i).plain() : denAt[i] < 0 ? texts[numAt[i]]
+                : texts[numAt[i]] + "/" + texts[denAt[i]]);
+        }
+        return out;
+    }
+
     /** The entries of a matrix, row after row. */
     static List<Rational> flat(List<List<Rational>> rows) {
         return rows.stream().flatMap(List::stream).toList();
@@ -113,8 +168,14 @@ abstract class Layout implements Formatter {
         if (c instanceof CheckResult.Numeric n) {
             return numericCheck(n);
         }
+        if (c instanceof CheckResult.Generator g) {
+            return generatorCheck(g);
+        }
         return symbolicCheck((CheckResult.Symbolic) c);
     }
+
+    /** The generator of a continuous chain, its total rates out and mean holding times, exact or as formulas. */
+    abstract String generatorCheck(CheckResult.Generator g);
 
     /** The one-step matrix of a model checked at numeric values. */
     String numericCheck(CheckResult.Numeric n) {

@@ -11,6 +11,7 @@ import org.qchain.result.CertifiedStepResult;
 import org.qchain.result.RateSensResult;
 import org.qchain.result.TransientResult;
 import org.qchain.result.CheckResult;
+import org.qchain.result.Formula;
 import org.qchain.result.DistributionResult;
 import org.qchain.result.ClosedResult;
 import org.qchain.result.SensResult;
@@ -252,6 +253,9 @@ final class MarkdownFormatter extends DocLayout {
         if (!Closed.factoredNote(r).isEmpty()) {
             sb.append(' ').append(Closed.factoredNote(r));
         }
+        if (!Closed.combinationNote(r).isEmpty()) {
+            sb.append(' ').append(Text.markdown(Closed.combinationNote(r)));
+        }
         if (!r.substituted().isEmpty()) {
             sb.append(" Substituted before solving (given with --at): `").append(Text.code(r.substitutedText()))
                 .append("`.");
@@ -336,6 +340,44 @@ final class MarkdownFormatter extends DocLayout {
     // --- check -------------------------------------------------------------------------------------------------
 
     @Override
+    String generatorCheck(CheckResult.Generator g) {
+        StringBuilder sb = new StringBuilder("**").append(Text.markdown(Continuous.generatorTitle(g))).append("**");
+        g.at().ifPresent(p -> sb.append("; parameters at ").append(Text.markdown(p.text())).append(" (")
+            .append(p.origin()).append(")"));
+        sb.append("\n\n").append(Text.markdown(Continuous.GENERATOR_NOTE)).append("\n\n");
+        List<String> head = new ArrayList<>(List.of("from\\to"));
+        g.states().forEach(s -> head.add(Text.markdown(s)));
+        line(sb, head);
+        line(sb, separator(head.size()));
+        for (int i = 0; i < g.states().size(); i++) {
+            List<String> row = new ArrayList<>(List.of(Text.markdown(g.states().get(i))));
+            for (Formula f : g.entries().get(i)) {
+                String d = Continuous.decimalOf(f, digits);
+                row.add("`" + Text.code(f.plain()) + "`" + (g.symbolic() || d.equals(f.plain()) ? "" : " (" + d + ")"));
+            }
+            line(sb, row);
+        }
+        sb.append('\n');
+        line(sb, List.of("state", "total rate out q_i", "mean holding time 1/q_i"));
+        line(sb, separator(3));
+        for (List<String> r : Continuous.stateRows(g, digits)) {
+            line(sb, List.of(Text.markdown(r.get(0)), cell(r.get(1), r.get(2)), cell(r.get(3), r.get(4))));
+        }
+        Continuous.upDown(g).ifPresent(u -> sb.append('\n').append(Text.markdown(u)).append('\n'));
+        if (!g.warnings().isEmpty()) {
+            sb.append('\n').append(Text.markdown(Continuous.RATE_CONDITIONS)).append("\n\n");
+            g.warnings().forEach(w -> sb.append("- ").append(Text.markdown(w)).append('\n'));
+        }
+        sb.append('\n').append(Text.markdown(Continuous.generatorVerdict(g))).append('\n');
+        return caution(sb);
+    }
+
+    /** An exact value or formula in code, with its decimal beside it when that differs. */
+    private static String cell(String exact, String decimal) {
+        return "`" + Text.code(exact) + "`" + (decimal.isEmpty() || decimal.equals(exact) ? "" : " (" + decimal + ")");
+    }
+
+    @Override
     String symbolicCheck(CheckResult.Symbolic s) {
         StringBuilder sb = new StringBuilder();
         sb.append("One-step matrix of `").append(Text.code(s.source())).append("` (").append(s.kind())
@@ -413,6 +455,38 @@ final class MarkdownFormatter extends DocLayout {
         line(sb, separator(3));
         Continuous.figures(r, digits).forEach(f -> line(sb, f.stream().map(Text::markdown).toList()));
         Continuous.points(r).forEach(p -> line(sb, List.of(Text.markdown(p.get(0)), "", p.get(1))));
+        return caution(sb);
+    }
+
+    @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("**Availability** of `").append(Text.code(r.source())).append("` (up: ")
+            .append(Text.markdown(String.join(", ", r.up()))).append("; formulas in ")
+            .append(Text.markdown(r.parameters().isEmpty() ? "no parameter" : String.join(", ", r.parameters())))
+            .append(")");
+        if (!r.substituted().isEmpty()) {
+            sb.append(" Substituted before solving (given with --at): `").append(Text.code(r.substitutedText()))
+                .append("`.");
+        }
+        sb.append("\n\n");
+        line(sb, List.of("figure", "formula"));
+        line(sb, separator(2));
+        Continuous.formulas(r).forEach(f -> line(sb, List.of(Text.markdown(f.name()),
+            f.formula().isPresent() ? "`" + Text.code(f.plain()) + "`" : Text.markdown(f.plain()))));
+        if (!r.conditions().isEmpty()) {
+            sb.append('\n').append(Text.markdown(Continuous.CONDITIONS)).append("\n\n");
+            r.conditions().forEach(c -> sb.append("- `").append(Text.code(c.condition())).append("`: ")
+                .append(Text.markdown(Continuous.proof(c))).append('\n'));
+        }
+        r.atPoint().ifPresent(a -> {
+            sb.append("\nValues at ").append(Text.markdown(a.at().map(p -> p.text() + " (" + p.origin() + ")")
+                .orElse("the point"))).append(", exactly:\n\n");
+            line(sb, List.of("figure", "exact", "decimal"));
+            line(sb, separator(3));
+            Continuous.figures(a, digits).forEach(f -> line(sb, f.stream().map(Text::markdown).toList()));
+            Continuous.points(a).forEach(p -> line(sb, List.of(Text.markdown(p.get(0)), "", p.get(1))));
+        });
         return caution(sb);
     }
 

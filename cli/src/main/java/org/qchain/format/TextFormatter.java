@@ -389,6 +389,9 @@ final class TextFormatter extends DocLayout {
         if (!Closed.factoredNote(r).isEmpty()) {
             sb.append(Closed.factoredNote(r)).append('\n');
         }
+        if (!Closed.combinationNote(r).isEmpty()) {
+            sb.append(Closed.combinationNote(r)).append('\n');
+        }
         sb.append('\n');
         List<String> labels = new ArrayList<>();
         List<String> values = new ArrayList<>();
@@ -527,6 +530,41 @@ final class TextFormatter extends DocLayout {
     }
 
     @Override
+    String generatorCheck(CheckResult.Generator g) {
+        StringBuilder sb = new StringBuilder(Continuous.generatorTitle(g)).append('\n');
+        sb.append(Continuous.GENERATOR_NOTE).append('\n').append(parameters(g.at())).append('\n');
+        List<List<String>> plain = new ArrayList<>();
+        for (List<org.qchain.result.Formula> row : g.entries()) {
+            plain.add(row.stream().map(org.qchain.result.Formula::plain).toList());
+        }
+        if (g.symbolic()) {
+            overview(sb, g.states(), plain);
+        } else {
+            sb.append("Decimals (").append(Text.digits(digits)).append("):\n");
+            List<List<String>> decimals = new ArrayList<>();
+            for (List<org.qchain.result.Formula> row : g.entries()) {
+                decimals.add(row.stream().map(f -> Continuous.decimalOf(f, digits)).toList());
+            }
+            overview(sb, g.states(), decimals);
+            sb.append("Exact values:\n");
+            overview(sb, g.states(), plain);
+        }
+        TextTable t = g.symbolic() ? new TextTable().addRow("state", "total rate out q_i", "mean holding time 1/q_i")
+            : new TextTable().addRow("state", "total rate out q_i", "decimal", "mean holding time 1/q_i", "decimal");
+        for (List<String> r : Continuous.stateRows(g, digits)) {
+            t.addRow(g.symbolic() ? List.of(r.get(0), r.get(1), r.get(3)) : r);
+        }
+        sb.append(t.render());
+        Continuous.upDown(g).ifPresent(u -> sb.append('\n').append(u).append('\n'));
+        if (!g.warnings().isEmpty()) {
+            sb.append('\n').append(Continuous.RATE_CONDITIONS).append('\n');
+            g.warnings().forEach(w -> sb.append("  ").append(w).append('\n'));
+        }
+        close(sb);
+        return sb.append(Continuous.generatorVerdict(g)).append('\n').toString();
+    }
+
+    @Override
     String symbolicCheck(CheckResult.Symbolic s) {
         StringBuilder sb = new StringBuilder();
         int size = s.states().size();
@@ -609,6 +647,13 @@ final class TextFormatter extends DocLayout {
         sb.append("Availability of ").append(r.source()).append(" (continuous chain; up: ")
             .append(String.join(", ", r.up())).append("; every other state is down)\n").append(parameters(r.at()))
             .append('\n');
+        figures(sb, r);
+        sb.append('\n').append(Continuous.UNITS).append('\n');
+        return end(sb);
+    }
+
+    /** The exact figures' table and the point availabilities of a numeric result. */
+    private void figures(StringBuilder sb, AvailabilityResult r) {
         TextTable table = new TextTable().addRow("figure", "decimal", "exact");
         for (List<String> f : Continuous.figures(r, digits)) {
             table.addRow(f.get(0), f.get(2), f.get(1));
@@ -620,7 +665,30 @@ final class TextFormatter extends DocLayout {
             Continuous.points(r).forEach(pts::addRow);
             sb.append(pts.render());
         }
-        sb.append("\nTimes are in the unit of the model's rates; failure frequency is per that unit.\n");
+    }
+
+    @Override
+    public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
+        StringBuilder sb = new StringBuilder(Continuous.symbolicTitle(r)).append('\n');
+        if (!r.substituted().isEmpty()) {
+            sb.append("Substituted before solving (given with --at): ").append(r.substitutedText()).append('\n');
+        }
+        sb.append('\n');
+        TextTable table = new TextTable().addRow("figure", "formula");
+        Continuous.formulas(r).forEach(f -> table.addRow(f.name(), f.plain()));
+        sb.append(table.render());
+        if (!r.conditions().isEmpty()) {
+            sb.append('\n').append(Continuous.CONDITIONS).append('\n');
+            TextTable c = new TextTable("  ");
+            r.conditions().forEach(x -> c.addRow(x.condition(), Continuous.proof(x)));
+            sb.append(c.render());
+        }
+        r.atPoint().ifPresent(a -> {
+            sb.append('\n').append("Values at ").append(a.at().map(p -> p.text() + " (" + p.origin() + ")")
+                .orElse("the point")).append(", exactly (the formulas evaluated there):\n");
+            figures(sb, a);
+        });
+        sb.append('\n').append(Continuous.UNITS).append('\n');
         return end(sb);
     }
 
@@ -664,16 +732,23 @@ final class TextFormatter extends DocLayout {
             sb.append('\n').append(t.title()).append('\n');
             TextTable tt = new TextTable("  ");
             tt.addRow(t.header());
+            List<String> texts = plainTexts(t.rows().stream().flatMap(List::stream).toList());
+            int k = 0;
             for (java.util.List<org.qchain.result.Formula> row : t.rows()) {
-                tt.addRow(row.stream().map(this::cell).toList());
+                List<String> cells = new ArrayList<>(row.size());
+                for (org.qchain.result.Formula f : row) {
+                    cells.add(cell(f, texts.get(k++)));
+                }
+                tt.addRow(cells);
             }
             sb.append(tt.render());
         }
         return sb.append('\n').append(Caution.TEXT).append('\n').toString();
     }
 
-    private String cell(org.qchain.result.Formula f) {
-        return Sections.exact(f).filter(r -> !r.isInteger()).map(r -> r + " (" + dec(r) + ")").orElse(f.plain());
+    /** A table cell: the plain text of {@code f}, with the decimal after a fraction. */
+    private String cell(org.qchain.result.Formula f, String plain) {
+        return Sections.exact(f).filter(r -> !r.isInteger()).map(r -> plain + " (" + dec(r) + ")").orElse(plain);
     }
 
     // --- distributions after n steps -----------------------------------------------------------------------------

@@ -44,6 +44,13 @@ import org.qchain.exact.certified.CertifiedReal;
  *                    rationals ({@code closed --factor})
  * @param substituted the parameter values given with {@code --at} and substituted before the closed form was found
  *                    (the formulas are in the other parameters); empty when none
+ * @param start       the starting probability of each named state when a start was given with {@code --start} or
+ *                    a set of final states was asked for (one row, {@code rows} holding its text
+ *                    {@code Healthy=3/5, Ill=2/5}, each cell the start's weighted sum of the rows of P^n); empty
+ *                    otherwise
+ * @param toStates    the final states of a set ({@code --to Up,Worn}: one column, {@code cols} holding its text
+ *                    {@code {Up, Worn}}, each cell the sum of their entries) when {@code start} is given; empty
+ *                    otherwise
  */
 public record ClosedResult(String source, Form form, String nSymbol, int validFrom, List<Condition> conditions,
                            List<String> states, List<String> parameters, Selection selection,
@@ -51,7 +58,8 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
                            List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
                            List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
                            Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored,
-                           java.util.Map<String, org.qchain.exact.Rational> substituted)
+                           java.util.Map<String, org.qchain.exact.Rational> substituted,
+                           java.util.Map<String, org.qchain.exact.Rational> start, List<String> toStates)
     implements Result {
 
     /** Copies the lists. */
@@ -69,6 +77,33 @@ public record ClosedResult(String source, Form form, String nSymbol, int validFr
         where = List.copyOf(where);
         namedCells = namedCells.stream().map(List::copyOf).toList();
         substituted = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(substituted));
+        start = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(start));
+        toStates = List.copyOf(toStates);
+    }
+
+    /** As the canonical constructor without a start or a set of final states. */
+    public ClosedResult(String source, Form form, String nSymbol, int validFrom, List<Condition> conditions,
+                        List<String> states, List<String> parameters, Selection selection,
+                        List<String> rows, List<String> cols, List<List<Formula>> cells,
+                        List<List<Recurrence>> recurrences, List<Eigen> eigenvalues, Optional<LongRun> longRun,
+                        List<Roots> roots, Optional<Point> point, int digits, List<String> warnings,
+                        Names names, List<Where> where, List<List<Formula>> namedCells, boolean factored,
+                        java.util.Map<String, org.qchain.exact.Rational> substituted) {
+        this(source, form, nSymbol, validFrom, conditions, states, parameters, selection, rows, cols, cells,
+            recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where, namedCells, factored,
+            substituted, java.util.Map.of(), List.of());
+    }
+
+    /** The same result with the start and the set of final states it was asked for (see {@link #start()}). */
+    public ClosedResult withStart(java.util.Map<String, org.qchain.exact.Rational> startWeights, List<String> to) {
+        return new ClosedResult(source, form, nSymbol, validFrom, conditions, states, parameters, selection,
+            rows, cols, cells, recurrences, eigenvalues, longRun, roots, point, digits, warnings, names, where,
+            namedCells, factored, substituted, startWeights, to);
+    }
+
+    /** Whether the start is a distribution over more than one state. */
+    public boolean startsFromDistribution() {
+        return !start.isEmpty() && start.values().stream().noneMatch(org.qchain.exact.Rational::isOne);
     }
 
     /** As the canonical constructor with nothing substituted. */

@@ -8,7 +8,7 @@ import java.util.List;
  */
 public sealed interface Result permits StepResult, CertifiedStepResult, SymbolicStepResult, SensResult, ClosedResult,
     CheckResult, TransientResult, AvailabilityResult, RateSensResult, VerifyResult, ClassesResult, LongRunResult,
-    AbsorbResult, DistributionResult, TransientSensResult {
+    AbsorbResult, DistributionResult, TransientSensResult, SymbolicAvailabilityResult {
 
     /** The model file name as the user gave it. */
     String source();

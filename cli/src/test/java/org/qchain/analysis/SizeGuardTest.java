@@ -150,4 +150,65 @@ class SizeGuardTest {
         assertEquals(ErrorKey.RESULT_TOO_LARGE,
             assertThrows(QchainException.class, () -> Analysis.run(pump, tiny, NO_ENGINE)).key());
     }
+
+    /** A walk on S0..S{n-1} with random weights to the two neighbours and the last state absorbing. */
+    private static Path walk(Path dir, int n) throws java.io.IOException {
+        java.util.Random rnd = new java.util.Random(60);
+        StringBuilder sb = new StringBuilder("chain discrete\nstates");
+        for (int i = 0; i < n; i++) {
+            sb.append(" S").append(i);
+        }
+        sb.append('\n');
+        for (int i = 0; i < n - 1; i++) {
+            int up = 1 + rnd.nextInt(100);
+            int down = i == 0 ? 0 : 1 + rnd.nextInt(100);
+            int stay = 1 + rnd.nextInt(100);
+            int total = up + down + stay;
+            sb.append('S').append(i).append(" S").append(i + 1).append(' ').append(up).append('/').append(total)
+                .append('\n');
+            if (down > 0) {
+                sb.append('S').append(i).append(" S").append(i - 1).append(' ').append(down).append('/').append(total)
+                    .append('\n');
+            }
+        }
+        Path file = dir.resolve("walk.chain");
+        java.nio.file.Files.writeString(file, sb.toString());
+        return file;
+    }
+
+    // a rule of this project (common practice, no source): the estimate is of what is printed, so --brief, which
+    // leaves out the n x n tables, is guarded by the size of its few vectors
+    @Test
+    void briefSolvesAreGuardedByTheirVectorsNotByTheLeftOutTables(@org.junit.jupiter.api.io.TempDir Path dir)
+            throws java.io.IOException {
+        LoadedModel model = LoadedModel.load(walk(dir, 60), Map.of());
+        long limit = 500_000;
+        LongRunQuery full = new LongRunQuery(false, false, limit, LongRunQuery.DEFAULT_MAX_STATES, false);
+        LongRunQuery brief = new LongRunQuery(false, false, limit, LongRunQuery.DEFAULT_MAX_STATES, true);
+        AbsorbQuery plain = AbsorbQuery.plain();
+        QchainException e = assertThrows(QchainException.class, () -> Analysis.absorb(model, new AbsorbQuery(
+            plain.from(), plain.absorbing(), plain.rewards(), plain.discount(), plain.steps(), full), NO_ENGINE));
+        assertEquals(ErrorKey.SOLVE_TOO_LARGE, e.key());
+        org.qchain.result.AbsorbResult r = Analysis.absorb(model, new AbsorbQuery(plain.from(), plain.absorbing(),
+            plain.rewards(), plain.discount(), plain.steps(), brief));
+        assertEquals(59, r.expectedSteps().size());
+        // and the estimate of the vectors is still an upper bound of the digits printed
+        long printed = 0;
+        for (org.qchain.result.Formula f : r.expectedSteps()) {
+            printed += f.plain().length();
+        }
+        for (org.qchain.result.Formula f : r.variance()) {
+            printed += f.plain().length();
+        }
+        long total = printed;
+        org.junit.jupiter.api.Assertions.assertTrue(total < limit, () -> "printed " + total + " characters");
+        // a long run of the same chain: one closed class; the limit matrix left out
+        QchainException l = assertThrows(QchainException.class, () -> Analysis.longRun(model, full));
+        assertEquals(ErrorKey.SOLVE_TOO_LARGE, l.key());
+        org.qchain.result.LongRunResult lr = Analysis.longRun(model, brief);
+        org.qchain.result.LongRunResult.ClassLaw closed = lr.classes().stream().filter(c -> c.closed()).findFirst()
+            .orElseThrow();
+        assertEquals(java.util.List.of("S59"), closed.states());
+        assertEquals("1", closed.stationary().get(0).plain());
+    }
 }

@@ -87,6 +87,25 @@ class ClosedCommandTest {
             "--factor", "--format", "json")));
         out.add(new Case("rounds-factor.tex", List.of(rounds, "--from", "Draft1", "--to", "Draft2", "--factor",
             "--format", "latex")));
+        // issue 8: a start distribution and a set of final states, in every format: one formula built from the
+        // combined coefficients (checked against step in ClosedCombinationTest)
+        String plant = Cli.model("plant.chain");
+        for (String f : new String[] {"text", "json", "markdown", "latex"}) {
+            String ext = f.equals("text") ? "txt" : f.equals("markdown") ? "md" : f.equals("latex") ? "tex" : f;
+            out.add(new Case("plant-start-set." + ext, List.of(plant, "--start", "Up=9/10", "--start", "Worn=1/10",
+                "--to", "Worn,Down", "--format", f)));
+        }
+        out.add(new Case("plant-start-row.json", List.of(plant, "--start", "Up=9/10", "--start", "Worn=1/10",
+            "--format", "json")));
+        out.add(new Case("plant-start-gf.txt", List.of(plant, "--start", "Up=9/10", "--start", "Worn=1/10",
+            "--to", "Worn,Down", "--form", "gf")));
+        out.add(new Case("plant-start-recurrence.json", List.of(plant, "--start", "Up=9/10", "--start", "Worn=1/10",
+            "--to", "Worn,Down", "--form", "recurrence", "--format", "json")));
+        // the whole state space: probability 1, no condition (the terms of 1 - a - b cancel)
+        out.add(new Case("beacon-all.txt", List.of(BEACON, "--from", "Lit", "--to", "Lit,Dark")));
+        // a periodic chain: the start's limits of both subsequences
+        out.add(new Case("periodic-start-set.txt", List.of(Cli.model("closed-periodic.chain"), "--start",
+            "StopA=1/2", "--start", "Hub=1/2", "--to", "StopA,StopB")));
         return out.stream();
     }
 
@@ -180,7 +199,7 @@ class ClosedCommandTest {
 
     @Test
     void badOptionsAreUsageErrors() {
-        assertUsage("--to needs --from (the starting state) or --start (the initial state)", "closed", BEACON, "--to", "Lit");
+        assertUsage("--to needs --from (the starting state) or --start (the initial state or distribution)", "closed", BEACON, "--to", "Lit");
         assertUsage("--start and --from both name the starting state; give one", "closed", BEACON, "--start", "Lit",
             "--from", "Dark");
         assertUsage("invalid --from 'Gone': not a state of " + BEACON + " (states: Lit, Dark)", "closed", BEACON,

@@ -55,4 +55,22 @@ class HelpAndVersionTest {
     void subcommandVersionIsTheSame() {
         assertEquals(Cli.run("--version").out(), Cli.run("step", "--version").out());
     }
+
+    @Test
+    void theProcessBuildsOnlyTheCommandsItsArgumentsNeed() {
+        // start-up: --version alone needs no subcommand, a command only itself, help and the demo the whole tree
+        assertEquals(java.util.Set.of(), QchainCommand.newCommandLine(false, new Errors(), new String[] {"--version"})
+            .getSubcommands().keySet());
+        assertEquals(java.util.Set.of("step"), QchainCommand.newCommandLine(false, new Errors(),
+            new String[] {"step", "x.chain", "-n", "2"}).getSubcommands().keySet());
+        assertEquals(QchainCommand.SUBCOMMANDS.size(), QchainCommand.newCommandLine(false, new Errors(),
+            new String[] {"help", "step"}).getSubcommands().size());
+        assertEquals(QchainCommand.SUBCOMMANDS.size(), QchainCommand.newCommandLine(false, new Errors(),
+            new String[] {"--version", "step"}).getSubcommands().size());
+        java.io.StringWriter out = new java.io.StringWriter();
+        picocli.CommandLine cl = QchainCommand.newCommandLine(false, new Errors(), new String[] {"--version"});
+        cl.setOut(new java.io.PrintWriter(out, true));
+        assertEquals(0, cl.execute("--version"));
+        assertEquals(Cli.run("--version").out(), out.toString());
+    }
 }

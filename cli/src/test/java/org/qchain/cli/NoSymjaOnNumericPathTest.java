@@ -148,6 +148,7 @@ class NoSymjaOnNumericPathTest {
     @Test
     void checkAndDemoLoadNoSymbolicClass() throws Exception {
         assertNoForbidden(classesRequestedBy("check", Cli.model("plant.chain")));
+        assertNoForbidden(classesRequestedBy("check", Cli.model("generator-set.chain")));
         assertNoForbidden(classesRequestedBy("demo"));
     }
 

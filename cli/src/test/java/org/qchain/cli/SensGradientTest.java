@@ -116,11 +116,15 @@ class SensGradientTest {
     }
 
     @Test
-    void closedRefusesASetWithAMessage() {
-        Cli.Result r = Cli.run("closed", PUMP, "--from", "Up", "--to", "Worn,Down");
-        assertEquals(2, r.code(), r::toString);
-        assertEquals("qchain: closed --to takes one state: the closed form of the probability of a set of states is"
-            + " not computed (step and sens take --to Worn,Down)\nTry 'qchain closed --help' for more information.\n",
-            r.err());
+    void closedTakesASetAsStepAndSensDo() {
+        // issue 8: the closed form of the probability of a set (checked against step in ClosedCombinationTest)
+        Cli.Result r = Cli.run("closed", PUMP, "--from", "Up", "--to", "Worn,Down", "--format", "json");
+        assertEquals(0, r.code(), r::toString);
+        assertTrue(r.out().contains("\"from\":\"Up\",\"start\":{\"Up\":\"1\"},\"to\":\"Worn,Down\","
+            + "\"to_states\":[\"Worn\",\"Down\"],\"formula\":"), r.out());
+        Cli.Result twice = Cli.run("closed", PUMP, "--from", "Up", "--to", "Worn,Worn");
+        assertEquals(2, twice.code(), twice::toString);
+        assertEquals("qchain: --to names Worn twice; give each state once\nTry 'qchain closed --help' for more"
+            + " information.\n", twice.err());
     }
 }

@@ -151,8 +151,9 @@ class StartAndSeriesTest {
         assertEquals("qchain: --to needs --from (the starting state) or --start (the initial state or"
             + " distribution)\nTry 'qchain step --help' for more information.\n",
             usage("step", PLANT, "-n", "3", "--to", "Up").err());
-        assertEquals("qchain: --to needs --from (the starting state) or --start (the initial state)\nTry 'qchain"
-            + " closed --help' for more information.\n", usage("closed", PLANT, "--to", "Up").err());
+        assertEquals("qchain: --to needs --from (the starting state) or --start (the initial state or"
+            + " distribution)\nTry 'qchain closed --help' for more information.\n",
+            usage("closed", PLANT, "--to", "Up").err());
     }
 
     @Test
@@ -251,11 +252,14 @@ class StartAndSeriesTest {
     void closedTakesTheStartOfStep() {
         Cli.Result start = ok("closed", TWO, "--start", "Working", "--format", "json");
         Cli.Result from = ok("closed", TWO, "--from", "Working", "--format", "json");
-        assertEquals(from.out(), start.out());
-        assertEquals("qchain: closed --start takes one initial state (--start Healthy); the closed form from an"
-            + " initial distribution is not computed (step --start gives its exact values for given n)\nTry 'qchain"
-            + " closed --help' for more information.\n",
-            usage("closed", TWO, "--start", "Working=1/2", "--start", "Failed=1/2").err());
+        // --start adds the start's probabilities, as step does; the rest is the same
+        assertEquals(from.out(), start.out().replace(",\"start_distribution\":{\"Working\":\"1\"}", ""));
+        assertTrue(start.out().contains("\"start\":\"Working\",\"start_distribution\":{\"Working\":\"1\"},"),
+            start.out());
+        // issue 8: an initial distribution gives the closed form of start·P^n, one formula per state
+        Cli.Result dist = ok("closed", TWO, "--start", "Working=1/2", "--start", "Failed=1/2", "--format", "json");
+        assertTrue(dist.out().contains("\"start\":\"Working=1/2, Failed=1/2\",\"start_distribution\":"
+            + "{\"Working\":\"1/2\",\"Failed\":\"1/2\"},\"row\":["), dist.out());
     }
 
     @Test

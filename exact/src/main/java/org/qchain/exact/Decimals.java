@@ -93,6 +93,17 @@ public final class Decimals {
 
     /** A rounded value {@code mantissa × 10^(exponent - digits + 1)} with {@code 10^(digits-1) <= mantissa < 10^digits}. */
     record Rounded(BigInteger mantissa, long exponent) {
+        // equals and hashCode written out: a record's generated ones link method handles at their first call, which
+        // spins about twenty classes in every process that prints a decimal
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Rounded r && r.exponent == exponent && r.mantissa.equals(mantissa);
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * mantissa.hashCode() + Long.hashCode(exponent);
+        }
     }
 
     /** The rounding of the magnitude that gives {@code mode} on a value of the given sign. */

@@ -85,7 +85,7 @@ public final class Rational implements Comparable<Rational> {
         if (q.equals(BigInteger.ONE)) {
             return new Rational(p, q);
         }
-        BigInteger g = p.gcd(q);
+        BigInteger g = Gcd.of(p, q);
         if (!g.equals(BigInteger.ONE)) {
             p = p.divide(g);
             q = q.divide(g);
@@ -211,12 +211,16 @@ public final class Rational implements Comparable<Rational> {
             return this;
         }
         if (den.equals(o.den)) {
+            if (num.equals(o.num)) {
+                // 2 p/q in lowest terms without a gcd: gcd(2p, q) = gcd(2, q) as gcd(p, q) = 1
+                return den.testBit(0) ? new Rational(num.shiftLeft(1), den) : new Rational(num, den.shiftRight(1));
+            }
             return of(num.add(o.num), den);
         }
         // Henrici's sum (D. E. Knuth, The Art of Computer Programming, vol. 2, 4.5.1): with g = gcd(q1, q2),
         // t = p1 (q2/g) + p2 (q1/g) and h = gcd(t, g), the sum is (t/h) / ((q1/g)(q2/h)) in lowest terms; the gcds
         // are of the factors, not of the double-length cross products
-        BigInteger g = den.gcd(o.den);
+        BigInteger g = Gcd.of(den, o.den);
         if (g.equals(BigInteger.ONE)) {
             BigInteger t = num.multiply(o.den).add(o.num.multiply(den));
             return t.signum() == 0 ? ZERO : new Rational(t, den.multiply(o.den));
@@ -226,7 +230,7 @@ public final class Rational implements Comparable<Rational> {
         if (t.signum() == 0) {
             return ZERO;
         }
-        BigInteger h = t.gcd(g);
+        BigInteger h = Gcd.of(t, g);
         return h.equals(BigInteger.ONE) ? new Rational(t, d1.multiply(o.den))
             : new Rational(t.divide(h), d1.multiply(o.den.divide(h)));
     }
@@ -252,8 +256,8 @@ public final class Rational implements Comparable<Rational> {
             return new Rational(num.multiply(num), den.multiply(den));
         }
         // cross-reduce first so the products stay small: gcd(p1, q2) and gcd(p2, q1)
-        BigInteger g1 = num.gcd(o.den);
-        BigInteger g2 = o.num.gcd(den);
+        BigInteger g1 = Gcd.of(num, o.den);
+        BigInteger g2 = Gcd.of(o.num, den);
         BigInteger p = num.divide(g1).multiply(o.num.divide(g2));
         BigInteger q = den.divide(g2).multiply(o.den.divide(g1));
         return new Rational(p, q);

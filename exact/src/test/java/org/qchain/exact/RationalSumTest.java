@@ -39,6 +39,9 @@ class RationalSumTest {
             check(fa.subtract(fb), a.subtract(b));
             check(fa.multiply(fb), a.multiply(b));
             check(fa.multiply(fa), a.multiply(a));
+            // doubling (an even and an odd denominator both occur), also through an equal but distinct object
+            check(fa.add(fa), a.add(a));
+            check(fa.add(fa), a.add(Rational.of(a.numerator(), a.denominator())));
         }
     }
 

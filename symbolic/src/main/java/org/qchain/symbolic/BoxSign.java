@@ -89,6 +89,57 @@ public final class BoxSign {
             || Squares.quadraticIn(terms, domains, false) || Squares.products(terms, domains, false));
     }
 
+    /**
+     * Whether a polynomial of the parameter ring is non-zero at every point of the given parameters' domains (open
+     * ends excluded, closed ends included), over the parameters it uses.
+     *
+     * @param c       the polynomial
+     * @param domains the domain of each parameter by name; a parameter it uses without a domain means "not shown"
+     * @return true if proved
+     */
+    public static boolean nonZero(Poly c, Map<String, Domain> domains) {
+        List<String> vars = c.occurringVariables();
+        if (vars.isEmpty()) {
+            return !c.isZero();
+        }
+        if (!domains.keySet().containsAll(vars)) {
+            return false;
+        }
+        return nonZero(terms(c, vars), vars.stream().map(domains::get).toList());
+    }
+
+    /**
+     * Whether a polynomial of the parameter ring is positive at every point of the given parameters' domains.
+     *
+     * @param c       the polynomial
+     * @param domains the domain of each parameter by name; a parameter it uses without a domain means "not shown"
+     * @return true if proved
+     */
+    public static boolean positive(Poly c, Map<String, Domain> domains) {
+        List<String> vars = c.occurringVariables();
+        if (vars.isEmpty()) {
+            return c.constantValue().orElseThrow().signum() > 0;
+        }
+        if (!domains.keySet().containsAll(vars)) {
+            return false;
+        }
+        return positive(terms(c, vars), vars.stream().map(domains::get).toList());
+    }
+
+    /** The terms of {@code c} with exponent vectors over {@code vars} only (the parameters it uses). */
+    private static Map<List<Integer>, Rational> terms(Poly c, List<String> vars) {
+        Map<List<Integer>, Rational> terms = new java.util.HashMap<>();
+        List<String> ringVars = c.ring().variables();
+        for (Poly.Term t : c.terms()) {
+            List<Integer> e = new java.util.ArrayList<>();
+            for (String v : vars) {
+                e.add(t.exponents().get(ringVars.indexOf(v)));
+            }
+            terms.merge(e, t.coefficient(), Rational::add);
+        }
+        return terms;
+    }
+
     /** Sample values inside a domain: 1/7, 1/2 and 6/7 of the way across, or lo + 1/2, 1, 10 if unbounded. */
     private static final Rational[] FRACTIONS = {Rational.of(1, 7), Rational.of(1, 2), Rational.of(6, 7)};
     private static final Rational[] STEPS = {Rational.of(1, 2), Rational.ONE, Rational.of(10)};

@@ -441,10 +441,18 @@ public final class Poly {
             return ring.one();
         }
         // modular gcd over Z (measured about 20x faster than JAS's default gcd over Q; see package-info)
+        GenPolynomial<BigInteger> a = PolyUtil.integerFromRationalCoefficients(ring.jasZ, p);
+        GenPolynomial<BigInteger> b = PolyUtil.integerFromRationalCoefficients(ring.jasZ, o.p);
         GreatestCommonDivisorAbstract<BigInteger> engine = new GreatestCommonDivisorModular<ModLong>();
-        GenPolynomial<BigInteger> g = engine.gcd(PolyUtil.integerFromRationalCoefficients(ring.jasZ, p),
-            PolyUtil.integerFromRationalCoefficients(ring.jasZ, o.p));
-        return new Poly(ring, PolyUtil.fromIntegerCoefficients(ring.jas, g)).normalizedAssociate();
+        Poly g = new Poly(ring, PolyUtil.fromIntegerCoefficients(ring.jas, engine.gcd(a, b))).normalizedAssociate();
+        if (divideExact(g).isPresent() && o.divideExact(g).isPresent()) {
+            return g;
+        }
+        // JAS's modular gcd (jas 2.7.200) returned a non-divisor for some trivariate inputs, even for gcd(x, x)
+        // (coefficients near 2^27: a failed reconstruction); a gcd is only used once it divides both, and the
+        // subresultant algorithm over Z, slower but without reconstruction, stands in
+        GenPolynomial<BigInteger> s = new edu.jas.ufd.GreatestCommonDivisorSubres<BigInteger>().gcd(a, b);
+        return new Poly(ring, PolyUtil.fromIntegerCoefficients(ring.jas, s)).normalizedAssociate();
     }
 
     /**

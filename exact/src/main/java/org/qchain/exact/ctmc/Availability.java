@@ -10,6 +10,7 @@ import org.qchain.exact.QchainException;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.linear.LinearSolver;
+import org.qchain.exact.longrun.Arithmetic;
 import org.qchain.exact.linear.SingularSystemException;
 
 /**
@@ -26,7 +27,9 @@ import org.qchain.exact.linear.SingularSystemException;
  *       {@code -Q_UU m = 1} (down states made absorbing).
  * </ul>
  * Sources: R. Billinton and R. N. Allan, "Reliability Evaluation of Engineering Systems", ch. 9 (frequency and
- * duration, mean times; from memory); the linear systems go through {@link LinearSolver}.
+ * duration, mean times; from memory). Written once over an {@link Arithmetic}: exact rationals (the linear systems
+ * through {@link LinearSolver}), or rational functions of the parameters (the symbolic module's fraction-free solver),
+ * which gives the same figures as formulas.
  */
 public final class Availability {
     /** The default hours per year: 365.25 days of 24 hours. */
@@ -36,8 +39,10 @@ public final class Availability {
     }
 
     /**
-     * The figures.
+     * The figures, in the arithmetic they were computed in (exact rationals, or rational functions of the
+     * parameters, valid for generic parameter values).
      *
+     * @param <T>                   the element type
      * @param up                    the up states (indexes, ascending)
      * @param stationary            the stationary law, one value per state
      * @param availability          steady-state availability
@@ -50,9 +55,9 @@ public final class Availability {
      * @param hoursPerYear          the hours per year used
      * @param downHoursPerYear      {@code (1 - A) × hoursPerYear}
      */
-    public record Figures(List<Integer> up, List<Rational> stationary, Rational availability, Rational unavailability,
-                          Rational failureFrequency, Optional<Rational> meanUpTime, Optional<Rational> meanDownTime,
-                          List<Optional<Rational>> mttf, Rational hoursPerYear, Rational downHoursPerYear) {
+    public record Figures<T>(List<Integer> up, List<T> stationary, T availability, T unavailability,
+                             T failureFrequency, Optional<T> meanUpTime, Optional<T> meanDownTime,
+                             List<Optional<T>> mttf, T hoursPerYear, T downHoursPerYear) {
         /** Copies the lists. */
         public Figures {
             up = List.copyOf(up);
@@ -62,7 +67,7 @@ public final class Availability {
     }
 
     /**
-     * Every figure of a repairable system.
+     * Every figure of a repairable system, exactly.
      *
      * @param q            a generator
      * @param up           the up states (indexes)
@@ -71,33 +76,51 @@ public final class Availability {
      * @throws QchainException DEGENERATE_AVAILABILITY if the stationary law is not unique (more than one closed
      *                         class, the states named) or no state is up
      */
-    public static Figures of(RationalMatrix q, List<Integer> up, Rational hoursPerYear) {
-        int n = q.rows();
+    public static Figures<Rational> of(RationalMatrix q, List<Integer> up, Rational hoursPerYear) {
+        return of(Arithmetic.RATIONAL, rows(q), up, hoursPerYear);
+    }
+
+    /**
+     * Every figure of a repairable system, in any arithmetic: the one algorithm behind the exact figures and the
+     * formulas in the parameters (where a rate is a non-zero function, it is taken as positive: the figures then
+     * hold for the parameter values at which no rate and no denominator of theirs vanishes).
+     *
+     * @param <T>          the element type
+     * @param f            the arithmetic, with its exact solver
+     * @param q            a generator, by rows (rows sum to 0)
+     * @param up           the up states (indexes)
+     * @param hoursPerYear hours per year for the down time, positive
+     * @return the figures
+     * @throws QchainException DEGENERATE_AVAILABILITY if the stationary law is not unique (more than one closed
+     *                         class) or no state is up
+     */
+    public static <T> Figures<T> of(Arithmetic<T> f, List<List<T>> q, List<Integer> up, T hoursPerYear) {
+        int n = q.size();
         boolean[] isUp = upMask(n, up);
-        Rational[] pi = stationary(q);
-        Rational a = Rational.ZERO;
-        Rational omega = Rational.ZERO;
+        List<T> pi = stationary(f, q);
+        T a = f.zero();
+        T omega = f.zero();
         for (int i = 0; i < n; i++) {
             if (isUp[i]) {
-                a = a.add(pi[i]);
+                a = f.add(a, pi.get(i));
                 for (int j = 0; j < n; j++) {
-                    if (!isUp[j]) {
-                        omega = omega.add(pi[i].multiply(q.get(i, j)));
+                    if (!isUp[j] && !f.isZero(q.get(i).get(j))) {
+                        omega = f.add(omega, f.multiply(pi.get(i), q.get(i).get(j)));
                     }
                 }
             }
         }
-        Rational u = Rational.ONE.subtract(a);
-        Optional<Rational> meanUp = omega.isZero() ? Optional.empty() : Optional.of(a.divide(omega));
-        Optional<Rational> meanDown = omega.isZero() ? Optional.empty() : Optional.of(u.divide(omega));
+        T u = f.subtract(f.one(), a);
+        Optional<T> meanUp = f.isZero(omega) ? Optional.empty() : Optional.of(f.divide(a, omega));
+        Optional<T> meanDown = f.isZero(omega) ? Optional.empty() : Optional.of(f.divide(u, omega));
         List<Integer> ups = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             if (isUp[i]) {
                 ups.add(i);
             }
         }
-        return new Figures(ups, Arrays.asList(pi), a, u, omega, meanUp, meanDown, mttf(q, up),
-            hoursPerYear, u.multiply(hoursPerYear));
+        return new Figures<>(ups, pi, a, u, omega, meanUp, meanDown, mttf(f, q, up), hoursPerYear,
+            f.multiply(u, hoursPerYear));
     }
 
     /**
@@ -108,8 +131,12 @@ public final class Availability {
      * @throws QchainException DEGENERATE_AVAILABILITY if the law is not unique
      */
     public static Rational[] stationary(RationalMatrix q) {
+        return stationary(Arithmetic.RATIONAL, rows(q)).toArray(new Rational[0]);
+    }
+
+    private static <T> List<T> stationary(Arithmetic<T> f, List<List<T>> q) {
         try {
-            return LinearSolver.leftNullVector(q);
+            return f.leftNullVector(q);
         } catch (SingularSystemException e) {
             throw new QchainException(ErrorKey.DEGENERATE_AVAILABILITY,
                 "the chain has more than one closed class, so its long-run law depends on the start; steady-state"
@@ -127,49 +154,75 @@ public final class Availability {
      * @throws QchainException DEGENERATE_AVAILABILITY if no state is up
      */
     public static List<Optional<Rational>> mttf(RationalMatrix q, List<Integer> up) {
-        int n = q.rows();
+        return mttf(Arithmetic.RATIONAL, rows(q), up);
+    }
+
+    /**
+     * As {@link #mttf(RationalMatrix, List)}, in any arithmetic (a non-zero rate counts as positive).
+     *
+     * @param <T> the element type
+     * @param f   the arithmetic
+     * @param q   a generator, by rows
+     * @param up  the up states
+     * @return per state, as {@link #mttf(RationalMatrix, List)}
+     * @throws QchainException DEGENERATE_AVAILABILITY if no state is up
+     */
+    public static <T> List<Optional<T>> mttf(Arithmetic<T> f, List<List<T>> q, List<Integer> up) {
+        int n = q.size();
         boolean[] isUp = upMask(n, up);
-        boolean[] fails = canReachDown(q, isUp);
+        boolean[][] rate = new boolean[n][n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                rate[i][j] = i != j && !f.isZero(q.get(i).get(j));
+            }
+        }
+        boolean[] fails = canReachDown(rate, isUp);
         // an up state that may wander into an up state which can never fail has an infinite mean time to failure
         boolean[] never = new boolean[n];
         for (int i = 0; i < n; i++) {
             never[i] = isUp[i] && !fails[i];
         }
-        boolean[] infinite = backward(q, never, isUp);
+        boolean[] infinite = backward(rate, never, isUp);
         int[] idx = new int[n];
         int m = 0;
         for (int i = 0; i < n; i++) {
             idx[i] = isUp[i] && !infinite[i] ? m++ : -1;
         }
-        List<Optional<Rational>> out = new ArrayList<>();
-        Rational[] x = new Rational[0];
+        List<Optional<T>> out = new ArrayList<>();
+        List<T> x = List.of();
         if (m > 0) {
             // -Q restricted to the up states that fail for sure: non-singular (each leaks to a down state), and they
             // never enter an up state outside the set
-            Rational[][] a = new Rational[m][m];
-            Rational[][] b = new Rational[m][1];
+            List<List<T>> a = new ArrayList<>();
+            List<List<T>> b = new ArrayList<>();
             for (int i = 0; i < n; i++) {
                 if (idx[i] >= 0) {
+                    List<T> row = new ArrayList<>();
                     for (int j = 0; j < n; j++) {
                         if (idx[j] >= 0) {
-                            a[idx[i]][idx[j]] = q.get(i, j).negate();
+                            row.add(f.negate(q.get(i).get(j)));
                         }
                     }
-                    b[idx[i]][0] = Rational.ONE;
+                    a.add(row);
+                    b.add(List.of(f.one()));
                 }
             }
-            RationalMatrix s = LinearSolver.solve(RationalMatrix.of(a), RationalMatrix.of(b));
-            x = new Rational[m];
-            for (int k = 0; k < m; k++) {
-                x[k] = s.get(k, 0);
-            }
+            x = f.solve(a, b).stream().map(r -> r.get(0)).toList();
         }
         for (int i = 0; i < n; i++) {
             if (!isUp[i]) {
-                out.add(Optional.of(Rational.ZERO));
+                out.add(Optional.of(f.zero()));
             } else {
-                out.add(idx[i] >= 0 ? Optional.of(x[idx[i]]) : Optional.empty());
+                out.add(idx[i] >= 0 ? Optional.of(x.get(idx[i])) : Optional.empty());
             }
+        }
+        return out;
+    }
+
+    private static List<List<Rational>> rows(RationalMatrix q) {
+        List<List<Rational>> out = new ArrayList<>(q.rows());
+        for (int i = 0; i < q.rows(); i++) {
+            out.add(Arrays.asList(q.row(i)));
         }
         return out;
     }
@@ -186,19 +239,19 @@ public final class Availability {
     }
 
     /** Whether each state can reach a down state (a down state trivially can), by a backward search. */
-    private static boolean[] canReachDown(RationalMatrix q, boolean[] isUp) {
-        boolean[] down = new boolean[q.rows()];
-        boolean[] all = new boolean[q.rows()];
+    private static boolean[] canReachDown(boolean[][] rate, boolean[] isUp) {
+        boolean[] down = new boolean[rate.length];
+        boolean[] all = new boolean[rate.length];
         for (int i = 0; i < down.length; i++) {
             down[i] = !isUp[i];
             all[i] = true;
         }
-        return backward(q, down, all);
+        return backward(rate, down, all);
     }
 
     /** The states that reach a target through states in {@code via} (targets included), by a backward search. */
-    private static boolean[] backward(RationalMatrix q, boolean[] target, boolean[] via) {
-        int n = q.rows();
+    private static boolean[] backward(boolean[][] rate, boolean[] target, boolean[] via) {
+        int n = rate.length;
         boolean[] r = new boolean[n];
         ArrayDeque<Integer> queue = new ArrayDeque<>();
         for (int i = 0; i < n; i++) {
@@ -210,7 +263,7 @@ public final class Availability {
         while (!queue.isEmpty()) {
             int j = queue.poll();
             for (int i = 0; i < n; i++) {
-                if (!r[i] && via[i] && i != j && q.get(i, j).signum() > 0) {
+                if (!r[i] && via[i] && rate[i][j]) {
                     r[i] = true;
                     queue.add(i);
                 }

@@ -12,7 +12,7 @@
  *
  * <pre>{@code
  * RationalMatrix q = Chains.transitionMatrix(model);           // the generator
- * Availability.Figures f = Availability.of(q, model.upStates().orElseThrow(), Availability.HOURS_PER_YEAR);
+ * Availability.Figures<Rational> f = Availability.of(q, model.upStates().orElseThrow(), Availability.HOURS_PER_YEAR);
  * f.availability();                                             // exact, e.g. 250/251
  * }</pre>
  */

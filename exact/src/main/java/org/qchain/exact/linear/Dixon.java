@@ -192,7 +192,9 @@ final class Dixon {
         BigInteger den = BigInteger.ONE;
         BigInteger half = mod.shiftRight(1);
         BigInteger[][] out = new BigInteger[n][m];
-        // first pass: find the common denominator
+        // first pass: find the common denominator; an entry's numerator over the denominator known so far is kept,
+        // so only the entries before the last change of the denominator are computed again
+        int redo = 0;
         for (int i = 0; i < n; i++) {
             for (int c = 0; c < m; c++) {
                 BigInteger v = symmetric(u[i][c].multiply(den).mod(mod), mod, half);
@@ -200,13 +202,16 @@ final class Dixon {
                     BigInteger[] nd = wang(u[i][c], mod, numBound);
                     BigInteger d = nd[1];
                     den = den.divide(den.gcd(d)).multiply(d);
+                    v = symmetric(u[i][c].multiply(den).mod(mod), mod, half);
+                    redo = i * m + c;
                 }
+                out[i][c] = v;
             }
         }
-        for (int i = 0; i < n; i++) {
-            for (int c = 0; c < m; c++) {
-                out[i][c] = symmetric(u[i][c].multiply(den).mod(mod), mod, half);
-            }
+        for (int k = 0; k < redo; k++) {
+            int i = k / m;
+            int c = k % m;
+            out[i][c] = symmetric(u[i][c].multiply(den).mod(mod), mod, half);
         }
         return new Bareiss.Solution(out, den);
     }

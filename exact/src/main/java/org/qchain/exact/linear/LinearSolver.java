@@ -45,13 +45,24 @@ public final class LinearSolver {
      * @see #solve(RationalMatrix, RationalMatrix)
      */
     public static RationalMatrix solve(RationalMatrix a, RationalMatrix b, Progress progress) {
+        return solveCommon(a, b, progress).reduced();
+    }
+
+    /**
+     * The solution X of {@code A X = B} over one common denominator, not reduced entry by entry: for callers that
+     * compute further with X (see {@link CommonSolution}).
+     *
+     * @see #solve(RationalMatrix, RationalMatrix, Progress)
+     */
+    public static CommonSolution solveCommon(RationalMatrix a, RationalMatrix b, Progress progress) {
         requireSquare(a);
         if (b.rows() != a.rows()) {
             throw new IllegalArgumentException("right-hand side has " + b.rows() + " rows, the matrix " + a.rows());
         }
         int n = a.rows();
         int m = b.cols();
-        BigInteger[][] ai = new BigInteger[n][n];
+        BigInteger[] rowLcm = new BigInteger[n];
+        BigInteger[][] ai = integerRows(a, rowLcm);
         BigInteger[][] bi = new BigInteger[n][m];
         // each row of A times the lcm of its denominators (A stays word-size where it was), the right-hand sides
         // times the same row factor and then by one common denominator D of them all: (L A)(D X) = D L B, so a
@@ -59,14 +70,7 @@ public final class LinearSolver {
         Rational[][] lb = new Rational[n][m];
         BigInteger d = BigInteger.ONE;
         for (int i = 0; i < n; i++) {
-            BigInteger l = BigInteger.ONE;
-            for (int j = 0; j < n; j++) {
-                l = lcm(l, a.get(i, j).denominator());
-            }
-            for (int j = 0; j < n; j++) {
-                ai[i][j] = scaled(a.get(i, j), l);
-            }
-            Rational rl = Rational.of(l);
+            Rational rl = Rational.of(rowLcm[i]);
             for (int j = 0; j < m; j++) {
                 lb[i][j] = b.get(i, j).multiply(rl);
                 d = lcm(d, lb[i][j].denominator());
@@ -78,14 +82,56 @@ public final class LinearSolver {
             }
         }
         Bareiss.Solution s = solveInteger(ai, bi, progress);
-        BigInteger den = s.denominator().multiply(d);
-        Rational[][] x = new Rational[n][m];
+        return new CommonSolution(s.numerators(), s.denominator().multiply(d));
+    }
+
+    /**
+     * The solution x of {@code A x = v / d} for an integer vector v and a positive integer d, over one common
+     * denominator: a solution over a common denominator ({@link CommonSolution#column}) as the right-hand side of
+     * a second solve, without reducing its entries or taking the lcm of their denominators first.
+     *
+     * @param a square n x n matrix
+     * @param v n integers
+     * @param d positive
+     * @return the n x 1 solution
+     * @throws IllegalArgumentException if the shapes do not fit or d is not positive
+     * @throws SingularSystemException  if {@code A} is singular
+     */
+    public static CommonSolution solveCommon(RationalMatrix a, BigInteger[] v, BigInteger d, Progress progress) {
+        requireSquare(a);
+        if (v.length != a.rows()) {
+            throw new IllegalArgumentException("right-hand side has " + v.length + " rows, the matrix " + a.rows());
+        }
+        if (d.signum() <= 0) {
+            throw new IllegalArgumentException("the denominator must be positive, not " + d);
+        }
+        int n = a.rows();
+        BigInteger[] rowLcm = new BigInteger[n];
+        BigInteger[][] ai = integerRows(a, rowLcm);
+        // (L A)(d x) = L v
+        BigInteger[][] bi = new BigInteger[n][1];
         for (int i = 0; i < n; i++) {
-            for (int j = 0; j < m; j++) {
-                x[i][j] = Rational.of(s.numerators()[i][j], den);
+            bi[i][0] = v[i].multiply(rowLcm[i]);
+        }
+        Bareiss.Solution s = solveInteger(ai, bi, progress);
+        return new CommonSolution(s.numerators(), s.denominator().multiply(d));
+    }
+
+    /** Each row of {@code a} times the lcm of its denominators (stored in {@code rowLcm}), as integers. */
+    private static BigInteger[][] integerRows(RationalMatrix a, BigInteger[] rowLcm) {
+        int n = a.rows();
+        BigInteger[][] ai = new BigInteger[n][n];
+        for (int i = 0; i < n; i++) {
+            BigInteger l = BigInteger.ONE;
+            for (int j = 0; j < n; j++) {
+                l = lcm(l, a.get(i, j).denominator());
+            }
+            rowLcm[i] = l;
+            for (int j = 0; j < n; j++) {
+                ai[i][j] = scaled(a.get(i, j), l);
             }
         }
-        return RationalMatrix.of(x);
+        return ai;
     }
 
     /**
@@ -111,15 +157,11 @@ public final class LinearSolver {
         int k = b.rows();
         // X A = B with A = L^-1 A' (L = diag of row multipliers): Y A' = B with X = Y L; solve A'^T Y^T = B^T
         BigInteger[] mult = new BigInteger[n];
+        BigInteger[][] ai = integerRows(a, mult);
         Rational[][] at = new Rational[n][n];
         for (int i = 0; i < n; i++) {
-            BigInteger l = BigInteger.ONE;
             for (int j = 0; j < n; j++) {
-                l = lcm(l, a.get(i, j).denominator());
-            }
-            mult[i] = l;
-            for (int j = 0; j < n; j++) {
-                at[j][i] = Rational.of(scaled(a.get(i, j), l));
+                at[j][i] = Rational.of(ai[i][j]);
             }
         }
         Rational[][] bt = new Rational[n][k];
@@ -187,17 +229,11 @@ public final class LinearSolver {
     public static Rational determinant(RationalMatrix a) {
         requireSquare(a);
         int n = a.rows();
-        BigInteger[][] ai = new BigInteger[n][n];
+        BigInteger[] rowLcm = new BigInteger[n];
+        BigInteger[][] ai = integerRows(a, rowLcm);
         BigInteger scale = BigInteger.ONE;
-        for (int i = 0; i < n; i++) {
-            BigInteger l = BigInteger.ONE;
-            for (int j = 0; j < n; j++) {
-                l = lcm(l, a.get(i, j).denominator());
-            }
+        for (BigInteger l : rowLcm) {
             scale = scale.multiply(l);
-            for (int j = 0; j < n; j++) {
-                ai[i][j] = scaled(a.get(i, j), l);
-            }
         }
         return Rational.of(Bareiss.determinant(ai, Thread.currentThread()), scale);
     }

@@ -3,7 +3,10 @@
  * (stationary laws), determinants and inverses, all over the rationals and all without a fraction inside the
  * elimination.
  *
- * <p>{@link org.qchain.exact.linear.LinearSolver} is the whole public API. Behind it, each equation is scaled to
+ * <p>{@link org.qchain.exact.linear.LinearSolver} is the public API, with
+ * {@link org.qchain.exact.linear.CommonSolution} for a solution kept over one common denominator (an integer matrix
+ * and one denominator, reduced entry by entry only when asked: for callers that solve again with it or combine its
+ * entries, as the variance of an absorption time does). Behind it, each equation is scaled to
  * integers; word-size systems are solved by p-adic lifting (Dixon 1982) on an LU decomposition modulo a prime that
  * keeps the band of a banded chain, others by fraction-free Gauss-Jordan elimination (Bareiss 1968) with one common
  * denominator. A singular system raises {@link org.qchain.exact.linear.SingularSystemException}, which names the

@@ -382,7 +382,17 @@ public final class ChainEngine {
                 rhs.get(a).set(w + 1 + b, q.get(tr.get(a)).get(absList.get(b)));
             }
         }
-        List<List<T>> x = solveTransient(f, q, tr, rhs, names, continuous);
+        List<List<T>> x;
+        List<T> variance = new ArrayList<>();
+        if (withN) {
+            x = solveTransient(f, q, tr, rhs, names, continuous);
+        } else {
+            // without N: N t from one more solve (I − Q) y = t, done with the variance by the arithmetic
+            Arithmetic.Moments<T> mo = solveTransient(f, q, tr, names, continuous,
+                a -> f.solveWithVariance(a, rhs, w, continuous));
+            x = mo.solution();
+            variance = mo.variance();
+        }
         List<List<T>> nMat = new ArrayList<>();
         List<T> t = new ArrayList<>();
         List<List<T>> b = new ArrayList<>();
@@ -393,34 +403,19 @@ public final class ChainEngine {
             t.add(row.get(w));
             b.add(row.subList(w + 1, row.size()));
         }
-        // N t: from N, or from one more solve (I − Q) y = t
-        List<T> nt = new ArrayList<>();
         if (withN) {
             for (int a = 0; a < k; a++) {
+                // N t from N; then ((2N − I) t)_a − t_a^2, or (2N t)_a − t_a^2 in continuous time
                 T s = f.zero();
                 for (int c = 0; c < k; c++) {
                     s = f.add(s, f.multiply(nMat.get(a).get(c), t.get(c)));
                 }
-                nt.add(s);
+                s = f.add(s, s);
+                if (!continuous) {
+                    s = f.subtract(s, t.get(a));
+                }
+                variance.add(f.subtract(s, f.multiply(t.get(a), t.get(a))));
             }
-        } else {
-            List<List<T>> tc = zeros(f, k, 1);
-            for (int a = 0; a < k; a++) {
-                tc.get(a).set(0, t.get(a));
-            }
-            for (List<T> row : solveTransient(f, q, tr, tc, names, continuous)) {
-                nt.add(row.get(0));
-            }
-        }
-        List<T> variance = new ArrayList<>();
-        for (int a = 0; a < k; a++) {
-            // ((2N − I) t)_a − t_a^2, or (2N t)_a − t_a^2 in continuous time
-            T s = nt.get(a);
-            s = f.add(s, s);
-            if (!continuous) {
-                s = f.subtract(s, t.get(a));
-            }
-            variance.add(f.subtract(s, f.multiply(t.get(a), t.get(a))));
         }
         return new Absorption<>(tr, absList, nMat, t, variance, b);
     }
@@ -515,6 +510,12 @@ public final class ChainEngine {
     /** Solves (I − Q) X = R on the transient states, naming the states if the system is singular. */
     private static <T> List<List<T>> solveTransient(Arithmetic<T> f, List<List<T>> p, List<Integer> tr,
             List<List<T>> r, List<String> names, boolean continuous) {
+        return solveTransient(f, p, tr, names, continuous, a -> f.solve(a, r));
+    }
+
+    /** Runs {@code solve} on (I − Q) (or −Q) on the transient states, naming the states if it is singular. */
+    private static <T, R> R solveTransient(Arithmetic<T> f, List<List<T>> p, List<Integer> tr, List<String> names,
+            boolean continuous, java.util.function.Function<List<List<T>>, R> solve) {
         int k = tr.size();
         List<List<T>> a = zeros(f, k, k);
         for (int x = 0; x < k; x++) {
@@ -524,7 +525,7 @@ public final class ChainEngine {
             }
         }
         try {
-            return f.solve(a, r);
+            return solve.apply(a);
         } catch (SingularSystemException e) {
             throw new SingularSystemException(e.index(), (continuous ? "−Q" : "I − Q") + " on the transient states "
                 + tr.stream().map(names::get).collect(Collectors.joining(", ")) + " has no inverse");

@@ -49,7 +49,7 @@ class AvailabilityTest {
             Rational lam = Rational.of(1 + rnd.nextInt(20), 1000 + rnd.nextInt(9000));
             Rational mu = Rational.of(1 + rnd.nextInt(20), 1 + rnd.nextInt(48));
             RationalMatrix q = generator(new Rational[][] {{Z, lam}, {mu, Z}});
-            Availability.Figures f = Availability.of(q, List.of(0), Availability.HOURS_PER_YEAR);
+            Availability.Figures<Rational> f = Availability.of(q, List.of(0), Availability.HOURS_PER_YEAR);
             Rational s = lam.add(mu);
             assertEquals(mu.divide(s), f.availability());
             assertEquals(Optional.of(lam.reciprocal()), f.mttf().get(0));
@@ -68,7 +68,7 @@ class AvailabilityTest {
         for (int trial = 0; trial < 5; trial++) {
             Rational lam = Rational.of(1 + rnd.nextInt(9), 100 + rnd.nextInt(900));
             Rational mu = Rational.of(1 + rnd.nextInt(9), 1 + rnd.nextInt(24));
-            Availability.Figures f = Availability.of(twoUnitsOneCrew(lam, mu), List.of(0, 1), Rational.of(8760));
+            Availability.Figures<Rational> f = Availability.of(twoUnitsOneCrew(lam, mu), List.of(0, 1), Rational.of(8760));
             Rational lam2 = lam.multiply(lam);
             Rational mttf = Rational.of(3).multiply(lam).add(mu).divide(Rational.of(2).multiply(lam2));
             assertEquals(Optional.of(mttf), f.mttf().get(0));

@@ -70,7 +70,13 @@ class LinearSolverTest {
         a = RationalMatrix.of(e);
         RationalMatrix b = random(rnd, n, m, 20, 7, 0.2);
         FieldDecompositionSolver<BigFraction> ref = new FieldLUDecomposition<>(hip(a)).getSolver();
-        assertSame(ref.solve(hip(b)), LinearSolver.solve(a, b));
+        FieldMatrix<BigFraction> refX = ref.solve(hip(b));
+        assertSame(refX, LinearSolver.solve(a, b));
+        // a solution over its common denominator as the right-hand side of a second solve: A y = X e_0
+        CommonSolution x = LinearSolver.solveCommon(a, b, org.qchain.exact.Progress.NONE);
+        assertSame(refX, x.reduced());
+        CommonSolution y = LinearSolver.solveCommon(a, x.column(0), x.denominator(), org.qchain.exact.Progress.NONE);
+        assertSame(ref.solve(refX.getColumnMatrix(0)), y.reduced());
         assertSame(ref.getInverse(), LinearSolver.inverse(a));
         BigFraction det = new FieldLUDecomposition<>(hip(a)).getDeterminant();
         assertEquals(Rational.of(det.getNumerator(), det.getDenominator()), LinearSolver.determinant(a));

@@ -79,4 +79,45 @@ class BriefAbsorptionTest {
             }
         }
     }
+
+    // common practice, no source: as above, on chains large enough for p-adic lifting (the variance then comes from
+    // the two solves over common denominators), and the arithmetic's default (solves and sums of reduced fractions)
+    // gives the same variance as the rational override
+    @Test
+    void sameVarianceOnLargerChainsAndFromTheDefaultMethod() {
+        Random rnd = new Random(47);
+        Arithmetic<Rational> plain = new Arithmetic<>() {
+            public Rational zero() { return Q.zero(); }
+            public Rational one() { return Q.one(); }
+            public Rational of(Rational r) { return r; }
+            public Rational add(Rational a, Rational b) { return a.add(b); }
+            public Rational subtract(Rational a, Rational b) { return a.subtract(b); }
+            public Rational multiply(Rational a, Rational b) { return a.multiply(b); }
+            public Rational divide(Rational a, Rational b) { return a.divide(b); }
+            public boolean isZero(Rational a) { return a.isZero(); }
+            public List<List<Rational>> solve(List<List<Rational>> a, List<List<Rational>> b) { return Q.solve(a, b); }
+            public List<Rational> leftNullVector(List<List<Rational>> a) { return Q.leftNullVector(a); }
+        };
+        for (int trial = 0; trial < 4; trial++) {
+            int n = 20 + rnd.nextInt(30);
+            List<List<Rational>> p = chain(rnd, n);
+            List<String> names = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                names.add("S" + i);
+            }
+            for (boolean continuous : new boolean[] {false, true}) {
+                List<List<Rational>> m = continuous ? generator(p) : p;
+                ChainEngine.Absorption<Rational> full = continuous
+                    ? ChainEngine.absorbContinuous(Q, m, names, Set.of()) : ChainEngine.absorb(Q, m, names, Set.of());
+                ChainEngine.Absorption<Rational> brief = ChainEngine.absorbBrief(Q, m, names, Set.of(), continuous);
+                ChainEngine.Absorption<Rational> byDefault = ChainEngine.absorbBrief(plain, m, names, Set.of(),
+                    continuous);
+                assertEquals(full.expectedSteps(), brief.expectedSteps());
+                assertEquals(full.variance(), brief.variance());
+                assertEquals(full.probabilities(), brief.probabilities());
+                assertEquals(full.variance(), byDefault.variance());
+                assertEquals(full.expectedSteps(), byDefault.expectedSteps());
+            }
+        }
+    }
 }

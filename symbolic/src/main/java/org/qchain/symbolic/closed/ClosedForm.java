@@ -64,33 +64,7 @@ public final class ClosedForm {
         this.symbols = Symbols.avoiding(series.field.names);
         this.n = Fml.name(symbols.step());
         this.spectral = Spectral.of(series, progress);
-        int named = 1;
-        int quadratics = 0;
-        for (Spectral.Group g : spectral.groups) {
-            if (g.kind == Spectral.Kind.ROOTS) {
-                g.name = symbols.factor(named++);
-            }
-            if (g.kind == Spectral.Kind.QUADRATIC) {
-                quadratics++;
-            }
-        }
-        int q = 0;
-        List<Definition> defs = new ArrayList<>();
-        for (Spectral.Group g : spectral.groups) {
-            if (g.kind == Spectral.Kind.QUADRATIC) {
-                q++;
-                String s = quadratics == 1 ? symbols.root() : symbols.root() + q;
-                String l1 = symbols.eigenvalue(2 * q - 1);
-                String l2 = symbols.eigenvalue(2 * q);
-                quadraticNames.put(g, new String[] {s, l1, l2});
-                Fml sqrt = Fml.call("sqrt", field.formula(g.delta));
-                defs.add(new Definition(s, Fml.plain(sqrt), Fml.latex(sqrt), false));
-                List<Fml> roots = quadraticRoots(g, Fml.name(s));
-                defs.add(new Definition(l1, Fml.plain(roots.get(0)), Fml.latex(roots.get(0)), true));
-                defs.add(new Definition(l2, Fml.plain(roots.get(1)), Fml.latex(roots.get(1)), true));
-            }
-        }
-        this.definitions = List.copyOf(defs);
+        this.definitions = SpectralParts.nameGroups(field, spectral.groups, symbols, quadraticNames);
         this.seriesForm = new SeriesForm(series, states);
         this.states = List.copyOf(states);
         this.size = spectral.series.size;
@@ -133,17 +107,35 @@ public final class ClosedForm {
     // --- the formulas ------------------------------------------------------------------------------------------
 
     private Fml buildFormula(int i, int j, boolean named) {
-        return buildFormula(i, j, named, false);
+        return buildFormula(cell(i, j), named, false);
     }
 
-    private Fml buildFormula(int i, int j, boolean named, boolean factored) {
+    /**
+     * The formula of a combination of entries: each group's coefficient matrices are combined first
+     * ({@link Combination#apply}), so a term whose combined coefficient is 0 vanishes.
+     */
+    private Fml buildFormula(Cell cell, boolean named, boolean factored) {
         List<Fml> terms = new ArrayList<>();
         for (Spectral.Group g : spectral.groups) {
             if (g != zero) {
-                terms.add(term(g, i, j, named, factored));
+                terms.add(term(g, cell, named, factored));
             }
         }
         return Fml.sum(terms);
+    }
+
+    /** Which value of a coefficient matrix a formula takes: one entry, or a combination of entries. */
+    @FunctionalInterface
+    interface Cell extends java.util.function.Function<Quotient<BigRational>[][], Quotient<BigRational>> {
+    }
+
+    private static Cell cell(int i, int j) {
+        return m -> m[i][j];
+    }
+
+    private Cell cell(Combination c) {
+        c.check(size);
+        return m -> c.apply(field, m);
     }
 
     /** A coefficient, expanded or with numerator and denominator factored over the rationals. */
@@ -158,7 +150,31 @@ public final class ClosedForm {
             return named ? namedFormulas[i][j] : formulas[i][j];
         }
         return printedCache.computeIfAbsent(i + "," + j + "," + named,
-            key -> buildFormula(i, j, named && !definitions.isEmpty(), true));
+            key -> buildFormula(cell(i, j), named && !definitions.isEmpty(), true));
+    }
+
+    private Fml printed(Combination c, boolean named, boolean factored) {
+        if (c.isEntry()) {
+            return printed(c.row(), c.col(), named, factored);
+        }
+        return printedCache.computeIfAbsent(c.key() + "," + named + "," + factored,
+            key -> buildFormula(cell(c), named && !definitions.isEmpty(), factored));
+    }
+
+    /**
+     * The formula of a combination of entries ({@code sum_i s_i sum_(j in To) P^n(i, j)}), plain syntax, as
+     * {@link #plain(int, int, boolean, boolean)}: built from the combined coefficients, so it is as simple as the
+     * combined quantity. Valid for {@code n >= validFrom(c)} under {@link #conditions(Combination)}.
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public String plain(Combination c, boolean named, boolean factored) {
+        return Fml.plain(printed(c, named, factored));
+    }
+
+    /** {@link #plain(Combination, boolean, boolean)} in LaTeX. */
+    public String latex(Combination c, boolean named, boolean factored) {
+        return Fml.latex(printed(c, named, factored));
     }
 
     /**
@@ -187,12 +203,12 @@ public final class ClosedForm {
         return Fml.name(name);
     }
 
-    private Fml term(Spectral.Group g, int i, int j, boolean named, boolean factored) {
+    private Fml term(Spectral.Group g, Cell cell, boolean named, boolean factored) {
         List<Fml> terms = new ArrayList<>();
         switch (g.kind) {
             case LINEAR:
                 for (int k = 0; k < g.nilpotent.size(); k++) {
-                    Quotient<BigRational> c = g.nilpotent.get(k)[i][j];
+                    Quotient<BigRational> c = cell.apply(g.nilpotent.get(k));
                     if (c.isZERO()) {
                         continue;
                     }
@@ -212,8 +228,8 @@ public final class ClosedForm {
                 Fml sqrt = named ? Fml.name(nm[0]) : Fml.call("sqrt", field.formula(g.delta));
                 List<Fml> roots = named ? List.of(nameAtom(nm[1]), nameAtom(nm[2])) : quadraticRoots(g);
                 for (int k = 0; k < g.x.size(); k++) {
-                    Quotient<BigRational> x = g.x.get(k)[i][j];
-                    Quotient<BigRational> y = g.y.get(k)[i][j];
+                    Quotient<BigRational> x = cell.apply(g.x.get(k));
+                    Quotient<BigRational> y = cell.apply(g.y.get(k));
                     Fml exponent = shifted(-k);
                     Fml l1n = Fml.pow(roots.get(0), exponent);
                     Fml l2n = Fml.pow(roots.get(1), exponent);
@@ -230,7 +246,7 @@ public final class ClosedForm {
             default:
                 for (int k = 0; k < g.c.size(); k++) {
                     for (int t = 0; t < g.degree; t++) {
-                        Quotient<BigRational> c = g.c.get(k).get(t)[i][j];
+                        Quotient<BigRational> c = cell.apply(g.c.get(k).get(t));
                         if (!c.isZERO()) {
                             terms.add(Fml.prod(List.of(coefficient(c, factored), binomial(k),
                                 Fml.call("rootsum", shifted(t - k), Fml.name(g.name)))));
@@ -254,106 +270,100 @@ public final class ClosedForm {
     // --- conditions --------------------------------------------------------------------------------------------
 
     private List<GenPolynomial<BigRational>> collectConditions() {
+        return SpectralParts.conditionPolys(field, spectral.groups, zero);
+    }
+
+    /**
+     * The irreducible factors of every denominator in the formulas of a combination's cell, and of the
+     * radicand under a square root in a denominator. For a combination only the groups with a nonzero combined
+     * coefficient count, and a quadratic's radicand only with a nonzero coefficient of its {@code /sqrt(D)} term:
+     * for fixed n, P^n and the formula agree on a dense set of parameter values and both are continuous wherever
+     * the formula's parts are defined, so they agree there too (common practice, no source).
+     */
+    private List<GenPolynomial<BigRational>> collectConditions(Cell cell) {
         Map<String, GenPolynomial<BigRational>> out = new TreeMap<>();
         Map<GenPolynomial<BigRational>, Boolean> seen = new LinkedHashMap<>();
         for (Spectral.Group g : spectral.groups) {
             if (g == zero) {
                 continue;
             }
-            List<Quotient<BigRational>> used = new ArrayList<>(List.of(g.coeffs));
-            if (g.kind == Spectral.Kind.LINEAR) {
-                for (Quotient<BigRational>[][] m : g.nilpotent) {
-                    addAll(used, m);
-                }
-            } else if (g.kind == Spectral.Kind.QUADRATIC) {
-                for (int k = 0; k < g.x.size(); k++) {
-                    addAll(used, g.x.get(k));
-                    addAll(used, g.y.get(k));
-                }
+            List<Quotient<BigRational>> used = new ArrayList<>(combined(g, cell, false));
+            List<Quotient<BigRational>> ys = combined(g, cell, true);
+            boolean overRoot = !ys.isEmpty();
+            used.addAll(ys);
+            if (used.isEmpty()) {
+                continue; // the group does not occur in this formula
+            }
+            used.addAll(List.of(g.coeffs));
+            if (g.kind == Spectral.Kind.QUADRATIC) {
                 used.add(g.delta);
                 // sqrt(D) stands in a denominator: D != 0
-                for (GenPolynomial<BigRational> p : field.irreducibleFactors(g.delta.num)) {
-                    out.put(key(p), p);
-                }
-            } else {
-                for (List<Quotient<BigRational>[][]> ck : g.c) {
-                    for (Quotient<BigRational>[][] m : ck) {
-                        addAll(used, m);
+                if (overRoot) {
+                    for (GenPolynomial<BigRational> p : field.irreducibleFactors(g.delta.num)) {
+                        out.put(SpectralParts.key(field, p), p);
                     }
                 }
             }
             for (Quotient<BigRational> q : used) {
                 if (!q.den.isConstant() && seen.put(q.den, Boolean.TRUE) == null) {
                     for (GenPolynomial<BigRational> p : field.irreducibleFactors(q.den)) {
-                        out.put(key(p), p);
+                        out.put(SpectralParts.key(field, p), p);
                     }
                 }
             }
         }
         List<GenPolynomial<BigRational>> list = new ArrayList<>(out.values());
-        list.sort(Comparator.comparingLong((GenPolynomial<BigRational> p) -> p.totalDegree()).thenComparing(this::key));
+        list.sort(Comparator.comparingLong((GenPolynomial<BigRational> p) -> p.totalDegree()).thenComparing(p -> SpectralParts.key(field, p)));
         return List.copyOf(list);
     }
 
-    private String key(GenPolynomial<BigRational> p) {
-        return Fml.plain(field.formula(p));
-    }
-
-    private static void addAll(List<Quotient<BigRational>> out, Quotient<BigRational>[][] m) {
-        for (Quotient<BigRational>[] row : m) {
-            for (Quotient<BigRational> q : row) {
-                if (!q.isZERO()) {
-                    out.add(q);
-                }
+    /**
+     * The nonzero combined coefficients of a group in a cell: with {@code overRoot} only those of a quadratic's
+     * {@code (l1^m - l2^m)/sqrt(D)} terms, else all others.
+     */
+    private static List<Quotient<BigRational>> combined(Spectral.Group g, Cell cell, boolean overRoot) {
+        List<Quotient<BigRational>> out = new ArrayList<>();
+        List<Quotient<BigRational>[][]> ms = new ArrayList<>();
+        if (overRoot) {
+            if (g.kind == Spectral.Kind.QUADRATIC) {
+                ms.addAll(g.y);
+            }
+        } else if (g.kind == Spectral.Kind.LINEAR) {
+            ms.addAll(g.nilpotent);
+        } else if (g.kind == Spectral.Kind.QUADRATIC) {
+            ms.addAll(g.x);
+        } else {
+            for (List<Quotient<BigRational>[][]> ck : g.c) {
+                ms.addAll(ck);
             }
         }
+        for (Quotient<BigRational>[][] m : ms) {
+            Quotient<BigRational> q = cell.apply(m);
+            if (!q.isZERO()) {
+                out.add(q);
+            }
+        }
+        return out;
+    }
+
+    /** Whether the group contributes to the cell (some combined coefficient is not 0). */
+    private static boolean occurs(Spectral.Group g, Cell cell) {
+        return !combined(g, cell, false).isEmpty() || !combined(g, cell, true).isEmpty();
+    }
+
+    private String key(GenPolynomial<BigRational> p) {
+        return SpectralParts.key(field, p);
     }
 
     // --- eigenvalues -------------------------------------------------------------------------------------------
 
     private List<Eigenvalue> describeEigenvalues() {
-        List<Eigenvalue> out = new ArrayList<>();
-        for (Spectral.Group g : spectral.groups) {
-            // a linear factor reads x - (lambda), the way its eigenvalue is printed
-            Fml f = g.kind == Spectral.Kind.LINEAR && !g.lambda.isZERO()
-                ? Fml.sum(Fml.name(symbols.variable()), Fml.neg(field.formula(g.lambda)))
-                : field.formula(g.factor, symbols.variable());
-            List<String> values = new ArrayList<>();
-            List<String> valuesLatex = new ArrayList<>();
-            String kind;
-            if (g.kind == Spectral.Kind.LINEAR) {
-                kind = "rational";
-                values.add(Fml.plain(field.formula(g.lambda)));
-                valuesLatex.add(Fml.latex(field.formula(g.lambda)));
-            } else if (g.kind == Spectral.Kind.QUADRATIC) {
-                kind = "quadratic";
-                for (Fml r : quadraticRoots(g)) {
-                    values.add(Fml.plain(r));
-                    valuesLatex.add(Fml.latex(r));
-                }
-            } else {
-                kind = "roots";
-                values.add("roots of " + g.name);
-                valuesLatex.add("\\text{roots of } " + Fml.latex(Fml.name(g.name)));
-            }
-            String[] nm = quadraticNames.get(g);
-            out.add(new Eigenvalue(Fml.plain(f), Fml.latex(f), g.degree, g.multiplicity, g.index(), kind, values,
-                g.name, g.unitOrder, valuesLatex, nm == null ? List.of() : List.of(nm[1], nm[2])));
-        }
-        return List.copyOf(out);
+        return SpectralParts.describe(field, spectral.groups, symbols.variable(), quadraticNames);
     }
 
     /** u/2 + (s/2) sqrt(D) and u/2 - (s/2) sqrt(D). */
     private List<Fml> quadraticRoots(Spectral.Group g) {
-        return quadraticRoots(g, Fml.call("sqrt", field.formula(g.delta)));
-    }
-
-    /** u/2 + (s/2) r and u/2 - (s/2) r, with r the square root or its name. */
-    private List<Fml> quadraticRoots(Spectral.Group g, Fml sqrt) {
-        Quotient<BigRational> half = field.of(2).inverse();
-        Fml mid = field.formula(g.u.multiply(half));
-        Fml w = Fml.prod(field.formula(g.scale.multiply(half)), sqrt);
-        return List.of(Fml.sum(mid, w), Fml.sum(mid, Fml.neg(w)));
+        return SpectralParts.quadraticRoots(field, g);
     }
 
     // --- public API --------------------------------------------------------------------------------------------
@@ -393,6 +403,60 @@ public final class ClosedForm {
      */
     public int validFrom(int i, int j) {
         return validFromEntry[i][j];
+    }
+
+    /**
+     * The least n from which the formula of a combination holds: past the Jordan index of eigenvalue 0 in the
+     * combined coefficients (0 when they cancel).
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public int validFrom(Combination c) {
+        Cell cell = cell(c);
+        int v = 0;
+        if (zero != null) {
+            for (int k = 0; k < zero.nilpotent.size(); k++) {
+                if (!cell.apply(zero.nilpotent.get(k)).isZERO()) {
+                    v = k + 1;
+                }
+            }
+        }
+        return v;
+    }
+
+    private final Map<String, List<GenPolynomial<BigRational>>> conditionCache =
+        new java.util.concurrent.ConcurrentHashMap<>();
+
+    private List<GenPolynomial<BigRational>> conditionPolys(Combination c) {
+        return conditionCache.computeIfAbsent(c.key(), k -> collectConditions(cell(c)));
+    }
+
+    /**
+     * The conditions under which the formula of a combination holds, as {@link #conditions()}: those of the
+     * denominators and square roots that remain in its own formula (a subset of {@link #conditions()}).
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public List<String> conditions(Combination c) {
+        List<String> out = new ArrayList<>();
+        for (GenPolynomial<BigRational> p : conditionPolys(c)) {
+            out.add(Fml.plain(field.formula(p)) + " != 0");
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The conditions of {@link #conditions(Combination)} not shown to hold throughout the domains, as
+     * {@link #conditionsNotProved(Map)}.
+     */
+    public List<String> conditionsNotProved(Combination c, Map<String, Domain> domains) {
+        List<String> out = new ArrayList<>();
+        for (GenPolynomial<BigRational> p : conditionPolys(c)) {
+            if (!DomainCheck.holdsThroughout(field, p, domains)) {
+                out.add(Fml.plain(field.formula(p)) + " != 0");
+            }
+        }
+        return List.copyOf(out);
     }
 
     /**
@@ -601,25 +665,114 @@ public final class ClosedForm {
         return ParamField.rational(s);
     }
 
+    /**
+     * A combination of entries of P^n evaluated exactly at a parameter point, from its own closed form (for n
+     * below {@link #validFrom(Combination)} from the initial terms).
+     *
+     * @param n  the step count, at least 0
+     * @param c  the combination
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return the exact value
+     * @throws IllegalArgumentException  if n is negative
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     * @throws QchainException           with {@link ErrorKey#BAD_ARGUMENT} if a parameter has no value, or
+     *                                   {@link ErrorKey#CLOSED_FORM_CONDITION} if a condition of
+     *                                   {@link #conditions(Combination)} fails at the point
+     */
+    public Rational evaluate(long n, Combination c, Map<String, Rational> at) {
+        if (n < 0) {
+            throw new IllegalArgumentException("n must not be negative: " + n);
+        }
+        Cell cell = cell(c);
+        checkPoint(at, conditionPolys(c));
+        if (n < validFrom(c)) {
+            return ParamField.rational(substitute(cell.apply(spectral.series.powers.get((int) n)), at));
+        }
+        Evaluator<BigRational> ev = new Evaluator<>(BigRational.ZERO, q -> substitute(q, at));
+        BigRational s = BigRational.ZERO;
+        for (Spectral.Group g : spectral.groups) {
+            if (g != zero && occurs(g, cell)) {
+                s = s.sum(ev.entry(g, n, cell));
+            }
+        }
+        return ParamField.rational(s);
+    }
+
+    /**
+     * The long-run limits of a combination, as {@link #longRun(boolean)} gives them for the entries: the limit of
+     * its value at n = dm + r as m grows, r = 0 .. d - 1, each the combination of the limit matrices' entries,
+     * combined before printing.
+     *
+     * @param c        the combination
+     * @param factored numerators and denominators factored over the rationals
+     * @return d formulas, each as plain text then LaTeX
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public List<List<String>> limits(Combination c, boolean factored) {
+        Cell cell = cell(c);
+        int d = period();
+        Evaluator<Quotient<BigRational>> ev = new Evaluator<>(field.field, q -> q);
+        List<List<String>> out = new ArrayList<>();
+        for (int r = 0; r < d; r++) {
+            Quotient<BigRational> s = field.zero();
+            for (Spectral.Group g : spectral.groups) {
+                if (g.unitOrder > 0) {
+                    s = s.sum(ev.entry(g, r, cell));
+                }
+            }
+            Fml f = coefficient(s, factored);
+            out.add(List.of(Fml.plain(f), Fml.latex(f)));
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * The limits of {@link #limits(Combination, boolean)} at a parameter point, exactly.
+     *
+     * @param c  the combination
+     * @param at a value for every parameter in {@link #parameters()}
+     * @return d exact values
+     * @throws QchainException as {@link #evaluate(long, Combination, Map)}
+     */
+    public List<Rational> longRunAt(Combination c, Map<String, Rational> at) {
+        Cell cell = cell(c);
+        checkPoint(at, conditionPolys(c));
+        int d = period();
+        Evaluator<BigRational> ev = new Evaluator<>(BigRational.ZERO, q -> substitute(q, at));
+        List<Rational> out = new ArrayList<>();
+        for (int r = 0; r < d; r++) {
+            BigRational s = BigRational.ZERO;
+            for (Spectral.Group g : spectral.groups) {
+                if (g.unitOrder > 0) {
+                    s = s.sum(ev.entry(g, r, cell));
+                }
+            }
+            out.add(ParamField.rational(s));
+        }
+        return List.copyOf(out);
+    }
+
+    /** The period d of the long run: the lcm of the orders of the eigenvalues that are roots of unity. */
+    private int period() {
+        int d = 1;
+        for (Spectral.Group g : spectral.groups) {
+            if (g.unitOrder > 0) {
+                d = lcm(d, g.unitOrder);
+            }
+        }
+        return d;
+    }
+
     private void checkPoint(Map<String, Rational> at) {
-        for (String p : field.names) {
-            if (!at.containsKey(p)) {
-                throw new QchainException(ErrorKey.BAD_ARGUMENT, "parameter values", at.keySet(), "no value for " + p);
-            }
-        }
-        for (GenPolynomial<BigRational> c : conditionPolys) {
-            if (field.evaluate(c, at).isZERO()) {
-                throw new QchainException(ErrorKey.CLOSED_FORM_CONDITION, Fml.plain(field.formula(c)) + " != 0", at);
-            }
-        }
+        SpectralParts.checkPoint(field, conditionPolys, at);
+    }
+
+    private void checkPoint(Map<String, Rational> at, List<GenPolynomial<BigRational>> polys) {
+        SpectralParts.checkPoint(field, polys, at);
     }
 
     private BigRational substitute(Quotient<BigRational> q, Map<String, Rational> at) {
-        BigRational d = field.evaluate(q.den, at);
-        if (d.isZERO()) {
-            throw new QchainException(ErrorKey.CLOSED_FORM_CONDITION, Fml.plain(field.formula(q.den)) + " != 0", at);
-        }
-        return field.evaluate(q.num, at).divide(d);
+        return SpectralParts.substitute(field, q, at);
     }
 
     /**
@@ -817,34 +970,7 @@ public final class ClosedForm {
     }
 
     private List<CertifiedComplex> computeValuesAt(Spectral.Group g, Map<String, Rational> at) {
-        List<CertifiedComplex> v = new ArrayList<>();
-        if (g.kind == Spectral.Kind.QUADRATIC) {
-            substituted(g, at);
-            Quotient<BigRational> half = field.of(2).inverse();
-            Rational mid = ParamField.rational(substitute(g.u.multiply(half), at));
-            Rational w = ParamField.rational(substitute(g.scale.multiply(half), at));
-            Rational dv = ParamField.rational(substitute(g.delta, at));
-            for (int sign : new int[] {1, -1}) {
-                Rational ws = sign > 0 ? w : w.negate();
-                v.add(dv.signum() >= 0 ? CertifiedComplex.real(CertifiedReal.quadratic(mid, ws, dv))
-                    : new CertifiedComplex(CertifiedReal.exact(mid),
-                        CertifiedReal.quadratic(Rational.ZERO, ws, dv.negate())));
-            }
-        } else if (g.kind == Spectral.Kind.LINEAR) {
-            substituted(g, at);
-            v.add(CertifiedComplex.real(CertifiedReal.exact(ParamField.rational(substitute(g.lambda, at)))));
-        } else {
-            v.addAll(CertifiedRoots.of(coefficientsAt(g, at)));
-        }
-        return List.copyOf(v);
-    }
-
-    private List<Rational> coefficientsAt(Spectral.Group g, Map<String, Rational> at) {
-        List<Rational> c = new ArrayList<>();
-        for (BigRational b : substituted(g, at)) {
-            c.add(ParamField.rational(b));
-        }
-        return c;
+        return SpectralParts.valuesAt(field, g, at);
     }
 
     /**
@@ -971,48 +1097,11 @@ public final class ClosedForm {
      * @return each point as a map from parameter to value, in parameter order
      */
     public List<Map<String, Rational>> specialCorners(Map<String, Domain> domains) {
-        List<List<Rational>> ends = new ArrayList<>();
-        for (String p : field.names) {
-            Domain d = domains.get(p);
-            List<Rational> e = new ArrayList<>();
-            if (d != null && d.lowerClosed()) {
-                e.add(d.lower());
-            }
-            if (d != null && d.upper().isPresent() && d.upperClosed()) {
-                e.add(d.upper().get());
-            }
-            if (e.isEmpty()) {
-                return List.of();
-            }
-            ends.add(e);
-        }
         List<GenPolynomial<BigRational>> polys = new ArrayList<>(conditionPolys);
         for (LongRunCondition c : longRunConditionList()) {
             c.poly.ifPresent(polys::add);
         }
-        List<Map<String, Rational>> out = new ArrayList<>();
-        int[] at = new int[ends.size()];
-        while (!ends.isEmpty()) {
-            Map<String, Rational> pt = new LinkedHashMap<>();
-            for (int i = 0; i < at.length; i++) {
-                pt.put(field.names.get(i), ends.get(i).get(at[i]));
-            }
-            for (GenPolynomial<BigRational> c : polys) {
-                if (field.evaluate(c, pt).isZERO()) {
-                    out.add(java.util.Collections.unmodifiableMap(pt));
-                    break;
-                }
-            }
-            int i = 0;
-            while (i < at.length && ++at[i] == ends.get(i).size()) {
-                at[i] = 0;
-                i++;
-            }
-            if (i == at.length) {
-                break;
-            }
-        }
-        return List.copyOf(out);
+        return SpectralParts.corners(field, polys, domains);
     }
 
     private Fml modulus(Spectral.Group g) {
@@ -1111,16 +1200,7 @@ public final class ClosedForm {
     }
 
     private BigRational[] substituted(Spectral.Group g, Map<String, Rational> at) {
-        for (String p : field.names) {
-            if (!at.containsKey(p)) {
-                throw new QchainException(ErrorKey.BAD_ARGUMENT, "parameter values", at.keySet(), "no value for " + p);
-            }
-        }
-        BigRational[] a = new BigRational[g.coeffs.length];
-        for (int k = 0; k < a.length; k++) {
-            a[k] = substitute(g.coeffs[k], at);
-        }
-        return a;
+        return SpectralParts.substituted(field, g, at);
     }
 
     private static org.apfloat.Apfloat apfloat(BigRational r, long prec) {

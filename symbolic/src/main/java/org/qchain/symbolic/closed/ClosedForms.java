@@ -10,9 +10,7 @@ import org.qchain.exact.model.ChainKind;
 import org.qchain.exact.model.Model;
 import org.qchain.symbolic.ParamRing;
 import org.qchain.symbolic.PowerEstimate;
-import org.qchain.symbolic.PowerEstimate;
 import org.qchain.symbolic.RatFunMatrix;
-import org.qchain.symbolic.SymbolicLimits;
 import org.qchain.symbolic.SymbolicLimits;
 
 /**
@@ -136,6 +134,57 @@ public final class ClosedForms {
             progress), model.states()));
     }
 
+    /**
+     * The closed form of P(t) = exp(Qt) for a continuous-time model, in a symbolic t, with the given parameter values
+     * substituted and every other parameter the generator uses kept symbolic; default size limit. This is the entry
+     * point for P(t) in closed form: {@link TransientForm#entry}, {@link TransientForm#combination} (e.g. a point
+     * availability) and their values at a time.
+     *
+     * @param model a continuous-time model
+     * @param at    values for some parameters (may be empty)
+     * @return the closed form
+     * @throws QchainException with {@link ErrorKey#WRONG_KIND} for a discrete-time model,
+     *                         {@link ErrorKey#UNKNOWN_PARAMETER} for a value of an undeclared parameter,
+     *                         {@link ErrorKey#SYMBOLIC_TOO_LARGE} if Q^s is estimated past the limit
+     */
+    public static TransientForm ofGenerator(Model model, Map<String, Rational> at) {
+        estimate(model, at).requireTermsWithin(SymbolicLimits.DEFAULT);
+        return ofGenerator(model, at, SymbolicLimits.DEFAULT, Progress.NONE);
+    }
+
+    /**
+     * As {@link #ofGenerator(Model, Map)} with a size limit (which the caller's guard checks first with
+     * {@link #estimate} and {@link #digitBound}) and progress reports; an interrupt of the calling thread stops the
+     * work.
+     *
+     * @throws QchainException as {@link #ofGenerator(Model, Map)}, except the size refusal, and
+     *                         {@link ErrorKey#INTERRUPTED}
+     * @throws IllegalStateException past the limit (the guard did not run)
+     */
+    public static TransientForm ofGenerator(Model model, Map<String, Rational> at, SymbolicLimits limits,
+                                            Progress progress) {
+        return interruptible(() -> ofGenerator(matrix(model, at, ChainKind.CONTINUOUS), model.states(), limits,
+            progress));
+    }
+
+    /**
+     * The closed form of exp(Qt) for a square matrix of rational functions (normally a generator: rows summing to
+     * 0, off-diagonal entries non-negative).
+     *
+     * @param q      the matrix
+     * @param states a name per row
+     * @param limits the size limit for the powers Q^1 .. Q^s
+     * @param progress receives progress reports
+     * @return the closed form
+     * @throws IllegalArgumentException if the number of names differs from the size
+     * @throws IllegalStateException    if Q^s is estimated past the limit (the caller's guard refuses it first)
+     */
+    public static TransientForm ofGenerator(RatFunMatrix q, List<String> states, SymbolicLimits limits,
+                                            Progress progress) {
+        return interruptible(() -> new TransientForm(Series.of(guarded(q, states, limits), limits, progress), states,
+            progress));
+    }
+
     /** JAS stops its own loops on an interrupt with an exception of its own: report it as ours. */
     private static <T> T interruptible(java.util.function.Supplier<T> work) {
         try {
@@ -151,9 +200,14 @@ public final class ClosedForms {
     }
 
     private static RatFunMatrix matrix(Model model, Map<String, Rational> at) {
-        if (model.kind() != ChainKind.DISCRETE) {
-            throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(),
-                "closed forms in n are for discrete-time chains");
+        return matrix(model, at, ChainKind.DISCRETE);
+    }
+
+    /** The model's matrix (one-step or generator) with values substituted; null kind accepts either. */
+    private static RatFunMatrix matrix(Model model, Map<String, Rational> at, ChainKind kind) {
+        if (kind != null && model.kind() != kind) {
+            throw new QchainException(ErrorKey.WRONG_KIND, model.kind().word(), kind == ChainKind.DISCRETE
+                ? "closed forms in n are for discrete-time chains" : "closed forms in t are for continuous-time chains");
         }
         for (String name : at.keySet()) {
             if (model.param(name).isEmpty()) {
@@ -172,10 +226,11 @@ public final class ClosedForms {
      * @param model a discrete-time model
      * @param at    values for some parameters (may be empty)
      * @return the estimate of P^s
-     * @throws QchainException as {@link #of(Model, Map)} for a continuous model or an undeclared parameter
+     * @throws QchainException as {@link #of(Model, Map)} for an undeclared parameter (a continuous model: the
+     *                         estimate of Q^s, for {@link #ofGenerator})
      */
     public static PowerEstimate estimate(Model model, Map<String, Rational> at) {
-        RatFunMatrix p = matrix(model, at);
+        RatFunMatrix p = matrix(model, at, null);
         return p.estimatePower(p.size());
     }
 
@@ -192,7 +247,7 @@ public final class ClosedForms {
      * @throws QchainException as {@link #estimate}
      */
     public static java.util.OptionalLong digitBound(Model model, Map<String, Rational> at) {
-        RatFunMatrix p = matrix(model, at);
+        RatFunMatrix p = matrix(model, at, null);
         return p.occurringVariables().isEmpty() ? java.util.OptionalLong.of(DigitBound.of(p))
             : java.util.OptionalLong.empty();
     }

@@ -27,12 +27,17 @@ final class Evaluator<C extends GcdRingElem<C>> {
 
     /** Entry (i, j) of the part of P^n that the group contributes. */
     C entry(Spectral.Group g, long n, int i, int j) {
+        return entry(g, n, m -> m[i][j]);
+    }
+
+    /** The cell (an entry or a combination of entries) of the part of P^n that the group contributes. */
+    C entry(Spectral.Group g, long n, ClosedForm.Cell cell) {
         switch (g.kind) {
             case LINEAR: {
                 C lambda = conv.apply(g.lambda);
                 C s = fac.getZERO();
                 for (int k = 0; k < g.nilpotent.size() && k <= n; k++) {
-                    Quotient<BigRational> nk = g.nilpotent.get(k)[i][j];
+                    Quotient<BigRational> nk = cell.apply(g.nilpotent.get(k));
                     if (nk.isZERO()) {
                         continue;
                     }
@@ -47,8 +52,8 @@ final class Evaluator<C extends GcdRingElem<C>> {
                 C two = fac.fromInteger(2);
                 C s = fac.getZERO();
                 for (int k = 0; k < g.x.size() && k <= n; k++) {
-                    C x = conv.apply(g.x.get(k)[i][j]);
-                    C y = conv.apply(g.y.get(k)[i][j]);
+                    C x = conv.apply(cell.apply(g.x.get(k)));
+                    C y = conv.apply(cell.apply(g.y.get(k)));
                     if (x.isZERO() && y.isZERO()) {
                         continue;
                     }
@@ -65,7 +70,7 @@ final class Evaluator<C extends GcdRingElem<C>> {
                 for (int k = 0; k < g.c.size() && k <= n; k++) {
                     C b = fac.fromInteger(binomial(n, k));
                     for (int t = 0; t < g.degree; t++) {
-                        Quotient<BigRational> ct = g.c.get(k).get(t)[i][j];
+                        Quotient<BigRational> ct = cell.apply(g.c.get(k).get(t));
                         if (!ct.isZERO()) {
                             s = s.sum(conv.apply(ct).multiply(b).multiply(p.get((int) (n - k + t))));
                         }

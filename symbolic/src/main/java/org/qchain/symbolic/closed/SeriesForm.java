@@ -63,18 +63,36 @@ public final class SeriesForm {
 
     /** Numerator and denominator in z of entry (i, j) of (I - zP)^-1, reduced, denominator(0) = 1. */
     List<GenPolynomial<Quotient<BigRational>>> gfParts(int i, int j) {
-        // adj(I - zP) = sum_k B_k z^k with B_k = sum_{m<=k} c_m P^(k-m); det(I - zP) = sum_k c_k z^k
         List<GenPolynomial<Quotient<BigRational>>> cached = gfCache[i][j];
         if (cached != null) {
             return cached;
         }
+        List<GenPolynomial<Quotient<BigRational>>> out = gfParts(m -> m[i][j]);
+        gfCache[i][j] = out;
+        return out;
+    }
+
+    private final Map<String, List<GenPolynomial<Quotient<BigRational>>>> combinedCache =
+        new java.util.concurrent.ConcurrentHashMap<>();
+
+    /** As {@link #gfParts(int, int)} for a combination: the adjugate's coefficients combined before reducing. */
+    List<GenPolynomial<Quotient<BigRational>>> gfParts(Combination c) {
+        if (c.isEntry()) {
+            return gfParts(c.row(), c.col());
+        }
+        c.check(size);
+        return combinedCache.computeIfAbsent(c.key(), k -> gfParts(m -> c.apply(field, m)));
+    }
+
+    private List<GenPolynomial<Quotient<BigRational>>> gfParts(ClosedForm.Cell cell) {
+        // adj(I - zP) = sum_k B_k z^k with B_k = sum_{m<=k} c_m P^(k-m); det(I - zP) = sum_k c_k z^k
         GenPolynomial<Quotient<BigRational>> num = field.univariate.getZERO();
         GenPolynomial<Quotient<BigRational>> den = field.univariate.getZERO();
         List<Quotient<BigRational>> c = series.charCoeffs;
         for (int k = 0; k <= size; k++) {
             den = den.sum(c.get(k), ExpVector.create(1, 0, k));
             if (k < size) {
-                num = num.sum(series.adjugate.get(k)[i][j], ExpVector.create(1, 0, k));
+                num = num.sum(cell.apply(series.adjugate.get(k)), ExpVector.create(1, 0, k));
             }
         }
         List<GenPolynomial<Quotient<BigRational>>> out;
@@ -100,7 +118,6 @@ public final class SeriesForm {
             Quotient<BigRational> d0 = den.trailingBaseCoefficient();
             out = List.of(num.divide(d0), den.divide(d0));
         }
-        gfCache[i][j] = out;
         return out;
     }
 
@@ -119,7 +136,56 @@ public final class SeriesForm {
      * @throws IndexOutOfBoundsException if i or j is out of range
      */
     public GeneratingFunction generatingFunction(int i, int j) {
-        List<GenPolynomial<Quotient<BigRational>>> parts = gfParts(i, j);
+        return printed(gfParts(i, j), symbols.series(), false);
+    }
+
+    /**
+     * The generating function of a combination of entries, {@code sum_n (sum_i s_i sum_(j in To) P^n(i, j)) z^n}:
+     * the combined adjugate over det(I - zP), reduced by the factors it shares with the denominator.
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public GeneratingFunction generatingFunction(Combination c) {
+        return printed(gfParts(c), symbols.series(), false);
+    }
+
+    /**
+     * Entry (i, j) of the Laplace transform {@code (sI - Q)^-1 = adj(sI - Q)/det(sI - Q)} of exp(Qt), for the
+     * matrix Q this series was made from (a continuous chain's generator), reduced by trial division with the
+     * known factors of {@code det(sI - Q)} and printed with the denominator monic in s before the parameters'
+     * denominators are cleared.
+     *
+     * @param variable the transform's variable (never a parameter's name)
+     * @throws IndexOutOfBoundsException if i or j is out of range
+     */
+    GeneratingFunction laplaceTransform(int i, int j, String variable) {
+        // adj(xI - Q) = sum_k B_k x^(s-1-k), det(xI - Q) = chi(x)
+        GenPolynomial<Quotient<BigRational>> num = field.univariate.getZERO();
+        for (int k = 0; k < size; k++) {
+            num = num.sum(series.adjugate.get(k)[i][j], ExpVector.create(1, 0, size - 1 - k));
+        }
+        GenPolynomial<Quotient<BigRational>> den = series.chi;
+        if (num.isZERO()) {
+            den = field.univariate.getONE();
+        } else {
+            for (int f = 0; f < series.factors.size(); f++) {
+                GenPolynomial<Quotient<BigRational>> g = series.factors.get(f);
+                for (int k = 0; k < series.multiplicities.get(f); k++) {
+                    GenPolynomial<Quotient<BigRational>>[] qn = num.quotientRemainder(g);
+                    if (!qn[1].isZERO()) {
+                        break;
+                    }
+                    num = qn[0];
+                    den = den.divide(g);
+                }
+            }
+        }
+        return printed(List.of(num, den), variable, true);
+    }
+
+    /** num/den with the parameters' denominators cleared, in ascending or descending powers of the variable. */
+    private GeneratingFunction printed(List<GenPolynomial<Quotient<BigRational>>> parts, String variable,
+                                       boolean descending) {
         // clear the parameters' denominators: multiply both by the lcm of all coefficient denominators
         GenPolynomial<BigRational> l = field.poly.getONE();
         for (GenPolynomial<Quotient<BigRational>> p : parts) {
@@ -127,10 +193,10 @@ public final class SeriesForm {
                 l = lcm(l, q.den);
             }
         }
-        Fml num = zPolynomial(parts.get(0), l);
-        Fml den = zPolynomial(parts.get(1), l);
+        Fml num = polynomial(parts.get(0), l, variable, descending);
+        Fml den = polynomial(parts.get(1), l, variable, descending);
         Fml whole = Fml.isOne(den) ? num : Fml.div(num, den);
-        return new GeneratingFunction(symbols.series(), Fml.plain(num), Fml.plain(den), Fml.plain(whole), Fml.latex(whole));
+        return new GeneratingFunction(variable, Fml.plain(num), Fml.plain(den), Fml.plain(whole), Fml.latex(whole));
     }
 
     private GenPolynomial<BigRational> lcm(GenPolynomial<BigRational> a, GenPolynomial<BigRational> b) {
@@ -141,18 +207,20 @@ public final class SeriesForm {
         return a.multiply(b).divide(g);
     }
 
-    /** sum_k coeff_k z^k with each coefficient times l (a polynomial then), ascending in z. */
-    private Fml zPolynomial(GenPolynomial<Quotient<BigRational>> p, GenPolynomial<BigRational> l) {
+    /** sum_k coeff_k v^k with each coefficient times l (a polynomial then), ascending or descending in v. */
+    private Fml polynomial(GenPolynomial<Quotient<BigRational>> p, GenPolynomial<BigRational> l, String variable,
+                           boolean descending) {
         List<Fml> terms = new ArrayList<>();
         Quotient<BigRational> lq = new Quotient<>(field.field, l);
-        TreeMap<Long, Quotient<BigRational>> byPower = new TreeMap<>();
+        TreeMap<Long, Quotient<BigRational>> byPower = descending ? new TreeMap<>(java.util.Comparator.reverseOrder())
+            : new TreeMap<>();
         for (Map.Entry<ExpVector, Quotient<BigRational>> t : p.getMap().entrySet()) {
             byPower.put(t.getKey().getVal(0), t.getValue().multiply(lq));
         }
         for (Map.Entry<Long, Quotient<BigRational>> t : byPower.entrySet()) {
             Fml c = field.formula(t.getValue());
             long k = t.getKey();
-            Fml zk = k == 0 ? Fml.ONE : Fml.pow(Fml.name(symbols.series()), Fml.integer(k));
+            Fml zk = k == 0 ? Fml.ONE : Fml.pow(Fml.name(variable), Fml.integer(k));
             terms.add(Fml.prod(c, zk));
         }
         return Fml.sum(terms);
@@ -160,7 +228,10 @@ public final class SeriesForm {
 
     /** r_1 .. r_d and the first n from which u(n) = sum r_k u(n - k) holds, for entry (i, j). */
     List<Quotient<BigRational>> recurrenceCoefficients(int i, int j) {
-        List<GenPolynomial<Quotient<BigRational>>> parts = gfParts(i, j);
+        return recurrenceCoefficients(gfParts(i, j));
+    }
+
+    private List<Quotient<BigRational>> recurrenceCoefficients(List<GenPolynomial<Quotient<BigRational>>> parts) {
         GenPolynomial<Quotient<BigRational>> den = parts.get(1);
         int d = (int) den.degree(0);
         Quotient<BigRational>[] a = Spectral.coefficients(field, den, d);
@@ -172,7 +243,10 @@ public final class SeriesForm {
     }
 
     int recurrenceStart(int i, int j) {
-        List<GenPolynomial<Quotient<BigRational>>> parts = gfParts(i, j);
+        return recurrenceStart(gfParts(i, j));
+    }
+
+    private static int recurrenceStart(List<GenPolynomial<Quotient<BigRational>>> parts) {
         long dn = parts.get(0).isZERO() ? -1 : parts.get(0).degree(0);
         return (int) Math.max(parts.get(1).degree(0), dn + 1);
     }
@@ -183,8 +257,22 @@ public final class SeriesForm {
      * @throws IndexOutOfBoundsException if i or j is out of range
      */
     public Recurrence recurrence(int i, int j) {
-        List<Quotient<BigRational>> r = recurrenceCoefficients(i, j);
-        int start = recurrenceStart(i, j);
+        return recurrence(gfParts(i, j), m -> m[i][j]);
+    }
+
+    /**
+     * The linear recurrence of a combination of entries with its initial values: the recurrence its reduced
+     * generating function gives, which may be shorter than that of any entry in it.
+     *
+     * @throws IndexOutOfBoundsException if the combination names a state out of range
+     */
+    public Recurrence recurrence(Combination c) {
+        return recurrence(gfParts(c), m -> c.apply(field, m));
+    }
+
+    private Recurrence recurrence(List<GenPolynomial<Quotient<BigRational>>> parts, ClosedForm.Cell cell) {
+        List<Quotient<BigRational>> r = recurrenceCoefficients(parts);
+        int start = recurrenceStart(parts);
         List<String> coeffs = new ArrayList<>();
         List<String> coeffsLatex = new ArrayList<>();
         List<String> initValuesLatex = new ArrayList<>();
@@ -200,7 +288,7 @@ public final class SeriesForm {
         List<String> init = new ArrayList<>();
         List<String> initLatex = new ArrayList<>();
         for (int k = 0; k < start; k++) {
-            Fml v = field.formula(series.powers.get(k)[i][j]);
+            Fml v = field.formula(cell.apply(series.powers.get(k)));
             init.add(Fml.plain(v));
             initValuesLatex.add(Fml.latex(v));
             initLatex.add(Fml.latex(Fml.name(u)) + "(" + k + ") = " + Fml.latex(v));

@@ -22,6 +22,10 @@ import java.util.Set;
  */
 public record Symbols(String step, String period, String variable, String series, String sequence,
                       String factorPrefix, String root, String eigenPrefix) {
+    /** The names of the functions formulas call (discrete and continuous), never a symbol. */
+    static final List<String> FUNCTIONS = List.of("sqrt", "binomial", "rootsum", "abs", "max", "maxabsroot", "exp",
+        "rootsumexp", "re", "maxre");
+
     /** The symbols when no parameter is in the way. */
     public static final Symbols DEFAULT = avoiding(List.of());
 
@@ -34,7 +38,7 @@ public record Symbols(String step, String period, String variable, String series
     public static Symbols avoiding(Collection<String> names) {
         Set<String> taken = new HashSet<>(names);
         // names of functions the formulas call are taken as well
-        taken.addAll(List.of("sqrt", "binomial", "rootsum", "abs", "max", "maxabsroot"));
+        taken.addAll(FUNCTIONS);
         String step = pick(taken, "n", "k", "t", "N", "steps");
         String period = pick(taken, "m", "j", "M", "q", "cycles");
         String variable = pick(taken, "x", "y", "w", "X", "lambda");

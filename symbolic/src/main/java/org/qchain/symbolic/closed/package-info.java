@@ -70,6 +70,17 @@
  * conditions (no eigenvalue generically inside the unit circle becomes a root of unity: cyclotomic resultants), and
  * {@link org.qchain.symbolic.closed.ClosedForm#specialCorners} the corners of the domains where a condition fails.
  *
+ * <h2>Continuous chains</h2>
+ * {@link org.qchain.symbolic.closed.ClosedForms#ofGenerator} applies the same decomposition to a generator Q and
+ * gives {@link org.qchain.symbolic.closed.TransientForm}: P(t) = exp(Qt) as {@code sum_k sum_j Z_kj t^j e^(lambda_k t)}
+ * (where the discrete form has {@code binomial(n, j) lambda^(n-j)} it has {@code t^j/j! e^(lambda t)}), the limit
+ * from eigenvalue 0, the largest real part among the other eigenvalues as the rate, the conditions (denominators and
+ * discriminants: eigenvalue collisions), and the Laplace transform {@code (sI - Q)^-1} of each entry; its symbols
+ * ({@link org.qchain.symbolic.closed.TimeSymbols}: {@code t}, {@code s}, ...) avoid the parameters' names. Entries
+ * and linear combinations of entries (a point availability) come as
+ * {@link org.qchain.symbolic.closed.TimeFormula}s, in t or at a given t. {@code SpectralParts} holds what both
+ * forms read alike from a decomposition.
+ *
  * <p>JAS types stay inside this package; the public API speaks {@code String} formulas, {@code Rational},
  * {@code RationalMatrix} and the symbolic module's {@code RatFunMatrix}.
  */
