@@ -399,8 +399,8 @@ final class CsvFormatter extends DocLayout {
             Text.csvRecord(sb, List.of(f.name(), f.plain(), f.latex(), at.isEmpty() ? "" : at.get(k).get(1),
                 at.isEmpty() ? "" : at.get(k).get(2)));
         }
-        for (org.qchain.result.SymbolicAvailabilityResult.Condition c : r.conditions()) {
-            Text.csvRecord(sb, List.of(c.proved() ? "condition (proved)" : "condition (not proved)", c.condition(),
+        for (org.qchain.result.Condition c : r.conditions()) {
+            Text.csvRecord(sb, List.of(c.proved() ? "condition (proved)" : "condition (not proved)", c.plain(),
                 c.latex(), "", ""));
         }
         r.atPoint().ifPresent(a -> Continuous.points(a).forEach(p -> Text.csvRecord(sb,
