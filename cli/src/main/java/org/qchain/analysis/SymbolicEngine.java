@@ -1143,10 +1143,10 @@ final class SymbolicEngine {
         }
         Map<String, Domain> domains = new LinkedHashMap<>();
         m.params().forEach(d -> domains.put(d.name(), d.domain()));
-        List<org.qchain.result.SymbolicAvailabilityResult.Condition> conditions = new ArrayList<>();
+        List<org.qchain.result.Condition> conditions = new ArrayList<>();
         for (org.qchain.symbolic.Poly c : factors) {
-            conditions.add(new org.qchain.result.SymbolicAvailabilityResult.Condition(Formulas.plain(c) + " != 0",
-                Formulas.of(RatFun.of(c), false, true) + " \\neq 0", org.qchain.symbolic.BoxSign.nonZero(c, domains)));
+            conditions.add(org.qchain.result.Condition.notEqual(Formula.of(Formulas.plain(c),
+                Formulas.of(RatFun.of(c), false, true)), Rational.ZERO, org.qchain.symbolic.BoxSign.nonZero(c, domains)));
         }
         Optional<org.qchain.result.AvailabilityResult> at = Optional.empty();
         if (model.complete()) {

@@ -153,7 +153,7 @@ final class Continuous {
         + " denominators and of the rates):";
 
     /** What a condition's check found. */
-    static String proof(SymbolicAvailabilityResult.Condition c) {
+    static String proof(org.qchain.result.Condition c) {
         return c.proved() ? "holds throughout the parameters' domains (proved)"
             : "not proved throughout the domains: the formulas hold only where it does";
     }

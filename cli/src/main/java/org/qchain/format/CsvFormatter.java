@@ -216,7 +216,7 @@ final class CsvFormatter extends DocLayout {
                     case RECURRENCE -> String.valueOf(r.recurrences().get(i).get(j).validFrom());
                     case MATRIX -> String.valueOf(r.validFrom());
                 };
-                closedRecord(sb, "entry", r.rows().get(i), r.cols().get(j), "", "", r.cells().get(i).get(j).plain(),
+                closedRecord(sb, "entry", closedFrom(r, i), closedTo(r, j), "", "", r.cells().get(i).get(j).plain(),
                     validFrom, "", "", "");
             }
         }
@@ -225,11 +225,11 @@ final class CsvFormatter extends DocLayout {
                 for (int j = 0; j < r.cols().size(); j++) {
                     ClosedResult.Recurrence rec = r.recurrences().get(i).get(j);
                     for (int k = 0; k < rec.coefficients().size(); k++) {
-                        closedRecord(sb, "coefficient", r.rows().get(i), r.cols().get(j), String.valueOf(k + 1), "",
+                        closedRecord(sb, "coefficient", closedFrom(r, i), closedTo(r, j), String.valueOf(k + 1), "",
                             rec.coefficients().get(k).plain(), String.valueOf(rec.validFrom()), "", "", "");
                     }
                     for (int k = 0; k < rec.initial().size(); k++) {
-                        closedRecord(sb, "initial", r.rows().get(i), r.cols().get(j), String.valueOf(k), "",
+                        closedRecord(sb, "initial", closedFrom(r, i), closedTo(r, j), String.valueOf(k), "",
                             rec.initial().get(k).plain(), "", "", "", "");
                     }
                 }
@@ -272,7 +272,7 @@ final class CsvFormatter extends DocLayout {
         for (int k = 0; k < lr.limits().size(); k++) {
             for (int i = 0; i < r.rows().size(); i++) {
                 for (int j = 0; j < r.cols().size(); j++) {
-                    closedRecord(sb, "limit", r.rows().get(i), r.cols().get(j), String.valueOf(k), "",
+                    closedRecord(sb, "limit", closedFrom(r, i), closedTo(r, j), String.valueOf(k), "",
                         lr.limits().get(k).get(i).get(j).plain(), "", "",
                         dec.isEmpty() ? "" : dec.get(k).get(i).get(j), "");
                 }
@@ -286,6 +286,25 @@ final class CsvFormatter extends DocLayout {
         for (org.qchain.result.Point p : lr.special()) {
             closedRecord(sb, "special_point", "", "", "", "", p.text(), "", "", "", "");
         }
+    }
+
+    /**
+     * The {@code from} field of row i: the state, or an initial distribution as {@code step}'s CSV writes it
+     * ({@code Working=1/2 Failed=1/2}).
+     */
+    private static String closedFrom(ClosedResult r, int i) {
+        boolean single = r.start().size() == 1 && r.start().values().iterator().next().equals(Rational.ONE);
+        if (r.start().isEmpty() || single) {
+            return r.rows().get(i);
+        }
+        List<String> parts = new ArrayList<>();
+        r.start().forEach((state, p) -> parts.add(state + "=" + p));
+        return String.join(" ", parts);
+    }
+
+    /** The {@code to} field of column j: the state, or a set of states as {@code step}'s CSV writes it ({@code Up Worn}). */
+    private static String closedTo(ClosedResult r, int j) {
+        return r.toStates().isEmpty() ? r.cols().get(j) : String.join(" ", r.toStates());
     }
 
     /** The name of a factor of degree 3 or more ({@code f1}), as the formulas' {@code rootsum} calls it. */
@@ -427,8 +446,8 @@ final class CsvFormatter extends DocLayout {
             Text.csvRecord(sb, List.of(f.name(), f.plain(), f.latex(), at.isEmpty() ? "" : at.get(k).get(1),
                 at.isEmpty() ? "" : at.get(k).get(2)));
         }
-        for (org.qchain.result.SymbolicAvailabilityResult.Condition c : r.conditions()) {
-            Text.csvRecord(sb, List.of(c.proved() ? "condition (proved)" : "condition (not proved)", c.condition(),
+        for (org.qchain.result.Condition c : r.conditions()) {
+            Text.csvRecord(sb, List.of(c.proved() ? "condition (proved)" : "condition (not proved)", c.plain(),
                 c.latex(), "", ""));
         }
         r.atPoint().ifPresent(a -> Continuous.points(a).forEach(p -> Text.csvRecord(sb,

@@ -662,7 +662,7 @@ final class JsonFormatter extends Layout {
                 .string("down_hours_per_year", r.downHoursPerYear().latex())
                 .object("stationary", piTex))
             .objects("conditions", r.conditions(), c -> Json.object()
-                .string("condition", c.condition())
+                .string("condition", c.plain())
                 .string("latex", c.latex())
                 .bool("proved", c.proved()));
         if (!r.substituted().isEmpty()) {

@@ -524,7 +524,7 @@ final class MarkdownFormatter extends DocLayout {
             f.formula().isPresent() ? "`" + Text.code(f.plain()) + "`" : Text.markdown(f.plain()))));
         if (!r.conditions().isEmpty()) {
             sb.append('\n').append(Text.markdown(Continuous.CONDITIONS)).append("\n\n");
-            r.conditions().forEach(c -> sb.append("- `").append(Text.code(c.condition())).append("`: ")
+            r.conditions().forEach(c -> sb.append("- `").append(Text.code(c.plain())).append("`: ")
                 .append(Text.markdown(Continuous.proof(c))).append('\n'));
         }
         r.atPoint().ifPresent(a -> {

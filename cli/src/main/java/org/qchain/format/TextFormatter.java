@@ -739,7 +739,7 @@ final class TextFormatter extends DocLayout {
         if (!r.conditions().isEmpty()) {
             sb.append('\n').append(Continuous.CONDITIONS).append('\n');
             TextTable c = new TextTable("  ");
-            r.conditions().forEach(x -> c.addRow(x.condition(), Continuous.proof(x)));
+            r.conditions().forEach(x -> c.addRow(x.plain(), Continuous.proof(x)));
             sb.append(c.render());
         }
         r.atPoint().ifPresent(a -> {

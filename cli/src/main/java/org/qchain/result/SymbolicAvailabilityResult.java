@@ -25,8 +25,10 @@ import org.qchain.exact.Rational;
  * @param meanUpTime       mean up time per cycle; empty when the system never fails
  * @param meanDownTime     mean down time per cycle; empty when the system never fails
  * @param mttf             mean time to failure by up state; empty = infinite (the state can never fail)
- * @param conditions       what the formulas assume: each polynomial that must not vanish, and whether that was
- *                         proved throughout the parameters' domains
+ * @param conditions       what the formulas assume: each polynomial that must not vanish ({@code POLY != 0}: a
+ *                         factor of a denominator, or of a rate whose being positive the chain's structure takes for
+ *                         granted), and whether that was proved throughout the parameters' domains (otherwise the
+ *                         formulas hold only where it does)
  * @param substituted      values given with {@code --at} that were substituted before solving (by name)
  * @param atPoint          the exact figures at the parameter point, when every parameter has a value (equal to the
  *                         formulas evaluated there)
@@ -63,18 +65,6 @@ public record SymbolicAvailabilityResult(String source, List<String> parameters,
 
     /** The conditions not proved throughout the domains. */
     public List<Condition> notProved() {
-        return conditions.stream().filter(c -> !c.proved()).toList();
-    }
-
-    /**
-     * One assumption of the formulas: a polynomial in the parameters that must not vanish (a factor of a
-     * denominator, or of a rate whose being positive the chain's structure takes for granted).
-     *
-     * @param condition the condition, {@code POLY != 0} in plain syntax
-     * @param latex     the same in LaTeX
-     * @param proved    whether it was proved to hold for every parameter value inside the declared domains
-     *                  (otherwise the formulas hold only where it does)
-     */
-    public record Condition(String condition, String latex, boolean proved) {
+        return Condition.notProved(conditions);
     }
 }

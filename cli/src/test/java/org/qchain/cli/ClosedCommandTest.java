@@ -46,6 +46,9 @@ class ClosedCommandTest {
         // a is given, b keeps its nominal value 1/2 for the numeric rate
         out.add(new Case("at.txt", List.of(BEACON, "--at", "a=1/10", "--from", "Lit")));
         out.add(new Case("at.csv", List.of(BEACON, "--at", "a=1/10", "--from", "Lit", "--format", "csv")));
+        // CSV of a start distribution and a set of final states: the fields as step's CSV writes them
+        out.add(new Case("start-set.csv", List.of(BEACON, "--start", "Lit=1/4", "--start", "Dark=3/4", "--to",
+            "Lit,Dark", "--format", "csv")));
         // numeric chains: a Jordan block (binomial terms) and a period-2 chain
         out.add(new Case("jordan.json", List.of(Cli.model("closed-jordan.chain"), "--format", "json")));
         out.add(new Case("periodic.txt", List.of(Cli.model("closed-periodic.chain"))));

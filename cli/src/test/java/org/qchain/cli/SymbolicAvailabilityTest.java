@@ -66,7 +66,7 @@ class SymbolicAvailabilityTest {
         assertSame(UNIT, "1/mu", r.meanDownTime().orElseThrow());
         // lam, mu and lam + mu are positive on (0, inf): every condition is proved
         assertEquals(List.of("lam != 0", "mu != 0", "lam + mu != 0"),
-            r.conditions().stream().map(SymbolicAvailabilityResult.Condition::condition).toList());
+            r.conditions().stream().map(org.qchain.result.Condition::plain).toList());
         assertTrue(r.notProved().isEmpty());
     }
 
@@ -95,7 +95,7 @@ class SymbolicAvailabilityTest {
             + "param mu in (0, inf)\nstates Up Down\nup Up\nUp Down lam\nDown Up mu\n");
         SymbolicAvailabilityResult r = Analysis.availabilityFormulas(m, AvailabilityQuery.steadyState(),
             Progress.NONE);
-        assertEquals(List.of("lam != 0"), r.notProved().stream().map(SymbolicAvailabilityResult.Condition::condition)
+        assertEquals(List.of("lam != 0"), r.notProved().stream().map(org.qchain.result.Condition::plain)
             .toList());
     }
 
