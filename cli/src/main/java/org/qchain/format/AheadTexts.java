@@ -52,20 +52,24 @@ final class AheadTexts implements AutoCloseable {
 
     /**
      * The exact texts ({@code p/q}, or {@code p}) of {@code values}, equal to {@link Rational#toString()}; a
-     * denominator shared by several entries (common in powers: the reduced denominators are divisors of one
-     * {@code d^n}) is converted once.
+     * denominator shared by several entries is converted once, and denominators that are small multiples of one
+     * large divisor (common in powers: the reduced denominators are divisors of one {@code d^n}) are written from
+     * that divisor's digits ({@link DecimalText.SharedFactor}).
      *
      * @param values the values, in the order they will be written
      * @return the texts, being converted
      */
     static AheadTexts exact(List<Rational> values) {
         Map<BigInteger, String> denominators = new ConcurrentHashMap<>();
+        // the reduced denominators of a power are small multiples of one large divisor: written from its digits
+        DecimalText.SharedFactor shared = DecimalText.SharedFactor.of(values.stream().filter(r -> !r.isInteger())
+            .map(Rational::denominator).limit(4L * DecimalText.SharedFactor.MAX_SAMPLE).toList());
         return start(values, r -> {
             String p = DecimalText.toString(r.numerator());
             if (r.isInteger()) {
                 return p;
             }
-            return p + '/' + denominators.computeIfAbsent(r.denominator(), DecimalText::toString);
+            return p + '/' + denominators.computeIfAbsent(r.denominator(), shared::toString);
         });
     }
 

@@ -138,6 +138,206 @@ public final class DecimalText {
         return out;
     }
 
+    /** Numbers of fewer bits are converted on their own by {@link SharedFactor}. */
+    static final int SHARED_MIN_BITS = 2_000;
+    /** Bits of the multipliers {@code a}, {@code b} that {@link #smallRatio} looks for, at most. */
+    static final int RATIO_BITS = 128;
+    /**
+     * Leading bits of the larger number that {@link #smallRatio} reads. With {@code a, b < 2^128} and the smaller
+     * number's leading 896 bits or more, the leading bits' ratio is within {@code 2^-766} of {@code a/b}, so the
+     * partial quotient after {@code a/b} is above {@code 2^509}, while every partial quotient up to it is at most
+     * {@code b} (or {@code a/b}) and so below {@code 2^128}.
+     */
+    private static final int RATIO_PRECISION = 8 * RATIO_BITS;
+    private static final int LIMB = 1_000_000_000;
+
+    /**
+     * Decimal texts of positive integers that are mostly small multiples of one large common divisor, as the
+     * reduced denominators of a matrix power are (divisors of {@code d^n} whose quotients {@code d^n / q} have tens
+     * of bits, while {@code q} has thousands of digits). The common divisor {@code G} is found once, from a sample,
+     * and converted once; every number {@code G m} is then written by multiplying {@code G}'s decimal digits by the
+     * small {@code m}, in linear time, instead of a divide-and-conquer conversion of its own. No gcd of big numbers
+     * is needed: the ratio of two such numbers is a fraction {@code a/b} with small terms, read off the continued
+     * fraction of their leading bits and then checked exactly ({@code x b = y a}). A number that is not a small
+     * multiple of {@code G}, or that has fewer than {@value #SHARED_MIN_BITS} bits, is converted on its own. The
+     * texts equal {@link BigInteger#toString()}. Thread-safe once built.
+     */
+    public static final class SharedFactor {
+        /** Numbers of the sample tried at most. */
+        public static final int MAX_SAMPLE = 64;
+        /** Consecutive numbers that are not small multiples, after which the search stops. */
+        static final int MAX_MISSES = 8;
+
+        private final BigInteger g;
+        private final int[] digits;
+
+        private SharedFactor(BigInteger g) {
+            this.g = g;
+            this.digits = g == null ? null : limbs(DecimalText.toString(g));
+        }
+
+        /**
+         * The largest common divisor of the sample's large members that leaves small multipliers, found from the
+         * first {@value #MAX_SAMPLE} of them (a member whose ratio to it is not small is passed over; after
+         * {@value #MAX_MISSES} such members in a row the search stops).
+         *
+         * @param sample positive integers, typically the denominators to be written
+         * @return the shared factor, possibly none (then every number is converted on its own)
+         */
+        public static SharedFactor of(java.util.Collection<BigInteger> sample) {
+            BigInteger g = null;
+            int tried = 0;
+            int misses = 0;
+            for (BigInteger x : sample) {
+                if (x.signum() <= 0 || x.bitLength() < SHARED_MIN_BITS || x.equals(g)) {
+                    continue;
+                }
+                if (tried++ == MAX_SAMPLE || misses == MAX_MISSES) {
+                    break;
+                }
+                if (g == null) {
+                    g = x;
+                    continue;
+                }
+                BigInteger[] ab = smallRatio(g, x);
+                if (ab == null) {
+                    misses++;
+                    continue;
+                }
+                misses = 0;
+                // g b = x a with gcd(a, b) = 1, so a divides g: the common divisor of g and x is g / a = x / b
+                if (!ab[0].equals(BigInteger.ONE)) {
+                    g = g.divide(ab[0]);
+                }
+            }
+            return new SharedFactor(g);
+        }
+
+        /** The shared factor found, or null (for tests). */
+        BigInteger factor() {
+            return g;
+        }
+
+        /**
+         * The decimal text of {@code x}, equal to {@code x.toString()}.
+         *
+         * @param x any integer
+         * @return its text
+         */
+        public String toString(BigInteger x) {
+            if (g != null && x.signum() > 0 && x.bitLength() >= SHARED_MIN_BITS) {
+                BigInteger[] ab = x.equals(g) ? new BigInteger[] {BigInteger.ONE, BigInteger.ONE} : smallRatio(x, g);
+                if (ab != null && ab[1].equals(BigInteger.ONE)) {
+                    return text(multiply(digits, limbs(ab[0].toString())));
+                }
+            }
+            return DecimalText.toString(x);
+        }
+    }
+
+    /**
+     * {@code {a, b}} with {@code x / y = a / b}, {@code gcd(a, b) = 1} and both below {@code 2^RATIO_BITS}, or null
+     * if there is none. The continued fraction of the leading bits of {@code x / y} has a huge partial quotient
+     * right after {@code a / b} when the ratio is that small fraction (the error of the leading bits is far
+     * below {@code 1 / b^2}); that convergent is then checked exactly.
+     */
+    static BigInteger[] smallRatio(BigInteger x, BigInteger y) {
+        if (Math.abs(x.bitLength() - y.bitLength()) > RATIO_BITS) {
+            return null;
+        }
+        int shift = Math.max(0, Math.max(x.bitLength(), y.bitLength()) - RATIO_PRECISION);
+        BigInteger u = x.shiftRight(shift);
+        BigInteger v = y.shiftRight(shift);
+        // convergents p/q of u/v
+        BigInteger p0 = BigInteger.ONE;
+        BigInteger q0 = BigInteger.ZERO;
+        BigInteger p1 = BigInteger.ZERO;
+        BigInteger q1 = BigInteger.ONE;
+        while (v.signum() != 0) {
+            BigInteger[] qr = u.divideAndRemainder(v);
+            BigInteger t = qr[0];
+            if (t.bitLength() > RATIO_BITS + 16 || qr[1].signum() == 0) {
+                // a huge partial quotient: the convergent before it; the end of the expansion: its last convergent
+                BigInteger[] ab = qr[1].signum() == 0 && t.bitLength() <= RATIO_BITS + 16
+                    ? new BigInteger[] {t.multiply(p0).add(p1), t.multiply(q0).add(q1)}
+                    : new BigInteger[] {p0, q0};
+                if (ab[0].bitLength() > RATIO_BITS || ab[1].bitLength() > RATIO_BITS || ab[1].signum() == 0) {
+                    return null;
+                }
+                return x.multiply(ab[1]).equals(y.multiply(ab[0])) ? ab : null;
+            }
+            BigInteger p2 = t.multiply(p0).add(p1);
+            BigInteger q2 = t.multiply(q0).add(q1);
+            p1 = p0;
+            q1 = q0;
+            p0 = p2;
+            q0 = q2;
+            if (p0.bitLength() > RATIO_BITS || q0.bitLength() > RATIO_BITS) {
+                return null;
+            }
+            u = v;
+            v = qr[1];
+        }
+        return null;
+    }
+
+    /** The digits of a decimal text as base-10^9 limbs, least significant first. */
+    private static int[] limbs(String digits) {
+        int n = (digits.length() + 8) / 9;
+        int[] out = new int[n];
+        int end = digits.length();
+        for (int i = 0; i < n; i++) {
+            int start = Math.max(0, end - 9);
+            int v = 0;
+            for (int k = start; k < end; k++) {
+                v = v * 10 + (digits.charAt(k) - '0');
+            }
+            out[i] = v;
+            end = start;
+        }
+        return out;
+    }
+
+    /** The product of two numbers in base-10^9 limbs. */
+    private static int[] multiply(int[] x, int[] m) {
+        int[] out = new int[x.length + m.length];
+        for (int j = 0; j < m.length; j++) {
+            long mj = m[j];
+            if (mj == 0) {
+                continue;
+            }
+            long carry = 0;
+            for (int i = 0; i < x.length; i++) {
+                long cur = out[i + j] + x[i] * mj + carry;
+                carry = cur / LIMB;
+                out[i + j] = (int) (cur - carry * LIMB);
+            }
+            for (int k = j + x.length; carry != 0; k++) {
+                long cur = out[k] + carry;
+                carry = cur / LIMB;
+                out[k] = (int) (cur - carry * LIMB);
+            }
+        }
+        return out;
+    }
+
+    /** The decimal text of base-10^9 limbs (without leading zeros; "0" for zero). */
+    private static String text(int[] limbs) {
+        int top = limbs.length - 1;
+        while (top > 0 && limbs[top] == 0) {
+            top--;
+        }
+        byte[] buf = new byte[9 * (top + 1)];
+        for (int i = 0; i <= top; i++) {
+            digits(limbs[i], buf, buf.length - 9 * (i + 1), 9);
+        }
+        int start = 0;
+        while (start < buf.length - 1 && buf[start] == '0') {
+            start++;
+        }
+        return new String(buf, start, buf.length - start, StandardCharsets.ISO_8859_1);
+    }
+
     /** Writes exactly {@code width} digits of {@code 0 <= x < 10^width} into {@code buf[pos, pos + width)}. */
     private static final class Convert extends RecursiveAction {
         private static final long serialVersionUID = 1L;

@@ -1194,26 +1194,39 @@ public final class ClosedForm {
         return moduli.isEmpty() ? CertifiedReal.exact(Rational.ZERO) : CertifiedReal.max(moduli);
     }
 
-    /** |z| from enclosures of its parts. */
+    /**
+     * |z| from enclosures of its parts, in fixed point: the ends of the parts' enclosures are rounded outward to
+     * multiples of 2^-s, squared and summed as integers, and the integer square roots rounded outward give the
+     * ends of |z| at the same scale. No rational arithmetic (each product and sum of the parts' rational ends
+     * cost a gcd of their growing denominators: most of the convergence rate's time).
+     */
     private static CertifiedReal modulus(CertifiedComplex z) {
         return CertifiedReal.enclosed(bits -> {
             org.qchain.exact.certified.Enclosure re = z.re().abs().enclosure(bits + 4);
             org.qchain.exact.certified.Enclosure im = z.im().abs().enclosure(bits + 4);
-            Rational lo = re.lo().multiply(re.lo()).add(im.lo().multiply(im.lo()));
-            Rational hi = re.hi().multiply(re.hi()).add(im.hi().multiply(im.hi()));
-            return org.qchain.exact.certified.Enclosure.of(sqrtBound(lo, bits + 4, false), sqrtBound(hi, bits + 4, true));
+            int s = bits + 6;
+            BigInteger lo = square(scaled(re.lo(), s, false)).add(square(scaled(im.lo(), s, false)));
+            BigInteger hi = square(scaled(re.hi(), s, true)).add(square(scaled(im.hi(), s, true)));
+            BigInteger rootLo = lo.sqrt();
+            BigInteger rootHi = hi.sqrt();
+            if (!rootHi.multiply(rootHi).equals(hi)) {
+                rootHi = rootHi.add(BigInteger.ONE);
+            }
+            return org.qchain.exact.certified.Enclosure.of(Rational.dyadic(rootLo, s), Rational.dyadic(rootHi, s));
         });
     }
 
-    /** A rational below ({@code up} false) or above sqrt(q), q >= 0, within about 2^-bits. */
-    private static Rational sqrtBound(Rational q, int bits, boolean up) {
-        BigInteger m = q.denominator();
-        BigInteger t = q.numerator().multiply(m).shiftLeft(2 * bits);
-        BigInteger s = t.sqrt();
-        if (up && !s.multiply(s).equals(t)) {
-            s = s.add(BigInteger.ONE);
+    /** {@code floor(q 2^s)} ({@code up} false) or {@code ceil(q 2^s)}; a lower end below 0 counts as 0. */
+    private static BigInteger scaled(Rational q, int s, boolean up) {
+        if (q.signum() <= 0) {
+            return BigInteger.ZERO;
         }
-        return Rational.of(s, m.shiftLeft(bits));
+        BigInteger[] qr = q.numerator().shiftLeft(s).divideAndRemainder(q.denominator());
+        return up && qr[1].signum() != 0 ? qr[0].add(BigInteger.ONE) : qr[0];
+    }
+
+    private static BigInteger square(BigInteger x) {
+        return x.multiply(x);
     }
 
     private BigRational[] substituted(Spectral.Group g, Map<String, Rational> at) {
