@@ -3,7 +3,8 @@
 # against an old one in the same run, interleaved. Usage, from the repository root:
 #   OLD=/path/to/old/qchain.jar RUNS=5 bench/whole-process.sh > bench/target/whole-process.txt
 # SET=continuous times the continuous-chain case instead (bench/models/repairable50.chain: avail, and step -t at 10
-# times to 30 certified digits; no bench jar needed).
+# times to 30 certified digits; no bench jar needed). SET=solves times issue 9's exact solves (the 300-state banded
+# absorption and the 200-state dense long run of LinearSolveBench, with --brief; --max-digits for older jars).
 # Needs the bench jar (mvn -B -q -o -Pbench -pl bench -am package -DskipTests) for the chain files and the CLI jar
 # (./qchain builds it). Prints one line per run: case, jar, wall seconds, user+system CPU seconds, peak RSS.
 set -euo pipefail
@@ -14,7 +15,15 @@ RUNS=${RUNS:-5}
 D=bench/target/chains
 mkdir -p "$D" bench/target/out
 L=-Dlog4j2.loggerContextFactory=org.apache.logging.log4j.simple.SimpleLoggerContextFactory
-if [ "${SET:-}" = continuous ]; then
+if [ "${SET:-}" = solves ]; then
+java -cp bench/target/benchmarks.jar org.qchain.bench.LinearSolveBench 1 no "$D" > /dev/null
+cases=(
+  "version|--version"
+  "absorb300|absorb $D/banded300.chain --brief --max-digits 1000000000"
+  "absorb300json|absorb $D/banded300.chain --brief --format json --max-digits 1000000000"
+  "longrun200json|longrun $D/dense200.chain --brief --format json --max-digits 1000000000"
+)
+elif [ "${SET:-}" = continuous ]; then
 cases=(
   "version|--version"
   "avail50|avail bench/models/repairable50.chain --digits 30 --format json"

@@ -4,7 +4,8 @@
  * <h2>Types</h2>
  * <ul>
  * <li>{@link org.qchain.exact.Rational} and {@link org.qchain.exact.RationalMatrix}: immutable values, always in
- * lowest terms.</li>
+ * lowest terms; gcds of large numbers by Lehmer's method ({@link org.qchain.exact.Gcd}), and many fractions over one
+ * denominator reduced together ({@link org.qchain.exact.Fractions}).</li>
  * <li>{@link org.qchain.exact.MatrixPowers}: {@code P^n}, one row of it, one entry of it.</li>
  * <li>{@link org.qchain.exact.DistributionPowers}: a distribution after n steps, {@code start · P^n}, for one n or a
  * series of n that continues each from the one before.</li>

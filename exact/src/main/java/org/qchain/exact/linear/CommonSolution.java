@@ -1,6 +1,7 @@
 package org.qchain.exact.linear;
 
 import java.math.BigInteger;
+import org.qchain.exact.Fractions;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 
@@ -57,14 +58,15 @@ public final class CommonSolution {
         return Rational.of(numerators[i][j], denominator);
     }
 
-    /** The solution with every entry in lowest terms. */
+    /** The solution with every entry in lowest terms ({@link Fractions#over}, column by column). */
     public RationalMatrix reduced() {
         int n = rows();
         int m = cols();
         Rational[][] x = new Rational[n][m];
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < m; j++) {
-                x[i][j] = get(i, j);
+        for (int j = 0; j < m; j++) {
+            Rational[] c = Fractions.over(column(j), denominator);
+            for (int i = 0; i < n; i++) {
+                x[i][j] = c[i];
             }
         }
         return RationalMatrix.of(x);

@@ -34,10 +34,19 @@ final class Dixon {
 
     static Optional<Bareiss.Solution> solve(long[][] a, BigInteger[][] b, Thread caller,
             org.qchain.exact.Progress progress) {
+        return solve(a, b, caller, progress, BigInteger.ONE);
+    }
+
+    /**
+     * As {@link #solve(long[][], BigInteger[][], Thread)}, with a likely multiple of the solution's denominator
+     * ({@code 1} if none is known), tried first: the denominator of another solution with the same {@code A}.
+     */
+    static Optional<Bareiss.Solution> solve(long[][] a, BigInteger[][] b, Thread caller,
+            org.qchain.exact.Progress progress, BigInteger hint) {
         for (long p : PRIMES) {
             Optional<ModLu> lu = ModLu.of(a, p, caller);
             if (lu.isPresent()) {
-                return Optional.of(lift(a, b, lu.get(), caller, progress));
+                return Optional.of(lift(a, b, lu.get(), caller, progress, hint));
             }
         }
         return Optional.empty();
@@ -50,7 +59,7 @@ final class Dixon {
     }
 
     private static Bareiss.Solution lift(long[][] a, BigInteger[][] b, ModLu lu, Thread caller,
-            org.qchain.exact.Progress progress) {
+            org.qchain.exact.Progress progress, BigInteger hint) {
         int n = a.length;
         int m = b[0].length;
         long p = lu.p;
@@ -115,6 +124,7 @@ final class Dixon {
         }
         BigInteger bp = BigInteger.valueOf(p);
         BigInteger[][] num = new BigInteger[n][m];
+        long[][][] allDigits = new long[m][][];
         BigInteger pk = bp.pow(steps);
         BigInteger numBound = BigInteger.ONE.shiftLeft(numBits);
         BigInteger denBound = BigInteger.ONE.shiftLeft(denBits);
@@ -149,12 +159,73 @@ final class Dixon {
                     }
                 }
             }
-            for (int i = 0; i < n; i++) {
-                num[i][c] = combine(digits, i, 0, steps, bp);
-            }
+            allDigits[c] = digits;
         }
         progress.update("lifting", (long) m * steps, (long) m * steps);
+        Optional<Bareiss.Solution> quick = overKnownDenominator(a, nzCols, b, allDigits, bp, pk, numBits,
+            numBound, denBound, hint);
+        if (quick.isPresent()) {
+            return quick.get();
+        }
+        for (int c = 0; c < m; c++) {
+            for (int i = 0; i < n; i++) {
+                num[i][c] = combine(allDigits[c], i, 0, steps, bp);
+            }
+        }
         return reconstruct(num, pk, numBound, denBound);
+    }
+
+    /**
+     * The solution over D, the lcm of the hint and of the denominators of the first row's entries (found by rational
+     * reconstruction of those entries alone). If D is a common denominator of every entry and divides det A, each
+     * numerator D x_i is an integer of at most the Cramer bound N in absolute value, so it is the symmetric residue
+     * of D u_i modulo any p^k' > 2N: only the first k' p-adic digits of u_i (about half of them) are combined, and
+     * no other entry is reconstructed. Checked exactly at the end, {@code A (D x) = D b} over the integers (cheap:
+     * A has small entries); empty if the check fails, and the caller reconstructs every entry.
+     */
+    private static Optional<Bareiss.Solution> overKnownDenominator(long[][] a, int[][] nzCols, BigInteger[][] b,
+            long[][][] digits, BigInteger bp, BigInteger pk, int numBits, BigInteger numBound, BigInteger denBound,
+            BigInteger hint) {
+        int n = a.length;
+        int m = b[0].length;
+        int steps = digits[0].length;
+        BigInteger den = hint;
+        for (int c = 0; c < m; c++) {
+            BigInteger d = wang(combine(digits[c], 0, 0, steps, bp), pk, numBound)[1];
+            den = den.divide(den.gcd(d)).multiply(d);
+        }
+        int k = (int) Math.ceil((numBits + 2) / (Math.log(bp.longValue()) / Math.log(2))) + 1;
+        if (k >= steps) {
+            return Optional.empty();
+        }
+        // a cheap early refusal: D must give the middle and the last row's entries by the test of reconstruct
+        BigInteger halfPk = pk.shiftRight(1);
+        for (int i : new int[] {n / 2, n - 1}) {
+            for (int c = 0; c < m; c++) {
+                BigInteger v = symmetric(combine(digits[c], i, 0, steps, bp).multiply(den).mod(pk), pk, halfPk);
+                if (v.abs().multiply(denBound).add(numBound.multiply(den)).compareTo(pk) >= 0) {
+                    return Optional.empty();
+                }
+            }
+        }
+        BigInteger mod = power(bp, k);
+        BigInteger half = mod.shiftRight(1);
+        BigInteger[][] out = new BigInteger[n][m];
+        for (int c = 0; c < m; c++) {
+            for (int i = 0; i < n; i++) {
+                out[i][c] = symmetric(combine(digits[c], i, 0, k, bp).multiply(den).mod(mod), mod, half);
+            }
+            for (int i = 0; i < n; i++) {
+                BigInteger s = BigInteger.ZERO;
+                for (int j : nzCols[i]) {
+                    s = s.add(out[j][c].multiply(BigInteger.valueOf(a[i][j])));
+                }
+                if (!s.equals(b[i][c].multiply(den))) {
+                    return Optional.empty();
+                }
+            }
+        }
+        return Optional.of(new Bareiss.Solution(out, den));
     }
 
     /** {@code sum_s digits[s][i] p^(s - lo)} for s in [lo, hi), split in halves so the products stay balanced. */

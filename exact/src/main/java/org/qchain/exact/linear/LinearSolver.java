@@ -108,12 +108,12 @@ public final class LinearSolver {
         int n = a.rows();
         BigInteger[] rowLcm = new BigInteger[n];
         BigInteger[][] ai = integerRows(a, rowLcm);
-        // (L A)(d x) = L v
+        // (L A)(d x) = L v; d, the denominator of a solution with the same A, is likely a multiple of this one's
         BigInteger[][] bi = new BigInteger[n][1];
         for (int i = 0; i < n; i++) {
             bi[i][0] = v[i].multiply(rowLcm[i]);
         }
-        Bareiss.Solution s = solveInteger(ai, bi, progress);
+        Bareiss.Solution s = solveInteger(ai, bi, progress, d);
         return new CommonSolution(s.numerators(), s.denominator().multiply(d));
     }
 
@@ -254,6 +254,11 @@ public final class LinearSolver {
     }
 
     static Bareiss.Solution solveInteger(BigInteger[][] a, BigInteger[][] b, Progress progress) {
+        return solveInteger(a, b, progress, BigInteger.ONE);
+    }
+
+    /** As above, with a likely multiple of the solution's denominator for p-adic lifting to try first. */
+    static Bareiss.Solution solveInteger(BigInteger[][] a, BigInteger[][] b, Progress progress, BigInteger hint) {
         Thread caller = Thread.currentThread();
         int n = a.length;
         if (b[0].length == 0) {
@@ -261,7 +266,7 @@ public final class LinearSolver {
         }
         Optional<long[][]> small = asLongs(a);
         if (small.isPresent() && n >= DIXON_MIN_SIZE) {
-            Optional<Bareiss.Solution> s = Dixon.solve(small.get(), b, caller, progress);
+            Optional<Bareiss.Solution> s = Dixon.solve(small.get(), b, caller, progress, hint);
             if (s.isPresent()) {
                 return s.get();
             }

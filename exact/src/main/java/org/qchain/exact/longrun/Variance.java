@@ -1,8 +1,8 @@
 package org.qchain.exact.longrun;
 
 import java.math.BigInteger;
-import java.util.ArrayList;
 import java.util.List;
+import org.qchain.exact.Fractions;
 import org.qchain.exact.Gcd;
 import org.qchain.exact.Rational;
 import org.qchain.exact.linear.CommonSolution;
@@ -10,8 +10,8 @@ import org.qchain.exact.linear.CommonSolution;
 /**
  * The variance of the time to absorption from the two exact solves over common denominators: t = T / d1 (the mean)
  * and y = Y / d2 = A^-1 t. Every term goes over one denominator L = lcm(d2, d1²) as an integer, their common factor
- * with L is found by a running gcd (which shrinks after the first entries), and each entry is reduced once: about
- * two gcds per entry, where adding the reduced fractions 2y, t and t∘t would take six.
+ * with L is found by a running gcd (which shrinks after the first entries), and the entries are put in lowest terms
+ * together ({@link Fractions#over}), where adding the reduced fractions 2y, t and t∘t would take six gcds per entry.
  */
 final class Variance {
     private Variance() {
@@ -38,11 +38,11 @@ final class Variance {
                 g = Gcd.of(g, v);
             }
         }
-        BigInteger den = l.divide(g);
-        List<Rational> out = new ArrayList<>(n);
-        for (BigInteger v : num) {
-            out.add(Rational.of(v.divide(g), den));
+        if (!g.equals(BigInteger.ONE)) {
+            for (int i = 0; i < n; i++) {
+                num[i] = num[i].divide(g);
+            }
         }
-        return out;
+        return List.of(Fractions.over(num, l.divide(g)));
     }
 }
