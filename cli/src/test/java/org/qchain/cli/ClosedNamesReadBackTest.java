@@ -51,7 +51,7 @@ class ClosedNamesReadBackTest {
     private static BigDecimal evaluate(String formula, String step, int n, String param, String point) {
         String expr = formula.replaceAll("\\b" + step + "\\b", "(" + n + ")")
             .replaceAll("\\b" + param + "\\b", "(" + point + ")");
-        return new BigDecimal(CAS.eval("N(Re(" + expr + "), 40)").replace("*10^", "E"), MathContext.DECIMAL128);
+        return new BigDecimal(CAS.eval("Re(N(" + expr + ", 40))").replace("*10^", "E"), MathContext.DECIMAL128);
     }
 
     @Test

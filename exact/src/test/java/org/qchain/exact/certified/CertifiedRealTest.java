@@ -28,10 +28,22 @@ class CertifiedRealTest {
         return new Apfloat(r.numerator(), REF_DIGITS).divide(new Apfloat(r.denominator(), REF_DIGITS));
     }
 
-    /** Whether the enclosure contains the reference value (good to about 10^-290). */
+    private static final Apfloat SLACK = ApfloatMath.pow(new Apfloat(10, REF_DIGITS), -290);
+
+    /** An enclosure's ends at the reference precision, converted once for every value it is compared with. */
+    private record Bounds(Apfloat lo, Apfloat hi) {
+        static Bounds of(Enclosure e) {
+            return new Bounds(ref(e.lo()), ref(e.hi()));
+        }
+
+        /** Whether the enclosure contains the reference value (good to about 10^-290). */
+        boolean contain(Apfloat v) {
+            return lo.compareTo(v.add(SLACK)) <= 0 && v.subtract(SLACK).compareTo(hi) <= 0;
+        }
+    }
+
     private static boolean contains(Enclosure e, Apfloat v) {
-        Apfloat slack = ApfloatMath.pow(new Apfloat(10, REF_DIGITS), -290);
-        return ref(e.lo()).compareTo(v.add(slack)) <= 0 && v.subtract(slack).compareTo(ref(e.hi())) <= 0;
+        return Bounds.of(e).contain(v);
     }
 
     private static Rational width(Enclosure e) {
@@ -103,10 +115,14 @@ class CertifiedRealTest {
         Planted pl = plant(new java.util.Random(seed));
         List<CertifiedComplex> got = CertifiedRoots.of(pl.poly());
         assertEquals(pl.roots().size(), got.size(), "one value per root");
+        List<Bounds[]> boxes = new ArrayList<>();
+        for (CertifiedComplex z : got) {
+            boxes.add(new Bounds[] {Bounds.of(z.re().enclosure(bits)), Bounds.of(z.im().enclosure(bits))});
+        }
         for (Apfloat[] r : pl.roots()) {
             boolean found = false;
-            for (CertifiedComplex z : got) {
-                if (contains(z.re().enclosure(bits), r[0]) && contains(z.im().enclosure(bits), r[1])) {
+            for (Bounds[] box : boxes) {
+                if (box[0].contain(r[0]) && box[1].contain(r[1])) {
                     found = true;
                 }
             }
@@ -131,8 +147,10 @@ class CertifiedRealTest {
         Planted pl = plant(new java.util.Random(seed));
         for (CertifiedComplex z : CertifiedRoots.of(pl.poly())) {
             Apfloat[] planted = null;
+            Bounds re = Bounds.of(z.re().enclosure(600));
+            Bounds im = Bounds.of(z.im().enclosure(600));
             for (Apfloat[] r : pl.roots()) {
-                if (contains(z.re().enclosure(600), r[0]) && contains(z.im().enclosure(600), r[1])) {
+                if (re.contain(r[0]) && im.contain(r[1])) {
                     planted = r;
                 }
             }
