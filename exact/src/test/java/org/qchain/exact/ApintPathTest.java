@@ -12,8 +12,11 @@ import net.jqwik.api.constraints.LongRange;
 import org.apfloat.ApfloatContext;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.parallel.Isolated;
 
 /** The apfloat paths (forced on small numbers) give the same integers as the BigInteger paths. */
+// runs alone: it switches BigMath's global mode, which every other class's arithmetic reads
+@Isolated
 class ApintPathTest {
 
     @AfterEach

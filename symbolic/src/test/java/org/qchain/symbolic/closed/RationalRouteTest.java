@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.Random;
 import java.util.function.Supplier;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.parallel.Isolated;
 import org.qchain.exact.MatrixPowers;
 import org.qchain.exact.RationalMatrix;
 import org.qchain.exact.model.Model;
@@ -22,6 +23,8 @@ import org.qchain.exact.model.Model;
  * unity). Both also equal the exact module's P^n by repeated squaring at several n (common practice, no source: P^n is
  * defined by repeated multiplication).
  */
+// runs alone: it sets a system property that every closed form of the other classes reads
+@Isolated
 class RationalRouteTest {
 
     /** A dense chain: row i splits a denominator q_i into s positive parts. */
