@@ -7,11 +7,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Random;
+import java.util.function.Function;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -115,8 +117,10 @@ class SymbolicAvailabilityTest {
         return sb.toString();
     }
 
-    private static Rational value(Formula f, Map<String, Rational> at, ParamRing ring) {
-        return ring.fromExpr(ModelParser.parseExpression("<f>", f.plain())).evaluate(at);
+    /** A formula's value at a point; each formula text is read into the ring once per chain, not once per point. */
+    private static Rational value(Formula f, Map<String, Rational> at, ParamRing ring, Map<String, RatFun> read) {
+        return read.computeIfAbsent(f.plain(), t -> ring.fromExpr(ModelParser.parseExpression("<f>", t)))
+            .evaluate(at);
     }
 
     @Test
@@ -130,6 +134,7 @@ class SymbolicAvailabilityTest {
             SymbolicAvailabilityResult f = Analysis.availabilityFormulas(sym, AvailabilityQuery.steadyState(),
                 Progress.NONE);
             ParamRing ring = ParamRing.of(sym.model());
+            Map<String, RatFun> read = new HashMap<>();
             for (int k = 0; k < 3; k++) {
                 Map<String, Rational> at = new LinkedHashMap<>();
                 for (String p : sym.model().usedParameters()) {
@@ -138,17 +143,18 @@ class SymbolicAvailabilityTest {
                 LoadedModel num = LoadedModel.of(sym.model(), Optional.empty(), at);
                 AvailabilityResult e = Analysis.availability(num, AvailabilityQuery.steadyState(), Progress.NONE);
                 String where = text + at;
-                assertEquals(e.availability(), value(f.availability(), at, ring), where);
-                assertEquals(e.unavailability(), value(f.unavailability(), at, ring), where);
-                assertEquals(e.downHoursPerYear(), value(f.downHoursPerYear(), at, ring), where);
-                assertEquals(e.failureFrequency(), value(f.failureFrequency(), at, ring), where);
-                assertEquals(e.meanUpTime().orElseThrow(), value(f.meanUpTime().orElseThrow(), at, ring), where);
-                assertEquals(e.meanDownTime().orElseThrow(), value(f.meanDownTime().orElseThrow(), at, ring), where);
+                Function<Formula, Rational> v = g -> value(g, at, ring, read);
+                assertEquals(e.availability(), v.apply(f.availability()), where);
+                assertEquals(e.unavailability(), v.apply(f.unavailability()), where);
+                assertEquals(e.downHoursPerYear(), v.apply(f.downHoursPerYear()), where);
+                assertEquals(e.failureFrequency(), v.apply(f.failureFrequency()), where);
+                assertEquals(e.meanUpTime().orElseThrow(), v.apply(f.meanUpTime().orElseThrow()), where);
+                assertEquals(e.meanDownTime().orElseThrow(), v.apply(f.meanDownTime().orElseThrow()), where);
                 for (String s : e.up()) {
-                    assertEquals(e.mttf().get(s).orElseThrow(), value(f.mttf().get(s).orElseThrow(), at, ring), where);
+                    assertEquals(e.mttf().get(s).orElseThrow(), v.apply(f.mttf().get(s).orElseThrow()), where);
                 }
                 for (String s : e.states()) {
-                    assertEquals(e.stationary().get(s), value(f.stationary().get(s), at, ring), where);
+                    assertEquals(e.stationary().get(s), v.apply(f.stationary().get(s)), where);
                 }
             }
         }

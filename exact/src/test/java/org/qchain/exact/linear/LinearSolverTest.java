@@ -17,6 +17,7 @@ import org.hipparchus.linear.FieldLUDecomposition;
 import org.hipparchus.linear.FieldMatrix;
 import org.junit.jupiter.api.Test;
 import org.qchain.exact.ErrorKey;
+import org.qchain.exact.QuickTries;
 import org.qchain.exact.Rational;
 import org.qchain.exact.RationalMatrix;
 
@@ -59,6 +60,7 @@ class LinearSolverTest {
     // to 24 states: the reference's cost grows about as n^5, so sizes 25 to 30 would be about three quarters of the
     // test's time with no code path of their own (the 200-state banded solve and the pivoting property go further)
     @Property(seed = "20261202", tries = 40)
+    @QuickTries(15)
     void solveAgreesWithHipparchus(@ForAll @LongRange(min = 0, max = 1_000_000) long seed,
             @ForAll @IntRange(min = 1, max = 24) int n, @ForAll @IntRange(min = 1, max = 3) int m,
             @ForAll boolean sparse) {
@@ -94,6 +96,7 @@ class LinearSolverTest {
 
     // reference library: Hipparchus as above, on wide entries (Bareiss route) and a general (non-dominant) matrix
     @Property(seed = "77", tries = 25)
+    @QuickTries(10)
     void wideEntriesAgreeWithHipparchus(@ForAll @LongRange(min = 0, max = 1_000_000) long seed,
             @ForAll @IntRange(min = 1, max = 16) int n) {
         Random rnd = new Random(seed);
