@@ -6,7 +6,9 @@
 # times to 30 certified digits; no bench jar needed). SET=solves times issue 9's exact solves (the 300-state banded
 # absorption and the 200-state dense long run of LinearSolveBench, with --brief; --max-digits for older jars).
 # Needs the bench jar (mvn -B -q -o -Pbench -pl bench -am package -DskipTests) for the chain files and the CLI jar
-# (./qchain builds it). Prints one line per run: case, jar, wall seconds, user+system CPU seconds, peak RSS.
+# (./qchain builds it). SET=intime times `avail` on the formulas route for k-1 units in active parallel with
+# one repair crew, k = 4..8 states, rates i*lam and mu (one chain: the steady-state formulas only, --max-time-states 0, as the baseline; then
+# with A(t) and R(t) as formulas in t); no bench jar needed. Prints one line per run: case, jar, wall seconds, user+system CPU seconds, peak RSS.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 NEW=${NEW:-cli/target/qchain.jar}
@@ -23,6 +25,21 @@ cases=(
   "absorb300json|absorb $D/banded300.chain --brief --format json --max-digits 1000000000"
   "longrun200json|longrun $D/dense200.chain --brief --format json --max-digits 1000000000"
 )
+elif [ "${SET:-}" = intime ]; then
+cases=()
+for k in 4 5 6 7 8; do
+  f=$D/birth-death$k.chain
+  {
+    echo "# $((k - 1)) pumps of our own in active parallel, one repair crew; down when none runs"
+    echo "chain continuous"
+    echo "param lam in (0, inf)"
+    echo "param mu in (0, inf)"
+    printf 'states'; for ((i = 0; i < k; i++)); do printf ' S%d' $i; done; echo
+    printf 'up'; for ((i = 0; i < k - 1; i++)); do printf ' S%d' $i; done; echo
+    for ((i = 0; i < k - 1; i++)); do echo "S$i S$((i + 1)) $((k - 1 - i))*lam"; echo "S$((i + 1)) S$i mu"; done
+  } > "$f"
+  cases+=("steady$k|avail $f --max-time-states 0" "intime$k|avail $f --max-time-states 8")
+done
 elif [ "${SET:-}" = continuous ]; then
 cases=(
   "version|--version"
@@ -45,8 +62,8 @@ echo "# $(date -u +%FT%TZ) $(nproc) cores, load: $(cut -d' ' -f1-3 /proc/loadavg
 for ((r = 1; r <= RUNS; r++)); do
   for c in "${cases[@]}"; do
     name=${c%%|*}; args=${c#*|}
-    for jar in "$NEW" "$OLD"; do
-      [ "$jar" = "$OLD" ] && [ "$OLD" = "$NEW" ] && continue
+    jars=("$NEW"); [ "$OLD" != "$NEW" ] && jars+=("$OLD")
+    for jar in "${jars[@]}"; do
       tag=$([ "$jar" = "$NEW" ] && echo new || echo old)
       # shellcheck disable=SC2086
       /usr/bin/time -f "$name $tag %e %U %S %M" -o bench/target/out/time.txt \

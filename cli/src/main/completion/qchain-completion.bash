@@ -625,7 +625,7 @@ function _picocli_qchain_avail() {
 
   local commands=""
   local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
-  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-t' '--time' '--from' '--hours-per-year' '--max-work' '--max-states' '--format' '--digits' '-o' '--output'"
+  local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-t' '--time' '--from' '--hours-per-year' '--max-work' '--max-states' '--max-time-states' '--format' '--digits' '-o' '--output'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 
   type compopt &>/dev/null && compopt +o default
@@ -653,6 +653,9 @@ function _picocli_qchain_avail() {
       return
       ;;
     '--max-states')
+      return
+      ;;
+    '--max-time-states')
       return
       ;;
     '--format')

@@ -64,30 +64,58 @@ final class ContinuousEngine {
         String from = q.from().orElse(states.get(up.get(0)));
         int start = model.state("--from", from);
         List<AvailabilityResult.PointAvailability> point = new ArrayList<>();
+        List<AvailabilityResult.PointAvailability> reliability = new ArrayList<>();
         if (!q.times().isEmpty()) {
-            guardWork(g, q.times(), q.digits(), q.maxWork());
+            // A(t) and R(t): two transient solves per time, each bounded by the estimate for the generator itself
+            List<Rational> twice = new ArrayList<>(q.times());
+            twice.addAll(q.times());
+            guardWork(g, twice, q.digits(), q.maxWork());
         }
+        RationalMatrix absorbing = q.times().isEmpty() ? g : downAbsorbing(g, up);
         for (int k = 0; k < q.times().size(); k++) {
             Rational t = q.times().get(k);
-            CertifiedTransient plan = CertifiedTransient.of(g, t);
-            // A(t) = sum over up states of P(start, j)(t): the sum of the enclosures encloses it
-            CertifiedDecimal[] a = Ziv.round(bits -> {
-                Enclosure[] row = plan.enclose(bits, Progress.NONE)[start];
-                Rational lo = Rational.ZERO;
-                Rational hi = Rational.ZERO;
-                for (int j : up) {
-                    lo = lo.add(row[j].lo());
-                    hi = hi.add(row[j].hi());
-                }
-                return new Enclosure[] {Enclosure.of(lo, hi.min(Rational.ONE).max(lo))};
-            }, q.digits(), CertifiedTransient.startBits(q.digits()),
-                Math.max(CertifiedTransient.startBits(q.digits()), q.maxBits()), Optional::empty);
-            point.add(new AvailabilityResult.PointAvailability(t, a[0]));
+            point.add(new AvailabilityResult.PointAvailability(t, upProbability(g, start, up, t, q)));
+            reliability.add(new AvailabilityResult.PointAvailability(t, upProbability(absorbing, start, up, t, q)));
             progress.update("times", k + 1, q.times().size());
         }
         return new AvailabilityResult(model.source(), upNames, states, pi, f.availability(), f.unavailability(),
             mttf, f.meanUpTime(), f.meanDownTime(), f.failureFrequency(), f.hoursPerYear(), f.downHoursPerYear(),
-            from, point, q.digits(), List.of(), model.point().filter(p -> !p.isEmpty()));
+            from, point, q.digits(), List.of(), model.point().filter(p -> !p.isEmpty()), reliability);
+    }
+
+    /**
+     * The probability of being in an up state at time t from {@code start}, as certified decimals: with the
+     * generator itself the point availability A(t); with the down states absorbing the reliability R(t).
+     */
+    private static CertifiedDecimal upProbability(RationalMatrix g, int start, List<Integer> up, Rational t,
+                                                  AvailabilityQuery q) {
+        CertifiedTransient plan = CertifiedTransient.of(g, t);
+        // the sum of the enclosures of P(start, j)(t) over the up states encloses the sum
+        CertifiedDecimal[] a = Ziv.round(bits -> {
+            Enclosure[] row = plan.enclose(bits, Progress.NONE)[start];
+            Rational lo = Rational.ZERO;
+            Rational hi = Rational.ZERO;
+            for (int j : up) {
+                lo = lo.add(row[j].lo());
+                hi = hi.add(row[j].hi());
+            }
+            return new Enclosure[] {Enclosure.of(lo, hi.min(Rational.ONE).max(lo))};
+        }, q.digits(), CertifiedTransient.startBits(q.digits()),
+            Math.max(CertifiedTransient.startBits(q.digits()), q.maxBits()), Optional::empty);
+        return a[0];
+    }
+
+    /** The generator with the rows of the down states set to zero: the down states absorbing (for R(t)). */
+    static RationalMatrix downAbsorbing(RationalMatrix g, List<Integer> up) {
+        int n = g.rows();
+        Rational[][] e = new Rational[n][n];
+        java.util.Set<Integer> upSet = new java.util.HashSet<>(up);
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                e[i][j] = upSet.contains(i) ? g.get(i, j) : Rational.ZERO;
+            }
+        }
+        return RationalMatrix.of(e);
     }
 
     /** Refuses, before any work, a P(t) whose estimated multiplications pass the query's limit. */

@@ -362,8 +362,10 @@ public final class Report {
         if (model.model().upStates().isEmpty()) {
             notes.add("The model has no 'up' line: availability figures need the operating states.");
         } else {
+            // no formulas in t: the report states the steady-state figures (and plots A(t) numerically)
             AvailabilityQuery aq = new AvailabilityQuery(q.from(), List.of(), org.qchain.exact.ctmc.Availability
-                .HOURS_PER_YEAR, q.digits(), CertifiedPowers.DEFAULT_MAX_BITS);
+                .HOURS_PER_YEAR, q.digits(), CertifiedPowers.DEFAULT_MAX_BITS, CertifiedPowers.DEFAULT_MAX_WORK,
+                false, LongRunQuery.DEFAULT_MAX_STATES, 0);
             Optional<org.qchain.result.Result> r = ask(aq, "availability", notes);
             if (r.isPresent() && !(r.get() instanceof AvailabilityResult)) {
                 notes.add("availability: the figures are formulas in the parameters here; qchain avail "
@@ -554,8 +556,15 @@ public final class Report {
             }
             List<Rational> y = a.get().point().stream().map(p -> Rational.parse(p.value().text())).toList();
             Optional<Rational> limit = Optional.of(steady.orElse(a.get()).availability());
-            return Optional.of(new ReportResult.Plot("availability", "A(t) from " + a.get().from() + " against t",
-                "t", "availability", List.of(new ReportResult.Series("A(t)", ts, y, limit))));
+            List<ReportResult.Series> series = new ArrayList<>();
+            series.add(new ReportResult.Series("A(t)", ts, y, limit));
+            if (a.get().reliability().size() == ts.size()) {
+                // R(t) <= A(t): the same run gives the reliability with the down states absorbing
+                series.add(new ReportResult.Series("R(t)", ts, a.get().reliability().stream()
+                    .map(p -> Rational.parse(p.value().text())).toList(), Optional.empty()));
+            }
+            return Optional.of(new ReportResult.Plot("availability", "A(t) and R(t) from " + a.get().from()
+                + " against t", "t", "probability", series));
         }
         TransientQuery tq = new TransientQuery(ts, Optional.of(from()), 6, CertifiedPowers.DEFAULT_MAX_BITS);
         Optional<TransientResult> r = ask(tq, "P(t) for the plot", notes).map(TransientResult.class::cast);

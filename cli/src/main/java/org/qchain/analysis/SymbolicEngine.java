@@ -1166,13 +1166,113 @@ final class SymbolicEngine {
         }
         Map<String, Rational> given = new LinkedHashMap<>();
         new java.util.TreeMap<>(model.given()).forEach(given::put);
+        List<String> warnings = new ArrayList<>(checked(model).warnings());
+        Optional<org.qchain.result.SymbolicAvailabilityResult.InTime> inTime = inTime(model, q, p, up,
+            conditions, warnings, progress);
         return new org.qchain.result.SymbolicAvailabilityResult(m.source(), p.occurringVariables(),
             fig.up().stream().map(states::get).toList(), states, pi, new RatFunFormula(fig.availability(), true),
             new RatFunFormula(fig.unavailability(), true), q.hoursPerYear(),
             new RatFunFormula(fig.downHoursPerYear(), true), new RatFunFormula(fig.failureFrequency(), true),
             fig.meanUpTime().map(x -> new RatFunFormula(x, true)),
             fig.meanDownTime().map(x -> new RatFunFormula(x, true)), mttf, conditions, given, at,
-            checked(model).warnings());
+            warnings, inTime);
+    }
+
+    /**
+     * A(t) and R(t) from the query's start as closed forms in t: the combination e_start P(t) u of the generator's
+     * transient form, with u the 0/1 vector of the up states, and the same for the generator whose down rows are
+     * zero (the down states absorbing). Empty, with a warning, for a chain of more states than the query allows or a
+     * closed form past the size limits.
+     */
+    private static Optional<org.qchain.result.SymbolicAvailabilityResult.InTime> inTime(LoadedModel model,
+            AvailabilityQuery q, RatFunMatrix p, List<Integer> up, List<org.qchain.result.Condition> conditions,
+            List<String> warnings, Progress progress) {
+        List<String> states = model.model().states();
+        int n = states.size();
+        if (n > q.maxTimeStates()) {
+            if (q.maxTimeStates() > 0) {
+                warnings.add("A(t) and R(t) as formulas in t are given for chains of up to " + q.maxTimeStates()
+                    + " states; this one has " + n + " (raise the limit with --max-time-states; the eigenvalues of"
+                    + " larger generators take long)");
+            }
+            return Optional.empty();
+        }
+        String from = q.from().orElse(states.get(up.get(0)));
+        int start = model.state("--from", from);
+        List<Rational> e = new ArrayList<>();
+        List<Rational> u = new ArrayList<>();
+        java.util.Set<Integer> upSet = new java.util.HashSet<>(up);
+        for (int i = 0; i < n; i++) {
+            e.add(i == start ? Rational.ONE : Rational.ZERO);
+            u.add(upSet.contains(i) ? Rational.ONE : Rational.ZERO);
+        }
+        RatFun zero = RatFun.of(p.ring().zero());
+        RatFun[][] absorbing = new RatFun[n][n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                absorbing[i][j] = upSet.contains(i) ? p.get(i, j) : zero;
+            }
+        }
+        try {
+            TransientForm a = ClosedForms.ofGenerator(p, states, SymbolicLimits.DEFAULT, progress);
+            TransientForm r = ClosedForms.ofGenerator(RatFunMatrix.of(p.ring(), absorbing), states,
+                SymbolicLimits.DEFAULT, progress);
+            TimeFormula af = a.combination(e, u, false);
+            TimeFormula rf = r.combination(e, u, false);
+            // the closed forms' own conditions (distinct eigenvalues of the generic case), each once
+            Map<String, Domain> domains = new LinkedHashMap<>();
+            model.model().params().forEach(d -> domains.put(d.name(), d.domain()));
+            java.util.Set<String> seen = new java.util.HashSet<>();
+            conditions.forEach(c -> seen.add(c.plain()));
+            for (org.qchain.result.Condition c : conditions(a.conditions(domains))) {
+                if (seen.add(c.plain())) {
+                    conditions.add(c);
+                }
+            }
+            for (org.qchain.result.Condition c : conditions(r.conditions(domains))) {
+                if (seen.add(c.plain())) {
+                    conditions.add(c);
+                }
+            }
+            for (TransientForm tf : List.of(a, r)) {
+                Optional<Point> pt = point(model, tf.parameters()).filter(x -> !x.isEmpty());
+                if (pt.isPresent()) {
+                    try {
+                        tf.checkPoint(pt.get().values());
+                    } catch (QchainException c) {
+                        if (c.key() != ErrorKey.CLOSED_FORM_CONDITION) {
+                            throw c;
+                        }
+                        warnings.add((tf == a ? "A(t): " : "R(t): ") + c.detail());
+                    }
+                }
+            }
+            return Optional.of(new org.qchain.result.SymbolicAvailabilityResult.InTime(from, a.symbols().time(),
+                Formula.of(af.plain(), af.latex()), Formula.of(rf.plain(), rf.latex()), rootFactors(a, af.plain()),
+                rootFactors(r, rf.plain())));
+        } catch (QchainException x) {
+            if (x.key() == ErrorKey.INTERRUPTED) {
+                throw x;
+            }
+            warnings.add("A(t) and R(t) as formulas in t are not given: " + x.detail());
+            return Optional.empty();
+        }
+    }
+
+    /**
+     * The factors a transient form names (eigenvalues as the roots of a factor) that occur in a formula of it, by
+     * name.
+     */
+    private static Map<String, Formula> rootFactors(TransientForm tf, String plain) {
+        Map<String, Formula> out = new LinkedHashMap<>();
+        for (Eigenvalue ev : tf.eigenvalues()) {
+            if (!ev.name().isEmpty()
+                && java.util.regex.Pattern.compile("\\b" + java.util.regex.Pattern.quote(ev.name()) + "\\b")
+                    .matcher(plain).find()) {
+                out.put(ev.name(), Formula.of(ev.factor(), ev.factorLatex()));
+            }
+        }
+        return out;
     }
 
     /** The irreducible non-constant factors of a polynomial, each once, normalised by the factorisation. */

@@ -66,6 +66,11 @@ final class AvailCommand implements Callable<Integer> {
         description = "Refuse symbolic solves of more than S states (default: ${DEFAULT-VALUE}).")
     int maxStates = LongRunQuery.DEFAULT_MAX_STATES;
 
+    @Option(names = "--max-time-states", paramLabel = "S", defaultValue = "" + AvailabilityQuery.DEFAULT_MAX_TIME_STATES,
+        description = "With formulas: give A(t) and R(t) as formulas in t for chains of at most S states, 0 for never"
+            + " (default: ${DEFAULT-VALUE}; they need the generator's eigenvalues).")
+    int maxTimeStates = AvailabilityQuery.DEFAULT_MAX_TIME_STATES;
+
     @Mixin
     OutputOptions output;
 
@@ -76,11 +81,15 @@ final class AvailCommand implements Callable<Integer> {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(),
                 "Invalid value for option '--max-states': " + maxStates + " (must be at least 1)");
         }
+        if (maxTimeStates < 0) {
+            throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+                "Invalid value for option '--max-time-states': " + maxTimeStates + " (must be at least 0)");
+        }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
         LoadedModel loaded = model.load();
         AvailabilityQuery q = new AvailabilityQuery(Optional.ofNullable(from),
             times == null ? List.of() : times.times(), h, output.digits(), CertifiedPowers.DEFAULT_MAX_BITS, maxWork,
-            symbolic, maxStates);
+            symbolic, maxStates, maxTimeStates);
         Result result = root.run(spec, progress -> Analysis.run(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

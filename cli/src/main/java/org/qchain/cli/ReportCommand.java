@@ -42,7 +42,7 @@ import picocli.CommandLine.TypeConversionException;
             + " conditions), diagram (Graphviz DOT; drawn in HTML), steps (P^n exact and decimal, or P(t)), closed"
             + " (the closed form in n), longrun (classes, long run, absorption; availability for continuous chains),"
             + " sensitivity (derivative and elasticity for every parameter, and a sweep), plots (P^n against n or"
-            + " A(t) against t with the limit dashed; the sweep).",
+            + " A(t) and R(t) against t with the limit dashed; the sweep).",
         "The file is written atomically: a failure leaves an existing file untouched."})
 final class ReportCommand implements Callable<Integer> {
     @Spec

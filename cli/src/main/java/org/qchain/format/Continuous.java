@@ -138,7 +138,28 @@ final class Continuous {
         out.add(new FormulaRow(MEAN_DOWN, r.meanDownTime(), NEVER_FAILS));
         r.mttf().forEach((s, v) -> out.add(new FormulaRow(mttf(s), v, "inf")));
         r.stationary().forEach((s, v) -> out.add(new FormulaRow(share(s), Optional.of(v), "")));
+        r.inTime().ifPresent(t -> {
+            out.add(new FormulaRow(pointAvailability(t), Optional.of(t.pointAvailability()), ""));
+            t.availabilityWhere().forEach((name, f) -> out.add(new FormulaRow(where(name, "A"), Optional.of(f), "")));
+            out.add(new FormulaRow(reliability(t), Optional.of(t.reliability()), ""));
+            t.reliabilityWhere().forEach((name, f) -> out.add(new FormulaRow(where(name, "R"), Optional.of(f), "")));
+        });
         return out;
+    }
+
+    /** The name of the A(t) row, e.g. {@code point availability A(t) from Up}. */
+    static String pointAvailability(SymbolicAvailabilityResult.InTime t) {
+        return "point availability A(" + t.time() + ") from " + t.from();
+    }
+
+    /** The name of the R(t) row, e.g. {@code reliability R(t) from Up}. */
+    static String reliability(SymbolicAvailabilityResult.InTime t) {
+        return "reliability R(" + t.time() + ") from " + t.from();
+    }
+
+    /** The name of a factor's row: its eigenvalues are the roots of the factor named in that formula. */
+    static String where(String name, String figure) {
+        return "  where " + name + " in " + figure + " (roots of)";
     }
 
     /** The title line's words about a symbolic availability result. */
@@ -220,13 +241,24 @@ final class Continuous {
         return Sections.exact(f).map(r -> Text.decimal(r, digits)).orElse("");
     }
 
-    /** The point availabilities, one row each: {@code A(t)} label, decimal (certified). */
+    /**
+     * The point availabilities, then the reliabilities, one row each: {@code A(t)} or {@code R(t)} label, decimal
+     * (certified), enclosure width.
+     */
     static List<List<String>> points(AvailabilityResult r) {
         List<List<String>> out = new ArrayList<>();
         for (AvailabilityResult.PointAvailability p : r.point()) {
             out.add(List.of("A(" + p.t() + ") from " + r.from(), p.value().text(), bound(p.value().enclosure().width())));
         }
+        for (AvailabilityResult.PointAvailability p : r.reliability()) {
+            out.add(List.of("R(" + p.t() + ") from " + r.from(), p.value().text(), bound(p.value().enclosure().width())));
+        }
         return out;
+    }
+
+    /** The heading of the certified table: what its rows are. */
+    static String pointsHeading(AvailabilityResult r) {
+        return r.reliability().isEmpty() ? "Point availability" : "Point availability A(t) and reliability R(t)";
     }
 
     /** What a rate sensitivity is about, e.g. {@code MTTF from Both}. */

@@ -443,8 +443,10 @@ final class CsvFormatter extends DocLayout {
         List<Continuous.FormulaRow> rows = Continuous.formulas(r);
         for (int k = 0; k < rows.size(); k++) {
             Continuous.FormulaRow f = rows.get(k);
-            Text.csvRecord(sb, List.of(f.name(), f.plain(), f.latex(), at.isEmpty() ? "" : at.get(k).get(1),
-                at.isEmpty() ? "" : at.get(k).get(2)));
+            // the formulas in t (after the figures) have no single value at the point
+            boolean valued = k < at.size();
+            Text.csvRecord(sb, List.of(f.name().strip(), f.plain(), f.latex(), valued ? at.get(k).get(1) : "",
+                valued ? at.get(k).get(2) : ""));
         }
         for (org.qchain.result.Condition c : r.conditions()) {
             Text.csvRecord(sb, List.of(c.proved() ? "condition (proved)" : "condition (not proved)", c.plain(),

@@ -618,11 +618,24 @@ final class JsonFormatter extends Layout {
                 .string("unavailability", dec(r.unavailability()))
                 .string("down_hours_per_year", dec(r.downHoursPerYear())))
             .string("from", r.from())
-            .objects("point_availability_at", r.point(), p -> Json.object()
-                .string("t", p.t().toString())
-                .string("decimal", p.value().text())
-                .string("status", p.value().status().name().toLowerCase(java.util.Locale.ROOT))
-                .string("bound", Continuous.bound(p.value().enclosure().width())));
+            .objects("point_availability_at", r.point(), JsonFormatter::certifiedAt)
+            .objects("reliability_at", r.reliability(), JsonFormatter::certifiedAt);
+    }
+
+    /** Named factors as {@code {"f1":"x^3 + ..."}}, plain or LaTeX. */
+    private static Json where(Map<String, org.qchain.result.Formula> defs, boolean latex) {
+        Json w = Json.object();
+        defs.forEach((k, v) -> w.string(k, latex ? v.latex() : v.plain()));
+        return w;
+    }
+
+    /** One certified value at a time: {@code {"t","decimal","status","bound"}}. */
+    private static Json certifiedAt(AvailabilityResult.PointAvailability p) {
+        return Json.object()
+            .string("t", p.t().toString())
+            .string("decimal", p.value().text())
+            .string("status", p.value().status().name().toLowerCase(java.util.Locale.ROOT))
+            .string("bound", Continuous.bound(p.value().enclosure().width()));
     }
 
     @Override
@@ -649,18 +662,29 @@ final class JsonFormatter extends Layout {
             .string("unavailability", r.unavailability().plain())
             .string("hours_per_year", r.hoursPerYear().toString())
             .string("down_hours_per_year", r.downHoursPerYear().plain())
-            .object("stationary", pi)
-            .string("kind", "symbolic")
+            .object("stationary", pi);
+        r.inTime().ifPresent(t -> j.string("point_availability", t.pointAvailability().plain())
+            .string("reliability", t.reliability().plain())
+            .string("from", t.from())
+            .string("t_symbol", t.time())
+            .object("where", where(t.availabilityWhere(), false))
+            .object("reliability_where", where(t.reliabilityWhere(), false)));
+        Json tex = Json.object()
+            .string("steady_state_availability", r.availability().latex())
+            .object("mttf", mttfTex)
+            .string("mean_up_time", r.meanUpTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
+            .string("mean_down_time", r.meanDownTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
+            .string("failure_frequency", r.failureFrequency().latex())
+            .string("unavailability", r.unavailability().latex())
+            .string("down_hours_per_year", r.downHoursPerYear().latex())
+            .object("stationary", piTex);
+        r.inTime().ifPresent(t -> tex.string("point_availability", t.pointAvailability().latex())
+            .string("reliability", t.reliability().latex())
+            .object("where", where(t.availabilityWhere(), true))
+            .object("reliability_where", where(t.reliabilityWhere(), true)));
+        j.string("kind", "symbolic")
             .strings("parameters", r.parameters())
-            .object("latex", Json.object()
-                .string("steady_state_availability", r.availability().latex())
-                .object("mttf", mttfTex)
-                .string("mean_up_time", r.meanUpTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
-                .string("mean_down_time", r.meanDownTime().map(org.qchain.result.Formula::latex).orElse("undefined"))
-                .string("failure_frequency", r.failureFrequency().latex())
-                .string("unavailability", r.unavailability().latex())
-                .string("down_hours_per_year", r.downHoursPerYear().latex())
-                .object("stationary", piTex))
+            .object("latex", tex)
             .objects("conditions", r.conditions(), c -> Json.object()
                 .string("condition", c.plain())
                 .string("latex", c.latex())

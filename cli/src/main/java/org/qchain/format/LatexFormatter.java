@@ -567,6 +567,9 @@ final class LatexFormatter extends DocLayout {
                 sb.append(Text.latex(f.get(0))).append(" & ").append(Text.latex(f.get(1))).append(" & ")
                     .append(Text.latex(f.get(2))).append(" \\\\\n");
             }
+            for (List<String> pt : Continuous.points(a)) {
+                sb.append(Text.latex(pt.get(0))).append(" & & ").append(Text.latex(pt.get(1))).append(" \\\\\n");
+            }
             sb.append("\\end{tabular}\n");
         });
         return caution(sb);

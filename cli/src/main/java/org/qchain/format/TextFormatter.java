@@ -719,7 +719,7 @@ final class TextFormatter extends DocLayout {
         }
         sb.append(table.render());
         if (!r.point().isEmpty()) {
-            sb.append("\nPoint availability (certified decimals, ").append(Text.digits(digits)).append("):\n");
+            sb.append("\n").append(Continuous.pointsHeading(r)).append(" (certified decimals, ").append(Text.digits(digits)).append("):\n");
             TextTable pts = new TextTable().addRow("figure", "decimal", "enclosure width");
             Continuous.points(r).forEach(pts::addRow);
             sb.append(pts.render());

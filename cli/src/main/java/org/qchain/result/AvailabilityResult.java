@@ -28,12 +28,16 @@ import org.qchain.exact.certified.CertifiedDecimal;
  * @param warnings           warnings for the user
  * @param at the parameter values used and where they came from (nominal or {@code --at}); absent for a model
  *           without parameters and on the symbolic route
+ * @param reliability        reliability R(t) from {@code from} at each time asked for: the probability of having
+ *                           stayed in the up states throughout [0, t] (the down states made absorbing); empty when no
+ *                           time was asked for
  */
 public record AvailabilityResult(String source, List<String> up, List<String> states, Map<String, Rational> stationary,
                                  Rational availability, Rational unavailability, Map<String, Optional<Rational>> mttf,
                                  Optional<Rational> meanUpTime, Optional<Rational> meanDownTime,
                                  Rational failureFrequency, Rational hoursPerYear, Rational downHoursPerYear,
-                                 String from, List<PointAvailability> point, int digits, List<String> warnings, Optional<Point> at)
+                                 String from, List<PointAvailability> point, int digits, List<String> warnings, Optional<Point> at,
+                                 List<PointAvailability> reliability)
     implements Result {
     /** Copies the collections. */
     public AvailabilityResult {
@@ -43,6 +47,37 @@ public record AvailabilityResult(String source, List<String> up, List<String> st
         mttf = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(mttf));
         point = List.copyOf(point);
         warnings = List.copyOf(warnings);
+        reliability = List.copyOf(reliability);
+    }
+
+    /**
+     * The result without reliabilities at given times (the form before R(t) was added).
+     *
+     * @param source as in the record
+     * @param up as in the record
+     * @param states as in the record
+     * @param stationary as in the record
+     * @param availability as in the record
+     * @param unavailability as in the record
+     * @param mttf as in the record
+     * @param meanUpTime as in the record
+     * @param meanDownTime as in the record
+     * @param failureFrequency as in the record
+     * @param hoursPerYear as in the record
+     * @param downHoursPerYear as in the record
+     * @param from as in the record
+     * @param point as in the record
+     * @param digits as in the record
+     * @param warnings as in the record
+     * @param at as in the record
+     */
+    public AvailabilityResult(String source, List<String> up, List<String> states, Map<String, Rational> stationary,
+        Rational availability, Rational unavailability, Map<String, Optional<Rational>> mttf,
+        Optional<Rational> meanUpTime, Optional<Rational> meanDownTime, Rational failureFrequency,
+        Rational hoursPerYear, Rational downHoursPerYear, String from, List<PointAvailability> point, int digits,
+        List<String> warnings, Optional<Point> at) {
+        this(source, up, states, stationary, availability, unavailability, mttf, meanUpTime, meanDownTime,
+            failureFrequency, hoursPerYear, downHoursPerYear, from, point, digits, warnings, at, List.of());
     }
 
     /**

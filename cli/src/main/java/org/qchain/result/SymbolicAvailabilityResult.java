@@ -33,6 +33,9 @@ import org.qchain.exact.Rational;
  * @param atPoint          the exact figures at the parameter point, when every parameter has a value (equal to the
  *                         formulas evaluated there)
  * @param warnings         warnings for the user (the model's located range conditions)
+ * @param inTime           the point availability A(t) and the reliability R(t) as formulas in t and the parameters;
+ *                         empty when they were not computed (a chain of more states than the query allows, or a
+ *                         closed form past the size limits: a warning then says so)
  */
 public record SymbolicAvailabilityResult(String source, List<String> parameters, List<String> up, List<String> states,
                                          Map<String, Formula> stationary, Formula availability,
@@ -40,7 +43,8 @@ public record SymbolicAvailabilityResult(String source, List<String> parameters,
                                          Formula failureFrequency, Optional<Formula> meanUpTime,
                                          Optional<Formula> meanDownTime, Map<String, Optional<Formula>> mttf,
                                          List<Condition> conditions, Map<String, Rational> substituted,
-                                         Optional<AvailabilityResult> atPoint, List<String> warnings)
+                                         Optional<AvailabilityResult> atPoint, List<String> warnings,
+                                         Optional<InTime> inTime)
     implements Result {
     /** Copies the collections, keeping their order. */
     public SymbolicAvailabilityResult {
@@ -52,6 +56,62 @@ public record SymbolicAvailabilityResult(String source, List<String> parameters,
         conditions = List.copyOf(conditions);
         substituted = Collections.unmodifiableMap(new LinkedHashMap<>(substituted));
         warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * The result without the formulas in t (the form before A(t) and R(t) were added).
+     *
+     * @param source           as in the record
+     * @param parameters       as in the record
+     * @param up               as in the record
+     * @param states           as in the record
+     * @param stationary       as in the record
+     * @param availability     as in the record
+     * @param unavailability   as in the record
+     * @param hoursPerYear     as in the record
+     * @param downHoursPerYear as in the record
+     * @param failureFrequency as in the record
+     * @param meanUpTime       as in the record
+     * @param meanDownTime     as in the record
+     * @param mttf             as in the record
+     * @param conditions       as in the record
+     * @param substituted      as in the record
+     * @param atPoint          as in the record
+     * @param warnings         as in the record
+     */
+    public SymbolicAvailabilityResult(String source, List<String> parameters, List<String> up, List<String> states,
+                                      Map<String, Formula> stationary, Formula availability,
+                                      Formula unavailability, Rational hoursPerYear, Formula downHoursPerYear,
+                                      Formula failureFrequency, Optional<Formula> meanUpTime,
+                                      Optional<Formula> meanDownTime, Map<String, Optional<Formula>> mttf,
+                                      List<Condition> conditions, Map<String, Rational> substituted,
+                                      Optional<AvailabilityResult> atPoint, List<String> warnings) {
+        this(source, parameters, up, states, stationary, availability, unavailability, hoursPerYear,
+            downHoursPerYear, failureFrequency, meanUpTime, meanDownTime, mttf, conditions, substituted, atPoint,
+            warnings, Optional.empty());
+    }
+
+    /**
+     * A(t) and R(t) from one start state as closed forms in t: sums of terms {@code c t^j exp(lambda t)} over the
+     * eigenvalues of the generator (for A(t)) and of the generator with the down states made absorbing (for R(t)),
+     * valid for every t &ge; 0 where the conditions of the result hold.
+     *
+     * @param from              the start state (the first up state unless {@code --from} names another)
+     * @param time              the name of the time variable in the formulas ({@code t}, or another name when a
+     *                          parameter is called t)
+     * @param pointAvailability A(t), the probability of being in an up state at time t
+     * @param reliability       R(t), the probability of having stayed in the up states throughout [0, t]
+     * @param availabilityWhere the factors named in A(t) ({@code f1 = ...}, for eigenvalues written as the roots of an
+     *                          irreducible factor of degree 3 or more), by name
+     * @param reliabilityWhere  the same for R(t) (its own names)
+     */
+    public record InTime(String from, String time, Formula pointAvailability, Formula reliability,
+                         Map<String, Formula> availabilityWhere, Map<String, Formula> reliabilityWhere) {
+        /** Copies the maps, keeping their order. */
+        public InTime {
+            availabilityWhere = Collections.unmodifiableMap(new LinkedHashMap<>(availabilityWhere));
+            reliabilityWhere = Collections.unmodifiableMap(new LinkedHashMap<>(reliabilityWhere));
+        }
     }
 
     /** The substituted values as {@code a=1/2, b=3}, or the empty string. */

@@ -165,7 +165,7 @@ class SymbolicAvailabilityTest {
         LoadedModel m = LoadedModel.load(Path.of(Cli.model("generator-set.chain")), Optional.empty());
         AvailabilityQuery d = AvailabilityQuery.steadyState();
         SymbolicAvailabilityResult r = Analysis.availabilityFormulas(m, new AvailabilityQuery(d.from(), d.times(),
-            d.hoursPerYear(), d.digits(), d.maxBits(), d.maxWork(), true, d.maxStates()), Progress.NONE);
+            d.hoursPerYear(), d.digits(), d.maxBits(), d.maxWork(), true, d.maxStates(), 0), Progress.NONE);
         AvailabilityResult at = r.atPoint().orElseThrow();
         // 1 - 2 lam^2/(mu^2 + 2 lam mu + 2 lam^2) at lam = 1/500, mu = 1/12 (the formula above, evaluated by hand)
         assertEquals(Rational.of(16375, 16393), at.availability());

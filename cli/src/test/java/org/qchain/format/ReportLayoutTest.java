@@ -348,8 +348,28 @@ class ReportLayoutTest {
         assertTrue(html.contains("Limit as t grows"), html);
         assertTrue(html.contains("steady-state availability"));
         NodeList lines = d.getElementsByTagNameNS("http://www.w3.org/2000/svg", "polyline");
-        assertEquals(2, lines.getLength(), "A(t) and the sweep");
+        assertEquals(3, lines.getLength(), "A(t), R(t) and the sweep");
         assertEquals(ReportQuery.CONTINUOUS_POINTS, ((Element) lines.item(0)).getAttribute("points").split(" ")
             .length);
+    }
+
+    @Test
+    void availabilityPlotCarriesTheReliabilityBelowTheAvailability() {
+        ReportResult.Plot plot = report("generator-set.chain").sections().stream()
+            .filter(ReportResult.PlotsSection.class::isInstance).map(ReportResult.PlotsSection.class::cast)
+            .flatMap(p -> p.plots().stream()).filter(p -> p.id().equals("availability")).findFirst().orElseThrow();
+        assertEquals(2, plot.series().size());
+        ReportResult.Series a = plot.series().get(0);
+        ReportResult.Series rel = plot.series().get(1);
+        assertEquals("R(t)", rel.label());
+        // R(0) = A(0) = 1 from an up state; R(t) <= A(t), and R falls: a unit that has never failed has not failed
+        // at any earlier time either (common practice, no source)
+        assertEquals(Rational.ONE, rel.y().get(0));
+        for (int k = 0; k < a.y().size(); k++) {
+            assertTrue(rel.y().get(k).compareTo(a.y().get(k)) <= 0, "R <= A at point " + k);
+            if (k > 0) {
+                assertTrue(rel.y().get(k).compareTo(rel.y().get(k - 1)) < 0, "R falls at point " + k);
+            }
+        }
     }
 }
