@@ -624,7 +624,7 @@ function _picocli_qchain_avail() {
   local prev_word=${COMP_WORDS[COMP_CWORD-1]}
 
   local commands=""
-  local flag_opts="'--symbolic' '-h' '--help' '-V' '--version'"
+  local flag_opts="'--symbolic' '--formulas-in-t' '-h' '--help' '-V' '--version'"
   local arg_opts="'--at' '--max-input-digits' '--max-dense-states' '-t' '--time' '--from' '--hours-per-year' '--max-work' '--max-states' '--max-time-states' '--format' '--digits' '-o' '--output'"
   local FORMAT_option_args=("text" "json" "csv" "markdown" "latex") # --format values
 

@@ -41,6 +41,7 @@ public final class LoadedModel {
     private final Model model;
     private final Optional<Path> file;
     private final Map<String, Rational> given;
+    private final java.util.Set<String> explicit;
     private final Map<String, Rational> known;
     private final Optional<SparseRationalMatrix> sparse;
     /** A continuous chain's generator at the point, as validated at load (empty if a parameter has no value). */
@@ -50,9 +51,14 @@ public final class LoadedModel {
     private volatile SymbolicValidation symbolic;
 
     private LoadedModel(Model model, Optional<Path> file, Map<String, Rational> given) {
+        this(model, file, given, given.keySet());
+    }
+
+    private LoadedModel(Model model, Optional<Path> file, Map<String, Rational> given, java.util.Set<String> explicit) {
         this.model = model;
         this.file = file;
         this.given = given;
+        this.explicit = java.util.Set.copyOf(explicit);
         Map<String, Rational> k = new LinkedHashMap<>();
         for (ParamDecl d : model.params()) {
             Rational v = given.containsKey(d.name()) ? given.get(d.name()) : d.nominal().orElse(null);
@@ -197,6 +203,31 @@ public final class LoadedModel {
         }
     }
 
+    /**
+     * The same model with every known value of a used parameter given explicitly, so that the formulas route puts
+     * them all in: its formulas are then in the parameters without a value only (in none for a complete model), and
+     * closed forms in t come out with exact numbers for the rates.
+     *
+     * @return the model with its known values given
+     */
+    public LoadedModel withKnownValuesGiven() {
+        Map<String, Rational> values = new java.util.LinkedHashMap<>();
+        for (String name : model.usedParameters()) {
+            if (known.containsKey(name)) {
+                values.put(name, known.get(name));
+            }
+        }
+        return new LoadedModel(model, file, values, explicit);
+    }
+
+    /**
+     * The names of the values given with {@code --at}: those of {@link #given} unless
+     * {@link #withKnownValuesGiven} added the nominal values.
+     */
+    public java.util.Set<String> explicit() {
+        return explicit;
+    }
+
     /** The parsed model. */
     public Model model() {
         return model;
@@ -266,7 +297,7 @@ public final class LoadedModel {
         for (String name : model.usedParameters()) {
             p.put(name, known.get(name));
         }
-        return Optional.of(new Point(p, given.keySet()));
+        return Optional.of(new Point(p, explicit));
     }
 
     /**

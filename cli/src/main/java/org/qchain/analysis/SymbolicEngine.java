@@ -1175,7 +1175,7 @@ final class SymbolicEngine {
             new RatFunFormula(fig.downHoursPerYear(), true), new RatFunFormula(fig.failureFrequency(), true),
             fig.meanUpTime().map(x -> new RatFunFormula(x, true)),
             fig.meanDownTime().map(x -> new RatFunFormula(x, true)), mttf, conditions, given, at,
-            warnings, inTime);
+            warnings, inTime, org.qchain.exact.model.ValueOrigin.of(given.keySet(), model.explicit()));
     }
 
     /**

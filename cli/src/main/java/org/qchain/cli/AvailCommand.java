@@ -62,6 +62,11 @@ final class AvailCommand implements Callable<Integer> {
         + " formulas, with their values at the point. Models with a parameter without a value are symbolic anyway.")
     boolean symbolic;
 
+    @Option(names = "--formulas-in-t", description = "Give A(t) and R(t) as closed forms in t with the parameter"
+        + " values put in (exact numbers for the rates; parameters without a value stay symbolic); loads the formula"
+        + " engine. Not with --symbolic, which gives them in the parameters.")
+    boolean formulasInT;
+
     @Option(names = "--max-states", paramLabel = "S", defaultValue = "" + LongRunQuery.DEFAULT_MAX_STATES,
         description = "Refuse symbolic solves of more than S states (default: ${DEFAULT-VALUE}).")
     int maxStates = LongRunQuery.DEFAULT_MAX_STATES;
@@ -85,11 +90,16 @@ final class AvailCommand implements Callable<Integer> {
             throw new picocli.CommandLine.ParameterException(spec.commandLine(),
                 "Invalid value for option '--max-time-states': " + maxTimeStates + " (must be at least 0)");
         }
+        if (formulasInT && symbolic) {
+            throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+                "Options '--formulas-in-t' and '--symbolic' exclude each other: --symbolic keeps the parameters in"
+                    + " the formulas in t, --formulas-in-t puts their values in");
+        }
         Emitter.checkTarget(output.output(), Optional.of(model.model));
-        LoadedModel loaded = model.load();
+        LoadedModel loaded = formulasInT ? model.load().withKnownValuesGiven() : model.load();
         AvailabilityQuery q = new AvailabilityQuery(Optional.ofNullable(from),
             times == null ? List.of() : times.times(), h, output.digits(), CertifiedPowers.DEFAULT_MAX_BITS, maxWork,
-            symbolic, maxStates, maxTimeStates);
+            symbolic || formulasInT, maxStates, maxTimeStates);
         Result result = root.run(spec, progress -> Analysis.run(loaded, q, progress));
         Emitter.emit(spec, output.formatter().format(result), result.warnings(), output.output());
         return ExitCodes.OK;

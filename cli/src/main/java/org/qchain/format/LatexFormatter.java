@@ -544,8 +544,8 @@ final class LatexFormatter extends DocLayout {
             .append(Text.comment(r.parameters().isEmpty() ? "no parameter" : String.join(", ", r.parameters())))
             .append('\n');
         if (!r.substituted().isEmpty()) {
-            sb.append("% substituted before solving (given with --at): ").append(Text.comment(r.substitutedText()))
-                .append('\n');
+            sb.append("% substituted before solving (").append(r.substitutedOrigin()).append("): ")
+                .append(Text.comment(r.substitutedText())).append('\n');
         }
         sb.append("\\begin{tabular}{ll}\n figure & formula \\\\ \\hline\n");
         for (Continuous.FormulaRow f : Continuous.formulas(r)) {

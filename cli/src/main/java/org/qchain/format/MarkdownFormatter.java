@@ -514,8 +514,8 @@ final class MarkdownFormatter extends DocLayout {
             .append(Text.markdown(r.parameters().isEmpty() ? "no parameter" : String.join(", ", r.parameters())))
             .append(")");
         if (!r.substituted().isEmpty()) {
-            sb.append(" Substituted before solving (given with --at): `").append(Text.code(r.substitutedText()))
-                .append("`.");
+            sb.append(" Substituted before solving (").append(Text.markdown(r.substitutedOrigin())).append("): `")
+                .append(Text.code(r.substitutedText())).append("`.");
         }
         sb.append("\n\n");
         line(sb, List.of("figure", "formula"));

@@ -730,7 +730,8 @@ final class TextFormatter extends DocLayout {
     public String symbolicAvailability(org.qchain.result.SymbolicAvailabilityResult r) {
         StringBuilder sb = new StringBuilder(Continuous.symbolicTitle(r)).append('\n');
         if (!r.substituted().isEmpty()) {
-            sb.append("Substituted before solving (given with --at): ").append(r.substitutedText()).append('\n');
+            sb.append("Substituted before solving (").append(r.substitutedOrigin()).append("): ")
+                .append(r.substitutedText()).append('\n');
         }
         sb.append('\n');
         TextTable table = new TextTable().addRow("figure", "formula");

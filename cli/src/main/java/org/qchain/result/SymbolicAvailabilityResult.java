@@ -36,6 +36,8 @@ import org.qchain.exact.Rational;
  * @param inTime           the point availability A(t) and the reliability R(t) as formulas in t and the parameters;
  *                         empty when they were not computed (a chain of more states than the query allows, or a
  *                         closed form past the size limits: a warning then says so)
+ * @param substitutedOrigin where the substituted values came from, as {@code Point#origin} words them
+ *                         ({@code given with --at}, {@code nominal values}, or a mix)
  */
 public record SymbolicAvailabilityResult(String source, List<String> parameters, List<String> up, List<String> states,
                                          Map<String, Formula> stationary, Formula availability,
@@ -44,7 +46,7 @@ public record SymbolicAvailabilityResult(String source, List<String> parameters,
                                          Optional<Formula> meanDownTime, Map<String, Optional<Formula>> mttf,
                                          List<Condition> conditions, Map<String, Rational> substituted,
                                          Optional<AvailabilityResult> atPoint, List<String> warnings,
-                                         Optional<InTime> inTime)
+                                         Optional<InTime> inTime, String substitutedOrigin)
     implements Result {
     /** Copies the collections, keeping their order. */
     public SymbolicAvailabilityResult {
@@ -56,6 +58,20 @@ public record SymbolicAvailabilityResult(String source, List<String> parameters,
         conditions = List.copyOf(conditions);
         substituted = Collections.unmodifiableMap(new LinkedHashMap<>(substituted));
         warnings = List.copyOf(warnings);
+    }
+
+    /** With the substituted values given with {@code --at}. */
+    public SymbolicAvailabilityResult(String source, List<String> parameters, List<String> up, List<String> states,
+                                      Map<String, Formula> stationary, Formula availability,
+                                      Formula unavailability, Rational hoursPerYear, Formula downHoursPerYear,
+                                      Formula failureFrequency, Optional<Formula> meanUpTime,
+                                      Optional<Formula> meanDownTime, Map<String, Optional<Formula>> mttf,
+                                      List<Condition> conditions, Map<String, Rational> substituted,
+                                      Optional<AvailabilityResult> atPoint, List<String> warnings,
+                                      Optional<InTime> inTime) {
+        this(source, parameters, up, states, stationary, availability, unavailability, hoursPerYear,
+            downHoursPerYear, failureFrequency, meanUpTime, meanDownTime, mttf, conditions, substituted, atPoint,
+            warnings, inTime, "given with --at");
     }
 
     /**

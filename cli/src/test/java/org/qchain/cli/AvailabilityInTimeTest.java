@@ -103,6 +103,39 @@ class AvailabilityInTimeTest {
         assertEquals(2, bad.code(), bad::toString);
     }
 
+    @Test
+    void formulasInTPutTheRatesInForAModelWithValues() {
+        // one unit with lam = 1/100, mu = 1/10: A(t) = mu/(lam+mu) + lam/(lam+mu) e^(-(lam+mu)t) and R(t) = e^(-lam t)
+        // (Billinton and Allan, Reliability Evaluation of Engineering Systems, ch. on continuous Markov processes;
+        // from memory), so 10/11 + 1/11 e^(-11t/100) and e^(-t/100)
+        Cli.Result json = Cli.run("avail", Cli.model("one-unit.chain"), "--formulas-in-t", "--format", "json");
+        assertEquals(0, json.code(), json::toString);
+        assertTrue(json.out().contains("\"point_availability\":\"10/11 + 1/11*exp(-11/100*t)\",\"reliability\":"
+            + "\"exp(-1/100*t)\""), json.out());
+        assertTrue(json.out().contains("\"parameters\":[]"), json.out());
+        // a model with nominal values: they are put in and said to be nominal; the figures are exact numbers
+        Cli.Result text = Cli.run("avail", Cli.model("generator-set.chain"), "--formulas-in-t");
+        assertEquals(0, text.code(), text::toString);
+        assertTrue(text.out().contains("Substituted before solving (nominal values): lam=1/500, mu=1/12\n"), text.out());
+        // two units in parallel, one crew: A = 1 - 2 lam^2/(mu^2 + 2 lam mu + 2 lam^2) (Billinton and Allan, the same
+        // chapter; from memory) = 16375/16393 at lam = 1/500, mu = 1/12
+        assertTrue(text.out().contains("\nsteady-state availability                 16375/16393\n"), text.out());
+        assertTrue(text.out().contains("point availability A(t) from Both         16375/16393 + "), text.out());
+        // a parameter without a value stays in the formulas; one given with --at is put in and said to be given
+        Cli.Result mixed = Cli.run("avail", Cli.model("repairable-unit.chain"), "--formulas-in-t", "--at",
+            "lam=1/100", "--format", "json");
+        assertEquals(0, mixed.code(), mixed::toString);
+        // mu/(lam+mu) at lam = 1/100 is 100 mu/(1 + 100 mu), lam/(lam+mu) is 1/(1 + 100 mu) (the formula above)
+        assertTrue(mixed.out().contains("\"point_availability\":\"100*mu/(1 + 100*mu) + 1/(1 + 100*mu)*exp(-(1/100"
+            + " + mu)*t)\""), mixed.out());
+        assertTrue(mixed.out().contains("\"parameters\":[\"mu\"]"), mixed.out());
+        assertTrue(mixed.out().contains("\"reliability\":\"exp(-1/100*t)\""), mixed.out());
+        Cli.Result both = Cli.run("avail", Cli.model("one-unit.chain"), "--formulas-in-t", "--symbolic");
+        assertEquals(2, both.code(), both::toString);
+        assertTrue(both.err().startsWith("qchain: Options '--formulas-in-t' and '--symbolic' exclude each other"),
+            both.err());
+    }
+
     /** The value rounded to 12 significant digits, as the certified decimals print it (no exponent). */
     private static String round(Apfloat v) {
         return new BigDecimal(v.toString(true)).round(new MathContext(12, RoundingMode.HALF_EVEN)).toPlainString();
