@@ -8,12 +8,26 @@ import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 
 /**
- * {@code step --certified}: the certified decimals equal the exact run's correctly rounded decimals (the reference:
- * the exact module's fractions, rounded by Decimals, itself checked against Java SE BigDecimal), and the options
- * combine as documented.
+ * {@code step --certified}: the certified decimals equal the exact run's correctly rounded decimals (the exact
+ * module's fractions, rounded by Decimals, itself checked against Java SE BigDecimal), and, at large n, the decimals
+ * of the stationary law worked out by hand and rounded by Java SE BigDecimal; the options combine as documented
+ * (messages: docs/commands.md, our own interface, no outside source).
  */
 class CertifiedStepTest {
     private static final String MODEL = Cli.model("plant.chain");
+
+    /**
+     * plant.chain's stationary law, by hand from pi P = pi (common practice, no source): pi_Worn (1/4 + 3/100) =
+     * pi_Up / 20 and pi_Down / 2 = 3/100 pi_Worn give pi = (280, 50, 3)/333 over (Up, Worn, Down).
+     */
+    private static final long[] PI_NUMERATORS = {280, 50, 3};
+    private static final long PI_DENOMINATOR = 333;
+
+    /** pi_j to {@code digits} significant digits, rounded by Java SE BigDecimal (the reference rounding). */
+    private static String piDecimal(int j, int digits) {
+        return java.math.BigDecimal.valueOf(PI_NUMERATORS[j]).divide(java.math.BigDecimal.valueOf(PI_DENOMINATOR),
+            new java.math.MathContext(digits, java.math.RoundingMode.HALF_EVEN)).toPlainString();
+    }
 
     /** The JSON array named {@code key} in {@code json} (flat arrays of strings only). */
     private static String array(String json, String key) {
@@ -32,6 +46,13 @@ class CertifiedStepTest {
             assertEquals(array(exact.out(), "decimals"), array(cert.out(), "decimals"), "n = " + n);
             assertTrue(cert.out().contains("\"certified\":true"));
         }
+        // P^n -> the matrix of rows pi, off by O(|l|^n) for l the largest other eigenvalue (common practice, no
+        // source); by hand the other two sum to trace - 1 = 1.17 and multiply to det P = 0.3365, so |l| ~ 0.66 and
+        // at n = 400 the gap is ~1e-72, far below the 15th digit
+        Cli.Result cert = Cli.run("step", MODEL, "-n", "400", "--from", "Up", "--format", "json", "--digits", "15",
+            "--certified");
+        assertEquals("[\"" + piDecimal(0, 15) + "\",\"" + piDecimal(1, 15) + "\",\"" + piDecimal(2, 15) + "\"]",
+            array(cert.out(), "decimals"));
     }
 
     @Test
@@ -39,7 +60,8 @@ class CertifiedStepTest {
         Cli.Result r = Cli.run("step", MODEL, "-n", "5000000", "--from", "Up", "--to", "Down", "--certified",
             "--max-digits", "1000");
         assertEquals(0, r.code(), r::toString);
-        assertTrue(r.out().contains("  certified  0."), r.out());
+        // P^5000000(Up, Down) = pi_Down = 1/111 to far more than 12 digits (as above)
+        assertTrue(r.out().contains("  certified  " + piDecimal(2, 12)), r.out());
         assertEquals("", r.err());
     }
 

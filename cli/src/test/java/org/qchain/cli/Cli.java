@@ -10,7 +10,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import picocli.CommandLine;
 
-/** Runs qchain in-process the way picocli's "Testing your application" does: captured stdout and stderr. */
+/**
+ * Runs qchain in-process the way picocli's "Testing your application" does: captured stdout and stderr. Holds no
+ * reference values.
+ */
 final class Cli {
     /** Directory of the test models, relative to the module directory (surefire's working directory). */
     static final String MODELS = "src/test/resources/models/";

@@ -23,7 +23,9 @@ import org.junit.jupiter.api.TestFactory;
  * in the repository (a bundled
  * example in {@code docs/examples} or a test model in {@code cli/src/test/resources}): a block that is illustrative
  * only (its model is a name on the page) is marked by the line {@code <!-- illustrative -->} just before its fence,
- * and is not run. Normalisation: {@code \r\n} is read as {@code \n}, nothing else.
+ * and is not run. Normalisation: {@code \r\n} is read as {@code \n}, nothing else. Expected text: what our own pages
+ * show (README.md, docs/*.md; our own interface), no outside source; the pages' figures are checked against outside
+ * sources by the engine tests, not here.
  */
 class DocExamplesTest {
     private static final Path ROOT = Path.of("..");

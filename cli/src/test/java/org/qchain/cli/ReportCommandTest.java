@@ -17,7 +17,11 @@ import org.qchain.exact.Progress;
 import org.qchain.exact.QchainException;
 import org.qchain.format.ReportFormat;
 
-/** {@code qchain report}: formats by file ending, section choice, refusals, atomic files, Ctrl-C. */
+/**
+ * {@code qchain report}: formats by file ending, section choice, refusals, atomic files, Ctrl-C. Expected text and
+ * messages: docs/commands.md, "qchain report" (our own interface), no outside source; the figures named below are
+ * worked out by hand.
+ */
 class ReportCommandTest {
     @TempDir
     Path dir;
@@ -33,6 +37,10 @@ class ReportCommandTest {
         String expected = ReportFormat.HTML.layout(12).render(Report.run(m, ReportQuery.defaults(), Progress.NONE),
             "pump").main();
         assertEquals(expected, Files.readString(out, StandardCharsets.UTF_8));
+        // p = 1/20, r = 1/4: by hand from pi P = pi (common practice, no source), pi_Worn (p + r) = pi_Up p and
+        // pi_Down / 2 = pi_Worn p give pi = (60, 10, 1)/71; 60/71 = 0.845070422535..., 1/71 = 0.0140845070422535...
+        assertTrue(expected.contains("≈ 0.845070422535<"), "pi(Up) = 60/71");
+        assertTrue(expected.contains("≈ 0.0140845070423<"), "pi(Down) = 1/71");
     }
 
     @Test
@@ -140,6 +148,8 @@ class ReportCommandTest {
         assertTrue(md.contains("### P(t) at t = 24"));
         assertTrue(md.contains("## Closed form in t"), md);
         assertTrue(md.contains("P(t) = exp(Qt) in closed form, valid for t ≥ 0; parameters (symbolic): lam, mu."), md);
+        // by hand from pi Q = 0 of the birth-death chain (common practice, no source): pi_One = pi_Both 2 lam/mu,
+        // pi_None = pi_One lam/mu; at lam = 1/500, mu = 1/12 that is (15625, 750, 18)/16393, so A = 16375/16393
         assertTrue(md.contains("| steady-state availability | $\\frac{16375}{16393}$ ≈ 0.998901970353 |"), md);
     }
 }

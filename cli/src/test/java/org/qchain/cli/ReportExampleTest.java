@@ -1,6 +1,7 @@
 package org.qchain.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -23,7 +24,8 @@ import org.qchain.result.ReportResult;
  * reports of the bundled pump-station model with parameters, as {@code qchain report
  * docs/examples/pump-station-params.chain -o docs/examples/reports/pump-station-params.html} (and {@code .md}) writes
  * them from the repository's root. With {@code -Dqchain.updateDocs=true} the test rewrites them first (read the diff
- * before committing).
+ * before committing). Expected text: the committed example files (our own output, kept as documentation), no
+ * outside source; their long-run table is checked against figures worked out by hand.
  */
 class ReportExampleTest {
     static final String MODEL = "docs/examples/pump-station-params.chain";
@@ -60,6 +62,20 @@ class ReportExampleTest {
         }
         try (var listed = Files.list(DIR)) {
             assertEquals(files.size(), listed.count(), "no stale file in " + DIR);
+        }
+    }
+
+    @Test
+    void exampleLongRunTableHoldsTheStationaryLawWorkedOutByHand() throws Exception {
+        // nominal p = 1/20, r = 1/4: by hand from pi P = pi (common practice, no source), pi_Worn (p + r) = pi_Up p and
+        // pi_Down / 2 = pi_Worn p give pi = (60, 10, 1)/71; the mean recurrence times are 1/pi_i (Kac's formula;
+        // Grinstead and Snell, Introduction to Probability, ch. 11, from memory); decimals to 12 digits by hand
+        String md = Files.readString(DIR.resolve(BASE + ".md"), StandardCharsets.UTF_8);
+        for (String row : new String[] {
+            "| Up | $\\frac{60}{71}$ ≈ 0.845070422535 | $\\frac{71}{60}$ ≈ 1.18333333333 |",
+            "| Worn | $\\frac{10}{71}$ ≈ 0.140845070423 | $\\frac{71}{10}$ ≈ 7.10000000000 |",
+            "| Down | $\\frac{1}{71}$ ≈ 0.0140845070423 | $71$ |"}) {
+            assertTrue(md.contains("\n" + row + "\n"), row);
         }
     }
 }

@@ -8,6 +8,8 @@ import org.junit.jupiter.api.Test;
 /**
  * Every command that computes at parameter values says which values and where they came from, in the same words:
  * {@code p=1/10, r=1/4 (p given with --at, r nominal)}, {@code (nominal values)} or {@code (given with --at)}.
+ * Expected text: the documented formats in docs/commands.md (our own interface; JSON per RFC 8259), no outside
+ * source; the nominal values are those written in the models.
  */
 class ValuesOriginTest {
     private static final String PUMP = Cli.model("pump-params.chain");

@@ -9,6 +9,9 @@ import org.junit.jupiter.api.Test;
 /**
  * Regression (issue 8): each warning once, not once per entry, and not again on stdout. The model has the same
  * entry {@code 1 - p - r} on two rows (lines 7 and 9), which needs {@code p + r <= 1} on the parameter domains.
+ * Expected text: the documented warning format in docs/commands.md (our own interface), no outside source. The
+ * condition by hand: 1 - p - r >= 0 exactly when p + r <= 1; at p = r = 1 it is -1 (fails), at p = 1/10, r = 1/4 it is
+ * 13/20 (holds), at p = 1/5, r = 1/3 it is 7/15 and at p = 1/10, r = 1/3 it is 17/30 (common practice, no source).
  */
 class WarningsOnceTest {
     private static final String MODEL = Cli.model("twin-wear.chain");

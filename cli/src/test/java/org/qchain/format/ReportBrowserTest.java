@@ -35,7 +35,8 @@ import org.qchain.result.ReportResult;
  * alone with no console error or exception, every {@code <math>} element must be laid out with a non-zero size,
  * every plot and the diagram must be visible, and the screenshot saved under {@code target/} must hold a fair share
  * of drawn (non-background) pixels, including the plots' curve colour. Skipped with a message when no browser is
- * installed.
+ * installed. References: the browser's own MathML and SVG layout (W3C MathML 3, W3C SVG 1.1) and the Chrome DevTools
+ * Protocol (Runtime, Log, Page, Emulation domains); the counts and colours below are our own report's design.
  */
 class ReportBrowserTest {
     private static final Path DIR = Path.of("target/report-browser").toAbsolutePath();
@@ -174,6 +175,7 @@ class ReportBrowserTest {
             int maths = Integer.parseInt(v[0]);
             assertTrue(maths > 20, "MathML elements: " + maths);
             assertEquals(0, Integer.parseInt(v[1]), "math elements without a size, of " + maths);
+            // our own layout: the diagram and two plots of docs/commands.md, "qchain report" (no outside source)
             assertEquals(3, Integer.parseInt(v[2]), "the diagram and two plots");
             assertEquals(3, Integer.parseInt(v[3]), "visible drawings");
             List<String> errors = new ArrayList<>();
@@ -205,6 +207,8 @@ class ReportBrowserTest {
                     if (red < 235 || green < 235 || blue < 235) {
                         drawn++;
                     }
+                    // #0072b2, SvgPlot's first curve colour: our choice, the blue of Okabe and Ito's colour-blind-safe
+                    // palette (Color Universal Design, from memory)
                     if (Math.abs(red - 0x00) < 40 && Math.abs(green - 0x72) < 40 && Math.abs(blue - 0xb2) < 40) {
                         curve++;
                     }

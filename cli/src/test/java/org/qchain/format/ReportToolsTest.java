@@ -17,7 +17,9 @@ import org.qchain.result.ReportResult;
 /**
  * The report's files accepted by the tools that read them: the LaTeX document compiles with {@code pdflatex}, the DOT
  * text renders with Graphviz {@code dot -Tsvg}. Each test is skipped, with a message, when its tool is not installed
- * ({@code .ci/run} installs both).
+ * ({@code .ci/run} installs both). The references are the tools themselves: TeX Live's pdflatex (LaTeX as in Lamport,
+ * LaTeX: A Document Preparation System, from memory) and Graphviz's dot reading the DOT language (the Graphviz
+ * documentation).
  */
 class ReportToolsTest {
     private static final Path DIR = Path.of("target/report-tools");
@@ -86,7 +88,7 @@ class ReportToolsTest {
             Run run = run(DIR, 60, Optional.of(text), dot.get().toString(), "-Tsvg");
             assertEquals(0, run.code(), () -> model + ": dot failed:\n" + run.output());
             assertTrue(run.output().contains("<svg"), model);
-            // one <g class="edge"> per transition in Graphviz's drawing
+            // one <g class="edge"> per transition in Graphviz's drawing (Graphviz's SVG output, from memory)
             assertEquals(d.edges().size(), run.output().split("class=\"edge\"", -1).length - 1, model);
         }
     }

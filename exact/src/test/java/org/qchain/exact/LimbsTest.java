@@ -9,10 +9,11 @@ import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.constraints.LongRange;
 
-/** The limb kernel against BigInteger arithmetic. */
+/** The limb kernel against BigInteger arithmetic (reference library: Java SE java.math.BigInteger). */
 class LimbsTest {
 
-    // source: reference library Java SE BigInteger (multiply, add, toByteArray round trip)
+    // source: reference library Java SE BigInteger: the expected sum of products by BigInteger.multiply and add;
+    // the limb round trip against the BigInteger it came from
     @Property(seed = "64", tries = 300)
     void mulAddMatchesBigInteger(@ForAll @LongRange(min = 0, max = Long.MAX_VALUE) long seed,
             @ForAll @IntRange(min = 1, max = 9) int terms) {

@@ -6,7 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 
-/** The exact module's message keys: filled patterns, and no command-line wording (a rule of this project). */
+/**
+ * The exact module's message keys: filled patterns, and no command-line wording (a rule of this project). Expected
+ * text: our own messages (the key table in docs/model-format.md), no outside source; the pattern syntax ({0}, and
+ * '' for one quote) is that of java.text.MessageFormat (Java SE API docs).
+ */
 class MessageKeyTest {
     private static final Pattern OPTION = Pattern.compile("--[a-z]");
 

@@ -13,7 +13,7 @@ import net.jqwik.api.lifecycle.PropertyLifecycleContext;
 /**
  * The tries of a heavy property in the default build; its {@code @Property(tries = ...)} stays the full count, run
  * with {@code -Dqchain.tries=full} (DEVELOPERS.md, "Tests"; {@code bench/long-check.sh}). The seed is the property's
- * own in both, so either run is the same every time.
+ * own in both, so either run is the same every time. Holds no reference values.
  */
 @Target(ElementType.METHOD)
 @Retention(RetentionPolicy.RUNTIME)

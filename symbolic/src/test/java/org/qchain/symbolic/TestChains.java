@@ -16,7 +16,10 @@ import org.qchain.exact.model.ModelParser;
 import org.qchain.exact.model.ParamDecl;
 import org.qchain.exact.model.Transition;
 
-/** Builds models in tests from matrices of expression strings (read by the model parser's expression grammar). */
+/**
+ * Builds models in tests from matrices of expression strings (read by the model parser's expression grammar). Test
+ * input only; holds no reference values.
+ */
 public final class TestChains {
     private TestChains() {
     }

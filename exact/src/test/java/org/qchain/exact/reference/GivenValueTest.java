@@ -10,11 +10,16 @@ import org.junit.jupiter.api.Test;
 import org.qchain.exact.Rational;
 import org.qchain.exact.floats.Binary64;
 
-/** Reading one given number exactly, and the double it stands for. */
+/**
+ * Reading one given number exactly, and the double it stands for. References: IEEE 754-2019 (rounding, special
+ * values) and Java SE's Double.parseDouble and double division, both correctly rounded by their API specification.
+ */
 class GivenValueTest {
 
     // IEEE 754-2019 roundTiesToEven: the double a text stands for is the correctly rounded double of its exact value,
-    // whichever way it is found (Double.parseDouble for decimals; exact rounding for fractions and hex floats)
+    // whichever way it is found (Double.parseDouble for decimals; exact rounding for fractions and hex floats).
+    // Reference: Java SE Double.parseDouble (correctly rounded, Double.valueOf(String) API docs), which gives
+    // asDouble() for decimals, against Binary64.round of the exact Rational this class read
     @Test
     void doubleIsTheCorrectlyRoundedExactValue() {
         Random rnd = new Random(99);
@@ -25,11 +30,13 @@ class GivenValueTest {
             assertEquals(Binary64.round(f.value()), f.asDouble(), s);
         }
         GivenValue.Finite third = (GivenValue.Finite) GivenValue.parse("1/3");
+        // reference: Java SE double division, the correctly rounded IEEE 754 quotient (JLS §15.17.2)
         assertEquals(1.0 / 3, third.asDouble());
         assertEquals(Rational.of(1, 3), third.value());
     }
 
     // IEEE 754-2019 clause 6 (infinity and NaN), in the spellings C, Python, JavaScript and JSON writers use
+    // (common practice, no source); which other spellings are refused is our own grammar (docs/reference-files.md)
     @Test
     void nonFiniteSpellings() {
         for (String s : new String[] {"inf", "+inf", "-INF", "Infinity", "-Infinity", "nan", "NaN", "-nan", "null"}) {

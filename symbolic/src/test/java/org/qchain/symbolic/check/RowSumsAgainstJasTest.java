@@ -19,7 +19,8 @@ import org.qchain.symbolic.RatFun;
  * The exact module's JAS-free row-sum check ({@link RowSums}: unreduced fractions of sparse polynomials, equality by
  * cross products) against JAS's reduced rational functions as the reference (JAS, the Java Algebra System, used
  * here through {@link ParamRing#fromExpr}): on random expressions (fixed seeds) both decide the same identities, and
- * where every divisor is irreducible (linear) both print the same lowest-terms text.
+ * where every divisor is irreducible (linear) both print the same lowest-terms text. Source: reference library JAS
+ * (Kredel, the Java Algebra System: GenPolynomial over BigRational, quotients reduced by its multivariate gcd).
  */
 class RowSumsAgainstJasTest {
     private static final List<String> VARS = List.of("a", "b", "c");
@@ -73,6 +74,7 @@ class RowSumsAgainstJasTest {
 
     @Test
     void polynomialsPrintAsJasPrintsThem() {
+        // reference: JAS's expanded polynomial (GenPolynomial arithmetic), printed by the symbolic module's printer
         Random r = new Random(20_261_203L);
         for (int i = 0; i < 400; i++) {
             Expr e = random(r, 4, false);
@@ -82,6 +84,7 @@ class RowSumsAgainstJasTest {
 
     @Test
     void quotientsByIrreducibleDivisorsPrintAsJasPrintsThem() {
+        // reference: JAS's quotient in lowest terms (its gcd cancels common factors), printed as above
         Random r = new Random(7_041_993L);
         for (int i = 0; i < 400; i++) {
             Expr e = random(r, 4, true);
@@ -91,6 +94,7 @@ class RowSumsAgainstJasTest {
 
     @Test
     void identitiesAreDecidedAsJasDecidesThem() {
+        // reference: JAS decides x = y by equality of the two reduced quotients
         Random r = new Random(314_159L);
         int equal = 0;
         for (int i = 0; i < 300; i++) {
@@ -116,7 +120,8 @@ class RowSumsAgainstJasTest {
         for (int i = 0; i < 200; i++) {
             Expr x = random(r, 3, true);
             Expr q = linear(r);
-            // (x*q + q)/q - x = 1
+            // (x*q + q)/q - x = 1 for q != 0 (by hand, common practice, no source); adding q^2, not identically 0,
+            // leaves a non-constant function, so not 1; JAS's quotient agrees on the first
             Expr e = Expr.sub(new Expr.Bin(Expr.Op.DIV, Expr.add(new Expr.Bin(Expr.Op.MUL, x, q, null), q), q, null),
                 x);
             assertTrue(RING.fromExpr(e).isOne(), Expr.toPlain(e));
