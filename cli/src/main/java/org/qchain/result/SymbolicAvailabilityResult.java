@@ -60,22 +60,9 @@ public record SymbolicAvailabilityResult(String source, List<String> parameters,
         warnings = List.copyOf(warnings);
     }
 
-    /** With the substituted values given with {@code --at}. */
-    public SymbolicAvailabilityResult(String source, List<String> parameters, List<String> up, List<String> states,
-                                      Map<String, Formula> stationary, Formula availability,
-                                      Formula unavailability, Rational hoursPerYear, Formula downHoursPerYear,
-                                      Formula failureFrequency, Optional<Formula> meanUpTime,
-                                      Optional<Formula> meanDownTime, Map<String, Optional<Formula>> mttf,
-                                      List<Condition> conditions, Map<String, Rational> substituted,
-                                      Optional<AvailabilityResult> atPoint, List<String> warnings,
-                                      Optional<InTime> inTime) {
-        this(source, parameters, up, states, stationary, availability, unavailability, hoursPerYear,
-            downHoursPerYear, failureFrequency, meanUpTime, meanDownTime, mttf, conditions, substituted, atPoint,
-            warnings, inTime, "given with --at");
-    }
-
     /**
-     * The result without the formulas in t (the form before A(t) and R(t) were added).
+     * The result without the formulas in t, its substituted values given with {@code --at} (the form before A(t) and
+     * R(t) were added).
      *
      * @param source           as in the record
      * @param parameters       as in the record
@@ -104,7 +91,7 @@ public record SymbolicAvailabilityResult(String source, List<String> parameters,
                                       Optional<AvailabilityResult> atPoint, List<String> warnings) {
         this(source, parameters, up, states, stationary, availability, unavailability, hoursPerYear,
             downHoursPerYear, failureFrequency, meanUpTime, meanDownTime, mttf, conditions, substituted, atPoint,
-            warnings, Optional.empty());
+            warnings, Optional.empty(), "given with --at");
     }
 
     /**
