@@ -197,15 +197,58 @@ final class SymbolicEngine {
     }
 
     /** A formula printed on demand from an exact rational function (factored or expanded). */
-    record RatFunFormula(RatFun f, boolean factored) implements Formula {
-        @Override
-        public String plain() {
-            return Formulas.of(f, factored, false);
+    /**
+     * A rational function printed on demand, factored or not; the factorization (the costly part) is done once and
+     * both texts are kept, since formatters and checks ask for them more than once.
+     */
+    static final class RatFunFormula implements Formula {
+        private final RatFun f;
+        private final boolean factored;
+        private RatFun.Factored factors;
+        private String plain;
+        private String latex;
+
+        RatFunFormula(RatFun f, boolean factored) {
+            this.f = f;
+            this.factored = factored;
+        }
+
+        private synchronized RatFun.Factored factors() {
+            if (factors == null) {
+                factors = f.factor();
+            }
+            return factors;
         }
 
         @Override
-        public String latex() {
-            return Formulas.of(f, factored, true);
+        public synchronized String plain() {
+            if (plain == null) {
+                plain = factored ? Formulas.plain(factors()) : Formulas.plain(f);
+            }
+            return plain;
+        }
+
+        @Override
+        public synchronized String latex() {
+            if (latex == null) {
+                latex = factored ? Formulas.latex(factors()) : Formulas.latex(f);
+            }
+            return latex;
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof RatFunFormula r && r.factored == factored && r.f.equals(f);
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * f.hashCode() + Boolean.hashCode(factored);
+        }
+
+        @Override
+        public String toString() {
+            return plain();
         }
     }
 

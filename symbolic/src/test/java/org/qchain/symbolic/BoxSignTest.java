@@ -186,7 +186,9 @@ class BoxSignTest {
         Random rnd = new Random(20261203L);
         int refuted = 0;
         int proved = 0;
-        for (int trial = 0; trial < 300; trial++) {
+        // 150 trials in the default build, 300 with -Dqchain.tries=full (bench/long-check.sh)
+        int trials = "full".equals(System.getProperty("qchain.tries")) ? 300 : 150;
+        for (int trial = 0; trial < trials; trial++) {
             Map<List<Integer>, Rational> p = new HashMap<>();
             if (trial % 3 == 2) {
                 // w (p - s q^2 - c)^2 + d q + f: degree 4, a square in p
@@ -247,8 +249,8 @@ class BoxSignTest {
             proved += positive ? 1 : 0;
         }
         // not vacuous: both kinds occur
-        assertTrue(refuted > 50, "refuted " + refuted);
-        assertTrue(proved > 50, "proved " + proved);
+        assertTrue(refuted > trials / 6, "refuted " + refuted);
+        assertTrue(proved > trials / 6, "proved " + proved);
     }
 
     @Test
