@@ -893,17 +893,7 @@ final class SymbolicEngine {
             m.param(name).ifPresent(d -> domains.put(name, d.domain()));
         }
         List<String> warnings = new ArrayList<>(ctx.warnings());
-        Optional<Point> pt = point(model, tf.parameters()).filter(p -> !p.isEmpty());
-        if (pt.isPresent()) {
-            try {
-                tf.checkPoint(pt.get().values());
-            } catch (QchainException e) {
-                if (e.key() != ErrorKey.CLOSED_FORM_CONDITION) {
-                    throw e;
-                }
-                warnings.add(e.detail());
-            }
-        }
+        Optional<Point> pt = checkAtPoint(model, tf, "", warnings);
         Map<String, Rational> given = new LinkedHashMap<>();
         new java.util.TreeMap<>(model.given()).forEach(given::put);
         return new org.qchain.result.SymbolicTransientResult(m.source(), m.states(), q.from(), tf.symbols().time(),
@@ -1222,6 +1212,27 @@ final class SymbolicEngine {
     }
 
     /**
+     * Checks a closed form's conditions at the model's parameter point, if every one of its parameters has a value
+     * there: a condition that fails there becomes a warning (after {@code prefix}); other failures propagate.
+     *
+     * @return the point checked; empty when a parameter of the form has no value
+     */
+    private static Optional<Point> checkAtPoint(LoadedModel model, TransientForm tf, String prefix, List<String> warnings) {
+        Optional<Point> pt = point(model, tf.parameters()).filter(p -> !p.isEmpty());
+        if (pt.isPresent()) {
+            try {
+                tf.checkPoint(pt.get().values());
+            } catch (QchainException e) {
+                if (e.key() != ErrorKey.CLOSED_FORM_CONDITION) {
+                    throw e;
+                }
+                warnings.add(prefix + e.detail());
+            }
+        }
+        return pt;
+    }
+
+    /**
      * A(t) and R(t) from the query's start as closed forms in t: the combination e_start P(t) u of the generator's
      * transient form, with u the 0/1 vector of the up states, and the same for the generator whose down rows are
      * zero (the down states absorbing). Empty, with a warning, for a chain of more states than the query allows or a
@@ -1267,29 +1278,15 @@ final class SymbolicEngine {
             model.model().params().forEach(d -> domains.put(d.name(), d.domain()));
             java.util.Set<String> seen = new java.util.HashSet<>();
             conditions.forEach(c -> seen.add(c.plain()));
-            for (org.qchain.result.Condition c : conditions(a.conditions(domains))) {
-                if (seen.add(c.plain())) {
-                    conditions.add(c);
-                }
-            }
-            for (org.qchain.result.Condition c : conditions(r.conditions(domains))) {
-                if (seen.add(c.plain())) {
-                    conditions.add(c);
-                }
-            }
             for (TransientForm tf : List.of(a, r)) {
-                Optional<Point> pt = point(model, tf.parameters()).filter(x -> !x.isEmpty());
-                if (pt.isPresent()) {
-                    try {
-                        tf.checkPoint(pt.get().values());
-                    } catch (QchainException c) {
-                        if (c.key() != ErrorKey.CLOSED_FORM_CONDITION) {
-                            throw c;
-                        }
-                        warnings.add((tf == a ? "A(t): " : "R(t): ") + c.detail());
+                for (org.qchain.result.Condition c : conditions(tf.conditions(domains))) {
+                    if (seen.add(c.plain())) {
+                        conditions.add(c);
                     }
                 }
             }
+            checkAtPoint(model, a, "A(t): ", warnings);
+            checkAtPoint(model, r, "R(t): ", warnings);
             return Optional.of(new org.qchain.result.SymbolicAvailabilityResult.InTime(from, a.symbols().time(),
                 Formula.of(af.plain(), af.latex()), Formula.of(rf.plain(), rf.latex()), rootFactors(a, af.plain()),
                 rootFactors(r, rf.plain())));

@@ -24,9 +24,17 @@ public @interface QuickTries {
 
     /** Sets the property's tries to {@link QuickTries#value()} unless {@code qchain.tries} is {@code full}. */
     final class Hook implements AroundPropertyHook {
+        /**
+         * Whether the full counts are asked for ({@code -Dqchain.tries=full}); plain JUnit loops read it to choose
+         * their size.
+         */
+        public static boolean full() {
+            return "full".equals(System.getProperty("qchain.tries"));
+        }
+
         @Override
         public PropertyExecutionResult aroundProperty(PropertyLifecycleContext context, PropertyExecutor property) {
-            if (!"full".equals(System.getProperty("qchain.tries"))) {
+            if (!full()) {
                 context.findAnnotation(QuickTries.class).ifPresent(q -> context.attributes().setTries(q.value()));
             }
             return property.execute();

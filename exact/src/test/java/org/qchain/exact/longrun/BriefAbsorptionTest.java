@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Random;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
+import org.qchain.exact.QuickTries;
 import org.qchain.exact.Rational;
 
 /** Absorption without the fundamental matrix gives the same figures as with it. */
@@ -99,7 +100,7 @@ class BriefAbsorptionTest {
             public List<Rational> leftNullVector(List<List<Rational>> a) { return Q.leftNullVector(a); }
         };
         // two chains in the default build, four with -Dqchain.tries=full (bench/long-check.sh)
-        int trials = "full".equals(System.getProperty("qchain.tries")) ? 4 : 2;
+        int trials = QuickTries.Hook.full() ? 4 : 2;
         for (int trial = 0; trial < trials; trial++) {
             int n = 20 + rnd.nextInt(30);
             List<List<Rational>> p = chain(rnd, n);
